@@ -1,0 +1,66 @@
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import { pinoHttp } from 'pino-http';
+import type { Logger } from 'pino';
+import type { DataSource } from 'typeorm';
+import type { Config } from './config/config';
+import { apiNotFound, errorMiddleware } from './http/error-middleware';
+import { healthRoutes } from './routes/health.routes';
+
+export interface AppDependencies {
+  readonly config: Config;
+  readonly dataSource: DataSource;
+  readonly logger: Logger;
+}
+
+/** Builds the Express app; no listening, no side effects beyond the object. */
+export function createApp({ config, dataSource, logger }: AppDependencies): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          fontSrc: ["'self'"],
+          connectSrc: ["'self'"],
+          objectSrc: ["'none'"],
+          frameAncestors: ["'none'"],
+          upgradeInsecureRequests: null,
+        },
+      },
+    }),
+  );
+  app.use(
+    pinoHttp({
+      logger,
+      redact: ['req.headers.cookie', 'req.headers.authorization', 'res.headers["set-cookie"]'],
+      customLogLevel: (_req, res, error) =>
+        error || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info',
+    }),
+  );
+  app.use(express.json({ limit: '1mb' }));
+
+  const api = express.Router();
+  api.use(healthRoutes(dataSource));
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  if (config.webDist && existsSync(config.webDist)) {
+    const dist = path.resolve(config.webDist);
+    app.use(express.static(dist, { index: false, maxAge: '1h' }));
+    // The web app routes in the browser: every other GET gets its shell.
+    app.get(/^(?!\/api\/).*/, (_req, res) => {
+      res.sendFile(path.join(dist, 'index.html'));
+    });
+  }
+
+  app.use(errorMiddleware);
+  return app;
+}

@@ -1,0 +1,47 @@
+import { pino } from 'pino';
+import { createApp } from './app';
+import { ConfigError, loadConfig } from './config/config';
+import { createDataSource } from './db/data-source';
+
+async function main() {
+  let config;
+  try {
+    config = loadConfig();
+  } catch (error) {
+    if (error instanceof ConfigError) {
+      console.error(`hoopline-api: ${error.message}`);
+      process.exit(1);
+    }
+    throw error;
+  }
+  const logger = pino({ level: config.logLevel, base: { service: 'hoopline-api' } });
+  const dataSource = createDataSource(config.databaseUrl);
+  await dataSource.initialize();
+  const pending = await dataSource.showMigrations();
+  if (pending) {
+    logger.warn('the database has pending migrations: run `pnpm --filter @hoopline/api migrate`');
+  }
+  const app = createApp({ config, dataSource, logger });
+  const server = app.listen(config.port, config.host, () => {
+    logger.info(
+      { url: config.publicUrl },
+      `Hoopline API listening on http://${config.host}:${config.port}`,
+    );
+  });
+  const shutdown = (signal: string) => {
+    logger.info({ signal }, 'shutting down');
+    server.close(() => {
+      void dataSource.destroy().finally(() => process.exit(0));
+    });
+    setTimeout(() => process.exit(0), 5000).unref();
+  };
+  process.on('SIGINT', () => shutdown('SIGINT'));
+  process.on('SIGTERM', () => shutdown('SIGTERM'));
+}
+
+main().catch((error: unknown) => {
+  console.error(
+    `hoopline-api: failed to start: ${error instanceof Error ? error.message : String(error)}`,
+  );
+  process.exit(1);
+});
