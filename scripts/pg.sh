@@ -67,7 +67,7 @@ ensure_binaries() {
 # refuses root), ourselves otherwise.
 as_owner() {
   if [[ "$(id -u)" == "0" ]]; then
-    runuser -u postgres -- "$@"
+    (cd / && runuser -u postgres -- "$@")
   else
     "$@"
   fi
@@ -79,8 +79,8 @@ as_owner() {
 resolve_data_dir() {
   mkdir -p "$ROOT/.data"
   if [[ "$(id -u)" != "0" ]]; then return 0; fi
-  if [[ -L "$DATA" ]]; then return 0; fi
-  if runuser -u postgres -- test -x "$ROOT/.data"; then return 0; fi
+  if [[ -L "$DATA" ]]; then DATA="$(readlink -f "$DATA")"; return 0; fi
+  if (cd / && runuser -u postgres -- test -x "$ROOT/.data"); then return 0; fi
   local hash
   hash="$(printf '%s' "$ROOT" | sha256sum | cut -c1-12)"
   local elsewhere="/var/tmp/hoopline-$hash-$(basename "$DATA")"
@@ -91,6 +91,7 @@ resolve_data_dir() {
   chmod 700 "$elsewhere"
   if [[ -d "$DATA" && ! -L "$DATA" ]]; then rmdir "$DATA" 2>/dev/null || { say "$DATA exists and is not empty"; exit 1; }; fi
   ln -s "$elsewhere" "$DATA"
+  DATA="$elsewhere"
 }
 
 is_running() {
@@ -148,6 +149,7 @@ start() {
 
 stop() {
   BIN="$(pg_bin)" || { say "no PostgreSQL binaries; nothing to stop"; return 0; }
+  if [[ -L "$DATA" ]]; then DATA="$(readlink -f "$DATA")"; fi
   if is_running; then
     as_owner "$BIN/pg_ctl" -D "$DATA" -m fast -w stop >/dev/null
     say "stopped"
@@ -161,6 +163,7 @@ case "$cmd" in
   stop) stop ;;
   status)
     BIN="$(pg_bin)" || { echo "no PostgreSQL binaries"; exit 1; }
+    if [[ -L "$DATA" ]]; then DATA="$(readlink -f "$DATA")"; fi
     if is_running; then echo "running on 127.0.0.1:$PORT ($URL)"; else echo "not running"; exit 1; fi ;;
   url) echo "$URL" ;;
   psql) BIN="$(pg_bin)"; exec "$BIN/psql" "$URL" ;;
