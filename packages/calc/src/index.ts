@@ -1,7 +1,12 @@
 /**
  * @hoopline/calc: the screening engine. Pure functions over plain data; every
- * public export is listed here.
+ * public export is listed here, and what is not listed is private.
  */
+
+// Engine identity
+export { ENGINE_NAME, ENGINE_VERSION } from './version';
+
+// Units, pressures, standard atmosphere
 export {
   UNITS,
   SI_UNIT,
@@ -34,4 +39,65 @@ export type {
 } from './units/pressure';
 export { QuantityParseError, parseQuantity } from './units/parse';
 export type { ParseOptions, Quantity } from './units/parse';
-export { ENGINE_NAME, ENGINE_VERSION } from './version';
+export {
+  AtmosphereError,
+  ambientPressureAtAltitude,
+  geopotentialFromGeometric,
+  standardAtmosphere,
+  standardAtmosphereAtGeopotential,
+} from './units/atmosphere';
+export type { StandardAtmospherePoint } from './units/atmosphere';
+
+// Reports, cautions, errors
+export type {
+  CaseReport,
+  Caution,
+  Check,
+  ComponentKind,
+  Governing,
+  Output,
+  PressureDirection,
+  Report,
+  ResolvedLoadCase,
+  Step,
+  ValidityWarning,
+  Verdict,
+  WarningSeverity,
+} from './core/report';
+export { CAUTIONS } from './core/cautions';
+export type { CautionCode } from './core/cautions';
+export { CalcInputError } from './core/errors';
+export type { InputIssue } from './core/errors';
+export { formatNumber } from './core/format';
+
+// Inputs shared by every component
+export { loadCaseSchema, loadCasesSchema, siteSchema } from './core/load-cases';
+export type { LoadCaseInput, SiteInput } from './core/load-cases';
+export type { MethodDefinition, SweepParameter } from './core/method';
+
+// Materials
+export {
+  MATERIALS,
+  customMaterialSchema,
+  findMaterial,
+  materialSchema,
+} from './materials/materials';
+export type { Material, MaterialInput, StrengthBasis } from './materials/materials';
+
+// Methods and their input schemas
+export { flatAreaLoad, flatAreaLoadSchema } from './methods/flat-area-load/flat-area-load';
+export type { FlatAreaLoadInput } from './methods/flat-area-load/flat-area-load';
+export { circularPlate, circularPlateSchema } from './methods/circular-plate/circular-plate';
+export type { CircularPlateInput } from './methods/circular-plate/circular-plate';
+
+// Screening
+export {
+  COMPONENT_KINDS,
+  METHODS,
+  computeReport,
+  findMethod,
+  parseComponent,
+  screen,
+  screenMany,
+} from './screen';
+export type { ParsedComponent, ScreenOutcome } from './screen';

@@ -1,0 +1,102 @@
+import { ENGINE_NAME, ENGINE_VERSION } from '../version';
+import { caution, type CautionCode } from './cautions';
+import type { MethodContext, MethodDefinition, MethodResult } from './method';
+import type { CaseReport, Governing, Report, ValidityWarning, Verdict } from './report';
+
+/**
+ * Turns what a method computed into the report: engine stamp, one case report
+ * per load case with its governing check, the governing case overall, the
+ * verdict, and the cautions (screening-only always first).
+ */
+export function assembleReport(
+  method: MethodDefinition,
+  context: MethodContext,
+  result: MethodResult,
+): Report {
+  const cases: CaseReport[] = result.cases.map((trail, index) => {
+    let governing: CaseReport['governing'] = null;
+    for (const check of trail.checks) {
+      if (governing === null || check.utilisation > governing.utilisation) {
+        governing = { checkId: check.id, utilisation: check.utilisation };
+      }
+    }
+    const loadCase = context.loadCases[index];
+    if (!loadCase)
+      throw new Error(`engine bug: ${method.kind} returned more cases than it was given`);
+    return {
+      loadCase,
+      steps: trail.steps,
+      checks: trail.checks,
+      outputs: trail.outputs,
+      governing,
+    };
+  });
+
+  let governing: Governing | null = null;
+  cases.forEach((c, caseIndex) => {
+    if (c.governing && (governing === null || c.governing.utilisation > governing.utilisation)) {
+      const check = c.checks.find((k) => k.id === c.governing?.checkId);
+      governing = {
+        loadCase: c.loadCase.name,
+        caseIndex,
+        checkId: c.governing.checkId,
+        checkLabel: check?.label ?? c.governing.checkId,
+        utilisation: c.governing.utilisation,
+      };
+    }
+  });
+
+  const warnings: ValidityWarning[] = [...result.warnings];
+  result.cases.forEach((trail, index) => {
+    for (const w of trail.warnings) warnings.push({ ...w, loadCase: cases[index]!.loadCase.name });
+  });
+
+  const anyCheck = cases.some((c) => c.checks.length > 0);
+  const anyFail = cases.some((c) => c.checks.some((k) => !k.pass));
+  const outside = warnings.some((w) => w.severity === 'outside-validity');
+  const verdict: Verdict = anyFail
+    ? 'fail'
+    : outside
+      ? 'outside-validity'
+      : anyCheck
+        ? 'pass'
+        : 'no-checks';
+
+  const codes: CautionCode[] = ['screening-only'];
+  for (const code of result.cautions) if (!codes.includes(code)) codes.push(code);
+
+  const report: Report = {
+    engine: { name: ENGINE_NAME, version: ENGINE_VERSION },
+    kind: method.kind,
+    title: result.title,
+    inputs: result.inputs,
+    ambient: {
+      pressure: context.ambient.pressure,
+      basis: context.ambient.basis,
+      ...(context.ambient.altitude !== undefined ? { altitude: context.ambient.altitude } : {}),
+    },
+    steps: result.steps,
+    cases,
+    governing,
+    verdict,
+    warnings,
+    cautions: codes.map(caution),
+  };
+  assertFinite(report, method.kind);
+  return report;
+}
+
+/** A report never carries NaN or ±Infinity; finding one is an engine bug, not a user error. */
+function assertFinite(value: unknown, where: string): void {
+  if (typeof value === 'number') {
+    if (!Number.isFinite(value)) throw new Error(`engine bug: non-finite number at ${where}`);
+    return;
+  }
+  if (Array.isArray(value)) {
+    value.forEach((v, i) => assertFinite(v, `${where}.${i}`));
+    return;
+  }
+  if (value !== null && typeof value === 'object') {
+    for (const [k, v] of Object.entries(value)) assertFinite(v, `${where}.${k}`);
+  }
+}

@@ -1,0 +1,88 @@
+import type { Caution } from './report';
+
+/**
+ * The cautions Hoopline attaches to results (PRODUCT.md, "Cautions that must
+ * appear"). `screening-only` is on every report.
+ */
+export const CAUTIONS = {
+  'screening-only': {
+    code: 'screening-only',
+    title: 'Screening only — not a code calculation',
+    text:
+      'This is a first-pass screening by textbook formulas, not a design to a pressure-equipment code. ' +
+      'Final design, fabrication and testing must follow the applicable code (for example ASME BPVC Section VIII, ' +
+      'EN 13445, the Pressure Equipment Directive) and local regulations, and be approved by a qualified engineer ' +
+      '(licensed where the law requires it).',
+  },
+  'brittle-material': {
+    code: 'brittle-material',
+    title: 'Brittle material',
+    text:
+      'Glass, acrylic and polycarbonate fail without warning, creep under sustained load and craze or crack with ' +
+      'solvents and cleaning agents. Use larger design factors, the maker’s long-term design stress, protect ' +
+      'against impact and scratches, and guard people against fragments.',
+  },
+  'polymer-creep': {
+    code: 'polymer-creep',
+    title: 'Polymer creep and crazing',
+    text:
+      'Polymers creep: the long-term allowable stress is far below the short-term strength, and falls with ' +
+      'temperature. Cast acrylic under continuous load is usually held to about 10 MPa (1500 psi) at 23 °C or ' +
+      'less to avoid crazing (common practice, from memory).',
+  },
+  'external-pressure-imperfection': {
+    code: 'external-pressure-imperfection',
+    title: 'Buckling is imperfection-sensitive',
+    text:
+      'Buckling under external pressure depends strongly on out-of-roundness, dents, weld distortion and ' +
+      'residual stress. Classical buckling pressures are not safe on their own: the allowable here applies a ' +
+      'knock-down and a design factor, which a code method (for example ASME VIII-1 UG-28 or EN 13445-3 ' +
+      'clause 8) must confirm, with the fabrication tolerances it requires.',
+  },
+  'stored-energy': {
+    code: 'stored-energy',
+    title: 'Stored energy hazard',
+    text:
+      'A vessel under pressure stores energy that a failure releases at once. A pressure test with gas is far ' +
+      'more dangerous than with water; test hydrostatically where possible, keep people clear and use ' +
+      'barricades. An evacuated vessel can implode and throw fragments, especially glass and acrylic.',
+  },
+  'small-deflection': {
+    code: 'small-deflection',
+    title: 'Small-deflection plate theory',
+    text:
+      'Flat-plate results are linear small-deflection theory. When the deflection exceeds about half the ' +
+      'thickness, membrane action stiffens the plate and the linear results overstate stress and deflection; ' +
+      'use large-deflection solutions or a finite-element analysis.',
+  },
+  'edge-condition': {
+    code: 'edge-condition',
+    title: 'Real edges lie between simply supported and clamped',
+    text:
+      'A bolted, clamped or gasketed edge is neither fully fixed nor free to rotate. Screen both edge conditions ' +
+      'where the support is uncertain; a welded-in plate is closer to clamped, a plate on an O-ring closer to ' +
+      'simply supported.',
+  },
+  'closure-loads': {
+    code: 'closure-loads',
+    title: 'Closure and fastener loads',
+    text:
+      'Fastener loads here are the pressure load shared equally. Bolts on a pressurised closure also carry ' +
+      'gasket seating and operating loads and any prying; on a vacuum door the frame, hinges and seal flange ' +
+      'carry the load. Check fasteners, hinges and frames by the applicable code.',
+  },
+  'vacuum-pumping': {
+    code: 'vacuum-pumping',
+    title: 'Pump-down is an estimate',
+    text:
+      'The exponential pump-down assumes a constant effective pumping speed in the viscous range. Outgassing, ' +
+      'water vapour (below about 10–100 Pa in an unbaked chamber), conductance of lines and the fall of pump ' +
+      'speed near its base pressure all make the real time longer.',
+  },
+} as const satisfies Record<string, Caution>;
+
+export type CautionCode = keyof typeof CAUTIONS;
+
+export function caution(code: CautionCode): Caution {
+  return CAUTIONS[code];
+}

@@ -1,0 +1,56 @@
+import type { z } from 'zod';
+
+/** One bad field: its dotted path ("loadCases.0.internal") and why. */
+export interface InputIssue {
+  readonly path: string;
+  readonly message: string;
+}
+
+/** Input that cannot be screened. Carries every issue, each naming its field. */
+export class CalcInputError extends Error {
+  override readonly name = 'CalcInputError';
+  constructor(readonly issues: readonly InputIssue[]) {
+    super(
+      issues.length === 0
+        ? 'invalid input'
+        : issues.map((i) => (i.path ? `${i.path}: ${i.message}` : i.message)).join('; '),
+    );
+  }
+}
+
+function describeIssue(issue: z.core.$ZodIssue): string {
+  switch (issue.code) {
+    case 'invalid_type':
+      return issue.input === undefined ? 'is required' : `must be ${article(issue.expected)}`;
+    case 'unrecognized_keys':
+      return issue.keys.length === 1
+        ? `unknown field "${issue.keys[0]}"`
+        : `unknown fields ${issue.keys.map((k) => `"${k}"`).join(', ')}`;
+    case 'invalid_value':
+      return issue.message.startsWith('Invalid')
+        ? `must be one of ${issue.values.map((v) => JSON.stringify(v)).join(', ')}`
+        : issue.message;
+    case 'invalid_union':
+      return issue.message === 'Invalid input' ? 'is not valid here' : issue.message;
+    default:
+      return issue.message;
+  }
+}
+
+function article(expected: string): string {
+  if (expected === 'array') return 'a list';
+  if (expected === 'object') return 'an object';
+  if (expected === 'int') return 'a whole number';
+  return `a ${expected}`;
+}
+
+/** zod issues → field-named issues; the path is dotted, list indices included. */
+export function issuesFromZod(
+  error: z.ZodError,
+  prefix: readonly (string | number)[] = [],
+): InputIssue[] {
+  return error.issues.map((issue) => ({
+    path: [...prefix, ...issue.path].map(String).join('.'),
+    message: describeIssue(issue),
+  }));
+}

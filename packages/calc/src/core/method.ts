@@ -1,0 +1,97 @@
+import { z } from 'zod';
+import type { CautionCode } from './cautions';
+import { loadCasesSchema, siteSchema, type Ambient } from './load-cases';
+import type { ComponentKind, ResolvedLoadCase, Step, ValidityWarning } from './report';
+import type { Trail } from './trail';
+
+/** What a method's compute function is given besides its parsed input. */
+export interface MethodContext {
+  readonly ambient: Ambient;
+  /** The component's load cases, resolved to absolute pressures (empty for methods without). */
+  readonly loadCases: readonly ResolvedLoadCase[];
+}
+
+/** What a method computes; the engine adds the engine stamp, governing case, verdict and cautions. */
+export interface MethodResult {
+  /** Title of what was screened, e.g. "Circular flat plate, clamped edge". */
+  readonly title: string;
+  /** Normalised inputs, SI. */
+  readonly inputs: Readonly<Record<string, unknown>>;
+  /** Steps common to all load cases. */
+  readonly steps: readonly Step[];
+  /** One trail per load case, in the order of the input's load cases. */
+  readonly cases: readonly Trail[];
+  /** Warnings that concern every case. */
+  readonly warnings: readonly ValidityWarning[];
+  /** Cautions that apply beyond screening-only (which is always added). */
+  readonly cautions: readonly CautionCode[];
+}
+
+/** A parameter a sweep varies (thickness), read from and written to a parsed input. */
+export interface SweepParameter<Parsed> {
+  readonly id: 'thickness';
+  readonly label: string;
+  readonly unit: 'm';
+  get(input: Parsed): number;
+  set(input: Parsed, value: number): Parsed;
+  /** Largest value the method accepts for this input (e.g. below the radius), if any. */
+  upperBound?(input: Parsed): number;
+}
+
+export interface MethodDefinition<Schema extends z.ZodType = z.ZodType> {
+  readonly kind: ComponentKind;
+  /** Short name for menus, e.g. "Circular flat plate". */
+  readonly name: string;
+  /** One sentence on what the method screens and by which theory. */
+  readonly description: string;
+  /** Input schema: the component's fields, `kind`, `site` and `loadCases` included. */
+  readonly schema: Schema;
+  readonly compute: (input: z.output<Schema>, context: MethodContext) => MethodResult;
+  readonly sweep?: SweepParameter<z.output<Schema>>;
+  /**
+   * For methods without load cases (pump-down): the single case the report
+   * shows, made from the input. Methods with load cases leave this out.
+   */
+  readonly singleCase?: (input: z.output<Schema>, ambient: Ambient) => ResolvedLoadCase;
+  /** Example inputs, used in the package README, the CLI help and the tests. */
+  readonly examples: readonly { readonly name: string; readonly input: z.input<Schema> }[];
+}
+
+/** Keeps a method's types tied together where it is defined. */
+export function defineMethod<Schema extends z.ZodType>(
+  method: MethodDefinition<Schema>,
+): MethodDefinition<Schema> {
+  return method;
+}
+
+const nameField = z.string().trim().max(120, 'must be at most 120 characters').optional();
+
+/**
+ * The shape every component input has: its kind, an optional name, the site
+ * (for ambient pressure) and its load cases, plus the method's own fields.
+ */
+export function componentShape<Kind extends ComponentKind, Shape extends z.ZodRawShape>(
+  kind: Kind,
+  shape: Shape,
+) {
+  return {
+    kind: z.literal(kind),
+    name: nameField,
+    site: siteSchema.optional(),
+    loadCases: loadCasesSchema,
+    ...shape,
+  };
+}
+
+/** As componentShape, for methods without load cases (pump-down). */
+export function componentShapeWithoutLoadCases<
+  Kind extends ComponentKind,
+  Shape extends z.ZodRawShape,
+>(kind: Kind, shape: Shape) {
+  return {
+    kind: z.literal(kind),
+    name: nameField,
+    site: siteSchema.optional(),
+    ...shape,
+  };
+}

@@ -1,0 +1,12 @@
+import type { MethodDefinition } from '../core/method';
+import { circularPlate } from './circular-plate/circular-plate';
+import { flatAreaLoad } from './flat-area-load/flat-area-load';
+
+/**
+ * Every screening method, one per component kind. Adding a method is adding
+ * its folder and one line here (no registration by import side effects).
+ */
+export const METHODS: readonly MethodDefinition[] = [
+  flatAreaLoad as unknown as MethodDefinition,
+  circularPlate as unknown as MethodDefinition,
+];
