@@ -89,6 +89,11 @@ export { flatAreaLoad, flatAreaLoadSchema } from './methods/flat-area-load/flat-
 export type { FlatAreaLoadInput } from './methods/flat-area-load/flat-area-load';
 export { circularPlate, circularPlateSchema } from './methods/circular-plate/circular-plate';
 export type { CircularPlateInput } from './methods/circular-plate/circular-plate';
+export {
+  rectangularPlate,
+  rectangularPlateSchema,
+} from './methods/rectangular-plate/rectangular-plate';
+export type { RectangularPlateInput } from './methods/rectangular-plate/rectangular-plate';
 
 // Screening
 export {
