@@ -94,6 +94,12 @@ export {
   rectangularPlateSchema,
 } from './methods/rectangular-plate/rectangular-plate';
 export type { RectangularPlateInput } from './methods/rectangular-plate/rectangular-plate';
+export {
+  EXTERNAL_PRESSURE_DEFAULTS,
+  cylindricalShell,
+  cylindricalShellSchema,
+} from './methods/cylindrical-shell/cylindrical-shell';
+export type { CylindricalShellInput } from './methods/cylindrical-shell/cylindrical-shell';
 
 // Screening
 export {

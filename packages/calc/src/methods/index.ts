@@ -1,5 +1,6 @@
 import type { MethodDefinition } from '../core/method';
 import { circularPlate } from './circular-plate/circular-plate';
+import { cylindricalShell } from './cylindrical-shell/cylindrical-shell';
 import { flatAreaLoad } from './flat-area-load/flat-area-load';
 import { rectangularPlate } from './rectangular-plate/rectangular-plate';
 
@@ -11,4 +12,5 @@ export const METHODS: readonly MethodDefinition[] = [
   flatAreaLoad as unknown as MethodDefinition,
   circularPlate as unknown as MethodDefinition,
   rectangularPlate as unknown as MethodDefinition,
+  cylindricalShell as unknown as MethodDefinition,
 ];

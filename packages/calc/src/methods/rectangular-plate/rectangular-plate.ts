@@ -39,6 +39,7 @@ const SOURCE_ALPHA_NU =
 /** The Poisson's ratio Roark's Table 11.4 coefficients are for. */
 const TABLE_POISSON = 0.3;
 
+/** Input of a rectangular plate: spans, thickness, edge condition, material, optional deflection limit, load cases. */
 export const rectangularPlateSchema = z
   .object(
     componentShape('rectangular-plate', {
@@ -78,6 +79,7 @@ export const rectangularPlateSchema = z
     }
   });
 
+/** What a rectangular-plate component accepts (numbers in SI or text with units). */
 export type RectangularPlateInput = z.input<typeof rectangularPlateSchema>;
 type Parsed = z.output<typeof rectangularPlateSchema>;
 
@@ -277,6 +279,7 @@ function coefficientStep(
   });
 }
 
+/** The rectangular-plate method (Roark Table 11.4 cases 1a and 8a). */
 export const rectangularPlate = defineMethod({
   kind: 'rectangular-plate',
   name: 'Rectangular flat plate',
