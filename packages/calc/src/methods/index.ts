@@ -1,6 +1,7 @@
 import type { MethodDefinition } from '../core/method';
 import { circularPlate } from './circular-plate/circular-plate';
 import { flatAreaLoad } from './flat-area-load/flat-area-load';
+import { sphereOrHead } from './sphere-or-head/sphere-or-head';
 
 /**
  * Every screening method, one per component kind. Adding a method is adding
@@ -9,4 +10,5 @@ import { flatAreaLoad } from './flat-area-load/flat-area-load';
 export const METHODS: readonly MethodDefinition[] = [
   flatAreaLoad as unknown as MethodDefinition,
   circularPlate as unknown as MethodDefinition,
+  sphereOrHead as unknown as MethodDefinition,
 ];
