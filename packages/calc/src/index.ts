@@ -98,6 +98,8 @@ export {
   zoellyCoefficient,
 } from './methods/sphere-or-head/sphere-or-head';
 export type { HeadShape, SphereOrHeadInput } from './methods/sphere-or-head/sphere-or-head';
+export { GASES, storedEnergy, storedEnergySchema } from './methods/stored-energy/stored-energy';
+export type { StoredEnergyGas, StoredEnergyInput } from './methods/stored-energy/stored-energy';
 
 // Physical properties
 export {
