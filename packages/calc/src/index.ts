@@ -100,6 +100,17 @@ export {
 export type { HeadShape, SphereOrHeadInput } from './methods/sphere-or-head/sphere-or-head';
 export { GASES, storedEnergy, storedEnergySchema } from './methods/stored-energy/stored-energy';
 export type { StoredEnergyGas, StoredEnergyInput } from './methods/stored-energy/stored-energy';
+export {
+  pumpDown,
+  pumpDownCurve,
+  pumpDownSchema,
+  pumpDownTime,
+} from './methods/pump-down/pump-down';
+export type {
+  PumpDownInput,
+  PumpDownParameters,
+  PumpDownPoint,
+} from './methods/pump-down/pump-down';
 
 // Physical properties
 export {

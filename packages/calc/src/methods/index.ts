@@ -1,6 +1,7 @@
 import type { MethodDefinition } from '../core/method';
 import { circularPlate } from './circular-plate/circular-plate';
 import { flatAreaLoad } from './flat-area-load/flat-area-load';
+import { pumpDown } from './pump-down/pump-down';
 import { sphereOrHead } from './sphere-or-head/sphere-or-head';
 import { storedEnergy } from './stored-energy/stored-energy';
 
@@ -13,4 +14,5 @@ export const METHODS: readonly MethodDefinition[] = [
   circularPlate as unknown as MethodDefinition,
   sphereOrHead as unknown as MethodDefinition,
   storedEnergy as unknown as MethodDefinition,
+  pumpDown as unknown as MethodDefinition,
 ];
