@@ -100,6 +100,37 @@ export {
   cylindricalShellSchema,
 } from './methods/cylindrical-shell/cylindrical-shell';
 export type { CylindricalShellInput } from './methods/cylindrical-shell/cylindrical-shell';
+export {
+  DEFAULT_BUCKLING_DESIGN_FACTOR,
+  DEFAULT_KNOCKDOWN,
+  classicalSphereBucklingPressure,
+  sphereOrHead,
+  sphereOrHeadSchema,
+  zoellyCoefficient,
+} from './methods/sphere-or-head/sphere-or-head';
+export type { HeadShape, SphereOrHeadInput } from './methods/sphere-or-head/sphere-or-head';
+export { GASES, storedEnergy, storedEnergySchema } from './methods/stored-energy/stored-energy';
+export type { StoredEnergyGas, StoredEnergyInput } from './methods/stored-energy/stored-energy';
+export {
+  pumpDown,
+  pumpDownCurve,
+  pumpDownSchema,
+  pumpDownTime,
+} from './methods/pump-down/pump-down';
+export type {
+  PumpDownInput,
+  PumpDownParameters,
+  PumpDownPoint,
+} from './methods/pump-down/pump-down';
+
+// Physical properties
+export {
+  IF97_SATURATION_MAX_TEMPERATURE,
+  IF97_SATURATION_MIN_TEMPERATURE,
+  WaterVapourRangeError,
+  saturationPressureBuck,
+  saturationPressureIf97,
+} from './physics/water-vapour';
 
 // Screening
 export {
