@@ -356,7 +356,7 @@ function internalCaseTrail(
       substituted: `t_req = max(${withUnit(tCircumferential, 'm')}, ${withUnit(tLongitudinal, 'm')}) + ${withUnit(allowance, 'm')}`,
       value: Math.max(tCircumferential, tLongitudinal) + allowance,
       unit: 'm',
-      source: `${SOURCE_UG27}; corrosion allowance added (UG-25)`,
+      source: `${SOURCE_UG27}; corrosion allowance added (UG-25, from memory)`,
     });
     trail.output(
       'required-thickness',
@@ -401,18 +401,13 @@ function internalCaseTrail(
   // Each check reaches 1 at its own pressure (UG-27: the MAWP); the smallest is the allowable.
   trail.output('allowable-pressure', 'Allowable pressure difference', capacity.allowable, 'Pa');
 
-  // UG-27 applicability (from memory, METHODS.md §e): circumferential P <= 0.385·S·E, longitudinal P <= 1.25·S·E.
+  // UG-27 applicability (from memory, METHODS.md §e): circumferential P <= 0.385·S·E; the
+  // longitudinal limit 1.25·S·E is the looser one, so the first warning covers both.
   if (p > 0.385 * SE) {
     trail.warn(
       'ug27-pressure-limit',
       'outside-validity',
       `P = ${formatNumber(p)} Pa exceeds 0.385·S·E = ${formatNumber(0.385 * SE)} Pa: the UG-27 circumferential formula does not apply (from memory); the thick-wall rules of VIII-1 Appendix 1-2 do`,
-    );
-  } else if (closed && p > 1.25 * SE) {
-    trail.warn(
-      'ug27-pressure-limit',
-      'outside-validity',
-      `P exceeds 1.25·S·E: the UG-27 longitudinal formula does not apply (from memory)`,
     );
   }
   return trail;
