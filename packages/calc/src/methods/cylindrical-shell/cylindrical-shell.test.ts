@@ -109,9 +109,10 @@ describe('internal pressure through screen()', () => {
     expect(
       relativeError(stepValue(report, 'lame-axial', 0), c.expected.axial_stress_closed_ends_Pa!),
     ).toBeLessThan(c.tolerance_rel);
-    // R/t = 1.7 and t > R/2: thin wall and UG-27 are out of range and say so.
+    // R/t = 1.7 and t > R/2: UG-27 is out of range and says so; the thin-wall stresses are
+    // out of range too, but only a caution, because the check uses Lamé, which holds.
     const codes = report.warnings.map((w) => [w.code, w.severity]);
-    expect(codes).toContainEqual(['thin-wall', 'outside-validity']);
+    expect(codes).toContainEqual(['thin-wall', 'caution']);
     expect(codes).toContainEqual(['ug27-thickness-limit', 'outside-validity']);
     // 50 MPa is below 0.385·S·E = 64 MPa here; 70 MPa is not (UG-27 limits from memory).
     expect(codes.some(([code]) => code === 'ug27-pressure-limit')).toBe(false);

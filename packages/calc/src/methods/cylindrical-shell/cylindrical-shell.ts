@@ -917,7 +917,9 @@ export const cylindricalShell = defineMethod({
     if ((internal || external) && R / t < 10) {
       warnings.push({
         code: 'thin-wall',
-        severity: 'outside-validity',
+        // Under internal pressure the checks use Lamé and UG-27, which hold for thick walls;
+        // only the thin-wall stresses shown beside them lose validity. Buckling formulas do not hold.
+        severity: external ? 'outside-validity' : 'caution',
         message: `R/t = ${formatNumber(R / t)} is below 10: ${
           internal
             ? 'the thin-wall hoop and longitudinal stresses do not hold (the Lamé values do)'
