@@ -188,10 +188,11 @@ export async function makeComponent(
   world: World,
   state: 'draft' | 'submitted' | 'countersigned' | 'returned' = 'draft',
   name = `Plate ${randomUUID().slice(0, 6)}`,
+  thickness = '12 mm',
 ) {
   const created = await t.services.components.create(world.designer, world.projectId, {
     name,
-    inputs: plateInputs(),
+    inputs: plateInputs(thickness),
   });
   const revisionId = created.revision.id;
   if (state !== 'draft') await t.services.revisions.submit(world.designer, revisionId);
@@ -216,22 +217,38 @@ export async function count(t: TestApp, table: string): Promise<number> {
   return row?.n ?? 0;
 }
 
-/** Row counts of every table a request could change. */
-export async function snapshot(t: TestApp): Promise<Record<string, number>> {
-  const tables = [
-    'users',
-    'refresh_tokens',
-    'invitations',
-    'password_resets',
-    'projects',
-    'project_members',
-    'custom_materials',
-    'components',
-    'revisions',
-    'sign_offs',
-    'audit_events',
-  ];
-  const out: Record<string, number> = {};
-  for (const table of tables) out[table] = await count(t, table);
-  return out;
+const TABLES = [
+  'users',
+  'refresh_tokens',
+  'invitations',
+  'password_resets',
+  'projects',
+  'project_members',
+  'custom_materials',
+  'components',
+  'revisions',
+  'sign_offs',
+  'audit_events',
+] as const;
+
+const digest = (table: string, columns: string) =>
+  `(select md5(coalesce(string_agg(concat_ws('|', ${columns}), ',' order by id), '')) from ${table})`;
+
+/**
+ * Row counts of every table a request could change, plus a digest of the
+ * mutable columns, in one query: equal snapshots mean nothing was written.
+ */
+export async function snapshot(t: TestApp): Promise<Record<string, string | number>> {
+  const counts = TABLES.map((table) => `(select count(*)::int from ${table}) as "${table}"`);
+  const [row] = (await t.dataSource.query(
+    `select ${counts.join(', ')},
+       ${digest('revisions', 'id, status, submitted_at, decided_at, superseded_at')} as revision_states,
+       ${digest('components', 'id, version, name, tag, latest_revision_id, issued_revision_id')} as component_states,
+       ${digest('projects', 'id, version, number, name, notes')} as project_states,
+       ${digest('users', 'id, name, is_admin, active, unit_system, auth_epoch, password_hash')} as user_states,
+       ${digest('refresh_tokens', 'id, revoked_at')} as session_states,
+       ${digest('invitations', 'id, accepted_at, revoked_at')} as invitation_states,
+       ${digest('password_resets', 'id, used_at')} as reset_states`,
+  )) as Record<string, string | number>[];
+  return row ?? {};
 }

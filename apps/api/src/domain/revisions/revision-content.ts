@@ -24,13 +24,18 @@ export interface RevisionContent {
  * change it, so it survives a round trip through PostgreSQL jsonb.
  */
 export function contentHash(content: RevisionContent): string {
+  return createHash('sha256').update(canonicalText(content), 'utf8').digest('hex');
+}
+
+/** The exact text the hash is taken over (RFC 8785 JSON Canonicalization Scheme). */
+export function canonicalText(content: RevisionContent): string {
   const text = canonicalize({
     inputs: content.inputs,
     engineVersion: content.engineVersion,
     report: content.report,
   });
   if (text === undefined) throw new Error('revision content has no JSON form');
-  return createHash('sha256').update(text, 'utf8').digest('hex');
+  return text;
 }
 
 /** "xxxx-xxxx-xxxx": the first 12 hex digits of the hash, for sheets and the verify page. */

@@ -486,21 +486,23 @@ export class RevisionsService {
    */
   async verify(normalisedCode: string): Promise<VerifyResult> {
     const manager = this.dataSource.manager;
-    const candidates = await manager
-      .getRepository(RevisionEntity)
-      .createQueryBuilder('r')
-      .where("r.status = 'countersigned'")
-      .andWhere(
-        normalisedCode.length === 64 ? 'r.content_hash = :code' : 'r.content_hash like :prefix',
-        { code: normalisedCode, prefix: `${normalisedCode}%` },
-      )
-      .orderBy('r.decided_at', 'DESC')
-      .limit(2)
-      .getMany();
-    // Two revisions sharing a 48-bit prefix cannot be told apart by the code: no answer.
-    if (candidates.length !== 1) return { match: false };
+    const candidates = (
+      await manager
+        .getRepository(RevisionEntity)
+        .createQueryBuilder('r')
+        .where("r.status = 'countersigned'")
+        .andWhere(
+          normalisedCode.length === 64 ? 'r.content_hash = :code' : 'r.content_hash like :prefix',
+          { code: normalisedCode, prefix: `${normalisedCode}%` },
+        )
+        .orderBy('r.decided_at', 'DESC')
+        .limit(50)
+        .getMany()
+    ).filter((r) => storedHashOf(r) === r.contentHash);
+    // A verify code shared by two different hashes cannot tell them apart: no answer.
+    // The same hash on several revisions (identical inputs screened twice) names the latest.
+    if (new Set(candidates.map((r) => r.contentHash)).size !== 1) return { match: false };
     const revision = candidates[0]!;
-    if (storedHashOf(revision) !== revision.contentHash) return { match: false };
     const [names] = await rows<{ number: string; name: string }>(
       manager,
       `select p.number, c.name from components c join projects p on p.id = c.project_id where c.id = $1`,
