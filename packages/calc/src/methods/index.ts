@@ -1,6 +1,9 @@
 import type { MethodDefinition } from '../core/method';
 import { circularPlate } from './circular-plate/circular-plate';
 import { flatAreaLoad } from './flat-area-load/flat-area-load';
+import { pumpDown } from './pump-down/pump-down';
+import { sphereOrHead } from './sphere-or-head/sphere-or-head';
+import { storedEnergy } from './stored-energy/stored-energy';
 
 /**
  * Every screening method, one per component kind. Adding a method is adding
@@ -9,4 +12,7 @@ import { flatAreaLoad } from './flat-area-load/flat-area-load';
 export const METHODS: readonly MethodDefinition[] = [
   flatAreaLoad as unknown as MethodDefinition,
   circularPlate as unknown as MethodDefinition,
+  sphereOrHead as unknown as MethodDefinition,
+  storedEnergy as unknown as MethodDefinition,
+  pumpDown as unknown as MethodDefinition,
 ];
