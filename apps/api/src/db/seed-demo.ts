@@ -198,6 +198,7 @@ export function signInSheet(result: SeedResult, publicUrl: string): string {
         `  ${''.padEnd(10)} (account existed already: the password is as first printed unless changed)`,
       );
   }
+  lines.push('', '  (Passwords as first set; one changed in the app since is not shown here.)');
   if (result.skipped.length > 0) {
     lines.push('', '  Demo components not loaded yet:');
     for (const s of result.skipped) lines.push(`    ${s.component}: ${s.reason}`);
