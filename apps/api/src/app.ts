@@ -56,6 +56,13 @@ export function createApp({ config, dataSource, logger, notifier }: AppDependenc
     pinoHttp({
       logger,
       redact: ['req.headers.cookie', 'req.headers.authorization', 'res.headers["set-cookie"]'],
+      serializers: {
+        // Invitation tokens travel in the path of GET /auth/invitations/:token: keep them out of the log.
+        req: (req: { url?: string }) => {
+          if (req.url) req.url = req.url.replace(/(\/auth\/invitations\/)[^/?#]+/, '$1[token]');
+          return req;
+        },
+      },
       customLogLevel: (_req, res, error) =>
         error || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info',
     }),

@@ -393,3 +393,30 @@ describe('auth: invitations and password reset', () => {
     await other.get('/api/me').expect(401);
   });
 });
+
+describe('auth: secrets stay out of the request log', () => {
+  it('logs GET /auth/invitations/:token with the token replaced', async () => {
+    const { pino } = await import('pino');
+    const { Writable } = await import('node:stream');
+    const { createApp } = await import('../app');
+    const t = await startTestApp();
+    const lines: string[] = [];
+    const sink = new Writable({
+      write(chunk: Buffer, _encoding, done) {
+        lines.push(chunk.toString());
+        done();
+      },
+    });
+    const app = createApp({ config: t.config, dataSource: t.dataSource, logger: pino(sink) });
+    await request(app).get('/api/auth/invitations/secret-token-value-123').expect(404);
+    await request(app)
+      .post('/api/auth/sign-in')
+      .send({ email: 'x@test.example', password: 'the password itself' })
+      .expect(401);
+    const log = lines.join('\n');
+    expect(log).toContain('/api/auth/invitations/[token]');
+    expect(log).not.toContain('secret-token-value-123');
+    expect(log).not.toContain('the password itself');
+    await t.close();
+  });
+});

@@ -477,6 +477,7 @@ describe('bad input on every route: 400 with the fields, nothing written, never 
         for (const body of junkBodies) requests.push({ method, path: real, body });
     }
     const failures: string[] = [];
+    let current = await snapshot(t);
     for (const who of ['designer', 'admin', 'anonymous'] as const) {
       // Signed out, every route answers before reading a body: the ids and queries suffice.
       for (const r of who === 'anonymous'
@@ -484,18 +485,20 @@ describe('bad input on every route: 400 with the fields, nothing written, never 
         : requests) {
         const s = sessions[who];
         const m = r.method.toLowerCase() as 'get' | 'post' | 'put' | 'patch' | 'delete';
-        const before = await snapshot(t);
         const res = m === 'get' ? await s.get(r.path) : await s[m](r.path, r.body);
         s.absorb(res);
-        if (res.status >= 500)
+        if (res.status >= 500) {
           failures.push(`${who} ${r.method} ${r.path} → ${res.status} ${JSON.stringify(res.body)}`);
+        }
+        const after = await snapshot(t);
         if (res.status >= 400) {
           expect(typeof res.body.error?.code).toBe('string');
-          const after = await snapshot(t);
-          // A refused request writes nothing (sign-out/refresh of a dead session included).
-          if (JSON.stringify(after) !== JSON.stringify(before))
+          // A refused request writes nothing.
+          if (JSON.stringify(after) !== JSON.stringify(current)) {
             failures.push(`${who} ${r.method} ${r.path}: rows changed on ${res.status}`);
+          }
         }
+        current = after;
       }
       // Keep the sessions alive for the next persona (sign-out in the fuzz may have ended them).
       if (who !== 'anonymous')

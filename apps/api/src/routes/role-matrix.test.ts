@@ -25,6 +25,8 @@ interface Row {
   readonly expect: Expect;
   /** Run with a freshly signed-in session (the call ends or replaces the session). */
   readonly fresh?: boolean;
+  /** Personas one after another (the row's calls share state); otherwise side by side. */
+  readonly serial?: boolean;
   readonly call: (s: Session, persona: Persona) => Promise<Response>;
 }
 
@@ -228,6 +230,7 @@ describe('role × route matrix (every route, every persona)', () => {
     {
       route: 'PATCH /api/projects/:id',
       expect: designerOrAdmin(200),
+      serial: true,
       call: async (s) => {
         const current = await t.services.projects.get(w.designer, w.projectId);
         return s.patch(P(), { notes: `edited ${randomUUID()}`, version: current.version });
@@ -443,7 +446,7 @@ describe('role × route matrix (every route, every persona)', () => {
     describe(row.route, () => {
       it('requires sign-in where it says so, then answers each role as the policy says', async () => {
         const got: Partial<Expect> = {};
-        for (const persona of PERSONAS) {
+        const one = async (persona: Persona) => {
           let s = sessions.get(persona)!;
           if (row.fresh) {
             const user = personaUser(w, persona);
@@ -455,7 +458,9 @@ describe('role × route matrix (every route, every persona)', () => {
           if (res.status === 404) expect(res.body.error.code).toBe('not_found');
           if (res.status >= 500)
             throw new Error(`${row.route} as ${persona}: ${JSON.stringify(res.body)}`);
-        }
+        };
+        if (row.serial) for (const persona of PERSONAS) await one(persona);
+        else await Promise.all(PERSONAS.map(one));
         expect(got).toEqual(row.expect);
       });
     });
