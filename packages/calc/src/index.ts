@@ -90,6 +90,17 @@ export type { FlatAreaLoadInput } from './methods/flat-area-load/flat-area-load'
 export { circularPlate, circularPlateSchema } from './methods/circular-plate/circular-plate';
 export type { CircularPlateInput } from './methods/circular-plate/circular-plate';
 export {
+  rectangularPlate,
+  rectangularPlateSchema,
+} from './methods/rectangular-plate/rectangular-plate';
+export type { RectangularPlateInput } from './methods/rectangular-plate/rectangular-plate';
+export {
+  EXTERNAL_PRESSURE_DEFAULTS,
+  cylindricalShell,
+  cylindricalShellSchema,
+} from './methods/cylindrical-shell/cylindrical-shell';
+export type { CylindricalShellInput } from './methods/cylindrical-shell/cylindrical-shell';
+export {
   DEFAULT_BUCKLING_DESIGN_FACTOR,
   DEFAULT_KNOCKDOWN,
   classicalSphereBucklingPressure,
