@@ -20,7 +20,8 @@ export interface ProjectInput {
   readonly number: string;
   readonly name: string;
   readonly client?: string;
-  readonly site?: Site;
+  /** null clears the site (sea level); on create it is left out. */
+  readonly site?: Site | null;
   readonly unitSystem: UnitSystem;
   readonly notes?: string;
 }
@@ -59,7 +60,8 @@ export function useProject(id: string) {
 export function useCreateProject() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (body: ProjectInput) => apiFetch<Project>('/projects', json('POST', body)),
+    mutationFn: ({ site, ...body }: ProjectInput) =>
+      apiFetch<Project>('/projects', json('POST', site ? { ...body, site } : body)),
     onSuccess: (project) => {
       client.setQueryData(projectKeys.one(project.id), project);
       return client.invalidateQueries({ queryKey: projectKeys.all });

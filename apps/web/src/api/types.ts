@@ -33,7 +33,7 @@ export interface Project {
   readonly number: string;
   readonly name: string;
   readonly client: string;
-  readonly site: Site;
+  readonly site: Site | null;
   readonly ambientPressure: number;
   readonly unitSystem: UnitSystem;
   readonly notes: string;

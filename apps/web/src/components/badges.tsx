@@ -46,7 +46,7 @@ export function VerdictBadge({ verdict, size = 'sm' }: { verdict: Verdict; size?
       <span aria-hidden="true" className="font-mono">
         {v.mark}
       </span>
-      {v.label}
+      <span>{v.label}</span>
     </span>
   );
 }

@@ -16,7 +16,7 @@ import { useUnitSystem } from '../lib/unit-system';
 import { useMe } from '../api/session';
 
 function siteText(site: unknown, system: 'si' | 'us'): string {
-  const s = site as { altitude?: number; ambientPressure?: number };
+  const s = (site ?? {}) as { altitude?: number; ambientPressure?: number };
   if (s.altitude !== undefined)
     return `altitude ${show(s.altitude, 'm', system)} (standard atmosphere)`;
   if (s.ambientPressure !== undefined) return 'ambient pressure given';

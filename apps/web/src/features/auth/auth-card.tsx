@@ -1,5 +1,6 @@
 import type { ReactNode } from 'react';
 import { CAUTIONS } from '@hoopline/calc';
+import { HealthIndicator } from '../../components/health-indicator';
 import { ThemeSwitch } from '../../components/theme-switch';
 
 /** The frame of the signed-out pages. */
@@ -17,7 +18,8 @@ export function AuthCard({ title, children }: { title: string; children: ReactNo
         </div>
         <p className="mt-6 text-center text-xs text-muted">{CAUTIONS['screening-only'].title}.</p>
       </main>
-      <div className="mt-4">
+      <div className="mt-4 flex flex-col items-center gap-3">
+        <HealthIndicator />
         <ThemeSwitch />
       </div>
     </div>

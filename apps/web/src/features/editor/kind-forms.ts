@@ -216,9 +216,386 @@ const flatAreaLoad: KindForm = {
   }),
 };
 
+const corrosion: FieldSpec = {
+  type: 'quantity',
+  path: 'corrosionAllowance',
+  label: 'Corrosion allowance (optional)',
+  kind: 'length',
+  optional: true,
+};
+
+const jointEfficiency: FieldSpec = {
+  type: 'number',
+  path: 'jointEfficiency',
+  label: 'Weld joint efficiency (optional)',
+  optional: true,
+  hint: '0.35–1; blank is 1 (seamless or fully radiographed).',
+};
+
+const externalPressureFields: FieldSpec[] = [
+  {
+    type: 'number',
+    path: 'externalPressure.knockdown',
+    label: 'Buckling knock-down factor (optional)',
+    optional: true,
+    hint: 'On the classical buckling pressure; blank uses the engine’s default.',
+  },
+  {
+    type: 'number',
+    path: 'externalPressure.designFactor',
+    label: 'Buckling design factor (optional)',
+    optional: true,
+  },
+];
+
+const rectangularPlate: KindForm = {
+  kind: 'rectangular-plate',
+  sections: [
+    {
+      title: 'Geometry',
+      fields: [
+        { type: 'quantity', path: 'width', label: 'Unsupported width', kind: 'length' },
+        { type: 'quantity', path: 'height', label: 'Unsupported height', kind: 'length' },
+        { type: 'quantity', path: 'thickness', label: 'Thickness', kind: 'length' },
+        {
+          type: 'select',
+          path: 'edge',
+          label: 'Edges',
+          options: [
+            { value: 'simply-supported', label: 'Simply supported on all four edges' },
+            { value: 'clamped', label: 'Clamped on all four edges' },
+          ],
+        },
+        corrosion,
+      ],
+    },
+    {
+      title: 'Material and limits',
+      fields: [
+        { type: 'material', path: 'material', label: 'Material' },
+        ...optionalStrength,
+        {
+          type: 'quantity',
+          path: 'deflectionLimit',
+          label: 'Deflection limit (optional)',
+          kind: 'length',
+          optional: true,
+        },
+      ],
+    },
+    { title: 'Load cases', fields: [{ type: 'load-cases' }] },
+  ],
+  template: (system) => ({
+    kind: 'rectangular-plate',
+    width: len('600 mm', '24 in')(system),
+    height: len('400 mm', '16 in')(system),
+    thickness: len('12 mm', '0.5 in')(system),
+    edge: 'simply-supported',
+    material: 'carbon-steel',
+    loadCases: [{ name: 'Operating: full vacuum', internal: 'full vacuum' }],
+  }),
+};
+
+const cylindricalShell: KindForm = {
+  kind: 'cylindrical-shell',
+  sections: [
+    {
+      title: 'Geometry',
+      fields: [
+        { type: 'quantity', path: 'diameter', label: 'Diameter', kind: 'length' },
+        {
+          type: 'select',
+          path: 'diameterBasis',
+          label: 'Diameter measured',
+          options: [
+            { value: 'outside', label: 'Outside' },
+            { value: 'inside', label: 'Inside' },
+          ],
+        },
+        { type: 'quantity', path: 'thickness', label: 'Wall thickness', kind: 'length' },
+        {
+          type: 'quantity',
+          path: 'length',
+          label: 'Unsupported length',
+          kind: 'length',
+          hint: 'Between stiffening rings or heads (add 1/3 of each head’s depth).',
+        },
+        {
+          type: 'select',
+          path: 'ends',
+          label: 'Ends',
+          options: [
+            { value: 'closed', label: 'Closed (heads carry the pressure into the shell)' },
+            { value: 'open', label: 'Open (no axial pressure load)' },
+          ],
+        },
+        corrosion,
+      ],
+    },
+    {
+      title: 'Material',
+      fields: [
+        { type: 'material', path: 'material', label: 'Material' },
+        ...optionalStrength,
+        jointEfficiency,
+      ],
+    },
+    {
+      title: 'External pressure',
+      fields: [
+        ...externalPressureFields,
+        {
+          type: 'quantity',
+          path: 'ringSpacingFor',
+          label: 'Find ring spacing for a thinner wall (optional)',
+          kind: 'length',
+          optional: true,
+        },
+      ],
+    },
+    { title: 'Load cases', fields: [{ type: 'load-cases' }] },
+  ],
+  template: (system) => ({
+    kind: 'cylindrical-shell',
+    diameter: len('1000 mm', '40 in')(system),
+    diameterBasis: 'outside',
+    thickness: len('6 mm', '0.25 in')(system),
+    length: len('1.2 m', '48 in')(system),
+    ends: 'closed',
+    material: 'stainless-304',
+    loadCases: [
+      { name: 'Operating: full vacuum', internal: 'full vacuum' },
+      { name: 'Vent back-fill', internal: len('0.5 bar(g)', '7 psig')(system) },
+    ],
+  }),
+};
+
+const sphereOrHead: KindForm = {
+  kind: 'sphere-or-head',
+  sections: [
+    {
+      title: 'Geometry',
+      fields: [
+        {
+          type: 'select',
+          path: 'shape',
+          label: 'Shape',
+          options: [
+            { value: 'ellipsoidal-2-1', label: '2:1 ellipsoidal head' },
+            { value: 'torispherical', label: 'Torispherical head' },
+            { value: 'hemispherical', label: 'Hemispherical head' },
+            { value: 'sphere', label: 'Sphere' },
+          ],
+        },
+        { type: 'quantity', path: 'diameter', label: 'Diameter', kind: 'length' },
+        {
+          type: 'select',
+          path: 'diameterBasis',
+          label: 'Diameter measured',
+          options: [
+            { value: 'outside', label: 'Outside' },
+            { value: 'inside', label: 'Inside' },
+          ],
+        },
+        { type: 'quantity', path: 'thickness', label: 'Thickness', kind: 'length' },
+        corrosion,
+      ],
+    },
+    {
+      title: 'Torispherical radii',
+      when: (raw) => raw['shape'] === 'torispherical',
+      fields: [
+        {
+          type: 'quantity',
+          path: 'crownRadius',
+          label: 'Crown radius (optional)',
+          kind: 'length',
+          optional: true,
+          hint: 'Blank: the outside diameter.',
+        },
+        {
+          type: 'quantity',
+          path: 'knuckleRadius',
+          label: 'Knuckle radius (optional)',
+          kind: 'length',
+          optional: true,
+          hint: 'Blank: 6 % of the crown radius.',
+        },
+      ],
+    },
+    {
+      title: 'Material',
+      fields: [
+        { type: 'material', path: 'material', label: 'Material' },
+        ...optionalStrength,
+        jointEfficiency,
+      ],
+    },
+    { title: 'External pressure', fields: externalPressureFields },
+    { title: 'Load cases', fields: [{ type: 'load-cases' }] },
+  ],
+  template: (system) => ({
+    kind: 'sphere-or-head',
+    shape: 'ellipsoidal-2-1',
+    diameter: len('600 mm', '24 in')(system),
+    diameterBasis: 'outside',
+    thickness: len('6 mm', '0.25 in')(system),
+    material: 'stainless-304',
+    loadCases: [
+      { name: 'Design', internal: len('6 bar(g)', '90 psig')(system) },
+      { name: 'Operating: full vacuum', internal: 'full vacuum' },
+    ],
+  }),
+};
+
+const storedEnergy: KindForm = {
+  kind: 'stored-energy',
+  sections: [
+    {
+      title: 'Vessel and gas',
+      fields: [
+        {
+          type: 'quantity',
+          path: 'volume',
+          label: 'Gas volume',
+          kind: 'volume',
+          hint: 'e.g. "50 L", "1.2 m3", "2 ft3".',
+        },
+        {
+          type: 'select',
+          path: 'gas',
+          label: 'Gas',
+          options: [
+            { value: 'air', label: 'Air' },
+            { value: 'nitrogen', label: 'Nitrogen' },
+            { value: 'oxygen', label: 'Oxygen' },
+            { value: 'helium', label: 'Helium' },
+            { value: 'argon', label: 'Argon' },
+            { value: 'carbon-dioxide', label: 'Carbon dioxide' },
+          ],
+        },
+        {
+          type: 'number',
+          path: 'heatCapacityRatio',
+          label: 'Heat capacity ratio γ (optional)',
+          optional: true,
+          hint: 'Blank uses the gas’s own value.',
+        },
+        {
+          type: 'quantity',
+          path: 'energyLimit',
+          label: 'Energy limit (optional)',
+          kind: 'energy',
+          optional: true,
+          hint: 'Adds a check, e.g. "100 kJ".',
+        },
+      ],
+    },
+    { title: 'Load cases', fields: [{ type: 'load-cases' }] },
+  ],
+  template: (system) => ({
+    kind: 'stored-energy',
+    volume: len('50 L', '2 ft3')(system),
+    gas: 'air',
+    loadCases: [
+      { name: 'Working', internal: len('10 bar(g)', '150 psig')(system) },
+      { name: 'Evacuated', internal: 'full vacuum' },
+    ],
+  }),
+};
+
+const pumpDown: KindForm = {
+  kind: 'pump-down',
+  sections: [
+    {
+      title: 'Chamber and pump',
+      fields: [
+        { type: 'quantity', path: 'volume', label: 'Chamber volume', kind: 'volume' },
+        {
+          type: 'quantity',
+          path: 'pumpingSpeed',
+          label: 'Pumping speed',
+          kind: 'volumeFlow',
+          hint: 'e.g. "10 L/s", "4 cfm", "20 m3/h".',
+        },
+        {
+          type: 'quantity',
+          path: 'conductance',
+          label: 'Line conductance (optional)',
+          kind: 'volumeFlow',
+          optional: true,
+        },
+      ],
+    },
+    {
+      title: 'Pressures and time',
+      fields: [
+        {
+          type: 'quantity',
+          path: 'startPressure',
+          label: 'Start pressure (optional)',
+          kind: 'load-pressure',
+          optional: true,
+          hint: 'Absolute; blank is the site’s ambient.',
+        },
+        {
+          type: 'quantity',
+          path: 'targetPressure',
+          label: 'Target pressure',
+          kind: 'load-pressure',
+          hint: 'Absolute, e.g. "10 torr" or "1 mbar(a)".',
+        },
+        {
+          type: 'quantity',
+          path: 'basePressure',
+          label: 'Pump base pressure (optional)',
+          kind: 'load-pressure',
+          optional: true,
+        },
+        {
+          type: 'quantity',
+          path: 'gasLoad',
+          label: 'Gas load: leaks and outgassing (optional)',
+          kind: 'throughput',
+          optional: true,
+          hint: 'e.g. "1e-3 mbar·L/s".',
+        },
+        {
+          type: 'quantity',
+          path: 'targetTime',
+          label: 'Time limit (optional)',
+          kind: 'time',
+          optional: true,
+          hint: 'Adds a check, e.g. "15 min".',
+        },
+        {
+          type: 'quantity',
+          path: 'waterTemperature',
+          label: 'Liquid water temperature (optional)',
+          kind: 'temperature',
+          optional: true,
+          hint: 'If the chamber holds water, e.g. "20 degC".',
+        },
+      ],
+    },
+  ],
+  template: (system) => ({
+    kind: 'pump-down',
+    volume: len('1 m3', '35 ft3')(system),
+    pumpingSpeed: len('10 L/s', '20 cfm')(system),
+    targetPressure: '10 torr',
+    targetTime: '15 min',
+  }),
+};
+
 export const KIND_FORMS: Partial<Record<ComponentKind, KindForm>> = {
   'circular-plate': circularPlate,
   'flat-area-load': flatAreaLoad,
+  'rectangular-plate': rectangularPlate,
+  'cylindrical-shell': cylindricalShell,
+  'sphere-or-head': sphereOrHead,
+  'stored-energy': storedEnergy,
+  'pump-down': pumpDown,
 };
 
 /** Whether this engine build can screen a kind at all. */

@@ -23,7 +23,7 @@ import { sameInputs, type Raw } from './paths';
 
 /** The project's site as an engine `site` input (SI numbers), or nothing for sea level. */
 export function siteInput(project: Project): Raw | undefined {
-  const site = project.site as { altitude?: unknown; ambientPressure?: unknown };
+  const site = (project.site ?? {}) as { altitude?: unknown; ambientPressure?: unknown };
   if (typeof site.altitude === 'number' && Number.isFinite(site.altitude))
     return { altitude: site.altitude };
   if (typeof site.ambientPressure === 'number' && Number.isFinite(site.ambientPressure))

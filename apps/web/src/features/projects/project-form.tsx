@@ -116,9 +116,12 @@ export function projectFormValues(
   };
 }
 
-/** Form values → the API body (site in SI numbers, as API.md's Project.site). */
+/**
+ * Form values → the API body (site in SI numbers). Sea level is "no site":
+ * left out on create, `null` on edit (the API's way to clear it).
+ */
 export function projectInput(values: ProjectFormValues): ProjectInput {
-  let site: Site = {};
+  let site: Site | null = null;
   if (values.siteBasis === 'altitude')
     site = { altitude: parseQuantity(values.altitude, { dimension: 'length' }).si };
   if (values.siteBasis === 'ambient')
