@@ -80,6 +80,13 @@ test('a designer creates a project and a door plate, sees results change live, s
   await expect(page.getByRole('img', { name: /Section of a flat circular plate/ })).toBeVisible();
   await expectAccessible(page, 'component editor');
   await screenshot(page, 'component-editor');
+  // The dark theme follows the system preference while the choice is "System".
+  await page.emulateMedia({ colorScheme: 'dark' });
+  await expect(page.locator('html')).toHaveAttribute('data-theme', 'dark');
+  await expectAccessible(page, 'component editor, dark theme');
+  await screenshot(page, 'component-editor-dark');
+  await page.emulateMedia({ colorScheme: 'light' });
+  await expect(page.locator('html')).toHaveAttribute('data-theme', 'light');
 
   await page.getByRole('button', { name: 'Save as revision 1' }).click();
   await expect(page.getByText('Revision 1 as saved, computed by the server')).toBeVisible();
@@ -150,6 +157,11 @@ test('a checker follows a deep link, then countersigns from the queue, which upd
     .fill('Trail read line by line; stress and deflection agree with Roark 11.2.');
   await expectAccessible(page, 'review');
   await screenshot(page, 'review');
+  // Readable on a tablet.
+  await page.setViewportSize({ width: 820, height: 1180 });
+  await expectAccessible(page, 'review on a tablet');
+  await screenshot(page, 'review-tablet');
+  await page.setViewportSize({ width: 1280, height: 720 });
   await page.getByRole('button', { name: 'Countersign' }).click();
 
   await expect(page.getByRole('heading', { name: 'Check queue' })).toBeVisible();

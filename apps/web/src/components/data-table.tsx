@@ -1,3 +1,4 @@
+import { ScrollArea } from './scroll-area';
 import type { ReactNode } from 'react';
 
 export interface Column<Row> {
@@ -40,7 +41,7 @@ export function DataTable<Row>({
   rowClassName?: (row: Row) => string;
 }) {
   return (
-    <div className="overflow-x-auto rounded-md border border-line bg-panel">
+    <ScrollArea label={caption}>
       <table className="w-full border-collapse text-sm">
         <caption className="sr-only">{caption}</caption>
         <thead>
@@ -99,7 +100,7 @@ export function DataTable<Row>({
                 {columns.map((column) => (
                   <td
                     key={column.key}
-                    className={`px-3 py-1.5 align-top ${column.numeric ? 'num text-right' : ''} ${column.className ?? ''}`}
+                    className={`px-3 py-1.5 align-top ${column.numeric ? 'num text-right whitespace-nowrap' : ''} ${column.className ?? ''}`}
                   >
                     {column.render(row)}
                   </td>
@@ -109,7 +110,7 @@ export function DataTable<Row>({
           )}
         </tbody>
       </table>
-    </div>
+    </ScrollArea>
   );
 }
 

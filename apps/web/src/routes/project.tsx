@@ -17,9 +17,8 @@ import { useMe } from '../api/session';
 
 function siteText(site: unknown, system: 'si' | 'us'): string {
   const s = (site ?? {}) as { altitude?: number; ambientPressure?: number };
-  if (s.altitude !== undefined)
-    return `altitude ${show(s.altitude, 'm', system)} (standard atmosphere)`;
-  if (s.ambientPressure !== undefined) return 'ambient pressure given';
+  if (s.altitude !== undefined) return `standard atmosphere at ${show(s.altitude, 'm', system)}`;
+  if (s.ambientPressure !== undefined) return 'given';
   return 'standard atmosphere at sea level';
 }
 

@@ -1,3 +1,4 @@
+import { ScrollArea } from '../../components/scroll-area';
 import type { Report, Step } from '@hoopline/calc';
 import type { UnitSystem } from '../../api/types';
 import { dimensionOfReportUnit, formatValue, toDisplay } from '../../lib/units';
@@ -56,7 +57,7 @@ export function TrailTable({ report, system }: { report: Report; system: UnitSys
     return [...acc, previous];
   }, []);
   return (
-    <div className="overflow-x-auto rounded-md border border-line bg-panel">
+    <ScrollArea label="Calculation trail">
       <table className="w-full min-w-[960px] border-collapse text-sm">
         <caption className="sr-only">Calculation trail</caption>
         <thead>
@@ -105,7 +106,7 @@ export function TrailTable({ report, system }: { report: Report; system: UnitSys
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollArea>
   );
 }
 

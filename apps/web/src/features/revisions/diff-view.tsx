@@ -1,3 +1,4 @@
+import { ScrollArea } from '../../components/scroll-area';
 import type { Change, RevisionDiff, RevisionSummary } from '../../api/types';
 import { StatusBadge, VerdictBadge } from '../../components/badges';
 import { formatDateTime } from '../../lib/dates';
@@ -77,7 +78,7 @@ export function DiffView({
   );
   return (
     <div className="flex flex-col gap-4">
-      <div className="overflow-x-auto rounded-md border border-line bg-panel">
+      <ScrollArea label="Revisions">
         <table className="w-full border-collapse text-sm">
           <caption className="px-3 pt-2 text-left text-sm font-semibold">Revisions</caption>
           {header}
@@ -126,8 +127,8 @@ export function DiffView({
             </tr>
           </tbody>
         </table>
-      </div>
-      <div className="overflow-x-auto rounded-md border border-line bg-panel">
+      </ScrollArea>
+      <ScrollArea label="Changed inputs">
         <table className="w-full border-collapse text-sm">
           <caption className="px-3 pt-2 text-left text-sm font-semibold">
             Changed inputs{' '}
@@ -138,8 +139,8 @@ export function DiffView({
             <ChangeRows changes={diff.inputs} empty="No input changed." />
           </tbody>
         </table>
-      </div>
-      <div className="overflow-x-auto rounded-md border border-line bg-panel">
+      </ScrollArea>
+      <ScrollArea label="Changed results">
         <table className="w-full border-collapse text-sm">
           <caption className="px-3 pt-2 text-left text-sm font-semibold">
             Changed results{' '}
@@ -150,7 +151,7 @@ export function DiffView({
             <ChangeRows changes={diff.results} empty="No result changed." />
           </tbody>
         </table>
-      </div>
+      </ScrollArea>
     </div>
   );
 }

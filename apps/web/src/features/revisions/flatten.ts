@@ -63,14 +63,20 @@ export function formatInputValue(value: unknown): string {
 }
 
 /** Leaves of a plain input object, in document order. */
-export function flattenInputs(value: unknown, prefix = ''): InputRow[] {
+export function flattenInputs(
+  value: unknown,
+  prefix = '',
+  format: (path: string, value: unknown) => string = (_path, v) => formatInputValue(v),
+): InputRow[] {
   if (value !== null && typeof value === 'object') {
     const entries = Array.isArray(value)
       ? value.map((v, i) => [String(i), v] as const)
       : Object.entries(value as Record<string, unknown>);
-    return entries.flatMap(([key, v]) => flattenInputs(v, prefix ? `${prefix}.${key}` : key));
+    return entries.flatMap(([key, v]) =>
+      flattenInputs(v, prefix ? `${prefix}.${key}` : key, format),
+    );
   }
   return prefix
-    ? [{ path: prefix, label: labelForPath(prefix), value: formatInputValue(value) }]
+    ? [{ path: prefix, label: labelForPath(prefix), value: format(prefix, value) }]
     : [];
 }

@@ -10,7 +10,11 @@ import {
   WarningsList,
 } from '../results/report-view';
 import { TrailTable } from '../results/trail-table';
-import { flattenInputs } from './flatten';
+import type { ComponentKind } from '@hoopline/calc';
+import type { QuantityKind } from '../../components/unit-input';
+import { quantityText } from '../editor/fields';
+import { KIND_FORMS } from '../editor/kind-forms';
+import { flattenInputs, formatInputValue } from './flatten';
 
 export function RevisionMeta({ revision }: { revision: Revision }) {
   return (
@@ -60,8 +64,40 @@ export function SignOffHistory({ revision }: { revision: Revision }) {
   );
 }
 
+/**
+ * The inputs as the designer entered them, in the order of the kind's form;
+ * numbers stored in SI (the site, or inputs sent as numbers) with their unit.
+ */
 export function InputsTable({ inputs }: { inputs: unknown }) {
-  const rows = flattenInputs(inputs);
+  const kind = (inputs as { kind?: ComponentKind } | null)?.kind;
+  const form = kind ? KIND_FORMS[kind] : undefined;
+  const order: string[] = ['kind', 'name'];
+  const kinds = new Map<string, QuantityKind>([
+    ['site.altitude', 'length'],
+    ['site.ambientPressure', 'pressure'],
+  ]);
+  for (const section of form?.sections ?? []) {
+    for (const field of section.fields) {
+      if (field.type === 'load-cases') order.push('loadCases');
+      else {
+        order.push(field.path);
+        if (field.type === 'quantity') kinds.set(field.path, field.kind);
+      }
+    }
+  }
+  const rank = (path: string) => {
+    const i = order.findIndex((p) => path === p || path.startsWith(`${p}.`));
+    return i < 0 ? order.length : i;
+  };
+  const rows = flattenInputs(inputs, '', (path, value) => {
+    const q =
+      kinds.get(path) ??
+      (/^loadCases\.\d+\.(internal|external)$/.test(path) ? 'load-pressure' : undefined);
+    return q && typeof value === 'number' ? quantityText(value, q) : formatInputValue(value);
+  })
+    .map((row, index) => ({ row, index }))
+    .sort((a, b) => rank(a.row.path) - rank(b.row.path) || a.index - b.index)
+    .map(({ row }) => row);
   return (
     <table className="w-full text-sm">
       <caption className="sr-only">Inputs as entered</caption>

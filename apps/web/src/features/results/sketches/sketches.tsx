@@ -11,17 +11,19 @@ function Frame({
   title,
   children,
   note,
+  height = H,
 }: {
   title: string;
   children: (id: string) => ReactNode;
   note?: string | null;
+  height?: number;
 }) {
   const raw = useId();
   const id = `s${raw.replace(/[^a-zA-Z0-9]/g, '')}`;
   return (
     <figure className="m-0">
       <svg
-        viewBox={`0 0 ${W} ${H}`}
+        viewBox={`0 0 ${W} ${height}`}
         role="img"
         aria-label={title}
         className="h-auto w-full max-w-[480px]"
@@ -51,14 +53,17 @@ export function CircularPlateSketch({
   edge: 'clamped' | 'simply-supported';
   system: UnitSystem;
 }) {
-  const fit = fitToBox(diameter, diameter * 0.25, W, H, 60);
-  const span = diameter * fit.scale;
-  const t = drawnThickness(thickness, fit.scale, 6, 34);
-  const x0 = (W - span) / 2;
-  const y0 = H / 2 - t.px / 2;
+  const height = 170;
+  const span = 260;
+  const scale = span / diameter;
+  const t = drawnThickness(thickness, scale, 6, 30);
+  const x0 = 50;
+  const y0 = 78 - t.px / 2;
   const clamped = edge === 'clamped';
+  const tx = x0 + span + 40;
   return (
     <Frame
+      height={height}
       title={`Section of a flat circular plate, ${clamped ? 'clamped' : 'simply supported'} edge, span ${show(diameter, 'm', system)}, thickness ${show(thickness, 'm', system)}.`}
       note={t.toScale ? null : NOT_TO_SCALE}
     >
@@ -75,18 +80,18 @@ export function CircularPlateSketch({
           {clamped ? (
             <>
               <rect
-                x={x0 - 26}
-                y={y0 - 22}
-                width={26}
-                height={t.px + 44}
+                x={x0 - 24}
+                y={y0 - 20}
+                width={24}
+                height={t.px + 40}
                 fill={`url(#${id}-hatch)`}
                 className="stroke-muted"
               />
               <rect
                 x={x0 + span}
-                y={y0 - 22}
-                width={26}
-                height={t.px + 44}
+                y={y0 - 20}
+                width={24}
+                height={t.px + 40}
                 fill={`url(#${id}-hatch)`}
                 className="stroke-muted"
               />
@@ -115,7 +120,12 @@ export function CircularPlateSketch({
               />
             );
           })}
-          <text x={W / 2} y={y0 - 36} textAnchor="middle" className="fill-muted text-[10px]">
+          <text
+            x={x0 + span / 2}
+            y={y0 - 36}
+            textAnchor="middle"
+            className="fill-muted text-[10px]"
+          >
             pressure difference
           </text>
           <Dimension
@@ -124,18 +134,44 @@ export function CircularPlateSketch({
             y1={y0 + t.px}
             x2={x0 + span}
             y2={y0 + t.px}
-            offset={-44}
+            offset={34}
             label={`span ${show(diameter, 'm', system)}`}
           />
-          <Dimension
-            id={id}
-            x1={x0 + span + 30}
+          <line
+            x1={x0 + span + 24}
             y1={y0}
-            x2={x0 + span + 30}
-            y2={y0 + t.px}
-            offset={-12}
-            label={`t ${show(thickness, 'm', system)}`}
+            x2={tx + 6}
+            y2={y0}
+            className="stroke-muted"
+            strokeWidth={0.8}
           />
+          <line
+            x1={x0 + span + 24}
+            y1={y0 + t.px}
+            x2={tx + 6}
+            y2={y0 + t.px}
+            className="stroke-muted"
+            strokeWidth={0.8}
+          />
+          <line
+            x1={tx}
+            y1={y0 - 14}
+            x2={tx}
+            y2={y0}
+            className="stroke-ink"
+            markerEnd={`url(#${id}-arrow)`}
+          />
+          <line
+            x1={tx}
+            y1={y0 + t.px + 14}
+            x2={tx}
+            y2={y0 + t.px}
+            className="stroke-ink"
+            markerEnd={`url(#${id}-arrow)`}
+          />
+          <text x={tx + 8} y={y0 + t.px / 2 + 4} className="fill-ink text-[11px] font-medium">
+            t {show(thickness, 'm', system)}
+          </text>
         </>
       )}
     </Frame>
