@@ -204,6 +204,20 @@ test('an admin sees people and the audit log', async ({ page }) => {
   await expect(page.getByRole('table', { name: 'Audit events, newest first' })).toBeVisible();
   await expectAccessible(page, 'audit log');
   await screenshot(page, 'audit-log');
+  // The seeded demo's acrylic viewport has a returned revision 1 and a revision 2: compare them.
+  await page.getByRole('link', { name: 'Projects' }).click();
+  await page.getByRole('link', { name: 'LAM-2026-014' }).click();
+  await page.getByRole('link', { name: 'VDC-3 acrylic viewport' }).click();
+  await page.getByRole('link', { name: 'Revisions' }).click();
+  await expectAccessible(page, 'revisions');
+  await screenshot(page, 'revisions');
+  await page.getByLabel('Compare revision 1').check();
+  await page.getByLabel('Compare revision 2').check();
+  await page.getByRole('button', { name: 'Compare 1 and 2' }).click();
+  await expect(page.getByRole('table', { name: /Changed inputs/ })).toBeVisible();
+  await expect(page.locator('tr[data-changed="true"]').first()).toBeVisible();
+  await expectAccessible(page, 'compare');
+  await screenshot(page, 'compare');
   await page.goto('/no/such/page');
   await expect(page.getByRole('heading', { name: 'No such page' })).toBeVisible();
   await screenshot(page, 'not-found');

@@ -10,3 +10,9 @@ export function formatDateTime(iso: string | null | undefined): string {
 export function formatDate(iso: string | null | undefined): string {
   return formatDateTime(iso).slice(0, 10);
 }
+
+/** The verify code of a content hash: its first 12 hex digits as xxxx-xxxx-xxxx (API.md). */
+export function verifyCodeOf(contentHash: string): string {
+  const head = contentHash.slice(0, 12);
+  return head.match(/.{1,4}/g)?.join('-') ?? head;
+}

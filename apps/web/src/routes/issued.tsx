@@ -8,7 +8,7 @@ import { ErrorView } from '../components/error-view';
 import { INPUT_CLASS } from '../components/field';
 import { PageHeader } from '../components/page';
 import { TableSkeleton } from '../components/skeleton';
-import { formatDateTime } from '../lib/dates';
+import { formatDateTime, verifyCodeOf } from '../lib/dates';
 import { kindLabel } from '../lib/kinds';
 
 /**
@@ -60,7 +60,7 @@ export function IssuedRoute() {
       key: 'code',
       header: 'Verify code',
       render: (i) => (
-        <span className="font-mono text-xs">{i.revision.contentHash.slice(0, 12)}</span>
+        <span className="font-mono text-xs">{verifyCodeOf(i.revision.contentHash)}</span>
       ),
     },
   ];

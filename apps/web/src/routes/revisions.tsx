@@ -10,7 +10,7 @@ import { DataTable, type Column } from '../components/data-table';
 import { ErrorView } from '../components/error-view';
 import { PageHeader } from '../components/page';
 import { PageSkeleton, TableSkeleton } from '../components/skeleton';
-import { formatDateTime } from '../lib/dates';
+import { formatDateTime, verifyCodeOf } from '../lib/dates';
 
 /** A component's history, newest first; pick two to compare. */
 export function RevisionsRoute() {
@@ -79,7 +79,7 @@ export function RevisionsRoute() {
     {
       key: 'hash',
       header: 'Verify code',
-      render: (r) => <span className="font-mono text-xs">{r.contentHash.slice(0, 12)}</span>,
+      render: (r) => <span className="font-mono text-xs">{verifyCodeOf(r.contentHash)}</span>,
     },
   ];
 

@@ -48,7 +48,7 @@ describe('DiffView', () => {
     const results = screen.getByRole('table', { name: /Changed results/ });
     expect(
       within(results).getByRole('row', { name: /Stress utilisation, full vacuum/ }),
-    ).toHaveTextContent('1.7733');
+    ).toHaveTextContent('177.3 %');
     const verdict = screen.getByRole('row', { name: /Verdict/ });
     expect(verdict).toHaveAttribute('data-changed', 'true');
     expect(within(verdict).getByText('Fails')).toBeInTheDocument();
@@ -75,6 +75,24 @@ describe('input labels', () => {
     expect(labelForPath('outline.sealDiameter')).toBe('Seal outline · seal diameter');
     expect(diffValue({ a: 1 })).toBe('{"a":1}');
     expect(diffValue(0.123456789)).toBe('0.123457');
+    expect(
+      diffValue(1.50112, { path: 'governing.utilisation', label: 'Governing utilisation' }),
+    ).toBe('150.1 %');
+    // 10.808 MPa = 1567.6 psi = 1.568 ksi (1 psi = 6894.757 Pa, NIST SP 811 B.8).
+    expect(
+      diffValue(
+        10808000,
+        { path: 'cases.0.outputs.max-stress', label: 'Maximum stress (Pa)' },
+        'si',
+      ),
+    ).toBe('10.81 MPa');
+    expect(
+      diffValue(
+        10808000,
+        { path: 'cases.0.outputs.max-stress', label: 'Maximum stress (Pa)' },
+        'us',
+      ),
+    ).toBe('1.568 ksi');
   });
   it('flattens inputs to rows', () => {
     expect(flattenInputs({ thickness: '12 mm', loadCases: [{ name: 'FV' }] })).toEqual([

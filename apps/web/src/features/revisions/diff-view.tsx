@@ -2,19 +2,35 @@ import { ScrollArea } from '../../components/scroll-area';
 import type { Change, RevisionDiff, RevisionSummary } from '../../api/types';
 import { StatusBadge, VerdictBadge } from '../../components/badges';
 import { formatDateTime } from '../../lib/dates';
-import { formatValue } from '../../lib/units';
+import { dimensionOfReportUnit, formatValue, percent, toDisplay } from '../../lib/units';
+import { useUnitSystem } from '../../lib/unit-system';
+import type { UnitSystem } from '../../api/types';
 import { labelForPath } from './flatten';
 
-/** A value in a diff cell: numbers to 6 figures, text as is, structures as compact JSON. */
-export function diffValue(value: unknown): string {
+/**
+ * A value in a diff cell: a utilisation as a percentage, a result whose label
+ * names its SI unit ("Maximum stress (Pa)") in the reader's display unit,
+ * other numbers to 6 figures, text as is, structures as compact JSON.
+ */
+export function diffValue(
+  value: unknown,
+  change?: Pick<Change, 'path' | 'label'>,
+  system: UnitSystem = 'si',
+): string {
   if (value === undefined || value === null) return '–';
-  if (typeof value === 'number') return formatValue(value, 6);
+  if (typeof value === 'number') {
+    if (change && /(^|\.)utilisation$/.test(change.path)) return percent(value);
+    const unit = /\(([^()]+)\)$/.exec(change?.label ?? '')?.[1];
+    if (unit && dimensionOfReportUnit(unit)) return toDisplay(value, unit, system).text;
+    return formatValue(value, 6);
+  }
   if (typeof value === 'string') return value;
   if (typeof value === 'boolean') return value ? 'yes' : 'no';
   return JSON.stringify(value);
 }
 
 function ChangeRows({ changes, empty }: { changes: readonly Change[]; empty: string }) {
+  const system = useUnitSystem();
   if (changes.length === 0) {
     return (
       <tr>
@@ -34,11 +50,11 @@ function ChangeRows({ changes, empty }: { changes: readonly Change[]; empty: str
           </th>
           <td className="num bg-fail-soft/60 px-3 py-1.5 font-mono text-xs">
             <span className="sr-only">before: </span>
-            {diffValue(change.before)}
+            {diffValue(change.before, change, system)}
           </td>
           <td className="num bg-pass-soft/60 px-3 py-1.5 font-mono text-xs">
             <span className="sr-only">after: </span>
-            {diffValue(change.after)}
+            {diffValue(change.after, change, system)}
           </td>
         </tr>
       ))}

@@ -100,3 +100,41 @@ describe('sketches', () => {
     expect(container.querySelectorAll('circle.fill-ink')).toHaveLength(12);
   });
 });
+
+describe('pictures from engine reports', () => {
+  it('draws the cylinder with its buckling mode from the report’s lobe number', async () => {
+    const { screen: screenComponent } = await import('@hoopline/calc');
+    const { KIND_FORMS } = await import('../../editor/kind-forms');
+    const { ComponentSketch, lobeCount } = await import('./index');
+    const report = screenComponent(KIND_FORMS['cylindrical-shell']!.template('si'));
+    const lobes = lobeCount(report);
+    const output = report.cases[report.governing!.caseIndex]!.outputs.find((o) => o.id === 'lobes');
+    expect(output).toBeDefined();
+    expect(lobes).toBe(output!.value);
+    render(<ComponentSketch report={report} system="si" />);
+    expect(
+      screen.getByRole('img', { name: /Cylindrical shell, diameter 1000 mm, length 1200 mm/ }),
+    ).toBeInTheDocument();
+  });
+
+  it('draws each head shape the engine screens', async () => {
+    const { screen: screenComponent } = await import('@hoopline/calc');
+    const { KIND_FORMS } = await import('../../editor/kind-forms');
+    const { ComponentSketch } = await import('./index');
+    const template = KIND_FORMS['sphere-or-head']!.template('si');
+    for (const [shape, name] of [
+      ['ellipsoidal-2-1', '2:1 ellipsoidal head'],
+      ['torispherical', 'Torispherical head'],
+      ['hemispherical', 'Hemispherical head'],
+      ['sphere', 'Sphere'],
+    ] as const) {
+      const { unmount } = render(
+        <ComponentSketch report={screenComponent({ ...template, shape })} system="si" />,
+      );
+      expect(
+        screen.getByRole('img', { name: new RegExp(`^${name}, diameter 600 mm`) }),
+      ).toBeInTheDocument();
+      unmount();
+    }
+  });
+});
