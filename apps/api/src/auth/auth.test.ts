@@ -170,7 +170,21 @@ describe('auth: sign-in, refresh, sign-out (real PostgreSQL)', () => {
       .set('x-csrf-token', 'x')
       .expect(401);
     expect(second.body.error.code).toBe('refresh_superseded');
+    // The winner's fresh cookies are left alone.
+    expect(cookie(second, 'hl_refresh')).toBeUndefined();
     await s.post('/api/auth/refresh').expect(200);
+  });
+
+  it('an expired refresh token is 401 refresh_expired and clears the cookies', async () => {
+    const s = await signIn(t, user);
+    await t.dataSource.query(
+      `update refresh_tokens set expires_at = now() - interval '1 second'
+        where user_id = $1 and revoked_at is null`,
+      [user.id],
+    );
+    const res = await s.post('/api/auth/refresh').expect(401);
+    expect(res.body.error.code).toBe('refresh_expired');
+    expect(cookie(res, 'hl_refresh')).toMatch(/Expires=Thu, 01 Jan 1970/);
   });
 
   it('sign-out revokes the refresh token and clears the cookies', async () => {

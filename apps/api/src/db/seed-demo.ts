@@ -193,10 +193,6 @@ export function signInSheet(result: SeedResult, publicUrl: string): string {
   for (const s of result.signIns) {
     lines.push(`  ${s.role.padEnd(10)} ${s.email.padEnd(34)} password: ${s.password}`);
     lines.push(`  ${''.padEnd(10)} ${s.name}: ${s.can}`);
-    if (!s.created)
-      lines.push(
-        `  ${''.padEnd(10)} (account existed already: the password is as first printed unless changed)`,
-      );
   }
   lines.push('', '  (Passwords as first set; one changed in the app since is not shown here.)');
   if (result.skipped.length > 0) {

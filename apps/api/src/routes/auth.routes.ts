@@ -7,6 +7,7 @@ import {
   setSessionCookies,
 } from '../auth/cookies';
 import { signInLimiters } from '../auth/rate-limit';
+import { AppError } from '../http/errors';
 import { valid, validate } from '../http/validate';
 import {
   acceptInvitationBody,
@@ -38,7 +39,11 @@ export function authRoutes({ config, services }: RouteDeps): Router {
       setSessionCookies(res, config.auth, session);
       res.json(me);
     } catch (error) {
-      clearSessionCookies(res, config.auth);
+      // A token rotated a moment ago by a parallel request: the browser holds
+      // that request's fresh cookies; clearing them here would sign it out.
+      if (!(error instanceof AppError && error.code === 'refresh_superseded')) {
+        clearSessionCookies(res, config.auth);
+      }
       throw error;
     }
   });

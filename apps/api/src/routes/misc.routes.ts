@@ -2,9 +2,9 @@ import { Router } from 'express';
 import { CalcInputError, screen, screenMany } from '@hoopline/calc';
 import { actorOf } from '../auth/authenticate';
 import { inputIssues } from '../domain/revisions/revision-content';
-import { fieldErrors, unstorableText, valid, validate } from '../http/validate';
+import { fieldErrors, valid, validate } from '../http/validate';
 import { validationFailed } from '../http/errors';
-import { auditQuery, issuedQuery, screenBatchBody, verifyParams } from './misc.schemas';
+import { auditQuery, issuedQuery, screenBatchBody, screenBody, verifyParams } from './misc.schemas';
 import type { RouteDeps } from './route-deps';
 
 /** /issued, /audit, /screen and the public /verify. */
@@ -24,20 +24,12 @@ export function miscRoutes({ services, signedIn }: RouteDeps): Router {
   });
 
   // Stateless: runs the engine and saves nothing. One calc input, or { cases: [...] }.
-  router.post('/screen', signedIn, (req, res) => {
-    const body: unknown = req.body;
-    if (body === null || typeof body !== 'object' || Array.isArray(body)) {
-      throw validationFailed([
-        { path: '', message: 'send a component input, or { "cases": [ ... ] }, as JSON' },
-      ]);
-    }
-    const bad = unstorableText(body);
-    if (bad) throw validationFailed([bad]);
+  const screenRequest = validate({ body: screenBody });
+  router.post('/screen', signedIn, screenRequest, (req, res) => {
+    const { body } = valid(req, screenRequest);
     if ('cases' in body) {
       const parsed = screenBatchBody.safeParse(body);
-      if (!parsed.success) {
-        throw validationFailed(fieldErrors(parsed.error));
-      }
+      if (!parsed.success) throw validationFailed(fieldErrors(parsed.error));
       res.json({ results: screenMany(parsed.data.cases) });
       return;
     }

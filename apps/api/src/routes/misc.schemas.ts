@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { paginationShape } from '../http/pagination';
-import { text, uuid } from './common.schemas';
+import { calcInputs, text, uuid } from './common.schemas';
 
 export const issuedQuery = z.object({ ...paginationShape, q: text(0, 200).optional() }).strict();
 
@@ -45,3 +45,6 @@ export const screenBatchBody = z
       .max(500, 'at most 500 cases in one request'),
   })
   .strict();
+
+/** A calc input (checked by the calc) or a batch; either way a JSON object. */
+export const screenBody = calcInputs;

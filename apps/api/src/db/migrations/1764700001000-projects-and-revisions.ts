@@ -29,6 +29,7 @@ export class ProjectsAndRevisions1764700001000 implements MigrationInterface {
     await queryRunner.query(`create unique index projects_number_key on projects (lower(number))`);
     await queryRunner.query(`create index projects_updated_idx on projects (updated_at desc, id)`);
     await queryRunner.query(`create index projects_name_idx on projects (lower(name), id)`);
+    await queryRunner.query(`create index projects_client_idx on projects (lower(client), id)`);
 
     await queryRunner.query(`
       create table project_members (
