@@ -1,3 +1,4 @@
+import { useQueryClient } from '@tanstack/react-query';
 import { useEffect } from 'react';
 import { NavLink, Outlet, useNavigate } from 'react-router-dom';
 import { onSessionLost } from '../api/client';
@@ -60,16 +61,19 @@ export function AppLayout() {
   const me = useMe();
   const navigate = useNavigate();
   const signOut = useSignOut();
+  const client = useQueryClient();
   const isChecker = me.memberships.some((m) => m.role === 'checker');
 
   useEffect(
     () =>
       onSessionLost(() => {
+        // Forget the signed-out user's data first, or sign-in would see a cached session and bounce back.
+        client.clear();
         navigate(signInPath(`${window.location.pathname}${window.location.search}`), {
           replace: true,
         });
       }),
-    [navigate],
+    [navigate, client],
   );
 
   return (

@@ -1,6 +1,7 @@
 import type { ComponentKind } from '@hoopline/calc';
 import { useState } from 'react';
 import { useNavigate, useParams } from 'react-router-dom';
+import { ApiError } from '../api/client';
 import { useCreateComponent } from '../api/components';
 import { useProject } from '../api/projects';
 import { ErrorView } from '../components/error-view';
@@ -78,12 +79,22 @@ export function NewComponentRoute() {
               setNameError('Give the component a name');
               throw new Error('Give the component a name before saving.');
             }
-            const saved = await create.mutateAsync({
-              name: name.trim(),
-              inputs,
-              ...(tag.trim() ? { tag: tag.trim() } : {}),
-              ...(meta.note ? { note: meta.note } : {}),
-            });
+            const saved = await create
+              .mutateAsync({
+                name: name.trim(),
+                inputs,
+                ...(tag.trim() ? { tag: tag.trim() } : {}),
+                ...(meta.note ? { note: meta.note } : {}),
+              })
+              .catch((error: unknown) => {
+                // The name is not part of the inputs: put its server message on its own field.
+                const field =
+                  error instanceof ApiError
+                    ? error.fields.find((f) => f.path === 'name')
+                    : undefined;
+                if (field) setNameError(field.message);
+                throw error;
+              });
             navigate(`/components/${saved.component.id}`, { replace: true });
           }}
         />
