@@ -87,6 +87,13 @@ test('a designer creates a project and a door plate, sees results change live, s
   await screenshot(page, 'component-editor-dark');
   await page.emulateMedia({ colorScheme: 'light' });
   await expect(page.locator('html')).toHaveAttribute('data-theme', 'light');
+  // US customary display, stored on the user (PATCH /api/me); the inputs stay as typed.
+  await page.getByRole('radio', { name: 'US' }).check({ force: true });
+  await expect(thickness).toHaveAccessibleDescription(/Reads as 0\.3937 in = 0\.01 m/);
+  await expect(page.getByRole('table', { name: /Checks for/ })).toContainText('ksi');
+  await expect(thickness).toHaveValue('10 mm');
+  await page.getByRole('radio', { name: 'SI' }).check({ force: true });
+  await expect(page.getByRole('table', { name: /Checks for/ })).toContainText('MPa');
 
   await page.getByRole('button', { name: 'Save as revision 1' }).click();
   await expect(page.getByText('Revision 1 as saved, computed by the server')).toBeVisible();

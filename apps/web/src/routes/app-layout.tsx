@@ -1,5 +1,5 @@
 import { useQueryClient } from '@tanstack/react-query';
-import { useEffect } from 'react';
+import { useEffect, useState } from 'react';
 import { NavLink, Outlet, useNavigate } from 'react-router-dom';
 import { onSessionLost } from '../api/client';
 import { useMe, useSignOut, useUpdateMe } from '../api/session';
@@ -30,6 +30,9 @@ function QueueCount() {
 
 function UnitSwitch({ system }: { system: UnitSystem }) {
   const update = useUpdateMe();
+  // Shown at once; the saved choice (PATCH /api/me) follows, or the old one comes back on failure.
+  const [pending, setPending] = useState<UnitSystem | null>(null);
+  const shown = pending ?? system;
   return (
     <fieldset className="flex items-center gap-1 text-xs text-muted">
       <legend className="sr-only">Display units</legend>
@@ -38,15 +41,18 @@ function UnitSwitch({ system }: { system: UnitSystem }) {
         <label
           key={s}
           className={`cursor-pointer rounded border px-1.5 py-0.5 ${
-            system === s ? 'border-accent bg-accent-soft text-ink' : 'border-line'
+            shown === s ? 'border-accent bg-accent-soft text-ink' : 'border-line'
           } has-[:focus-visible]:outline-2 has-[:focus-visible]:outline-focus`}
         >
           <input
             type="radio"
             name="unit-system"
             value={s}
-            checked={system === s}
-            onChange={() => update.mutate({ unitSystem: s })}
+            checked={shown === s}
+            onChange={() => {
+              setPending(s);
+              update.mutate({ unitSystem: s }, { onSettled: () => setPending(null) });
+            }}
             className="sr-only"
           />
           {s === 'si' ? 'SI' : 'US'}
