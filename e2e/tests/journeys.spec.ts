@@ -229,3 +229,25 @@ test('an admin sees people and the audit log', async ({ page }) => {
   await expect(page.getByRole('heading', { name: 'No such page' })).toBeVisible();
   await screenshot(page, 'not-found');
 });
+
+test('an invitation sent from People is accepted in the browser', async ({ page }) => {
+  await page.goto('/people');
+  await signIn(page, { email: 'theo.brandt@larchmont.example', password: 'theo-admin-demo-2026' });
+  const email = `invitee-${Date.now().toString(36)}@journeys.example`;
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Name').fill('Ines Invitee');
+  await page.getByRole('button', { name: 'Send invitation' }).click();
+  const link = await page.getByRole('textbox', { name: 'Link' }).inputValue();
+  expect(link).toMatch(/\/invitation\/[^/]+$/);
+  await signOut(page);
+  await page.goto(link);
+  await expect(page.getByRole('heading', { name: 'Accept your invitation' })).toBeVisible();
+  await expect(page.getByLabel('E-mail')).toHaveValue(email);
+  await page.getByLabel(/^Password/).fill('invitee-password-2026');
+  await page.getByLabel('Repeat the password').fill('invitee-password-2026');
+  await expectAccessible(page, 'accept invitation');
+  await screenshot(page, 'accept-invitation');
+  await page.getByRole('button', { name: 'Accept and sign in' }).click();
+  await expect(page.getByRole('heading', { name: 'Projects' })).toBeVisible();
+  await expect(page.getByRole('link', { name: 'Ines Invitee' })).toBeVisible();
+});
