@@ -33,6 +33,8 @@ const REFERENCE_SUFFIX = /^(.*?)\s*\(\s*(a|abs|absolute|g|gauge|d|diff|different
 const GLUED_SUFFIX = /^(psi|bar|kPa|MPa|mbar)(g|a)$/;
 
 function parseNumber(text: string): number {
+  // A plain decimal (the usual case) has no spaces or slash: Number() reads it as it is.
+  if (!text.includes('/')) return Number(text);
   const compact = text.replace(/\s+/g, ' ').trim();
   const mixed = /^([+-]?)(\d+) (\d+) ?\/ ?(\d+)$/.exec(compact);
   if (mixed) {
@@ -64,7 +66,10 @@ export function parseQuantity(text: string, options: ParseOptions = {}): Quantit
   if (typeof text !== 'string') throw new QuantityParseError('expected text such as "12 mm"');
   const trimmed = text.trim();
   if (trimmed === '') throw new QuantityParseError('a value is required');
-  if (/^\s*[+-]?\d{1,3}(,\d{3})+(\.\d+)?\b/.test(trimmed) || /^\s*[+-]?\d+,\d+/.test(trimmed)) {
+  if (
+    trimmed.includes(',') &&
+    (/^\s*[+-]?\d{1,3}(,\d{3})+(\.\d+)?\b/.test(trimmed) || /^\s*[+-]?\d+,\d+/.test(trimmed))
+  ) {
     throw new QuantityParseError(
       `"${trimmed}": use a point as the decimal separator and no thousands separators`,
     );
@@ -76,11 +81,11 @@ export function parseQuantity(text: string, options: ParseOptions = {}): Quantit
   const value = parseNumber(numberText);
   if (!Number.isFinite(value))
     throw new QuantityParseError(`"${numberText}" is not a finite number`);
-  if (/\/\s*0+$/.test(numberText.trim()))
+  if (numberText.includes('/') && /\/\s*0+$/.test(numberText.trim()))
     throw new QuantityParseError(`"${numberText}" divides by zero`);
 
   let reference: PressureReference | undefined;
-  const suffix = REFERENCE_SUFFIX.exec(unitText);
+  const suffix = unitText.endsWith(')') ? REFERENCE_SUFFIX.exec(unitText) : null;
   if (suffix) {
     unitText = suffix[1] ?? '';
     reference = referenceOf(suffix[2] ?? '');
