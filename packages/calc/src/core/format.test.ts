@@ -10,7 +10,10 @@ function reference(value: number): string {
   if (!Number.isFinite(value)) return String(value);
   const trim = (t: string) => (t.includes('.') ? t.replace(/\.?0+$/, '') : t);
   const magnitude = Math.abs(value);
-  if (magnitude >= 1e-3 && magnitude < 1e7) return trim(value.toPrecision(6));
+  if (magnitude >= 1e-3 && magnitude < 1e6) {
+    const fixed = value.toPrecision(6);
+    if (!fixed.includes('e')) return trim(fixed);
+  }
   const [mantissa, exponent] = value.toExponential(5).split('e') as [string, string];
   return `${trim(mantissa)}e${exponent.replace('+', '')}`;
 }
@@ -27,6 +30,11 @@ describe('formatNumber', () => {
     expect(formatNumber(-0)).toBe('0');
     expect(formatNumber(19895.11722656161)).toBe('19895.1');
     expect(formatNumber(0.0012345678)).toBe('0.00123457');
+    // 1e6 and above in exponent form, like 1e7 (no "7.20000e+6").
+    expect(formatNumber(7.2e6)).toBe('7.2e6');
+    expect(formatNumber(3201236.71875)).toBe('3.20124e6');
+    expect(formatNumber(999999.7)).toBe('1e6');
+    expect(formatNumber(999999.4)).toBe('999999');
   });
 
   it('rounds ties away from zero as toPrecision does', () => {

@@ -13,21 +13,24 @@
 // Exact powers of ten as doubles (10^0 … 10^22 are exactly representable).
 const POW10: readonly number[] = Array.from({ length: 23 }, (_, k) => Number(`1e${k}`));
 
-/** Up to 6 significant figures, trailing zeros dropped; exponent form outside 1e-3…1e7. */
+/**
+ * Up to 6 significant figures, trailing zeros dropped; exponent form ("2e11",
+ * "3.37668e-4") outside 1e-3…1e6, where plain digits would be too many to read.
+ */
 export function formatNumber(value: number): string {
   if (value === 0) return '0';
   if (!Number.isFinite(value)) return String(value);
   const magnitude = value < 0 ? -value : value;
-  if (magnitude >= 1e-3 && magnitude < 1e7) {
-    if (magnitude < 1e6) {
-      // The shortest round-trip text of a value with six significant digits or
-      // fewer is what toPrecision(6) gives once its padding zeros are dropped.
-      const shortest = String(value);
-      if (significantDigits(shortest) <= 6) return shortest;
-      const fast = fixedSix(value, magnitude);
-      if (fast !== null) return fast;
-    }
-    return trimZeros(value.toPrecision(6));
+  if (magnitude >= 1e-3 && magnitude < 1e6) {
+    // The shortest round-trip text of a value with six significant digits or
+    // fewer is what toPrecision(6) gives once its padding zeros are dropped.
+    const shortest = String(value);
+    if (significantDigits(shortest) <= 6) return shortest;
+    const fast = fixedSix(value, magnitude);
+    if (fast !== null) return fast;
+    const precise = value.toPrecision(6);
+    // Only a value that rounds up to 1e6 comes back in exponent form here.
+    if (!precise.includes('e')) return trimZeros(precise);
   }
   const fast = exponentSix(value, magnitude);
   if (fast !== null) return fast;
