@@ -101,3 +101,7 @@ export {
   screenMany,
 } from './screen';
 export type { ParsedComponent, ScreenOutcome } from './screen';
+
+// Thickness sweeps
+export { SWEEP_DEFAULT_POINTS, SWEEP_MAX_POINTS, sweepThickness } from './sweep';
+export type { SweepCase, SweepOptions, SweepPoint, SweepResult } from './sweep';
