@@ -78,11 +78,11 @@ export function parseQuantity(text: string, options: ParseOptions = {}): Quantit
   if (!match) throw new QuantityParseError(`"${trimmed}" does not start with a number`);
   const numberText = match[1] ?? '';
   let unitText = match[2] ?? '';
+  if (numberText.includes('/') && /\/\s*0+$/.test(numberText.trim()))
+    throw new QuantityParseError(`"${numberText}" divides by zero`);
   const value = parseNumber(numberText);
   if (!Number.isFinite(value))
     throw new QuantityParseError(`"${numberText}" is not a finite number`);
-  if (numberText.includes('/') && /\/\s*0+$/.test(numberText.trim()))
-    throw new QuantityParseError(`"${numberText}" divides by zero`);
 
   let reference: PressureReference | undefined;
   const suffix = unitText.endsWith(')') ? REFERENCE_SUFFIX.exec(unitText) : null;

@@ -160,6 +160,14 @@ export const UNITS: readonly UnitDefinition[] = [
     `${NIST} (inch of water 39.2 °F)`,
   ),
   unit(
+    'inH2O_68F',
+    'pressure',
+    INCH * STANDARD_GRAVITY * 998.2067,
+    'inch of water at 68 °F (20 °C)',
+    ['inH2O(68F)', 'inH2O(20C)'],
+    'not in NIST SP 811: computed as 998.2067 kg/m³ (water at 20 °C, from memory) × g0 × 1 in',
+  ),
+  unit(
     'inH2O_60F',
     'pressure',
     248.84,
