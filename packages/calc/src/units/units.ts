@@ -270,7 +270,7 @@ export const UNITS: readonly UnitDefinition[] = [
     TNT_ENERGY_PER_KG,
     'kilogram of TNT (conventional)',
     ['kg TNT'],
-    `${NIST} footnote: 1 ton TNT ≡ 4.184 × 10⁹ J`,
+    `${NIST} footnote: 1 ton TNT = 4.184e9 J (by convention)`,
   ),
 
   // temperature (affine)
