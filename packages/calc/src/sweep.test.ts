@@ -89,6 +89,15 @@ describe('sweepThickness', () => {
     expect(result.points.at(-1)!.value).toBeCloseTo(0.03 * 0.999, 12);
   });
 
+  it('moves a default end that breaks a rule of the method to the last valid value', () => {
+    // A quarter of 10 mm is below the 3 mm corrosion allowance ("must be less than the thickness").
+    const result = sweepThickness(plate('clamped', { corrosionAllowance: '3 mm' }));
+    expect(result.points[0]!.value).toBeGreaterThan(0.003);
+    expect(result.points[0]!.value).toBeLessThan(0.003 * (1 + 1e-6));
+    expect(result.points.every((p) => Number.isFinite(p.utilisation))).toBe(true);
+    expect(result.minimumPassing.value).toBeGreaterThan(0.003);
+  });
+
   it('says when the minimum is not in the range', () => {
     const thin = sweepThickness(plate('clamped'), { from: '0.5 mm', to: '2 mm' });
     expect(thin.minimumPassing.value).toBeNull();

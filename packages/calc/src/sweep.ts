@@ -116,7 +116,7 @@ export function sweepThickness(rawInput: unknown, options: SweepOptions = {}): S
   const bound = sweep.upperBound?.(component.input);
   const givenFrom = lengthOption(options.from, 'sweep.from');
   const givenTo = lengthOption(options.to, 'sweep.to');
-  const from = givenFrom ?? current * DEFAULT_LOW;
+  let from = givenFrom ?? current * DEFAULT_LOW;
   let to = givenTo ?? current * DEFAULT_HIGH;
   if (bound !== undefined) {
     if (givenTo !== undefined && givenTo >= bound) {
@@ -133,6 +133,13 @@ export function sweepThickness(rawInput: unknown, options: SweepOptions = {}): S
       `the range must rise: from ${formatNumber(from)} m to ${formatNumber(to)} m`,
     );
   }
+  // A default end that breaks one of the method's rules (a quarter of the
+  // thickness below its corrosion allowance, say) moves in to the last valid
+  // value; an end the caller gave is refused instead.
+  if (givenFrom === undefined) from = validEnd(rawInput, sweep, from, current);
+  if (givenTo === undefined) to = validEnd(rawInput, sweep, to, current);
+  if (!(from < to))
+    fail('sweep', `no valid range of ${sweep.id} around ${formatNumber(current)} m`);
   checkEnd(rawInput, sweep, from, 'sweep.from');
   checkEnd(rawInput, sweep, to, 'sweep.to');
 
@@ -179,6 +186,39 @@ function checkEnd(
       `${formatNumber(value)} m is not a valid ${sweep.id}${issue ? ` (${issue.path}: ${issue.message})` : ''}`,
     );
   }
+}
+
+function validAt(rawInput: unknown, sweep: SweepParameter<unknown>, value: number): boolean {
+  if (rawInput === null || typeof rawInput !== 'object' || !(sweep.id in rawInput)) return true;
+  try {
+    parseComponent({ ...(rawInput as Record<string, unknown>), [sweep.id]: value });
+    return true;
+  } catch (error) {
+    if (error instanceof CalcInputError) return false;
+    throw error;
+  }
+}
+
+/**
+ * `end` when the method accepts it, else the value nearest to it, between it
+ * and `inside` (the input's own, valid value), that it accepts: bisection on
+ * validity to 1e-9 relative, the rules being monotonic in the thickness.
+ */
+function validEnd(
+  rawInput: unknown,
+  sweep: SweepParameter<unknown>,
+  end: number,
+  inside: number,
+): number {
+  if (validAt(rawInput, sweep, end)) return end;
+  let bad = end;
+  let good = inside;
+  for (let i = 0; i < 100 && Math.abs(good - bad) > Math.abs(good) * 1e-9; i++) {
+    const mid = (bad + good) / 2;
+    if (validAt(rawInput, sweep, mid)) good = mid;
+    else bad = mid;
+  }
+  return good;
 }
 
 function point(component: ParsedComponent, value: number, result: MethodResult): SweepPoint {

@@ -10,10 +10,7 @@ function reference(value: number): string {
   if (!Number.isFinite(value)) return String(value);
   const trim = (t: string) => (t.includes('.') ? t.replace(/\.?0+$/, '') : t);
   const magnitude = Math.abs(value);
-  if (magnitude >= 1e-3 && magnitude < 1e6) {
-    const fixed = value.toPrecision(6);
-    if (!fixed.includes('e')) return trim(fixed);
-  }
+  if (magnitude >= 1e-3 && magnitude < 1e7) return String(Number(value.toPrecision(6)));
   const [mantissa, exponent] = value.toExponential(5).split('e') as [string, string];
   return `${trim(mantissa)}e${exponent.replace('+', '')}`;
 }
@@ -30,10 +27,11 @@ describe('formatNumber', () => {
     expect(formatNumber(-0)).toBe('0');
     expect(formatNumber(19895.11722656161)).toBe('19895.1');
     expect(formatNumber(0.0012345678)).toBe('0.00123457');
-    // 1e6 and above in exponent form, like 1e7 (no "7.20000e+6").
-    expect(formatNumber(7.2e6)).toBe('7.2e6');
-    expect(formatNumber(3201236.71875)).toBe('3.20124e6');
-    expect(formatNumber(999999.7)).toBe('1e6');
+    // Plain digits up to 1e7 (no "7.20000e+6"), exponent form from 1e7.
+    expect(formatNumber(7.2e6)).toBe('7200000');
+    expect(formatNumber(3201236.71875)).toBe('3201240');
+    expect(formatNumber(999999.7)).toBe('1000000');
+    expect(formatNumber(1e7)).toBe('1e7');
     expect(formatNumber(999999.4)).toBe('999999');
   });
 

@@ -15,22 +15,24 @@ const POW10: readonly number[] = Array.from({ length: 23 }, (_, k) => Number(`1e
 
 /**
  * Up to 6 significant figures, trailing zeros dropped; exponent form ("2e11",
- * "3.37668e-4") outside 1e-3…1e6, where plain digits would be too many to read.
+ * "3.37668e-4") outside 1e-3…1e7 ("7200000", "3201240" inside).
  */
 export function formatNumber(value: number): string {
   if (value === 0) return '0';
   if (!Number.isFinite(value)) return String(value);
   const magnitude = value < 0 ? -value : value;
-  if (magnitude >= 1e-3 && magnitude < 1e6) {
-    // The shortest round-trip text of a value with six significant digits or
-    // fewer is what toPrecision(6) gives once its padding zeros are dropped.
-    const shortest = String(value);
-    if (significantDigits(shortest) <= 6) return shortest;
-    const fast = fixedSix(value, magnitude);
-    if (fast !== null) return fast;
-    const precise = value.toPrecision(6);
-    // Only a value that rounds up to 1e6 comes back in exponent form here.
-    if (!precise.includes('e')) return trimZeros(precise);
+  if (magnitude >= 1e-3 && magnitude < 1e7) {
+    if (magnitude < 1e6) {
+      // The shortest round-trip text of a value with six significant digits or
+      // fewer is what toPrecision(6) gives once its padding zeros are dropped.
+      const shortest = String(value);
+      if (significantDigits(shortest) <= 6) return shortest;
+      const fast = fixedSix(value, magnitude);
+      if (fast !== null) return fast;
+    }
+    // Number(…) drops trailing zeros, and String() of a number below 1e21
+    // never uses an exponent (toPrecision would, from 1e6 up).
+    return String(Number(value.toPrecision(6)));
   }
   const fast = exponentSix(value, magnitude);
   if (fast !== null) return fast;
