@@ -137,11 +137,11 @@ export function sweepThickness(rawInput: unknown, options: SweepOptions = {}): S
   // thickness below its corrosion allowance, say) moves in to the last valid
   // value; an end the caller gave is refused instead.
   if (givenFrom === undefined) from = validEnd(rawInput, sweep, from, current);
+  else checkEnd(rawInput, sweep, from, 'sweep.from');
   if (givenTo === undefined) to = validEnd(rawInput, sweep, to, current);
+  else checkEnd(rawInput, sweep, to, 'sweep.to');
   if (!(from < to))
     fail('sweep', `no valid range of ${sweep.id} around ${formatNumber(current)} m`);
-  checkEnd(rawInput, sweep, from, 'sweep.from');
-  checkEnd(rawInput, sweep, to, 'sweep.to');
 
   const evaluate = (value: number) =>
     method.compute(sweep.set(component.input, value) as never, component.context);
@@ -150,7 +150,8 @@ export function sweepThickness(rawInput: unknown, options: SweepOptions = {}): S
   for (let i = 0; i < points; i++) {
     values.push(i === points - 1 ? to : from + ((to - from) * i) / (points - 1));
   }
-  const sweptPoints = values.map((value) => point(component, value, evaluate(value)));
+  let last: MethodResult | undefined;
+  const sweptPoints = values.map((value) => point(component, value, (last = evaluate(value))));
 
   return {
     parameter: sweep.id,
@@ -158,7 +159,7 @@ export function sweepThickness(rawInput: unknown, options: SweepOptions = {}): S
     unit: sweep.unit,
     current,
     points: sweptPoints,
-    minimumPassing: evaluate(to).cases.some((trail) => trail.checks.length > 0)
+    minimumPassing: last!.cases.some((trail) => trail.checks.length > 0)
       ? minimumPassing(sweptPoints, from, to, (v) => governingOf(evaluate(v)))
       : { value: null, note: 'not found: the method has no checks at these inputs' },
   };

@@ -4,7 +4,8 @@
  *
  * The result is the same as `value.toPrecision(6)` (or `toExponential(5)`)
  * with trailing zeros dropped, but reached without those calls where it can
- * be: they dominate the cost of writing a trail. Where a shortcut could round
+ * be (one scaling by an exact power of ten, then integer digits): they
+ * dominate the cost of writing a trail. Where a shortcut could round
  * differently (a value at a rounding tie, a decade boundary, or beyond the
  * exact powers of ten) it falls back to the built-in call; format.test.ts
  * checks the shortcut against the built-ins over random doubles.
@@ -22,14 +23,8 @@ export function formatNumber(value: number): string {
   if (!Number.isFinite(value)) return String(value);
   const magnitude = value < 0 ? -value : value;
   if (magnitude >= 1e-3 && magnitude < 1e7) {
-    if (magnitude < 1e6) {
-      // The shortest round-trip text of a value with six significant digits or
-      // fewer is what toPrecision(6) gives once its padding zeros are dropped.
-      const shortest = String(value);
-      if (significantDigits(shortest) <= 6) return shortest;
-      const fast = fixedSix(value, magnitude);
-      if (fast !== null) return fast;
-    }
+    const fast = fixedSix(value, magnitude);
+    if (fast !== null) return fast;
     // Number(…) drops trailing zeros, and String() of a number below 1e21
     // never uses an exponent (toPrecision would, from 1e6 up).
     return String(Number(value.toPrecision(6)));
@@ -40,24 +35,13 @@ export function formatNumber(value: number): string {
   return `${trimZeros(mantissa)}e${exponent.replace('+', '')}`;
 }
 
-/** Significant digits of a plain decimal text (no exponent), zeros counted as written. */
-function significantDigits(text: string): number {
-  let count = 0;
-  let leading = true;
-  for (let i = 0; i < text.length; i++) {
-    const c = text.charCodeAt(i);
-    if (c < 48 || c > 57) continue; // sign, point
-    if (leading && c === 48) continue;
-    leading = false;
-    count++;
-  }
-  return count;
-}
-
-/** Decimal exponent e with 10^e <= magnitude < 10^(e+1), for 1e-3 <= magnitude < 1e6. */
+/** Decimal exponent e with 10^e <= magnitude < 10^(e+1), for 1e-3 <= magnitude < 1e7. */
 function decade(magnitude: number): number {
   if (magnitude >= 1) {
-    if (magnitude >= 1e3) return magnitude >= 1e5 ? 5 : magnitude >= 1e4 ? 4 : 3;
+    if (magnitude >= 1e3) {
+      if (magnitude >= 1e5) return magnitude >= 1e6 ? 6 : 5;
+      return magnitude >= 1e4 ? 4 : 3;
+    }
     return magnitude >= 100 ? 2 : magnitude >= 10 ? 1 : 0;
   }
   return magnitude >= 0.1 ? -1 : magnitude >= 0.01 ? -2 : -3;
@@ -79,14 +63,16 @@ function sixDigits(scaled: number): number | null {
 
 function fixedSix(value: number, magnitude: number): string | null {
   const e = decade(magnitude);
-  const digits = sixDigits(magnitude * POW10[5 - e]!);
+  // One rounding: an exact power of ten times or into the magnitude.
+  const digits = sixDigits(e <= 5 ? magnitude * POW10[5 - e]! : magnitude / 10);
   if (digits === null) return null;
   const text = String(digits);
   let out: string;
-  if (e >= 0) {
-    const whole = text.slice(0, e + 1);
+  if (e >= 5) {
+    out = e === 5 ? text : `${text}0`;
+  } else if (e >= 0) {
     const fraction = stripTrailingZeros(text.slice(e + 1));
-    out = fraction === '' ? whole : `${whole}.${fraction}`;
+    out = fraction === '' ? text.slice(0, e + 1) : `${text.slice(0, e + 1)}.${fraction}`;
   } else {
     out = `0.${'0'.repeat(-e - 1)}${stripTrailingZeros(text)}`;
   }
