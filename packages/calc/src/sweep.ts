@@ -93,8 +93,10 @@ function governingOf(result: MethodResult): { utilisation: number; pass: boolean
  * Screens one component over a range of its thickness: the input is parsed
  * once, then only the SI thickness changes from point to point (the method's
  * `sweep.set`), so a point costs a computation and no parsing. The two ends
- * of the range are checked against the method's own input rules first (e.g.
- * "must be less than the radius"), so every point is a valid input.
+ * of the range are held to the method's own input rules first ("must be less
+ * than the radius", "the corrosion allowance must be less than the
+ * thickness"), so every point is a valid input: an end the caller gave is
+ * refused if it breaks one, a default end moves in to the last valid value.
  *
  * Throws CalcInputError naming the field: the component's own, or
  * `sweep.from`, `sweep.to`, `sweep.points`, or `kind` for a method without a
