@@ -23,6 +23,7 @@ export interface SweepCase {
   readonly outputs: Readonly<Record<string, number>>;
 }
 
+/** The component screened at one swept value. */
 export interface SweepPoint {
   /** The swept value, SI (m). */
   readonly value: number;
@@ -33,6 +34,7 @@ export interface SweepPoint {
   readonly cases: readonly SweepCase[];
 }
 
+/** A thickness sweep: every point, and the thinnest value that passes. */
 export interface SweepResult {
   readonly parameter: SweepParameter<unknown>['id'];
   readonly label: string;
@@ -49,7 +51,9 @@ export interface SweepResult {
   readonly minimumPassing: { readonly value: number | null; readonly note: string };
 }
 
+/** Points of a sweep when the caller gives none. */
 export const SWEEP_DEFAULT_POINTS = 50;
+/** Most points a sweep computes (a bound on the work one request can ask for). */
 export const SWEEP_MAX_POINTS = 500;
 /** Default range, as fractions of the current value. */
 const DEFAULT_LOW = 0.25;
