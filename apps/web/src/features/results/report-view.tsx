@@ -7,7 +7,7 @@ import { UtilisationBar } from '../../components/utilisation-bar';
 import { percent, show } from '../../lib/units';
 import { BucklingModeShape } from './buckling-mode';
 import { ComponentSketch, lobeCount } from './sketches';
-import { sweepThicknessLocal } from './sweep';
+import { sweepForPlot } from './sweep';
 import { SweepPlot } from './sweep-plot';
 import { TrailTable } from './trail-table';
 
@@ -217,8 +217,11 @@ export function ReportPictures({
 }) {
   const deferredInput = useDeferredValue(rawInput);
   const sweep = useMemo(
-    () => (deferredInput === undefined ? null : sweepThicknessLocal(deferredInput)),
-    [deferredInput],
+    () =>
+      deferredInput === undefined
+        ? null
+        : sweepForPlot(deferredInput, report.governing?.utilisation ?? null),
+    [deferredInput, report],
   );
   const lobes = lobeCount(report);
   return (

@@ -3,7 +3,7 @@ import { useId } from 'react';
 import type { UnitSystem } from '../../api/types';
 import { formatValue, percent, prettyUnit } from '../../lib/units';
 import { linearScale, niceCeil, niceTicks } from './chart-scale';
-import type { SweepResult } from './sweep';
+import type { PlotSweep } from './sweep';
 
 const W = 560;
 const H = 250;
@@ -14,15 +14,15 @@ const M = { left: 50, right: 14, top: 14, bottom: 40 };
  * current design and the smallest thickness that passes. Utilisations above
  * the top of the chart are drawn at the top (the caption has the numbers).
  */
-export function SweepPlot({ sweep, system }: { sweep: SweepResult; system: UnitSystem }) {
+export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSystem }) {
   const titleId = useId();
   const lengthUnit = system === 'si' ? 'mm' : 'in';
   const unit = findUnit(lengthUnit)!;
   const toLen = (m: number) => fromSi(m, unit);
-  const pts = sweep.points.filter((p) => p.utilisation !== null);
+  const pts = sweep.points;
   if (pts.length < 2) return null;
 
-  const maxU = Math.max(...pts.map((p) => p.utilisation!), sweep.current.utilisation ?? 0);
+  const maxU = Math.max(...pts.map((p) => p.utilisation), sweep.current.utilisation ?? 0);
   const yTop = Math.min(Math.max(niceCeil(maxU * 100), 120), 300);
   const x = linearScale([toLen(sweep.from), toLen(sweep.to)], [M.left, W - M.right]);
   const y = linearScale([0, yTop], [H - M.bottom, M.top]);
@@ -30,10 +30,9 @@ export function SweepPlot({ sweep, system }: { sweep: SweepResult; system: UnitS
   const path = pts
     .map(
       (p, i) =>
-        `${i === 0 ? 'M' : 'L'}${x(toLen(p.thickness)).toFixed(1)},${yOf(p.utilisation!).toFixed(1)}`,
+        `${i === 0 ? 'M' : 'L'}${x(toLen(p.thickness)).toFixed(1)},${yOf(p.utilisation).toFixed(1)}`,
     )
     .join(' ');
-  const invalid = pts.filter((p) => !p.valid);
   const xTicks = niceTicks(toLen(sweep.from), toLen(sweep.to), 6);
   const yTicks = niceTicks(0, yTop, 5);
   const current = sweep.current;
@@ -60,18 +59,7 @@ export function SweepPlot({ sweep, system }: { sweep: SweepResult; system: UnitS
         className="h-auto w-full max-w-[640px] text-ink"
       >
         <title id={titleId}>{`Utilisation against thickness. ${summary}`}</title>
-        {invalid.length > 0 ? (
-          <rect
-            x={x(toLen(invalid[0]!.thickness))}
-            y={M.top}
-            width={Math.max(
-              1,
-              x(toLen(invalid[invalid.length - 1]!.thickness)) - x(toLen(invalid[0]!.thickness)),
-            )}
-            height={H - M.top - M.bottom}
-            className="fill-warn-soft"
-          />
-        ) : null}
+
         {yTicks.map((t) => (
           <g key={`y${t}`}>
             <line
@@ -182,8 +170,7 @@ export function SweepPlot({ sweep, system }: { sweep: SweepResult; system: UnitS
         />
       </svg>
       <figcaption className="mt-1 text-xs text-muted">
-        {summary}
-        {invalid.length > 0 ? ' The shaded band is outside the method’s validity range.' : ''}
+        {summary} Validity warnings, if any, are those listed for the current design.
       </figcaption>
     </figure>
   );

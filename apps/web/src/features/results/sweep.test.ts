@@ -1,7 +1,7 @@
 import { screen as screenComponent } from '@hoopline/calc';
 import { describe, expect, it } from 'vitest';
 import { niceCeil, niceTicks } from './chart-scale';
-import { sweepGrid, sweepThicknessLocal } from './sweep';
+import { sweepForPlot } from './sweep';
 
 // A 500 mm clamped stainless-304 door at full vacuum (PRODUCT.md's drying cabinet), stress check only.
 const door = {
@@ -13,9 +13,9 @@ const door = {
   loadCases: [{ name: 'Operating: full vacuum', internal: 'full vacuum' }],
 };
 
-describe('sweepThicknessLocal', () => {
+describe('sweepForPlot (the engine’s sweepThickness, shaped for the chart)', () => {
   it('finds the thickness where the stress check just passes: t = a·sqrt(3q/(4S))', () => {
-    const sweep = sweepThicknessLocal(door);
+    const sweep = sweepForPlot(door, null);
     expect(sweep).not.toBeNull();
     // Computed from σ_max = 3·q·a²/(4·t²) for a clamped circular plate (Roark Table 11.2 case 10b,
     // METHODS.md §c) with q = 101 325 Pa, a = 0.25 m, S = 205 MPa / 1.5 (the engine's 304 entry).
@@ -28,43 +28,44 @@ describe('sweepThicknessLocal', () => {
   });
 
   it('marks the current design with the engine’s own governing utilisation', () => {
-    const sweep = sweepThicknessLocal(door)!;
     const report = screenComponent(door);
+    const sweep = sweepForPlot(door, report.governing!.utilisation)!;
     expect(sweep.current.thickness).toBeCloseTo(0.012, 12);
     expect(sweep.current.utilisation).toBe(report.governing!.utilisation);
+    // The engine's own point at the current thickness agrees with its report.
+    const at = sweepForPlot(door, null, { from: 0.006, to: 0.012, points: 2 })!;
+    expect(at.points[1]!.utilisation).toBeCloseTo(report.governing!.utilisation, 12);
   });
 
   it('falls as the plate thickens (stress ∝ 1/t²)', () => {
-    const sweep = sweepThicknessLocal(door)!;
-    const u = sweep.points.map((p) => p.utilisation!);
+    const sweep = sweepForPlot(door, null)!;
+    const u = sweep.points.map((p) => p.utilisation);
     for (let i = 1; i < u.length; i++) expect(u[i]!).toBeLessThan(u[i - 1]!);
     const first = sweep.points[0]!;
     const last = sweep.points[sweep.points.length - 1]!;
-    expect(first.utilisation! / last.utilisation!).toBeCloseTo(
+    expect(first.utilisation / last.utilisation).toBeCloseTo(
       (last.thickness / first.thickness) ** 2,
       9,
     );
   });
 
   it('says "above" when no thickness in range passes, "below" when all do', () => {
-    expect(sweepThicknessLocal(door, { from: 0.001, to: 0.003 })!.minimumPassing).toBe('above');
-    expect(sweepThicknessLocal(door, { from: 0.05, to: 0.1 })!.minimumPassing).toBe('below');
+    expect(sweepForPlot(door, null, { from: 0.001, to: 0.003 })!.minimumPassing).toBe('above');
+    expect(sweepForPlot(door, null, { from: 0.05, to: 0.1 })!.minimumPassing).toBe('below');
   });
 
   it('is null for an input the engine cannot read, or a kind without a thickness', () => {
-    expect(sweepThicknessLocal({ ...door, thickness: 'thick' })).toBeNull();
+    expect(sweepForPlot({ ...door, thickness: 'thick' }, null)).toBeNull();
     expect(
-      sweepThicknessLocal({
-        kind: 'flat-area-load',
-        outline: { shape: 'circle', sealDiameter: '500 mm' },
-        loadCases: [{ name: 'FV', internal: 'full vacuum' }],
-      }),
+      sweepForPlot(
+        {
+          kind: 'flat-area-load',
+          outline: { shape: 'circle', sealDiameter: '500 mm' },
+          loadCases: [{ name: 'FV', internal: 'full vacuum' }],
+        },
+        null,
+      ),
     ).toBeNull();
-  });
-
-  it('puts the current value into the grid', () => {
-    expect(sweepGrid(1, 3, 3, 1.5)).toEqual([1, 1.5, 2, 3]);
-    expect(sweepGrid(1, 3, 3, 2)).toEqual([1, 2, 3]);
   });
 });
 

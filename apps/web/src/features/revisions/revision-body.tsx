@@ -10,7 +10,7 @@ import {
   WarningsList,
 } from '../results/report-view';
 import { TrailTable } from '../results/trail-table';
-import type { ComponentKind } from '@hoopline/calc';
+import { findMaterial, type ComponentKind } from '@hoopline/calc';
 import type { QuantityKind } from '../../components/unit-input';
 import { quantityText } from '../editor/fields';
 import { KIND_FORMS } from '../editor/kind-forms';
@@ -93,7 +93,11 @@ export function InputsTable({ inputs }: { inputs: unknown }) {
     const q =
       kinds.get(path) ??
       (/^loadCases\.\d+\.(internal|external)$/.test(path) ? 'load-pressure' : undefined);
-    return q && typeof value === 'number' ? quantityText(value, q) : formatInputValue(value);
+    if (q && typeof value === 'number') return quantityText(value, q);
+    // A built-in material by its name as well as its id.
+    const material =
+      path === 'material' && typeof value === 'string' ? findMaterial(value) : undefined;
+    return material ? `${material.name} (${value as string})` : formatInputValue(value);
   })
     .map((row, index) => ({ row, index }))
     .sort((a, b) => rank(a.row.path) - rank(b.row.path) || a.index - b.index)
