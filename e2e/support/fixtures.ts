@@ -47,6 +47,8 @@ export async function signIn(
   await page.getByLabel('E-mail').fill(person.email);
   await page.getByLabel('Password').fill(person.password);
   await page.getByRole('button', { name: 'Sign in' }).click();
+  // Signed in once the app has left the sign-in page (for ?next= or Projects).
+  await expect(page).not.toHaveURL(/\/sign-in/);
 }
 
 export async function signOut(page: Page): Promise<void> {

@@ -233,6 +233,8 @@ test('an admin sees people and the audit log', async ({ page }) => {
 test('an invitation sent from People is accepted in the browser', async ({ page }) => {
   await page.goto('/people');
   await signIn(page, { email: 'theo.brandt@larchmont.example', password: 'theo-admin-demo-2026' });
+  // On the People page, not still on sign-in (both have an E-mail field).
+  await expect(page.getByRole('heading', { name: 'People' })).toBeVisible();
   const email = `invitee-${Date.now().toString(36)}@journeys.example`;
   await page.getByLabel('E-mail').fill(email);
   await page.getByLabel('Name').fill('Ines Invitee');
