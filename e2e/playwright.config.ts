@@ -15,7 +15,8 @@ export default defineConfig({
   retries: process.env['CI'] ? 1 : 0,
   workers: 1,
   fullyParallel: false,
-  timeout: 60_000,
+  // A journey runs axe and takes screenshots on several screens: give it room on a slow machine.
+  timeout: 120_000,
   expect: { timeout: 10_000 },
   reporter: [['list'], ['html', { open: 'never', outputFolder: './playwright-report' }]],
   use: {

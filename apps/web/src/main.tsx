@@ -1,13 +1,14 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { QueryClientProvider } from '@tanstack/react-query';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { RouterProvider } from 'react-router-dom';
+import { queryClient } from './api/query-client';
+import { applyTheme, watchSystemTheme } from './lib/theme';
 import { router } from './router';
 import './styles.css';
 
-const queryClient = new QueryClient({
-  defaultOptions: { queries: { retry: 1, staleTime: 10_000 } },
-});
+applyTheme();
+watchSystemTheme();
 
 const root = document.getElementById('root');
 if (!root) throw new Error('index.html has no #root element');

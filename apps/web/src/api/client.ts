@@ -1,4 +1,7 @@
-/** The one fetch wrapper: JSON in and out, the API's error format turned into ApiError. */
+/**
+ * The one fetch wrapper: JSON in and out, the API's error format turned into
+ * ApiError, the CSRF header on every write, and a silent session refresh.
+ */
 export interface ApiFieldError {
   readonly path: string;
   readonly message: string;
@@ -22,41 +25,134 @@ export class ConnectionError extends Error {
   override readonly name = 'ConnectionError';
 }
 
-export async function apiFetch<T>(path: string, init: RequestInit = {}): Promise<T> {
-  let response: Response;
+const WRITE_METHODS = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
+// Routes that sign in or refresh themselves: a 401 there is the answer, not an expired session.
+const NO_REFRESH = ['/auth/sign-in', '/auth/refresh', '/auth/accept-invitation', '/auth/password-'];
+
+/** The readable double-submit cookie the API sets beside the session (API.md, Auth). */
+export function csrfToken(): string | undefined {
+  const match = /(?:^|;\s*)hl_csrf=([^;]*)/.exec(document.cookie);
+  return match?.[1] ? decodeURIComponent(match[1]) : undefined;
+}
+
+type SessionListener = () => void;
+const sessionLostListeners = new Set<SessionListener>();
+
+/** Called when a refresh fails: the session is gone (signed out elsewhere, expired). */
+export function onSessionLost(listener: SessionListener): () => void {
+  sessionLostListeners.add(listener);
+  return () => sessionLostListeners.delete(listener);
+}
+
+let refreshing: Promise<boolean> | null = null;
+
+/**
+ * One refresh at a time: parallel requests that meet an expired access token
+ * all wait for the same POST /auth/refresh (the refresh token rotates, so a
+ * second concurrent refresh would present a token already used).
+ */
+export function refreshSession(): Promise<boolean> {
+  refreshing ??= (async () => {
+    try {
+      const response = await fetch('/api/auth/refresh', {
+        method: 'POST',
+        credentials: 'same-origin',
+        headers: withCsrf({ accept: 'application/json' }),
+      });
+      return response.ok;
+    } catch {
+      return false;
+    } finally {
+      refreshing = null;
+    }
+  })();
+  return refreshing;
+}
+
+function withCsrf(headers: Record<string, string>): Record<string, string> {
+  const token = csrfToken();
+  return token ? { ...headers, 'x-csrf-token': token } : headers;
+}
+
+async function send(path: string, init: RequestInit): Promise<Response> {
+  const method = (init.method ?? 'GET').toUpperCase();
+  const isJson = init.body !== undefined && typeof init.body === 'string';
+  let headers: Record<string, string> = {
+    accept: 'application/json',
+    ...(isJson ? { 'content-type': 'application/json' } : {}),
+    ...(init.headers as Record<string, string> | undefined),
+  };
+  if (WRITE_METHODS.has(method)) headers = withCsrf(headers);
   try {
-    response = await fetch(`/api${path}`, {
-      credentials: 'same-origin',
-      ...init,
-      headers: {
-        accept: 'application/json',
-        ...(init.body ? { 'content-type': 'application/json' } : {}),
-        ...init.headers,
-      },
-    });
+    return await fetch(`/api${path}`, { credentials: 'same-origin', ...init, method, headers });
   } catch {
     throw new ConnectionError('cannot reach the Hoopline server');
   }
+}
+
+async function readBody(response: Response): Promise<unknown> {
   const text = await response.text();
-  let body: unknown = undefined;
-  if (text) {
-    try {
-      body = JSON.parse(text);
-    } catch {
-      body = undefined;
+  if (!text) return undefined;
+  try {
+    return JSON.parse(text);
+  } catch {
+    return undefined;
+  }
+}
+
+function toApiError(status: number, body: unknown): ApiError {
+  const error = (
+    body as { error?: { code?: string; message?: string; fields?: ApiFieldError[] } } | undefined
+  )?.error;
+  return new ApiError(
+    status,
+    error?.code ?? 'http_error',
+    error?.message ?? `the server answered ${status}`,
+    error?.fields ?? [],
+    body,
+  );
+}
+
+/**
+ * Calls the API. A 401 on an ordinary route means the 15-minute access token
+ * has expired (code `token_expired`, or no access cookie at all once the
+ * browser has dropped it): refresh once and retry once.
+ */
+export async function apiFetch<T>(path: string, init: RequestInit = {}): Promise<T> {
+  let response = await send(path, init);
+  if (response.status === 401 && !NO_REFRESH.some((p) => path.startsWith(p))) {
+    const body = await readBody(response);
+    if (await refreshSession()) {
+      response = await send(path, init);
+    } else {
+      sessionLostListeners.forEach((l) => l());
+      throw toApiError(401, body);
     }
   }
-  if (!response.ok) {
-    const error = (
-      body as { error?: { code?: string; message?: string; fields?: ApiFieldError[] } }
-    )?.error;
-    throw new ApiError(
-      response.status,
-      error?.code ?? 'http_error',
-      error?.message ?? `the server answered ${response.status}`,
-      error?.fields ?? [],
-      body,
-    );
-  }
+  const body = await readBody(response);
+  if (!response.ok) throw toApiError(response.status, body);
   return body as T;
+}
+
+/** JSON body helper: `apiFetch(path, json('POST', {...}))`. */
+export function json(method: 'POST' | 'PUT' | 'PATCH' | 'DELETE', body?: unknown): RequestInit {
+  return body === undefined ? { method } : { method, body: JSON.stringify(body) };
+}
+
+/** Query string from the defined, non-empty values. */
+export function query(params: Record<string, string | number | undefined | null>): string {
+  const search = new URLSearchParams();
+  for (const [key, value] of Object.entries(params)) {
+    if (value !== undefined && value !== null && value !== '') search.set(key, String(value));
+  }
+  const text = search.toString();
+  return text ? `?${text}` : '';
+}
+
+/** The API's page envelope. */
+export interface Page<T> {
+  readonly items: readonly T[];
+  readonly page: number;
+  readonly pageSize: number;
+  readonly total: number;
 }

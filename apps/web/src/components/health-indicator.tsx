@@ -16,11 +16,7 @@ export function HealthIndicator() {
       : 'Server online, database unreachable';
   }
   return (
-    <p
-      role="status"
-      aria-live="polite"
-      className="flex items-center gap-2 text-sm text-slate-600 dark:text-slate-300"
-    >
+    <p role="status" aria-live="polite" className="flex items-center gap-2 text-xs text-muted">
       <span aria-hidden="true" className={`inline-block h-2.5 w-2.5 rounded-full ${tone}`} />
       <span>{text}</span>
     </p>

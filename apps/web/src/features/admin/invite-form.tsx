@@ -1,0 +1,65 @@
+import { Form, Formik } from 'formik';
+import { useState } from 'react';
+import * as yup from 'yup';
+import { useCreateInvitation } from '../../api/admin';
+import { Button } from '../../components/button';
+import { FormError, FormikTextField } from '../../components/field';
+import { serverFieldErrors } from '../../components/server-errors';
+import { Field } from 'formik';
+
+const schema = yup.object({
+  email: yup
+    .string()
+    .trim()
+    .email('Enter an e-mail address such as name@example.com')
+    .required('Enter their e-mail address'),
+  name: yup.string().trim().required('Enter their name').max(120, 'Use at most 120 characters'),
+  isAdmin: yup.boolean(),
+});
+
+/** Until mail exists the API returns the invitation token; the admin passes the link on. */
+export function InviteForm({ onInvited }: { onInvited: (link: string, email: string) => void }) {
+  const create = useCreateInvitation();
+  const [formError, setFormError] = useState<string | null>(null);
+  return (
+    <Formik
+      initialValues={{ email: '', name: '', isAdmin: false }}
+      validationSchema={schema}
+      onSubmit={async (values, helpers) => {
+        setFormError(null);
+        try {
+          const result = await create.mutateAsync({
+            email: values.email.trim(),
+            name: values.name.trim(),
+            isAdmin: values.isAdmin,
+          });
+          onInvited(`${window.location.origin}/invitation/${result.token}`, values.email.trim());
+          helpers.resetForm();
+        } catch (error) {
+          const mapped = serverFieldErrors(error, ['email', 'name', 'isAdmin']);
+          helpers.setErrors(mapped.fields);
+          setFormError(mapped.message);
+        }
+      }}
+    >
+      {({ isSubmitting }) => (
+        <Form noValidate className="flex flex-col gap-3">
+          <FormError message={formError} />
+          <div className="grid gap-3 sm:grid-cols-2">
+            <FormikTextField name="email" type="email" label="E-mail" required />
+            <FormikTextField name="name" label="Name" required />
+          </div>
+          <label className="flex items-center gap-2 text-sm">
+            <Field type="checkbox" name="isAdmin" className="h-4 w-4 accent-accent" />
+            Administrator (manages people, invitations and the audit log; never signs)
+          </label>
+          <div>
+            <Button type="submit" variant="primary" busy={isSubmitting}>
+              Send invitation
+            </Button>
+          </div>
+        </Form>
+      )}
+    </Formik>
+  );
+}

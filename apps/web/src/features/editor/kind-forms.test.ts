@@ -1,0 +1,47 @@
+import { screen } from '@hoopline/calc';
+import { describe, expect, it } from 'vitest';
+import { KIND_ORDER } from '../../lib/kinds';
+import { KIND_FORMS, engineHasKind } from './kind-forms';
+import { getIn } from './paths';
+
+describe('kind forms', () => {
+  for (const kind of KIND_ORDER) {
+    it(`${kind}: the starting inputs screen cleanly in both unit systems`, () => {
+      const form = KIND_FORMS[kind];
+      expect(form, `a form for ${kind}`).toBeDefined();
+      expect(engineHasKind(kind)).toBe(true);
+      for (const system of ['si', 'us'] as const) {
+        const report = screen(form!.template(system));
+        expect(report.kind).toBe(kind);
+        expect(report.cautions[0]!.code).toBe('screening-only');
+      }
+    });
+
+    it(`${kind}: every field the form shows is a field of the engine's schema`, () => {
+      const form = KIND_FORMS[kind]!;
+      const template = form.template('si');
+      // Sections shown for the starting inputs (the rectangle of a closure is shown for a rectangle only).
+      for (const section of form.sections.filter((s) => !s.when || s.when(template))) {
+        for (const field of section.fields) {
+          if (field.type === 'load-cases' || field.type === 'material') continue;
+          // Setting a field to an obviously wrong type must give an issue at exactly that path.
+          const [head, ...rest] = field.path.split('.');
+          const bad = structuredClone(template) as Record<string, unknown>;
+          if (rest.length === 0) bad[head!] = { wrong: true };
+          else
+            bad[head!] = {
+              ...((getIn(template, head!) as object | undefined) ?? {}),
+              [rest.join('.')]: { wrong: true },
+            };
+          let paths: string[] = [];
+          try {
+            screen(bad);
+          } catch (error) {
+            paths = (error as { issues: { path: string }[] }).issues.map((i) => i.path);
+          }
+          expect(paths, field.path).toContain(field.path);
+        }
+      }
+    });
+  }
+});

@@ -1,0 +1,124 @@
+import { screen as engine } from '@hoopline/calc';
+import { screen, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { ApiError } from '../../api/client';
+import type { Project } from '../../api/types';
+import { percent } from '../../lib/units';
+import { fakeApi, renderApp } from '../../test/render';
+import { KIND_FORMS } from './kind-forms';
+import { Workbench } from './workbench';
+
+const project = {
+  id: 'p1',
+  number: 'HL-1',
+  name: 'Drying cabinet',
+  site: {},
+  ambientPressure: 101325,
+  unitSystem: 'si',
+  myRole: 'designer',
+} as unknown as Project;
+
+const template = KIND_FORMS['circular-plate']!.template('si');
+
+function governingText(raw: Record<string, unknown>): string {
+  return percent(engine(raw).governing!.utilisation);
+}
+
+function renderWorkbench(onSave = vi.fn(async () => undefined)) {
+  fakeApi({ 'GET /projects/p1/materials': { body: { items: [] } } });
+  renderApp(
+    <Workbench
+      project={project}
+      kind="circular-plate"
+      initialInputs={template}
+      saveLabel="Save as revision 1"
+      canSaveMaterials
+      onSave={onSave}
+    />,
+  );
+  return onSave;
+}
+
+describe('Workbench', () => {
+  afterEach(() => vi.unstubAllGlobals());
+
+  it('shows the engine’s result at once and recomputes on every keystroke', async () => {
+    renderWorkbench();
+    const summary = () => screen.getByText(/^Governing:/).closest('p')!;
+    expect(await screen.findByText(/^Governing:/)).toBeInTheDocument();
+    expect(summary()).toHaveTextContent(governingText(template));
+
+    const thickness = screen.getByLabelText('Thickness');
+    await userEvent.clear(thickness);
+    await userEvent.type(thickness, '8 mm');
+    expect(summary()).toHaveTextContent(governingText({ ...template, thickness: '8 mm' }));
+    expect(governingText({ ...template, thickness: '8 mm' })).not.toBe(governingText(template));
+    expect(
+      screen.getByText('Live result, computed in this browser: not saved', { exact: false }),
+    ).toBeInTheDocument();
+  });
+
+  it('keeps the screening caution on screen', async () => {
+    renderWorkbench();
+    expect(
+      await screen.findByRole('complementary', { name: 'Screening caution' }),
+    ).toHaveTextContent('Screening only — not a code calculation');
+  });
+
+  it('puts the engine’s issue on the field and marks the result not current', async () => {
+    renderWorkbench();
+    const thickness = await screen.findByLabelText('Thickness');
+    await userEvent.clear(thickness);
+    await userEvent.type(thickness, '300 mm');
+    // The engine's rule for circular plates: thickness below the radius (250 mm here).
+    expect(thickness).toHaveAccessibleDescription('must be less than the radius');
+    expect(
+      screen.getByText(/Not current: these results are for the last inputs/),
+    ).toBeInTheDocument();
+    expect(screen.getByRole('button', { name: 'Save as revision 1' })).toBeDisabled();
+  });
+
+  it('names the bad load-case field', async () => {
+    renderWorkbench();
+    const inside = await screen.findByLabelText('Inside pressure');
+    await userEvent.clear(inside);
+    await userEvent.type(inside, '2 bar');
+    expect(inside).toHaveAccessibleDescription(
+      /ambiguous: write "2 bar\(a\)" for absolute or "2 bar\(g\)" for gauge/,
+    );
+  });
+
+  it('saves the inputs only, with the project’s site', async () => {
+    const onSave = renderWorkbench();
+    await userEvent.click(await screen.findByRole('button', { name: 'Save as revision 1' }));
+    await vi.waitFor(() => expect(onSave).toHaveBeenCalledTimes(1));
+    const [inputs] = onSave.mock.calls[0] as unknown as [Record<string, unknown>];
+    expect(inputs).toEqual(template);
+    expect(inputs).not.toHaveProperty('report');
+  });
+
+  it('maps the server’s 400 fields (inputs.<path>) onto the fields', async () => {
+    const onSave = vi.fn(async () => {
+      throw new ApiError(400, 'validation_failed', 'invalid', [
+        { path: 'inputs.loadCases.0.name', message: 'is reserved on this server' },
+      ]);
+    });
+    renderWorkbench(onSave);
+    await userEvent.click(await screen.findByRole('button', { name: 'Save as revision 1' }));
+    const name = await screen.findByLabelText('Name');
+    await vi.waitFor(() => expect(name).toHaveAccessibleDescription('is reserved on this server'));
+    expect(screen.getByRole('alert')).toHaveTextContent('The server could not accept some inputs');
+  });
+
+  it('lists every check with its utilisation bar', async () => {
+    renderWorkbench();
+    const table = await screen.findByRole('table', { name: /Checks for Operating: full vacuum/ });
+    const report = engine(template);
+    for (const check of report.cases[0]!.checks) {
+      expect(
+        within(table).getByRole('meter', { name: `${check.label}, Operating: full vacuum` }),
+      ).toBeInTheDocument();
+    }
+  });
+});

@@ -1,0 +1,254 @@
+import type { ComponentKind, InputIssue, Report } from '@hoopline/calc';
+import { useMemo, useState, type ReactNode } from 'react';
+import { ApiError } from '../../api/client';
+import type { Project, Revision } from '../../api/types';
+import { Button } from '../../components/button';
+import { FormError, TextField } from '../../components/field';
+import { Panel } from '../../components/page';
+import { ScreeningCaution } from '../../components/screening-caution';
+import { messageFor } from '../../components/server-errors';
+import { useUnitSystem } from '../../lib/unit-system';
+import {
+  CautionsList,
+  ChecksByCase,
+  ReportPictures,
+  ReportSummary,
+  WarningsList,
+} from '../results/report-view';
+import { TrailTable } from '../results/trail-table';
+import { useEditorState } from './editor-state';
+import { InputsForm } from './inputs-form';
+import { evaluate, serverInputIssues } from './live-report';
+import { sameInputs, type Raw } from './paths';
+
+/** The project's site as an engine `site` input (SI numbers), or nothing for sea level. */
+export function siteInput(project: Project): Raw | undefined {
+  const site = (project.site ?? {}) as { altitude?: unknown; ambientPressure?: unknown };
+  if (typeof site.altitude === 'number' && Number.isFinite(site.altitude))
+    return { altitude: site.altitude };
+  if (typeof site.ambientPressure === 'number' && Number.isFinite(site.ambientPressure))
+    return { ambientPressure: site.ambientPressure };
+  return undefined;
+}
+
+/** The inputs with the project's site put in, so the server recomputes with the same ambient. */
+export function withSite(raw: Raw, project: Project): Raw {
+  const site = siteInput(project);
+  const { site: _old, ...rest } = raw;
+  return site ? { ...rest, site } : rest;
+}
+
+export interface SaveMeta {
+  readonly note: string;
+}
+
+export interface WorkbenchProps {
+  readonly project: Project;
+  readonly kind: ComponentKind;
+  readonly initialInputs: Raw;
+  /** The revision these inputs were loaded from; its server report is shown until the inputs change. */
+  readonly savedRevision?: Revision | undefined;
+  /** Why saving is not possible now (e.g. the latest revision is under check); null when it is. */
+  readonly saveBlocked?: string | null;
+  readonly saveLabel: string;
+  /** Fields above the inputs (name and tag of a new component). */
+  readonly header?: ReactNode;
+  readonly onSave: (inputs: Raw, meta: SaveMeta) => Promise<void>;
+  readonly canSaveMaterials: boolean;
+  /** Actions beside the save button that depend on whether there are unsaved changes (submit for check). */
+  readonly footerActions?: (state: { readonly dirty: boolean }) => ReactNode;
+}
+
+/**
+ * The designer's workbench: the inputs on the left, the live result on the
+ * right, recomputed by @hoopline/calc on every keystroke; the full trail below.
+ * Saving sends the inputs only: the server recomputes and its report replaces
+ * the live one.
+ */
+export function Workbench({
+  project,
+  kind,
+  initialInputs,
+  savedRevision,
+  saveBlocked = null,
+  saveLabel,
+  header,
+  onSave,
+  canSaveMaterials,
+  footerActions,
+}: WorkbenchProps) {
+  const system = useUnitSystem();
+  const editor = useEditorState(initialInputs);
+  const { raw, edits } = editor.state;
+  const inputs = useMemo(() => withSite(raw, project), [raw, project]);
+  const evaluation = useMemo(() => evaluate(inputs), [inputs]);
+
+  // The last report the inputs produced, kept (marked as not current) while an input is being fixed.
+  const [lastGood, setLastGood] = useState<Report | null>(evaluation.ok ? evaluation.report : null);
+  if (evaluation.ok && evaluation.report !== lastGood) setLastGood(evaluation.report);
+
+  const [baseline, setBaseline] = useState<Raw>(() => withSite(initialInputs, project));
+  const [note, setNote] = useState('');
+  const [saving, setSaving] = useState(false);
+  const [saveError, setSaveError] = useState<{
+    message: string | null;
+    issues: InputIssue[];
+    atEdit: number;
+  } | null>(null);
+  const dirty = !sameInputs(inputs, baseline);
+
+  const serverIssues = saveError && saveError.atEdit === edits ? saveError.issues : [];
+  const issues = evaluation.ok ? serverIssues : [...evaluation.issues, ...serverIssues];
+
+  const showingServer = !dirty && savedRevision !== undefined;
+  const report = showingServer
+    ? savedRevision.report
+    : evaluation.ok
+      ? evaluation.report
+      : lastGood;
+  const stale = !showingServer && !evaluation.ok;
+
+  const save = async () => {
+    setSaving(true);
+    setSaveError(null);
+    try {
+      await onSave(inputs, { note: note.trim() });
+      setBaseline(inputs);
+      setNote('');
+    } catch (error) {
+      const fields = error instanceof ApiError ? serverInputIssues(error.fields) : [];
+      setSaveError({
+        message:
+          fields.length > 0
+            ? 'The server could not accept some inputs; see the fields marked.'
+            : messageFor(error),
+        issues: fields,
+        atEdit: edits,
+      });
+    } finally {
+      setSaving(false);
+    }
+  };
+
+  const sourceLabel = showingServer
+    ? `Revision ${savedRevision.number} as saved, computed by the server`
+    : 'Live result, computed in this browser: not saved';
+
+  return (
+    <div className="flex flex-col gap-4">
+      <div className="grid items-start gap-4 lg:grid-cols-[minmax(340px,420px)_minmax(0,1fr)]">
+        <Panel
+          title="Inputs"
+          id="inputs"
+          className="lg:sticky lg:top-2 lg:max-h-[calc(100vh-1rem)] lg:overflow-y-auto"
+        >
+          <form
+            noValidate
+            aria-label="Component inputs"
+            onSubmit={(event) => {
+              event.preventDefault();
+              if (!saveBlocked && !saving && evaluation.ok && (dirty || !savedRevision))
+                void save();
+            }}
+            className="flex flex-col gap-4"
+          >
+            {header}
+            <InputsForm
+              kind={kind}
+              editor={editor}
+              issues={issues}
+              system={system}
+              projectId={project.id}
+              canSaveMaterials={canSaveMaterials}
+            />
+            <div className="flex flex-col gap-2 border-t border-line pt-3">
+              <TextField
+                label="Revision note (optional)"
+                value={note}
+                onChange={(event) => setNote(event.target.value)}
+                placeholder="What changed and why"
+              />
+              <FormError message={saveError?.message} />
+              {saveBlocked ? (
+                <p className="text-xs text-muted" id="save-blocked">
+                  {saveBlocked}
+                </p>
+              ) : null}
+              <div className="flex items-center gap-3">
+                <Button
+                  type="submit"
+                  variant="primary"
+                  busy={saving}
+                  disabled={
+                    Boolean(saveBlocked) ||
+                    !evaluation.ok ||
+                    (!dirty && savedRevision !== undefined)
+                  }
+                  aria-describedby={saveBlocked ? 'save-blocked' : undefined}
+                >
+                  {saveLabel}
+                </Button>
+                <span role="status" className="text-xs text-muted">
+                  {!evaluation.ok
+                    ? 'Fix the marked inputs to save.'
+                    : dirty || !savedRevision
+                      ? 'Unsaved changes.'
+                      : `Saved as revision ${savedRevision.number}.`}
+                </span>
+              </div>
+              {footerActions ? footerActions({ dirty }) : null}
+            </div>
+          </form>
+        </Panel>
+        <section aria-labelledby="results-title" className="flex min-w-0 flex-col gap-4">
+          <h2 id="results-title" className="sr-only">
+            Results
+          </h2>
+          {report ? (
+            <>
+              {stale ? (
+                <p
+                  role="alert"
+                  className="rounded border border-fail bg-fail-soft px-3 py-2 text-sm text-fail"
+                >
+                  Not current: these results are for the last inputs the engine could read. Fix the
+                  marked inputs to update them.
+                </p>
+              ) : null}
+              <div className={stale ? 'opacity-55' : ''} aria-live="polite" aria-atomic="false">
+                <ReportSummary report={report} source={sourceLabel} />
+              </div>
+              <CautionsList report={report} />
+              <div className={`flex flex-col gap-4 ${stale ? 'opacity-55' : ''}`}>
+                <WarningsList report={report} />
+                <div className="grid gap-4 2xl:grid-cols-[minmax(0,1fr)_minmax(0,440px)]">
+                  <ChecksByCase report={report} system={system} />
+                  <ReportPictures
+                    report={report}
+                    system={system}
+                    rawInput={evaluation.ok ? inputs : undefined}
+                  />
+                </div>
+              </div>
+            </>
+          ) : (
+            <>
+              <ScreeningCaution />
+              <p className="rounded border border-line bg-panel px-3 py-6 text-center text-sm text-muted">
+                Results appear here as soon as the engine can read the inputs.
+              </p>
+            </>
+          )}
+        </section>
+      </div>
+      {report ? (
+        <section aria-labelledby="trail-title" className={stale ? 'opacity-55' : ''}>
+          <h2 id="trail-title" className="mb-1 text-sm font-semibold">
+            Calculation trail
+          </h2>
+          <TrailTable report={report} system={system} />
+        </section>
+      ) : null}
+    </div>
+  );
+}

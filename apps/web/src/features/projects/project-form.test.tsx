@@ -1,0 +1,107 @@
+import { screen } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { describe, expect, it, vi } from 'vitest';
+import { ApiError } from '../../api/client';
+import { renderApp } from '../../test/render';
+import { ProjectForm, projectFormValues, type projectInput } from './project-form';
+
+describe('ProjectForm', () => {
+  it('requires a number and a name', async () => {
+    const onSubmit = vi.fn();
+    renderApp(
+      <ProjectForm
+        initialValues={projectFormValues(undefined, 'si')}
+        submitLabel="Create"
+        onSubmit={onSubmit}
+      />,
+    );
+    await userEvent.click(await screen.findByRole('button', { name: 'Create' }));
+    expect(await screen.findByText('Enter a project number')).toBeInTheDocument();
+    expect(screen.getByText('Enter a project name')).toBeInTheDocument();
+    expect(onSubmit).not.toHaveBeenCalled();
+  });
+
+  it('reads the site altitude with the engine’s parser and sends it in metres', async () => {
+    const onSubmit = vi.fn(async () => undefined);
+    renderApp(
+      <ProjectForm
+        initialValues={projectFormValues(undefined, 'si')}
+        submitLabel="Create"
+        onSubmit={onSubmit}
+      />,
+    );
+    await userEvent.type(await screen.findByLabelText(/Project number/), 'HL-7');
+    await userEvent.type(screen.getByLabelText(/Project name/), 'Drying cabinet');
+    await userEvent.selectOptions(screen.getByLabelText('Ambient pressure from'), 'altitude');
+    await userEvent.type(screen.getByLabelText('Site altitude'), '5000 ft');
+    await userEvent.click(screen.getByRole('button', { name: 'Create' }));
+    await vi.waitFor(() => expect(onSubmit).toHaveBeenCalledTimes(1));
+    // 5000 ft = 1524 m exactly (1 ft = 0.3048 m, NIST SP 811 B.8).
+    const input = (onSubmit.mock.calls[0] as unknown as [ReturnType<typeof projectInput>])[0];
+    expect((input.site as { altitude: number }).altitude).toBeCloseTo(1524, 9);
+    expect(input).toMatchObject({ number: 'HL-7', name: 'Drying cabinet', unitSystem: 'si' });
+  });
+
+  it('refuses an altitude without a unit, or outside the standard atmosphere', async () => {
+    renderApp(
+      <ProjectForm
+        initialValues={{ ...projectFormValues(undefined, 'si'), siteBasis: 'altitude' }}
+        submitLabel="Create"
+        onSubmit={vi.fn()}
+      />,
+    );
+    const altitude = await screen.findByLabelText('Site altitude');
+    await userEvent.type(altitude, '1500');
+    await userEvent.tab();
+    expect(
+      await screen.findByText('Give a length with its unit, e.g. "1500 m" or "5000 ft"'),
+    ).toBeInTheDocument();
+    await userEvent.clear(altitude);
+    await userEvent.type(altitude, '100 km');
+    await userEvent.tab();
+    expect(await screen.findByText(/Must be between −5 000 m and 80 000 m/)).toBeInTheDocument();
+  });
+
+  it('maps the server’s 400 fields onto the form, site.altitude onto the altitude field', async () => {
+    const onSubmit = vi.fn(async () => {
+      throw new ApiError(400, 'validation_failed', 'invalid', [
+        { path: 'number', message: 'is already used by another project' },
+        { path: 'site.altitude', message: 'must be at most 80000 m' },
+      ]);
+    });
+    renderApp(
+      <ProjectForm
+        initialValues={{
+          ...projectFormValues(undefined, 'si'),
+          number: 'HL-1',
+          name: 'X',
+          siteBasis: 'altitude',
+          altitude: '100 m',
+        }}
+        submitLabel="Create"
+        onSubmit={onSubmit}
+      />,
+    );
+    await userEvent.click(await screen.findByRole('button', { name: 'Create' }));
+    expect(await screen.findByText('is already used by another project')).toBeInTheDocument();
+    expect(screen.getByText('must be at most 80000 m')).toBeInTheDocument();
+    expect(screen.getByLabelText('Site altitude')).toHaveAttribute('aria-invalid', 'true');
+  });
+
+  it('says a stale version in words a person can act on', async () => {
+    const onSubmit = vi.fn(async () => {
+      throw new ApiError(409, 'stale_version', 'stale');
+    });
+    renderApp(
+      <ProjectForm
+        initialValues={{ ...projectFormValues(undefined, 'si'), number: 'HL-1', name: 'X' }}
+        submitLabel="Save"
+        onSubmit={onSubmit}
+      />,
+    );
+    await userEvent.click(await screen.findByRole('button', { name: 'Save' }));
+    expect(await screen.findByRole('alert')).toHaveTextContent(
+      'Someone else changed this in the meantime',
+    );
+  });
+});

@@ -1,0 +1,242 @@
+import { parseQuantity } from '@hoopline/calc';
+import { Form, Formik, useFormikContext } from 'formik';
+import { useState } from 'react';
+import * as yup from 'yup';
+import type { ProjectInput } from '../../api/projects';
+import type { Project, Site, UnitSystem } from '../../api/types';
+import { Button } from '../../components/button';
+import {
+  FormError,
+  FormikSelectField,
+  FormikTextAreaField,
+  FormikTextField,
+} from '../../components/field';
+import { serverFieldErrors } from '../../components/server-errors';
+import { formatValue } from '../../lib/units';
+
+export type SiteBasis = 'standard' | 'altitude' | 'ambient';
+
+export interface ProjectFormValues {
+  number: string;
+  name: string;
+  client: string;
+  siteBasis: SiteBasis;
+  altitude: string;
+  ambientPressure: string;
+  unitSystem: UnitSystem;
+  notes: string;
+}
+
+function readsAs(dimension: 'length' | 'pressure') {
+  return (text: string | undefined) => {
+    if (!text) return true;
+    try {
+      parseQuantity(text, { dimension });
+      return true;
+    } catch {
+      return false;
+    }
+  };
+}
+
+// Same bounds as the engine's site schema (packages/calc core/load-cases.ts): ISA range, 1–120 kPa.
+export const projectSchema = yup.object({
+  number: yup
+    .string()
+    .trim()
+    .required('Enter a project number')
+    .max(40, 'Use at most 40 characters'),
+  name: yup.string().trim().required('Enter a project name').max(160, 'Use at most 160 characters'),
+  client: yup.string().trim().max(160, 'Use at most 160 characters'),
+  siteBasis: yup.string().oneOf(['standard', 'altitude', 'ambient']).required(),
+  altitude: yup.string().when('siteBasis', {
+    is: 'altitude',
+    then: (s) =>
+      s
+        .required('Enter the site altitude, e.g. "1500 m" or "5000 ft"')
+        .test(
+          'length',
+          'Give a length with its unit, e.g. "1500 m" or "5000 ft"',
+          readsAs('length'),
+        )
+        .test(
+          'range',
+          'Must be between −5 000 m and 80 000 m (standard atmosphere range)',
+          (text) => {
+            try {
+              const si = parseQuantity(text ?? '', { dimension: 'length' }).si;
+              return si >= -5000 && si <= 80000;
+            } catch {
+              return true;
+            }
+          },
+        ),
+  }),
+  ambientPressure: yup.string().when('siteBasis', {
+    is: 'ambient',
+    then: (s) =>
+      s
+        .required('Enter the ambient pressure, e.g. "95 kPa" or "13.8 psi"')
+        .test('pressure', 'Give a pressure with its unit, e.g. "95 kPa"', readsAs('pressure'))
+        .test('range', 'Must be between 1 kPa and 120 kPa', (text) => {
+          try {
+            const si = parseQuantity(text ?? '', { dimension: 'pressure' }).si;
+            return si >= 1000 && si <= 120_000;
+          } catch {
+            return true;
+          }
+        }),
+  }),
+  unitSystem: yup.string().oneOf(['si', 'us']).required(),
+  notes: yup.string().max(4000, 'Use at most 4000 characters'),
+});
+
+export function projectFormValues(
+  project: Project | undefined,
+  defaultSystem: UnitSystem,
+): ProjectFormValues {
+  const site = (project?.site ?? {}) as { altitude?: number; ambientPressure?: number };
+  return {
+    number: project?.number ?? '',
+    name: project?.name ?? '',
+    client: project?.client ?? '',
+    siteBasis:
+      site.altitude !== undefined
+        ? 'altitude'
+        : site.ambientPressure !== undefined
+          ? 'ambient'
+          : 'standard',
+    altitude: site.altitude !== undefined ? `${formatValue(site.altitude, 6)} m` : '',
+    ambientPressure:
+      site.ambientPressure !== undefined
+        ? `${formatValue(site.ambientPressure / 1000, 6)} kPa`
+        : '',
+    unitSystem: project?.unitSystem ?? defaultSystem,
+    notes: project?.notes ?? '',
+  };
+}
+
+/**
+ * Form values → the API body (site in SI numbers). Sea level is "no site":
+ * left out on create, `null` on edit (the API's way to clear it).
+ */
+export function projectInput(values: ProjectFormValues): ProjectInput {
+  let site: Site | null = null;
+  if (values.siteBasis === 'altitude')
+    site = { altitude: parseQuantity(values.altitude, { dimension: 'length' }).si };
+  if (values.siteBasis === 'ambient')
+    site = { ambientPressure: parseQuantity(values.ambientPressure, { dimension: 'pressure' }).si };
+  return {
+    number: values.number.trim(),
+    name: values.name.trim(),
+    client: values.client.trim(),
+    site,
+    unitSystem: values.unitSystem,
+    notes: values.notes,
+  };
+}
+
+const FIELDS = [
+  'number',
+  'name',
+  'client',
+  'altitude',
+  'ambientPressure',
+  'unitSystem',
+  'notes',
+  'siteBasis',
+];
+
+function SiteFields() {
+  const { values } = useFormikContext<ProjectFormValues>();
+  return (
+    <fieldset className="grid gap-3 rounded border border-line p-3 sm:grid-cols-2">
+      <legend className="px-1 text-xs font-medium">
+        Site (for the ambient pressure of every load case)
+      </legend>
+      <FormikSelectField name="siteBasis" label="Ambient pressure from">
+        <option value="standard">Standard atmosphere at sea level (101.325 kPa)</option>
+        <option value="altitude">Site altitude (standard atmosphere)</option>
+        <option value="ambient">A given ambient pressure</option>
+      </FormikSelectField>
+      {values.siteBasis === 'altitude' ? (
+        <FormikTextField
+          name="altitude"
+          label="Site altitude"
+          hint='e.g. "1500 m" or "5000 ft"'
+          className="num"
+        />
+      ) : null}
+      {values.siteBasis === 'ambient' ? (
+        <FormikTextField
+          name="ambientPressure"
+          label="Ambient pressure (absolute)"
+          hint='e.g. "95 kPa" or "13.8 psi"'
+        />
+      ) : null}
+    </fieldset>
+  );
+}
+
+export function ProjectForm({
+  initialValues,
+  submitLabel,
+  onSubmit,
+  onCancel,
+}: {
+  initialValues: ProjectFormValues;
+  submitLabel: string;
+  onSubmit: (input: ProjectInput) => Promise<unknown>;
+  onCancel?: () => void;
+}) {
+  const [formError, setFormError] = useState<string | null>(null);
+  return (
+    <Formik
+      initialValues={initialValues}
+      validationSchema={projectSchema}
+      onSubmit={async (values, helpers) => {
+        setFormError(null);
+        try {
+          await onSubmit(projectInput(values));
+        } catch (error) {
+          const mapped = serverFieldErrors(error, FIELDS, {
+            aliases: { 'site.altitude': 'altitude', 'site.ambientPressure': 'ambientPressure' },
+          });
+          helpers.setErrors(mapped.fields);
+          setFormError(mapped.message);
+        }
+      }}
+    >
+      {({ isSubmitting }) => (
+        <Form noValidate className="flex max-w-2xl flex-col gap-3">
+          <FormError message={formError} />
+          <div className="grid gap-3 sm:grid-cols-[10rem_1fr]">
+            <FormikTextField name="number" label="Project number" required />
+            <FormikTextField name="name" label="Project name" required />
+          </div>
+          <FormikTextField name="client" label="Client" />
+          <SiteFields />
+          <FormikSelectField
+            name="unitSystem"
+            label="Unit system"
+            hint="Starting units for new components in this project."
+          >
+            <option value="si">SI (mm, kPa, MPa, kN)</option>
+            <option value="us">US customary (in, psi, lbf)</option>
+          </FormikSelectField>
+          <FormikTextAreaField name="notes" label="Notes" />
+          <div className="flex gap-2">
+            <Button type="submit" variant="primary" busy={isSubmitting}>
+              {submitLabel}
+            </Button>
+            {onCancel ? (
+              <Button type="button" onClick={onCancel}>
+                Cancel
+              </Button>
+            ) : null}
+          </div>
+        </Form>
+      )}
+    </Formik>
+  );
+}

@@ -1,0 +1,164 @@
+import type { Revision } from '../../api/types';
+import { Panel } from '../../components/page';
+import { formatDateTime } from '../../lib/dates';
+import { useUnitSystem } from '../../lib/unit-system';
+import {
+  CautionsList,
+  ChecksByCase,
+  ReportPictures,
+  ReportSummary,
+  WarningsList,
+} from '../results/report-view';
+import { TrailTable } from '../results/trail-table';
+import { findMaterial, type ComponentKind } from '@hoopline/calc';
+import type { QuantityKind } from '../../components/unit-input';
+import { quantityText } from '../editor/fields';
+import { KIND_FORMS } from '../editor/kind-forms';
+import { flattenInputs, formatInputValue } from './flatten';
+
+export function RevisionMeta({ revision }: { revision: Revision }) {
+  return (
+    <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
+      <dt className="text-muted">Author</dt>
+      <dd>{revision.author.name}</dd>
+      <dt className="text-muted">Saved</dt>
+      <dd className="num">{formatDateTime(revision.createdAt)}</dd>
+      <dt className="text-muted">Submitted</dt>
+      <dd className="num">{formatDateTime(revision.submittedAt)}</dd>
+      <dt className="text-muted">Decided</dt>
+      <dd className="num">{formatDateTime(revision.decidedAt)}</dd>
+      <dt className="text-muted">Engine</dt>
+      <dd className="num">{revision.engineVersion}</dd>
+      <dt className="text-muted">Verify code</dt>
+      <dd className="num font-mono">{revision.verifyCode}</dd>
+      <dt className="text-muted">Content hash</dt>
+      <dd className="font-mono text-xs break-all">{revision.contentHash}</dd>
+      {revision.note ? (
+        <>
+          <dt className="text-muted">Note</dt>
+          <dd className="whitespace-pre-line">{revision.note}</dd>
+        </>
+      ) : null}
+    </dl>
+  );
+}
+
+export function SignOffHistory({ revision }: { revision: Revision }) {
+  if (revision.signOffs.length === 0)
+    return <p className="text-sm text-muted">No sign-offs yet.</p>;
+  return (
+    <ol className="flex flex-col gap-2">
+      {revision.signOffs.map((s) => (
+        <li key={s.id} className="rounded border border-line px-2.5 py-1.5 text-sm">
+          <p>
+            <strong>{s.decision === 'countersigned' ? 'Countersigned' : 'Returned'}</strong> by{' '}
+            {s.checker.name}, <span className="num">{formatDateTime(s.createdAt)}</span>
+          </p>
+          {s.comment ? <p className="mt-0.5 whitespace-pre-line">{s.comment}</p> : null}
+          <p className="mt-0.5 font-mono text-xs break-all text-muted">
+            signed hash {s.hashSigned}
+          </p>
+        </li>
+      ))}
+    </ol>
+  );
+}
+
+/**
+ * The inputs as the designer entered them, in the order of the kind's form;
+ * numbers stored in SI (the site, or inputs sent as numbers) with their unit.
+ */
+export function InputsTable({ inputs }: { inputs: unknown }) {
+  const kind = (inputs as { kind?: ComponentKind } | null)?.kind;
+  const form = kind ? KIND_FORMS[kind] : undefined;
+  const order: string[] = ['kind', 'name'];
+  const kinds = new Map<string, QuantityKind>([
+    ['site.altitude', 'length'],
+    ['site.ambientPressure', 'pressure'],
+  ]);
+  for (const section of form?.sections ?? []) {
+    for (const field of section.fields) {
+      if (field.type === 'load-cases') order.push('loadCases');
+      else {
+        order.push(field.path);
+        if (field.type === 'quantity') kinds.set(field.path, field.kind);
+      }
+    }
+  }
+  const rank = (path: string) => {
+    const i = order.findIndex((p) => path === p || path.startsWith(`${p}.`));
+    return i < 0 ? order.length : i;
+  };
+  const rows = flattenInputs(inputs, '', (path, value) => {
+    const q =
+      kinds.get(path) ??
+      (/^loadCases\.\d+\.(internal|external)$/.test(path) ? 'load-pressure' : undefined);
+    if (q && typeof value === 'number') return quantityText(value, q);
+    // A built-in material by its name as well as its id.
+    const material =
+      path === 'material' && typeof value === 'string' ? findMaterial(value) : undefined;
+    return material ? `${material.name} (${value as string})` : formatInputValue(value);
+  })
+    .map((row, index) => ({ row, index }))
+    .sort((a, b) => rank(a.row.path) - rank(b.row.path) || a.index - b.index)
+    .map(({ row }) => row);
+  return (
+    <table className="w-full text-sm">
+      <caption className="sr-only">Inputs as entered</caption>
+      <tbody>
+        {rows.map((row) => (
+          <tr key={row.path} className="border-b border-line last:border-b-0">
+            <th scope="row" className="py-1 pr-3 text-left font-normal text-muted">
+              {row.label}
+            </th>
+            <td className="num py-1 font-mono text-xs">{row.value}</td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}
+
+/** A saved revision, read-only: who and when, the inputs as entered, the server's report. */
+export function RevisionBody({ revision, aside }: { revision: Revision; aside?: React.ReactNode }) {
+  const system = useUnitSystem();
+  return (
+    <div className="flex flex-col gap-4">
+      <div className="grid items-start gap-4 lg:grid-cols-[minmax(300px,380px)_minmax(0,1fr)]">
+        <div className="flex flex-col gap-4">
+          {aside}
+          <Panel title="Revision" id="revision-meta">
+            <RevisionMeta revision={revision} />
+          </Panel>
+          <Panel title="Sign-offs" id="revision-signoffs">
+            <SignOffHistory revision={revision} />
+          </Panel>
+          <Panel title="Inputs as entered" id="revision-inputs">
+            <InputsTable inputs={revision.inputs} />
+          </Panel>
+        </div>
+        <section aria-labelledby="results-title" className="flex min-w-0 flex-col gap-4">
+          <h2 id="results-title" className="sr-only">
+            Results
+          </h2>
+          <ReportSummary
+            report={revision.report}
+            source={`Revision ${revision.number}, computed by the server`}
+          />
+          <CautionsList report={revision.report} />
+          <WarningsList report={revision.report} />
+          <div className="grid gap-4 2xl:grid-cols-[minmax(0,1fr)_minmax(0,440px)]">
+            <ChecksByCase report={revision.report} system={system} />
+            <ReportPictures report={revision.report} system={system} rawInput={revision.inputs} />
+          </div>
+        </section>
+      </div>
+      <section aria-labelledby="trail-title">
+        <h2 id="trail-title" className="mb-1 text-sm font-semibold">
+          Calculation trail
+        </h2>
+        <TrailTable report={revision.report} system={system} />
+      </section>
+    </div>
+  );
+}

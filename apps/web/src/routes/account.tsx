@@ -1,0 +1,97 @@
+import { Form, Formik } from 'formik';
+import { useState } from 'react';
+import * as yup from 'yup';
+import { useMe, useUpdateMe } from '../api/session';
+import { Button } from '../components/button';
+import { FormError, FormikSelectField, FormikTextField } from '../components/field';
+import { PageHeader, Panel } from '../components/page';
+import { serverFieldErrors } from '../components/server-errors';
+import { ThemeSwitch } from '../components/theme-switch';
+import { PasswordForm } from '../features/account/password-form';
+import { ROLE_LABEL } from '../components/badges';
+
+export function AccountRoute() {
+  const me = useMe();
+  const update = useUpdateMe();
+  const [formError, setFormError] = useState<string | null>(null);
+  const [saved, setSaved] = useState(false);
+  return (
+    <>
+      <PageHeader title="Account" subtitle={me.user.email} />
+      <div className="grid gap-4 lg:grid-cols-2">
+        <Panel title="Profile and display" id="profile">
+          <Formik
+            initialValues={{ name: me.user.name, unitSystem: me.user.unitSystem }}
+            validationSchema={yup.object({
+              name: yup
+                .string()
+                .trim()
+                .required('Enter your name')
+                .max(120, 'Use at most 120 characters'),
+              unitSystem: yup.string().oneOf(['si', 'us']).required(),
+            })}
+            onSubmit={async (values, helpers) => {
+              setFormError(null);
+              setSaved(false);
+              try {
+                await update.mutateAsync({
+                  name: values.name.trim(),
+                  unitSystem: values.unitSystem,
+                });
+                setSaved(true);
+              } catch (error) {
+                const mapped = serverFieldErrors(error, ['name', 'unitSystem']);
+                helpers.setErrors(mapped.fields);
+                setFormError(mapped.message);
+              }
+            }}
+          >
+            {({ isSubmitting }) => (
+              <Form noValidate className="flex max-w-sm flex-col gap-3">
+                <FormError message={formError} />
+                {saved ? (
+                  <p role="status" className="text-sm text-pass">
+                    Saved.
+                  </p>
+                ) : null}
+                <FormikTextField name="name" label="Name" autoComplete="name" />
+                <FormikSelectField
+                  name="unitSystem"
+                  label="Display units"
+                  hint="Results are shown in these units; inputs accept any."
+                >
+                  <option value="si">SI (mm, kPa, MPa, kN)</option>
+                  <option value="us">US customary (in, psi, lbf)</option>
+                </FormikSelectField>
+                <div>
+                  <Button type="submit" variant="primary" busy={isSubmitting}>
+                    Save
+                  </Button>
+                </div>
+              </Form>
+            )}
+          </Formik>
+          <div className="mt-4">
+            <ThemeSwitch />
+          </div>
+        </Panel>
+        <Panel title="Password" id="password">
+          <PasswordForm />
+        </Panel>
+        <Panel title="Memberships" id="memberships">
+          {me.memberships.length === 0 ? (
+            <p className="text-sm text-muted">You are not a member of any project yet.</p>
+          ) : (
+            <ul className="text-sm">
+              {me.memberships.map((m) => (
+                <li key={m.projectId}>
+                  <span className="num">{m.projectNumber}</span>: {ROLE_LABEL[m.role]}
+                </li>
+              ))}
+            </ul>
+          )}
+        </Panel>
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,149 @@
+import { useQueryClient } from '@tanstack/react-query';
+import { useEffect, useState } from 'react';
+import { NavLink, Outlet, useNavigate } from 'react-router-dom';
+import { onSessionLost } from '../api/client';
+import { useMe, useSignOut, useUpdateMe } from '../api/session';
+import type { UnitSystem } from '../api/types';
+import { useCheckQueue } from '../api/work';
+import { ProgressBar } from '../components/progress-bar';
+import { ThemeSwitch } from '../components/theme-switch';
+import { UnitSystemProvider } from '../lib/unit-system';
+import { signInPath } from './guards';
+
+function navClass({ isActive }: { isActive: boolean }) {
+  return `rounded px-2.5 py-1.5 text-sm ${
+    isActive ? 'bg-accent-soft font-medium text-ink' : 'text-muted hover:bg-sunken hover:text-ink'
+  }`;
+}
+
+function QueueCount() {
+  const queue = useCheckQueue();
+  const total = queue.data?.total ?? 0;
+  if (total === 0) return null;
+  return (
+    <span className="num ml-1 rounded-full bg-accent px-1.5 text-xs text-accent-ink">
+      {total}
+      <span className="sr-only"> awaiting</span>
+    </span>
+  );
+}
+
+function UnitSwitch({ system }: { system: UnitSystem }) {
+  const update = useUpdateMe();
+  // Shown at once; the saved choice (PATCH /api/me) follows, or the old one comes back on failure.
+  const [pending, setPending] = useState<UnitSystem | null>(null);
+  const shown = pending ?? system;
+  return (
+    <fieldset className="flex items-center gap-1 text-xs text-muted">
+      <legend className="sr-only">Display units</legend>
+      <span aria-hidden="true">Units</span>
+      {(['si', 'us'] as const).map((s) => (
+        <label
+          key={s}
+          className={`cursor-pointer rounded border px-1.5 py-0.5 ${
+            shown === s ? 'border-accent bg-accent-soft text-ink' : 'border-line'
+          } has-[:focus-visible]:outline-2 has-[:focus-visible]:outline-focus`}
+        >
+          <input
+            type="radio"
+            name="unit-system"
+            value={s}
+            checked={shown === s}
+            onChange={() => {
+              setPending(s);
+              update.mutate({ unitSystem: s }, { onSettled: () => setPending(null) });
+            }}
+            className="sr-only"
+          />
+          {s === 'si' ? 'SI' : 'US'}
+        </label>
+      ))}
+    </fieldset>
+  );
+}
+
+/** The signed-in shell: skip link, navigation by role, display settings, the page. */
+export function AppLayout() {
+  const me = useMe();
+  const navigate = useNavigate();
+  const signOut = useSignOut();
+  const client = useQueryClient();
+  const isChecker = me.memberships.some((m) => m.role === 'checker');
+
+  useEffect(
+    () =>
+      onSessionLost(() => {
+        // Forget the signed-out user's data first, or sign-in would see a cached session and bounce back.
+        client.clear();
+        navigate(signInPath(`${window.location.pathname}${window.location.search}`), {
+          replace: true,
+        });
+      }),
+    [navigate, client],
+  );
+
+  return (
+    <UnitSystemProvider system={me.user.unitSystem}>
+      <a
+        href="#main"
+        className="sr-only z-50 rounded bg-accent px-3 py-2 text-accent-ink focus:not-sr-only focus:fixed focus:top-2 focus:left-2"
+      >
+        Skip to content
+      </a>
+      <ProgressBar />
+      <header className="border-b border-line bg-panel">
+        <div className="mx-auto flex max-w-[1440px] flex-wrap items-center gap-x-4 gap-y-2 px-4 py-2">
+          <NavLink to="/projects" className="flex items-center gap-2 font-semibold tracking-tight">
+            <img src="/favicon.svg" alt="" className="h-5 w-5" />
+            Hoopline
+          </NavLink>
+          <nav aria-label="Main" className="flex flex-wrap items-center gap-1">
+            <NavLink to="/projects" className={navClass}>
+              Projects
+            </NavLink>
+            {isChecker ? (
+              <NavLink to="/check-queue" className={navClass}>
+                Check queue
+                <QueueCount />
+              </NavLink>
+            ) : null}
+            <NavLink to="/issued" className={navClass}>
+              Issued
+            </NavLink>
+            {me.user.isAdmin ? (
+              <>
+                <NavLink to="/people" className={navClass}>
+                  People
+                </NavLink>
+                <NavLink to="/audit-log" className={navClass}>
+                  Audit log
+                </NavLink>
+              </>
+            ) : null}
+          </nav>
+          <div className="ml-auto flex flex-wrap items-center gap-3">
+            <UnitSwitch system={me.user.unitSystem} />
+            <ThemeSwitch />
+            <NavLink to="/account" className={navClass}>
+              {me.user.name}
+            </NavLink>
+            <button
+              type="button"
+              className="rounded px-2 py-1 text-sm text-muted hover:bg-sunken hover:text-ink"
+              onClick={() =>
+                signOut.mutate(undefined, {
+                  onSettled: () => navigate('/sign-in', { replace: true }),
+                })
+              }
+            >
+              Sign out
+            </button>
+          </div>
+        </div>
+      </header>
+      <main id="main" tabIndex={-1} className="mx-auto max-w-[1440px] px-4 py-5 outline-none">
+        <Outlet />
+      </main>
+    </UnitSystemProvider>
+  );
+}

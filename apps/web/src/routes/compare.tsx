@@ -1,0 +1,48 @@
+import { useParams, useSearchParams } from 'react-router-dom';
+import { useComponent } from '../api/components';
+import { useProject } from '../api/projects';
+import { useRevision, useRevisionDiff } from '../api/revisions';
+import { ErrorView, NotFoundView } from '../components/error-view';
+import { PageHeader } from '../components/page';
+import { PageSkeleton } from '../components/skeleton';
+import { DiffView } from '../features/revisions/diff-view';
+import { ScreeningCaution } from '../components/screening-caution';
+
+export function CompareRoute() {
+  const { componentId = '' } = useParams();
+  const [params] = useSearchParams();
+  const fromId = params.get('from') ?? '';
+  const toId = params.get('to') ?? '';
+  const component = useComponent(componentId);
+  const project = useProject(component.data?.projectId ?? '');
+  const from = useRevision(fromId || undefined);
+  const to = useRevision(toId || undefined);
+  // The server diffs "against" the older revision: GET /revisions/:to/diff?against=:from.
+  const diff = useRevisionDiff(toId, fromId);
+
+  if (!fromId || !toId) return <NotFoundView what="comparison" />;
+  const failed = [component, project, from, to, diff].find((q) => q.isError);
+  if (failed) return <ErrorView error={failed.error} />;
+  const c = component.data;
+  const p = project.data;
+  if (!c || !p || !from.data || !to.data || !diff.data)
+    return <PageSkeleton label="Comparing revisions" />;
+  return (
+    <>
+      <PageHeader
+        crumbs={[
+          { label: 'Projects', to: '/projects' },
+          { label: `${p.number} ${p.name}`, to: `/projects/${p.id}` },
+          { label: c.name, to: `/components/${c.id}` },
+          { label: 'Revisions', to: `/components/${c.id}/revisions` },
+          { label: 'Compare' },
+        ]}
+        title={`${c.name}: revision ${from.data.number} against ${to.data.number}`}
+      />
+      <div className="flex flex-col gap-4">
+        <ScreeningCaution />
+        <DiffView from={from.data} to={to.data} diff={diff.data} />
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,128 @@
+import { useState } from 'react';
+import { Link } from 'react-router-dom';
+import type { IssuedItem } from '../api/types';
+import { useIssued } from '../api/work';
+import { VerdictBadge } from '../components/badges';
+import { DataTable, Pagination, type Column } from '../components/data-table';
+import { ErrorView } from '../components/error-view';
+import { INPUT_CLASS } from '../components/field';
+import { PageHeader } from '../components/page';
+import { TableSkeleton } from '../components/skeleton';
+import { formatDateTime, verifyCodeOf } from '../lib/dates';
+import { kindLabel } from '../lib/kinds';
+
+/**
+ * Countersigned revisions across my projects: what the shop may quote or
+ * build from. The stamped-for-review sheet arrives with the PDF release; until
+ * then there is no download button, rather than one that does nothing.
+ */
+export function IssuedRoute() {
+  const [page, setPage] = useState(1);
+  const [search, setSearch] = useState('');
+  const [q, setQ] = useState('');
+  const issued = useIssued({ q, page });
+  const columns: Column<IssuedItem>[] = [
+    {
+      key: 'project',
+      header: 'Project',
+      render: (i) => (
+        <Link to={`/projects/${i.project.id}`} className="hover:underline">
+          {i.project.number} {i.project.name}
+        </Link>
+      ),
+    },
+    {
+      key: 'component',
+      header: 'Component',
+      render: (i) => (
+        <Link
+          to={`/revisions/${i.revision.id}`}
+          className="font-medium text-accent hover:underline"
+        >
+          {i.component.name}
+        </Link>
+      ),
+    },
+    { key: 'kind', header: 'Kind', render: (i) => kindLabel(i.component.kind) },
+    { key: 'revision', header: 'Revision', numeric: true, render: (i) => i.revision.number },
+    {
+      key: 'verdict',
+      header: 'Result',
+      render: (i) => <VerdictBadge verdict={i.revision.verdict} />,
+    },
+    {
+      key: 'countersigned',
+      header: 'Countersigned',
+      numeric: true,
+      render: (i) => formatDateTime(i.revision.decidedAt),
+    },
+    {
+      key: 'code',
+      header: 'Verify code',
+      render: (i) => (
+        <span className="font-mono text-xs">{verifyCodeOf(i.revision.contentHash)}</span>
+      ),
+    },
+  ];
+  return (
+    <>
+      <PageHeader
+        title="Issued"
+        subtitle="The latest countersigned revision of every component in your projects."
+      />
+      <form
+        role="search"
+        className="mb-3 flex max-w-md items-center gap-2"
+        onSubmit={(event) => {
+          event.preventDefault();
+          setQ(search.trim());
+          setPage(1);
+        }}
+      >
+        <label htmlFor="issued-search" className="sr-only">
+          Search issued components
+        </label>
+        <input
+          id="issued-search"
+          type="search"
+          className={INPUT_CLASS}
+          placeholder="Search by project or component"
+          value={search}
+          onChange={(event) => setSearch(event.target.value)}
+        />
+        <button
+          type="submit"
+          className="rounded border border-line-strong bg-panel px-3 py-1.5 text-sm hover:bg-sunken"
+        >
+          Search
+        </button>
+      </form>
+      {issued.isPending ? (
+        <TableSkeleton label="Loading issued components" />
+      ) : issued.isError ? (
+        <ErrorView error={issued.error} />
+      ) : (
+        <>
+          <DataTable
+            caption="Issued components"
+            columns={columns}
+            rows={issued.data.items}
+            rowKey={(i) => i.revision.id}
+            empty="Nothing has been issued in your projects yet."
+          />
+          <Pagination
+            page={issued.data.page}
+            pageSize={issued.data.pageSize}
+            total={issued.data.total}
+            onPage={setPage}
+            label="Issued pages"
+          />
+          <p className="mt-3 text-xs text-muted">
+            The stamped-for-review sheet of each revision will be downloadable here once sheets are
+            issued.
+          </p>
+        </>
+      )}
+    </>
+  );
+}

@@ -1,0 +1,5 @@
+import { NotFoundView } from '../components/error-view';
+
+export function NotFoundRoute() {
+  return <NotFoundView />;
+}

@@ -1,0 +1,256 @@
+import { useState } from 'react';
+import {
+  useInvitations,
+  useIssuePasswordReset,
+  useRevokeInvitation,
+  useUpdateUser,
+  useUsers,
+} from '../api/admin';
+import { useMe } from '../api/session';
+import type { Invitation, User } from '../api/types';
+import { Button } from '../components/button';
+import { DataTable, Pagination, type Column } from '../components/data-table';
+import { ErrorView, NotFoundView } from '../components/error-view';
+import { FormError, INPUT_CLASS } from '../components/field';
+import { PageHeader, Panel } from '../components/page';
+import { messageFor } from '../components/server-errors';
+import { TableSkeleton } from '../components/skeleton';
+import { formatDate, formatDateTime } from '../lib/dates';
+import { InviteForm } from '../features/admin/invite-form';
+
+function LinkNotice({
+  title,
+  link,
+  onDismiss,
+}: {
+  title: string;
+  link: string;
+  onDismiss: () => void;
+}) {
+  return (
+    <div role="status" className="rounded border border-accent bg-accent-soft px-3 py-2 text-sm">
+      <p className="font-medium">{title}</p>
+      <p className="mt-1 text-xs">
+        Pass this link on (mail delivery arrives with a later release):
+      </p>
+      <div className="mt-1 flex items-center gap-2">
+        <input
+          readOnly
+          aria-label="Link"
+          value={link}
+          className={`${INPUT_CLASS} font-mono text-xs`}
+          onFocus={(e) => e.target.select()}
+        />
+        <Button size="sm" onClick={() => void navigator.clipboard?.writeText(link)}>
+          Copy
+        </Button>
+        <Button size="sm" variant="ghost" onClick={onDismiss}>
+          Dismiss
+        </Button>
+      </div>
+    </div>
+  );
+}
+
+export function PeopleRoute() {
+  const me = useMe();
+  const [page, setPage] = useState(1);
+  const [q, setQ] = useState('');
+  const [search, setSearch] = useState('');
+  const users = useUsers({ q, page, pageSize: 25 });
+  const invitations = useInvitations();
+  const updateUser = useUpdateUser();
+  const revoke = useRevokeInvitation();
+  const reset = useIssuePasswordReset();
+  const [notice, setNotice] = useState<{ title: string; link: string } | null>(null);
+  const [error, setError] = useState<string | null>(null);
+
+  if (!me.user.isAdmin) return <NotFoundView />;
+
+  const userColumns: Column<User>[] = [
+    { key: 'name', header: 'Name', render: (u) => u.name },
+    { key: 'email', header: 'E-mail', render: (u) => u.email },
+    {
+      key: 'admin',
+      header: 'Administrator',
+      render: (u) => (
+        <input
+          type="checkbox"
+          className="h-4 w-4 accent-accent"
+          aria-label={`${u.name} is an administrator`}
+          checked={u.isAdmin}
+          disabled={u.id === me.user.id}
+          onChange={(event) =>
+            updateUser.mutate(
+              { id: u.id, isAdmin: event.target.checked },
+              { onError: (e) => setError(messageFor(e)) },
+            )
+          }
+        />
+      ),
+    },
+    {
+      key: 'active',
+      header: 'Active',
+      render: (u) => (
+        <input
+          type="checkbox"
+          className="h-4 w-4 accent-accent"
+          aria-label={`${u.name} is active`}
+          checked={u.active}
+          disabled={u.id === me.user.id}
+          onChange={(event) =>
+            updateUser.mutate(
+              { id: u.id, active: event.target.checked },
+              { onError: (e) => setError(messageFor(e)) },
+            )
+          }
+        />
+      ),
+    },
+    { key: 'units', header: 'Units', render: (u) => (u.unitSystem === 'si' ? 'SI' : 'US') },
+    { key: 'since', header: 'Since', numeric: true, render: (u) => formatDate(u.createdAt) },
+    {
+      key: 'actions',
+      header: <span className="sr-only">Actions</span>,
+      render: (u) => (
+        <Button
+          size="sm"
+          onClick={() =>
+            reset.mutate(u.id, {
+              onSuccess: (r) =>
+                setNotice({
+                  title: `Password reset link for ${u.name}`,
+                  link: `${window.location.origin}/reset-password/${r.token}`,
+                }),
+              onError: (e) => setError(messageFor(e)),
+            })
+          }
+        >
+          Reset password<span className="sr-only"> of {u.name}</span>
+        </Button>
+      ),
+    },
+  ];
+
+  const invitationColumns: Column<Invitation>[] = [
+    { key: 'email', header: 'E-mail', render: (i) => i.email },
+    { key: 'name', header: 'Name', render: (i) => i.name },
+    { key: 'admin', header: 'Administrator', render: (i) => (i.isAdmin ? 'yes' : 'no') },
+    { key: 'created', header: 'Sent', numeric: true, render: (i) => formatDateTime(i.createdAt) },
+    {
+      key: 'expires',
+      header: 'Expires',
+      numeric: true,
+      render: (i) => formatDateTime(i.expiresAt),
+    },
+    {
+      key: 'accepted',
+      header: 'Accepted',
+      numeric: true,
+      render: (i) => formatDateTime(i.acceptedAt),
+    },
+    {
+      key: 'actions',
+      header: <span className="sr-only">Actions</span>,
+      render: (i) =>
+        i.acceptedAt ? null : (
+          <Button
+            size="sm"
+            variant="danger"
+            onClick={() => revoke.mutate(i.id, { onError: (e) => setError(messageFor(e)) })}
+          >
+            Revoke<span className="sr-only"> invitation of {i.email}</span>
+          </Button>
+        ),
+    },
+  ];
+
+  return (
+    <>
+      <PageHeader
+        title="People"
+        subtitle="Accounts and invitations. Project roles are set on each project's Members page."
+      />
+      <div className="flex flex-col gap-4">
+        <FormError message={error} />
+        {notice ? (
+          <LinkNotice title={notice.title} link={notice.link} onDismiss={() => setNotice(null)} />
+        ) : null}
+        <Panel title="Invite someone" id="invite">
+          <InviteForm
+            onInvited={(link, email) => setNotice({ title: `Invitation for ${email}`, link })}
+          />
+        </Panel>
+        <section aria-labelledby="people-title">
+          <div className="mb-2 flex items-end justify-between gap-2">
+            <h2 id="people-title" className="text-sm font-semibold">
+              Accounts
+            </h2>
+            <form
+              role="search"
+              className="flex items-center gap-2"
+              onSubmit={(event) => {
+                event.preventDefault();
+                setQ(search.trim());
+                setPage(1);
+              }}
+            >
+              <label htmlFor="people-search" className="sr-only">
+                Search people
+              </label>
+              <input
+                id="people-search"
+                type="search"
+                className={INPUT_CLASS}
+                placeholder="Name or e-mail"
+                value={search}
+                onChange={(e) => setSearch(e.target.value)}
+              />
+              <Button type="submit">Search</Button>
+            </form>
+          </div>
+          {users.isPending ? (
+            <TableSkeleton label="Loading people" />
+          ) : users.isError ? (
+            <ErrorView error={users.error} />
+          ) : (
+            <>
+              <DataTable
+                caption="Accounts"
+                columns={userColumns}
+                rows={users.data.items}
+                rowKey={(u) => u.id}
+              />
+              <Pagination
+                page={users.data.page}
+                pageSize={users.data.pageSize}
+                total={users.data.total}
+                onPage={setPage}
+                label="People pages"
+              />
+            </>
+          )}
+        </section>
+        <section aria-labelledby="invitations-title">
+          <h2 id="invitations-title" className="mb-2 text-sm font-semibold">
+            Invitations
+          </h2>
+          {invitations.isPending ? (
+            <TableSkeleton label="Loading invitations" />
+          ) : invitations.isError ? (
+            <ErrorView error={invitations.error} />
+          ) : (
+            <DataTable
+              caption="Invitations"
+              columns={invitationColumns}
+              rows={invitations.data.items}
+              rowKey={(i) => i.id}
+              empty="No invitations."
+            />
+          )}
+        </section>
+      </div>
+    </>
+  );
+}

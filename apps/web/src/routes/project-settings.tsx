@@ -1,0 +1,37 @@
+import { useNavigate, useParams } from 'react-router-dom';
+import { useProject, useUpdateProject } from '../api/projects';
+import { ErrorView } from '../components/error-view';
+import { PageHeader } from '../components/page';
+import { PageSkeleton } from '../components/skeleton';
+import { ProjectForm, projectFormValues } from '../features/projects/project-form';
+
+export function ProjectSettingsRoute() {
+  const { projectId = '' } = useParams();
+  const project = useProject(projectId);
+  const update = useUpdateProject(projectId);
+  const navigate = useNavigate();
+  if (project.isPending) return <PageSkeleton label="Loading the project" />;
+  if (project.isError) return <ErrorView error={project.error} />;
+  const p = project.data;
+  return (
+    <>
+      <PageHeader
+        title="Project settings"
+        crumbs={[
+          { label: 'Projects', to: '/projects' },
+          { label: `${p.number} ${p.name}`, to: `/projects/${p.id}` },
+          { label: 'Settings' },
+        ]}
+      />
+      <ProjectForm
+        initialValues={projectFormValues(p, p.unitSystem)}
+        submitLabel="Save project"
+        onCancel={() => navigate(`/projects/${p.id}`)}
+        onSubmit={async (input) => {
+          await update.mutateAsync({ ...input, version: p.version });
+          navigate(`/projects/${p.id}`);
+        }}
+      />
+    </>
+  );
+}

@@ -1,0 +1,60 @@
+import { useParams } from 'react-router-dom';
+import { useComponent } from '../api/components';
+import { useProject } from '../api/projects';
+import { useRevision } from '../api/revisions';
+import { StatusBadge, VerdictBadge } from '../components/badges';
+import { ButtonLink } from '../components/button';
+import { ErrorView } from '../components/error-view';
+import { PageHeader } from '../components/page';
+import { PageSkeleton } from '../components/skeleton';
+import { SignOffPanel } from '../features/check/sign-off-panel';
+import { RevisionBody } from '../features/revisions/revision-body';
+import { WorkflowActions } from '../features/revisions/workflow-actions';
+import { kindLabel } from '../lib/kinds';
+
+/** One revision, read-only; the check and sign-off panel while it awaits check (the review page). */
+export function RevisionRoute() {
+  const { revisionId = '' } = useParams();
+  const revision = useRevision(revisionId);
+  const component = useComponent(revision.data?.componentId ?? '');
+  const project = useProject(revision.data?.projectId ?? '');
+  if (revision.isError) return <ErrorView error={revision.error} />;
+  if (component.isError) return <ErrorView error={component.error} />;
+  if (project.isError) return <ErrorView error={project.error} />;
+  if (revision.isPending || component.isPending || project.isPending)
+    return <PageSkeleton label="Loading the revision" />;
+  const r = revision.data;
+  const c = component.data;
+  const p = project.data;
+  const latest = c.latestRevision?.id === r.id;
+  return (
+    <>
+      <PageHeader
+        crumbs={[
+          { label: 'Projects', to: '/projects' },
+          { label: `${p.number} ${p.name}`, to: `/projects/${p.id}` },
+          { label: c.name, to: `/components/${c.id}` },
+          { label: `Revision ${r.number}` },
+        ]}
+        title={
+          <span className="flex flex-wrap items-center gap-2">
+            {c.name} · revision {r.number}
+            <StatusBadge status={r.status} superseded={r.superseded} />
+            <VerdictBadge verdict={r.verdict} />
+          </span>
+        }
+        subtitle={`${kindLabel(c.kind)} · by ${r.author.name}${latest ? '' : ' · not the latest revision'}`}
+        actions={
+          <>
+            {latest ? <WorkflowActions project={p} revision={r} /> : null}
+            <ButtonLink to={`/components/${c.id}/revisions`}>All revisions</ButtonLink>
+          </>
+        }
+      />
+      <RevisionBody
+        revision={r}
+        aside={r.status === 'submitted' ? <SignOffPanel revision={r} project={p} /> : null}
+      />
+    </>
+  );
+}

@@ -1,0 +1,75 @@
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { render } from '@testing-library/react';
+import type { ReactElement } from 'react';
+import { createMemoryRouter, RouterProvider } from 'react-router-dom';
+import { vi } from 'vitest';
+import { meQuery } from '../api/session';
+import type { Me } from '../api/types';
+
+export const ME: Me = {
+  user: {
+    id: 'u-designer',
+    email: 'dana@example.test',
+    name: 'Dana Designer',
+    isAdmin: false,
+    active: true,
+    unitSystem: 'si',
+    createdAt: '2026-01-01T00:00:00Z',
+  },
+  memberships: [{ projectId: 'p1', projectNumber: 'HL-1', role: 'designer' }],
+};
+
+/** Renders inside a router and a fresh query client, with the signed-in user in the cache. */
+export function renderApp(
+  element: ReactElement,
+  { me = ME, path = '/' }: { me?: Me; path?: string } = {},
+) {
+  const client = new QueryClient({
+    defaultOptions: { queries: { retry: false }, mutations: { retry: false } },
+  });
+  client.setQueryData(meQuery.queryKey, me);
+  const router = createMemoryRouter([{ path: '*', element }], { initialEntries: [path] });
+  return {
+    client,
+    router,
+    ...render(
+      <QueryClientProvider client={client}>
+        <RouterProvider router={router} />
+      </QueryClientProvider>,
+    ),
+  };
+}
+
+export interface Reply {
+  readonly status?: number;
+  readonly body?: unknown;
+}
+
+/**
+ * A fake server: routes "METHOD /path" (path without /api, query ignored) to
+ * replies. An unrouted request answers 404 the API's way.
+ */
+export function fakeApi(
+  routes: Record<string, Reply | ((init: RequestInit | undefined) => Reply)>,
+) {
+  const calls: { method: string; path: string; init: RequestInit | undefined }[] = [];
+  const fetchMock = vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
+    const url = new URL(String(input), 'http://localhost');
+    const method = (init?.method ?? 'GET').toUpperCase();
+    const path = url.pathname.replace(/^\/api/, '');
+    calls.push({ method, path, init });
+    const route = routes[`${method} ${path}`];
+    const reply = typeof route === 'function' ? route(init) : route;
+    if (!reply) {
+      return new Response(JSON.stringify({ error: { code: 'not_found', message: 'not found' } }), {
+        status: 404,
+      });
+    }
+    return new Response(reply.body === undefined ? '' : JSON.stringify(reply.body), {
+      status: reply.status ?? 200,
+      headers: { 'content-type': 'application/json' },
+    });
+  });
+  vi.stubGlobal('fetch', fetchMock);
+  return { calls, fetchMock };
+}
