@@ -135,7 +135,9 @@ start() {
   if is_running; then
     say "already running on 127.0.0.1:$PORT"
   else
-    as_owner "$BIN/pg_ctl" -D "$DATA" -l "$DATA/server.log" -w -t 60 start >/dev/null ||
+    # The port is given at start, so HOOPLINE_PG_*PORT always wins over what
+    # the cluster was created with.
+    as_owner "$BIN/pg_ctl" -D "$DATA" -l "$DATA/server.log" -o "-p $PORT" -w -t 60 start >/dev/null ||
       { say "failed to start; see $DATA/server.log"; as_owner tail -n 20 "$DATA/server.log" >&2 || true; exit 1; }
     say "started on 127.0.0.1:$PORT"
   fi
