@@ -89,6 +89,48 @@ export { flatAreaLoad, flatAreaLoadSchema } from './methods/flat-area-load/flat-
 export type { FlatAreaLoadInput } from './methods/flat-area-load/flat-area-load';
 export { circularPlate, circularPlateSchema } from './methods/circular-plate/circular-plate';
 export type { CircularPlateInput } from './methods/circular-plate/circular-plate';
+export {
+  rectangularPlate,
+  rectangularPlateSchema,
+} from './methods/rectangular-plate/rectangular-plate';
+export type { RectangularPlateInput } from './methods/rectangular-plate/rectangular-plate';
+export {
+  EXTERNAL_PRESSURE_DEFAULTS,
+  cylindricalShell,
+  cylindricalShellSchema,
+} from './methods/cylindrical-shell/cylindrical-shell';
+export type { CylindricalShellInput } from './methods/cylindrical-shell/cylindrical-shell';
+export {
+  DEFAULT_BUCKLING_DESIGN_FACTOR,
+  DEFAULT_KNOCKDOWN,
+  classicalSphereBucklingPressure,
+  sphereOrHead,
+  sphereOrHeadSchema,
+  zoellyCoefficient,
+} from './methods/sphere-or-head/sphere-or-head';
+export type { HeadShape, SphereOrHeadInput } from './methods/sphere-or-head/sphere-or-head';
+export { GASES, storedEnergy, storedEnergySchema } from './methods/stored-energy/stored-energy';
+export type { StoredEnergyGas, StoredEnergyInput } from './methods/stored-energy/stored-energy';
+export {
+  pumpDown,
+  pumpDownCurve,
+  pumpDownSchema,
+  pumpDownTime,
+} from './methods/pump-down/pump-down';
+export type {
+  PumpDownInput,
+  PumpDownParameters,
+  PumpDownPoint,
+} from './methods/pump-down/pump-down';
+
+// Physical properties
+export {
+  IF97_SATURATION_MAX_TEMPERATURE,
+  IF97_SATURATION_MIN_TEMPERATURE,
+  WaterVapourRangeError,
+  saturationPressureBuck,
+  saturationPressureIf97,
+} from './physics/water-vapour';
 
 // Screening
 export {

@@ -9,7 +9,9 @@ export function formatNumber(value: number): string {
   if (!Number.isFinite(value)) return String(value);
   const magnitude = Math.abs(value);
   if (magnitude >= 1e-3 && magnitude < 1e7) {
-    return trimZeros(value.toPrecision(6));
+    // Number(…) drops trailing zeros, and String() of a number below 1e21
+    // never uses an exponent (toPrecision would, from 1e6 up).
+    return String(Number(value.toPrecision(6)));
   }
   const [mantissa, exponent] = value.toExponential(5).split('e') as [string, string];
   return `${trimZeros(mantissa)}e${exponent.replace('+', '')}`;

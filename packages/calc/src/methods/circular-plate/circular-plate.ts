@@ -193,7 +193,7 @@ function caseTrail(input: Parsed, c: Common, loadCase: ResolvedLoadCase): Trail 
     demand: maxStress,
     capacity: S,
     unit: 'Pa',
-    basis: 'σ_max ≤ S',
+    basis: 'σ_max <= S',
   });
   let allowablePressure = S / stressPerPressure;
 
@@ -207,7 +207,7 @@ function caseTrail(input: Parsed, c: Common, loadCase: ResolvedLoadCase): Trail 
       substituted: `t_y = ${tText}·(${withUnit(deflection, 'm')}/${withUnit(limit, 'm')})^(1/3)`,
       value: t * Math.cbrt(deflection / limit),
       unit: 'm',
-      source: `${source}; y_max ∝ 1/t³ through D`,
+      source: `${source}; y_max varies as 1/t³ through D`,
     });
     trail.output(
       'required-thickness-deflection',
@@ -221,7 +221,7 @@ function caseTrail(input: Parsed, c: Common, loadCase: ResolvedLoadCase): Trail 
       demand: deflection,
       capacity: limit,
       unit: 'm',
-      basis: 'y_max ≤ y_lim',
+      basis: 'y_max <= y_lim',
     });
     allowablePressure = Math.min(allowablePressure, limit / deflectionPerPressure);
   }

@@ -170,7 +170,7 @@ function caseTrail(
         demand: perFastener,
         capacity: input.fastenerCapacity,
         unit: 'N',
-        basis: 'F_b ≤ working load of one fastener (pressure share only)',
+        basis: 'F_b <= working load of one fastener (pressure share only)',
       });
       if (pushesOff) {
         trail.warn(

@@ -1,0 +1,1045 @@
+import { z } from 'zod';
+import type { CautionCode } from '../../core/cautions';
+import { factor, length } from '../../core/fields';
+import { formatNumber, withUnit } from '../../core/format';
+import { componentShape, defineMethod } from '../../core/method';
+import type { ResolvedLoadCase, ValidityWarning } from '../../core/report';
+import { Trail } from '../../core/trail';
+import {
+  allowableOverrides,
+  allowableStress,
+  materialSchema,
+  resolveMaterial,
+  type Material,
+} from '../../materials/materials';
+import {
+  bressePressure,
+  collapsePressure,
+  criticalLength,
+  lamePressureForHoop,
+  lameStresses,
+  nasaModeratelyLongPressure,
+  plasticPressure,
+  ringSpacingFor,
+  roarkLongTubeLength,
+  ug27CircumferentialMawp,
+  ug27CircumferentialThickness,
+  ug27LongitudinalMawp,
+  ug27LongitudinalThickness,
+  vonMisesHydrostatic,
+  windenburgTrillingPressure,
+  type ExternalPressureBasis,
+  type Interaction,
+} from './shell-formulas';
+
+/**
+ * Cylindrical shell under a pressure difference, every load case screened:
+ * inside higher → thin-wall and Lamé stresses and the ASME VIII-1 UG-27
+ * thickness and MAWP (METHODS.md §e); outside higher (vacuum) → elastic
+ * buckling (Bresse, von Mises, Windenburg–Trilling), plastic collapse, their
+ * interaction, a knock-down and a design factor (METHODS.md §f).
+ */
+
+/**
+ * Defaults for external pressure. The ASME VIII-1 UG-28 charts imply a factor
+ * of 3 on the predicted collapse pressure, elastic (P_a = 2·A·E/(3·D_o/t)) and
+ * plastic (P_a = 4·B/(3·D_o/t), B about half the hoop stress) alike (METHODS.md
+ * §f.6, from memory, derived); the imperfection allowance is inside that factor,
+ * so the knock-down on the theoretical elastic pressure defaults to 1. With the
+ * Rankine interaction this is never above the EN 13445-3 basis (knock-down 0.5,
+ * S = 1.5; METHODS.md §f.5, from memory), which a user can choose instead.
+ */
+export const EXTERNAL_PRESSURE_DEFAULTS = {
+  knockdown: 1,
+  designFactor: 3,
+  interaction: 'rankine' as Interaction,
+} as const;
+
+/** NASA SP-8007 correlation factor for lateral pressure, recalled as 0.90 (from memory; a cross-check only). */
+const NASA_GAMMA = 0.9;
+
+const SOURCE_GEOMETRY = 'geometry';
+const SOURCE_THIN =
+  'thin-wall membrane stress on the mean radius (METHODS.md §e, from memory, standard)';
+const SOURCE_LAME =
+  'Lamé thick-wall cylinder (METHODS.md §e; Timoshenko, Strength of Materials II; from memory, standard)';
+const SOURCE_UG27 =
+  'ASME BPVC VIII-1 UG-27(c)(1) and (c)(2), as reproduced in a mechanical-engineering handbook table (1983 ed.; METHODS.md §e)';
+const SOURCE_BRESSE =
+  'Bresse/Bryan long cylinder, n = 2: Roark Table 35 case 19a (METHODS.md §f.1), D mean diameter';
+const SOURCE_VON_MISES =
+  'von Mises, lateral plus end pressure, simply supported ends, as PD 5500 §3.6.2 and EN 13445-3 §8.5.2 use it (from memory; METHODS.md §f.2); minimised over integer n >= 2, R mean radius';
+const SOURCE_WT =
+  'Windenburg & Trilling (1934), Trans. ASME APM-56-20, approximate formula (from memory; METHODS.md §f.3), D mean diameter; cross-check only';
+
+/** Input of a cylindrical shell: geometry, material, joint efficiency, external-pressure factors, load cases. */
+export const cylindricalShellSchema = z
+  .object(
+    componentShape('cylindrical-shell', {
+      /** Shell diameter, outside or inside as `diameterBasis` says. */
+      diameter: length({ positive: true, max: 50 }),
+      diameterBasis: z
+        .enum(['outside', 'inside'], { error: 'must be "outside" or "inside"' })
+        .default('outside'),
+      /** Nominal wall thickness. */
+      thickness: length({ positive: true, max: 2 }),
+      /**
+       * Unsupported length L between stiffening rings or heads. For a shell
+       * between dished heads add about 1/3 of each head's depth (ASME VIII-1
+       * UG-28 definition, from memory).
+       */
+      length: length({ positive: true, max: 1000 }),
+      /** 'closed': heads carry the pressure into the shell (axial stress; end load in buckling). 'open': no axial pressure load. */
+      ends: z.enum(['closed', 'open'], { error: 'must be "closed" or "open"' }).default('closed'),
+      material: materialSchema,
+      ...allowableOverrides,
+      /** Weld joint efficiency of UG-27 (0.35–1); 1 when omitted. */
+      jointEfficiency: factor(0.35, 1, 'joint efficiency').optional(),
+      /** Thickness lost to corrosion, taken off on the inside. */
+      corrosionAllowance: length({ nonNegative: true }).optional(),
+      /** Factors for the external-pressure (buckling) screening; defaults in EXTERNAL_PRESSURE_DEFAULTS. */
+      externalPressure: z
+        .object({
+          /** Imperfection knock-down on the elastic buckling pressure (0.05–1). */
+          knockdown: factor(0.05, 1, 'knock-down factor').optional(),
+          /** Factor on the collapse pressure (1–20). */
+          designFactor: factor(1, 20, 'design factor').optional(),
+          interaction: z
+            .enum(['rankine', 'api-2rd'], { error: 'must be "rankine" or "api-2rd"' })
+            .optional(),
+        })
+        .strict()
+        .optional(),
+      /** A (thinner) nominal thickness for which to find the stiffening-ring spacing that holds every external case. */
+      ringSpacingFor: length({ positive: true, max: 2 }).optional(),
+    }),
+  )
+  .strict()
+  .superRefine((v, ctx) => {
+    const allowance = v.corrosionAllowance ?? 0;
+    const radius = v.diameter / 2;
+    if (allowance >= v.thickness) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['corrosionAllowance'],
+        message: 'must be less than the thickness',
+      });
+    }
+    if (v.thickness >= radius) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['thickness'],
+        message: `must be less than the radius (${formatNumber(radius)} m)`,
+      });
+    }
+    if (v.ringSpacingFor !== undefined) {
+      if (v.ringSpacingFor <= allowance) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['ringSpacingFor'],
+          message: 'must be more than the corrosion allowance',
+        });
+      }
+      if (v.ringSpacingFor >= radius) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['ringSpacingFor'],
+          message: `must be less than the radius (${formatNumber(radius)} m)`,
+        });
+      }
+    }
+  });
+
+/** What a cylindrical-shell component accepts (numbers in SI or text with units). */
+export type CylindricalShellInput = z.input<typeof cylindricalShellSchema>;
+type Parsed = z.output<typeof cylindricalShellSchema>;
+
+/** Radii of the corroded shell; corrosion is taken on the inside, so D_o stays. */
+interface Geometry {
+  readonly outsideDiameter: number;
+  readonly outsideRadius: number;
+  readonly thickness: number;
+  readonly insideRadius: number;
+  readonly meanRadius: number;
+}
+
+function geometryFor(input: Parsed, nominalThickness: number): Geometry {
+  const t = nominalThickness - (input.corrosionAllowance ?? 0);
+  const outsideDiameter =
+    input.diameterBasis === 'outside' ? input.diameter : input.diameter + 2 * nominalThickness;
+  const outsideRadius = outsideDiameter / 2;
+  const insideRadius = outsideRadius - t;
+  return {
+    outsideDiameter,
+    outsideRadius,
+    thickness: t,
+    insideRadius,
+    meanRadius: insideRadius + t / 2,
+  };
+}
+
+function externalBasis(input: Parsed, material: Material): ExternalPressureBasis {
+  const given = input.externalPressure;
+  return {
+    E: material.elasticModulus,
+    nu: material.poissonRatio,
+    yieldStress: material.strength,
+    knockdown: given?.knockdown ?? EXTERNAL_PRESSURE_DEFAULTS.knockdown,
+    designFactor: given?.designFactor ?? EXTERNAL_PRESSURE_DEFAULTS.designFactor,
+    interaction: given?.interaction ?? EXTERNAL_PRESSURE_DEFAULTS.interaction,
+  };
+}
+
+/** Pressure-independent internal-pressure capacity, computed once for all inside-higher cases. */
+interface InternalCapacity {
+  readonly S: number;
+  readonly jointEfficiency: number;
+  readonly SE: number;
+  readonly mawpCircumferential: number;
+  readonly mawpLongitudinal: number | null;
+  readonly lameLimit: number;
+  readonly allowable: number;
+}
+
+/** Pressure-independent external-pressure capacity, computed once for all outside-higher cases. */
+interface ExternalSummary {
+  readonly vonMises: number;
+  readonly lobes: number;
+  readonly collapse: number;
+  readonly allowable: number;
+  readonly criticalLength: number;
+}
+
+function pressureStep(trail: Trail, loadCase: ResolvedLoadCase): number {
+  return trail.step({
+    id: 'pressure',
+    label:
+      loadCase.direction === 'external-over'
+        ? 'Pressure difference, outside higher'
+        : loadCase.direction === 'internal-over'
+          ? 'Pressure difference, inside higher'
+          : 'Pressure difference',
+    expression: 'p = |p_inside − p_outside|',
+    substituted: `p = |${formatNumber(loadCase.internal)} Pa − ${formatNumber(loadCase.external)} Pa|${
+      loadCase.factor !== 1 ? ` × ${formatNumber(loadCase.factor)}` : ''
+    }`,
+    value: Math.abs(loadCase.differential),
+    unit: 'Pa',
+    source: 'definition of differential pressure (METHODS.md §a.2)',
+  });
+}
+
+function internalCaseTrail(
+  input: Parsed,
+  g: Geometry,
+  capacity: InternalCapacity,
+  loadCase: ResolvedLoadCase,
+): Trail {
+  const trail = new Trail();
+  const p = pressureStep(trail, loadCase);
+  const closed = input.ends === 'closed';
+  const { thickness: t, insideRadius: R, outsideRadius: Ro, meanRadius: r } = g;
+  const pText = withUnit(p, 'Pa');
+  const tText = withUnit(t, 'm');
+  const RText = withUnit(R, 'm');
+
+  const hoopThin = trail.step({
+    id: 'hoop-stress-thin',
+    label: 'Hoop stress, thin wall',
+    expression: 'σ_θ = p·r/t',
+    substituted: `σ_θ = ${pText}·${withUnit(r, 'm')}/${tText}`,
+    value: (p * r) / t,
+    unit: 'Pa',
+    source: SOURCE_THIN,
+  });
+  const longitudinalThin = trail.step(
+    closed
+      ? {
+          id: 'longitudinal-stress-thin',
+          label: 'Longitudinal stress, thin wall, closed ends',
+          expression: 'σ_L = p·r/(2·t)',
+          substituted: `σ_L = ${pText}·${withUnit(r, 'm')}/(2·${tText})`,
+          value: (p * r) / (2 * t),
+          unit: 'Pa',
+          source: SOURCE_THIN,
+        }
+      : {
+          id: 'longitudinal-stress-thin',
+          label: 'Longitudinal stress, open ends',
+          expression: 'σ_L = 0 (no end load from pressure)',
+          substituted: 'σ_L = 0',
+          value: 0,
+          unit: 'Pa',
+          source: 'open ends: the pressure on the ends is not carried by the shell',
+        },
+  );
+  const lame = lameStresses(p, R, Ro);
+  const hoopInner = trail.step({
+    id: 'lame-hoop-inner',
+    label: 'Hoop stress at the bore, thick wall (Lamé), the largest',
+    expression: 'σ_θ,i = p·(b² + a²)/(b² − a²)',
+    substituted: `σ_θ,i = ${pText}·((${withUnit(Ro, 'm')})² + (${RText})²)/((${withUnit(Ro, 'm')})² − (${RText})²)`,
+    value: lame.hoopInner,
+    unit: 'Pa',
+    source: `${SOURCE_LAME}; a inside radius, b outside radius, outside pressure taken as 0 (a pressure on every surface adds −p_outside to each stress and does not change their differences)`,
+  });
+  trail.step({
+    id: 'lame-hoop-outer',
+    label: 'Hoop stress at the outer surface (Lamé)',
+    expression: 'σ_θ,o = 2·p·a²/(b² − a²)',
+    substituted: `σ_θ,o = 2·${pText}·(${RText})²/((${withUnit(Ro, 'm')})² − (${RText})²)`,
+    value: lame.hoopOuter,
+    unit: 'Pa',
+    source: SOURCE_LAME,
+  });
+  trail.step({
+    id: 'lame-radial-inner',
+    label: 'Radial stress at the bore (Lamé)',
+    expression: 'σ_r,i = −p',
+    substituted: `σ_r,i = −${pText}`,
+    value: lame.radialInner,
+    unit: 'Pa',
+    source: SOURCE_LAME,
+  });
+  trail.step(
+    closed
+      ? {
+          id: 'lame-axial',
+          label: 'Axial stress, closed ends (Lamé)',
+          expression: 'σ_z = p·a²/(b² − a²)',
+          substituted: `σ_z = ${pText}·(${RText})²/((${withUnit(Ro, 'm')})² − (${RText})²)`,
+          value: lame.axialClosed,
+          unit: 'Pa',
+          source: SOURCE_LAME,
+        }
+      : {
+          id: 'lame-axial',
+          label: 'Axial stress, open ends',
+          expression: 'σ_z = 0 (no end load from pressure)',
+          substituted: 'σ_z = 0',
+          value: 0,
+          unit: 'Pa',
+          source: 'open ends: the pressure on the ends is not carried by the shell',
+        },
+  );
+
+  const { S, jointEfficiency: Ej, SE } = capacity;
+  const seText = `${withUnit(S, 'Pa')}·${formatNumber(Ej)}`;
+  const tCircumferential = ug27CircumferentialThickness(p, R, S, Ej);
+  trail.step({
+    id: 'ug27-thickness-circumferential',
+    label: 'Required thickness, circumferential stress (longitudinal joints)',
+    expression: 't_c = P·R/(S·E − 0.6·P)',
+    substituted:
+      tCircumferential === null
+        ? `S·E − 0.6·P = ${formatNumber(SE - 0.6 * p)} Pa <= 0: no thickness satisfies this formula`
+        : `t_c = ${pText}·${RText}/(${seText} − 0.6·${pText})`,
+    value: tCircumferential,
+    unit: 'm',
+    source: `${SOURCE_UG27}; R corroded inside radius`,
+  });
+  const tLongitudinal = trail.step({
+    id: 'ug27-thickness-longitudinal',
+    label: 'Required thickness, longitudinal stress (circumferential joints)',
+    expression: 't_l = P·R/(2·S·E + 0.4·P)',
+    substituted: `t_l = ${pText}·${RText}/(2·${seText} + 0.4·${pText})`,
+    value: ug27LongitudinalThickness(p, R, S, Ej),
+    unit: 'm',
+    source: `${SOURCE_UG27}${closed ? '' : '; assumes closed ends, shown for completeness'}`,
+  });
+  const allowance = input.corrosionAllowance ?? 0;
+  if (tCircumferential !== null) {
+    const tRequired = trail.step({
+      id: 'ug27-required-thickness',
+      label: 'Required thickness (governing of the two) plus corrosion allowance',
+      expression: 't_req = max(t_c, t_l) + c',
+      substituted: `t_req = max(${withUnit(tCircumferential, 'm')}, ${withUnit(tLongitudinal, 'm')}) + ${withUnit(allowance, 'm')}`,
+      value: Math.max(tCircumferential, tLongitudinal) + allowance,
+      unit: 'm',
+      source: `${SOURCE_UG27}; corrosion allowance added (UG-25, from memory)`,
+    });
+    trail.output(
+      'required-thickness',
+      'Required thickness, UG-27 (with allowance)',
+      tRequired,
+      'm',
+    );
+    trail.check({
+      id: 'ug27-thickness',
+      label: 'Required thickness (UG-27) against the nominal thickness',
+      demand: tRequired,
+      capacity: input.thickness,
+      unit: 'm',
+      basis: 'max(t_c, t_l) + c <= t_nominal',
+    });
+  } else {
+    trail.warn(
+      'ug27-no-solution',
+      'outside-validity',
+      `the pressure (${formatNumber(p)} Pa) is at least S·E/0.6 = ${formatNumber(SE / 0.6)} Pa: the UG-27 thickness formula has no solution; only the Lamé check is made`,
+    );
+  }
+  trail.check({
+    id: 'lame-hoop',
+    label: 'Hoop stress at the bore (Lamé) against the allowable membrane stress',
+    demand: hoopInner,
+    capacity: SE,
+    unit: 'Pa',
+    basis:
+      'σ_θ,i <= S·E: the hoop stress acts across the longitudinal seams, so the joint efficiency applies as in UG-27',
+  });
+
+  trail.output('hoop-stress-thin', 'Hoop stress (thin wall)', hoopThin, 'Pa');
+  trail.output(
+    'longitudinal-stress-thin',
+    'Longitudinal stress (thin wall)',
+    longitudinalThin,
+    'Pa',
+  );
+  trail.output('lame-hoop-inner', 'Hoop stress at the bore (Lamé)', hoopInner, 'Pa');
+  trail.output('mawp', 'MAWP, UG-27', capacity.mawpCircumferential, 'Pa');
+  // Each check reaches 1 at its own pressure (UG-27: the MAWP); the smallest is the allowable.
+  trail.output('allowable-pressure', 'Allowable pressure difference', capacity.allowable, 'Pa');
+
+  // UG-27 applicability (from memory, METHODS.md §e): circumferential P <= 0.385·S·E; the
+  // longitudinal limit 1.25·S·E is the looser one, so the first warning covers both.
+  if (p > 0.385 * SE) {
+    trail.warn(
+      'ug27-pressure-limit',
+      'outside-validity',
+      `P = ${formatNumber(p)} Pa exceeds 0.385·S·E = ${formatNumber(0.385 * SE)} Pa: the UG-27 circumferential formula does not apply (from memory); the thick-wall rules of VIII-1 Appendix 1-2 do`,
+    );
+  }
+  return trail;
+}
+
+function externalCaseTrail(summary: ExternalSummary, loadCase: ResolvedLoadCase): Trail {
+  const trail = new Trail();
+  const p = pressureStep(trail, loadCase);
+  trail.check({
+    id: 'external-pressure',
+    label: 'Pressure difference against the allowable external pressure',
+    demand: p,
+    capacity: summary.allowable,
+    unit: 'Pa',
+    basis: 'p <= p_allow = p_c/γ (collapse pressure over the design factor)',
+  });
+  trail.output(
+    'elastic-buckling-pressure',
+    'Elastic buckling pressure (von Mises)',
+    summary.vonMises,
+    'Pa',
+  );
+  trail.output('lobes', 'Buckling lobes n', summary.lobes, '1');
+  trail.output('collapse-pressure', 'Collapse pressure (with interaction)', summary.collapse, 'Pa');
+  trail.output('critical-length', 'Critical length', summary.criticalLength, 'm');
+  trail.output('allowable-pressure', 'Allowable pressure difference', summary.allowable, 'Pa');
+  return trail;
+}
+
+function balancedCaseTrail(loadCase: ResolvedLoadCase): Trail {
+  const trail = new Trail();
+  pressureStep(trail, loadCase);
+  trail.step({
+    id: 'balanced',
+    label: 'No pressure difference',
+    expression: 'p_inside = p_outside',
+    substituted: `${formatNumber(loadCase.internal)} Pa = ${formatNumber(loadCase.external)} Pa`,
+    value: null,
+    unit: 'Pa',
+    source: 'nothing to check in this case',
+  });
+  return trail;
+}
+
+function internalCapacity(
+  common: Trail,
+  input: Parsed,
+  material: Material,
+  g: Geometry,
+): InternalCapacity {
+  const S = allowableStress(common, material, input);
+  const jointEfficiency = common.step({
+    id: 'joint-efficiency',
+    label: 'Weld joint efficiency',
+    expression: 'E',
+    substituted: `E = ${formatNumber(input.jointEfficiency ?? 1)}`,
+    value: input.jointEfficiency ?? 1,
+    unit: '1',
+    source:
+      input.jointEfficiency !== undefined
+        ? 'entered by the user'
+        : 'default 1: seamless shell or fully radiographed butt welds; spot radiography gives 0.85, none 0.70 (ASME VIII-1 Table UW-12, from memory)',
+  });
+  const SE = common.step({
+    id: 'allowable-membrane-stress',
+    label: 'Allowable membrane stress with the joint efficiency',
+    expression: 'S·E',
+    substituted: `S·E = ${withUnit(S, 'Pa')}·${formatNumber(jointEfficiency)}`,
+    value: S * jointEfficiency,
+    unit: 'Pa',
+    source: SOURCE_UG27,
+  });
+  const { thickness: t, insideRadius: R, outsideRadius: Ro } = g;
+  const seText = `${withUnit(S, 'Pa')}·${formatNumber(jointEfficiency)}`;
+  const mawpCircumferential = common.step({
+    id: 'mawp-circumferential',
+    label: 'MAWP, circumferential stress (longitudinal joints)',
+    expression: 'P_c = S·E·t/(R + 0.6·t)',
+    substituted: `P_c = ${seText}·${withUnit(t, 'm')}/(${withUnit(R, 'm')} + 0.6·${withUnit(t, 'm')})`,
+    value: ug27CircumferentialMawp(t, R, S, jointEfficiency),
+    unit: 'Pa',
+    source: `${SOURCE_UG27}; R corroded inside radius, t corroded thickness`,
+  });
+  const longitudinal = ug27LongitudinalMawp(t, R, S, jointEfficiency);
+  const mawpLongitudinal = common.step({
+    id: 'mawp-longitudinal',
+    label: 'MAWP, longitudinal stress (circumferential joints)',
+    expression: 'P_l = 2·S·E·t/(R − 0.4·t)',
+    substituted:
+      longitudinal === null
+        ? 'R − 0.4·t <= 0: formula does not apply'
+        : `P_l = 2·${seText}·${withUnit(t, 'm')}/(${withUnit(R, 'm')} − 0.4·${withUnit(t, 'm')})`,
+    value: longitudinal,
+    unit: 'Pa',
+    source: `${SOURCE_UG27}${input.ends === 'open' ? '; assumes closed ends, shown for completeness' : ''}`,
+  });
+  const lameLimit = common.step({
+    id: 'lame-limit-pressure',
+    label: 'Pressure at which the Lamé bore hoop stress reaches S·E',
+    expression: 'P_L = S·E·(b² − a²)/(b² + a²)',
+    substituted: `P_L = ${withUnit(SE, 'Pa')}·((${withUnit(Ro, 'm')})² − (${withUnit(R, 'm')})²)/((${withUnit(Ro, 'm')})² + (${withUnit(R, 'm')})²)`,
+    value: lamePressureForHoop(SE, R, Ro),
+    unit: 'Pa',
+    source: SOURCE_LAME,
+  });
+  const candidates = [mawpCircumferential];
+  if (mawpLongitudinal !== null && input.ends === 'closed') candidates.push(mawpLongitudinal);
+  candidates.push(lameLimit);
+  const allowable = common.step({
+    id: 'internal-allowable-pressure',
+    label: 'Allowable internal pressure difference (smallest of the limits)',
+    expression:
+      input.ends === 'closed' && mawpLongitudinal !== null
+        ? 'P_allow = min(P_c, P_l, P_L)'
+        : 'P_allow = min(P_c, P_L)',
+    substituted: `P_allow = min(${candidates.map((v) => withUnit(v, 'Pa')).join(', ')})`,
+    value: Math.min(...candidates),
+    unit: 'Pa',
+    source: 'the pressure at which the first check of an inside-higher case reaches 1',
+  });
+  return {
+    S,
+    jointEfficiency,
+    SE,
+    mawpCircumferential,
+    mawpLongitudinal,
+    lameLimit,
+    allowable,
+  };
+}
+
+function externalSummary(
+  common: Trail,
+  warnings: ValidityWarning[],
+  input: Parsed,
+  material: Material,
+  g: Geometry,
+): ExternalSummary {
+  const basis = externalBasis(input, material);
+  const { E, nu } = basis;
+  const t = g.thickness;
+  const r = g.meanRadius;
+  const D = 2 * r;
+  const L = input.length;
+  const ETxt = withUnit(E, 'Pa');
+  const tTxt = withUnit(t, 'm');
+  const DTxt = withUnit(D, 'm');
+  const rTxt = withUnit(r, 'm');
+  const LTxt = withUnit(L, 'm');
+  const nuTxt = formatNumber(nu);
+
+  const yieldStress = common.step({
+    id: 'yield-stress',
+    label:
+      material.strengthBasis === 'yield'
+        ? 'Yield stress for plastic collapse'
+        : 'Strength used in place of a yield stress for plastic collapse',
+    expression: 'σ_y',
+    substituted: `σ_y = ${withUnit(basis.yieldStress, 'Pa')}`,
+    value: basis.yieldStress,
+    unit: 'Pa',
+    source: `${material.name}: ${material.sources.strength}`,
+  });
+  common.step({
+    id: 'bresse',
+    label: 'Elastic buckling pressure of a long cylinder (Bresse)',
+    expression: 'p_B = 2·E/(1 − ν²)·(t/D)³',
+    substituted: `p_B = 2·${ETxt}/(1 − ${nuTxt}²)·(${tTxt}/${DTxt})³`,
+    value: bressePressure(E, nu, t, D),
+    unit: 'Pa',
+    source: SOURCE_BRESSE,
+  });
+  const vonMises = vonMisesHydrostatic(E, nu, t, r, L);
+  const Z = (Math.PI * r) / L;
+  common.step({
+    id: 'von-mises',
+    label: `Elastic buckling pressure, von Mises, minimum at n = ${vonMises.lobes} lobes`,
+    expression:
+      'p_m = E·t·ε/R, ε = [1/(n²/Z² + 1)² + t²/(12·R²·(1 − ν²))·(n² − 1 + Z²)²]/(n² − 1 + Z²/2), Z = π·R/L, min over n >= 2',
+    substituted: `p_m = ${ETxt}·${tTxt}·ε/${rTxt}, Z = π·${rTxt}/${LTxt} = ${formatNumber(Z)}, n = ${vonMises.lobes}`,
+    value: vonMises.pressure,
+    unit: 'Pa',
+    source:
+      input.ends === 'open'
+        ? `${SOURCE_VON_MISES}; open ends carry no end load, and the hydrostatic value is kept as the lower, conservative one`
+        : SOURCE_VON_MISES,
+  });
+  common.step({
+    id: 'lobes',
+    label: 'Buckling lobes around the circumference',
+    expression: 'n at the minimum of p_m',
+    substituted: `n = ${vonMises.lobes}`,
+    value: vonMises.lobes,
+    unit: '1',
+    source: SOURCE_VON_MISES,
+  });
+  const wt = windenburgTrillingPressure(E, nu, t, D, L);
+  const Lc = criticalLength(nu, t, D);
+  common.step({
+    id: 'windenburg-trilling',
+    label: 'Elastic buckling pressure, Windenburg–Trilling (cross-check)',
+    expression: 'p_WT = 2.42·E·(t/D)^2.5/((1 − ν²)^0.75·(L/D − 0.45·(t/D)^0.5))',
+    substituted:
+      wt === null
+        ? `L/D − 0.45·(t/D)^0.5 = ${formatNumber(L / D - 0.45 * Math.sqrt(t / D))} <= 0: the formula does not apply`
+        : `p_WT = 2.42·${ETxt}·(${tTxt}/${DTxt})^2.5/((1 − ${nuTxt}²)^0.75·(${LTxt}/${DTxt} − 0.45·(${tTxt}/${DTxt})^0.5))`,
+    value: wt,
+    unit: 'Pa',
+    source: SOURCE_WT,
+  });
+  if (wt !== null) {
+    common.step({
+      id: 'windenburg-trilling-difference',
+      label: 'Windenburg–Trilling relative to von Mises',
+      expression: 'p_WT/p_m − 1',
+      substituted: `${withUnit(wt, 'Pa')}/${withUnit(vonMises.pressure, 'Pa')} − 1`,
+      value: wt / vonMises.pressure - 1,
+      unit: '1',
+      source: 'cross-check of the two elastic formulas',
+    });
+  }
+  if (wt === null || L / D < 0.5 || L > Lc) {
+    warnings.push({
+      code: 'windenburg-trilling-range',
+      severity: 'info',
+      message: `the Windenburg–Trilling cross-check holds from about L/D = 0.5 up to the critical length (${formatNumber(Lc)} m); here L/D = ${formatNumber(L / D)}. The check uses von Mises, which holds for any length`,
+    });
+  }
+  common.step({
+    id: 'critical-length',
+    label: 'Critical length (Windenburg–Trilling equals Bresse)',
+    expression: 'L_c = D·(1.21·(1 − ν²)^0.25·sqrt(D/t) + 0.45·sqrt(t/D))',
+    substituted: `L_c = ${DTxt}·(1.21·(1 − ${nuTxt}²)^0.25·sqrt(${DTxt}/${tTxt}) + 0.45·sqrt(${tTxt}/${DTxt}))`,
+    value: Lc,
+    unit: 'm',
+    source:
+      'derived by equating Windenburg–Trilling and Bresse (METHODS.md §f.4); longer shells buckle as long tubes in two lobes',
+  });
+  common.step({
+    id: 'long-tube-length',
+    label: 'Length beyond which the length effect has vanished (Roark)',
+    expression: 'L_long = 4.90·R·sqrt(R/t)',
+    substituted: `L_long = 4.90·${rTxt}·sqrt(${rTxt}/${tTxt})`,
+    value: roarkLongTubeLength(t, r),
+    unit: 'm',
+    source: 'Roark Table 35 case 19a validity, L > 4.90·R·sqrt(R/t) (METHODS.md §f.1, §f.4)',
+  });
+  common.step({
+    id: 'nasa-sp8007',
+    label: 'Moderately long cylinder, NASA SP-8007 (cross-check, γ = 0.90)',
+    expression: 'p_N = 0.855·γ·E/(1 − ν²)^0.75·(R/L)·(t/R)^2.5',
+    substituted: `p_N = 0.855·${formatNumber(NASA_GAMMA)}·${ETxt}/(1 − ${nuTxt}²)^0.75·(${rTxt}/${LTxt})·(${tTxt}/${rTxt})^2.5`,
+    value: nasaModeratelyLongPressure(E, nu, t, r, L, NASA_GAMMA),
+    unit: 'Pa',
+    source:
+      'NASA SP-8007 (1968), lateral pressure, moderately long cylinders; formula and γ = 0.90 from memory (METHODS.md §f.6); the same form as Windenburg–Trilling without the 0.45 term; cross-check only',
+  });
+  const plastic = common.step({
+    id: 'plastic-pressure',
+    label: 'Plastic collapse pressure (membrane yield)',
+    expression: 'p_y = σ_y·t/R',
+    substituted: `p_y = ${withUnit(yieldStress, 'Pa')}·${tTxt}/${rTxt}`,
+    value: plasticPressure(yieldStress, t, r),
+    unit: 'Pa',
+    source: 'p_y = σ_y·t/R, R mean radius (METHODS.md §f.5; EN 13445-3 P_y, from memory)',
+  });
+  const userKnockdown = input.externalPressure?.knockdown !== undefined;
+  const knockdown = common.step({
+    id: 'knockdown',
+    label: 'Imperfection knock-down on the elastic buckling pressure',
+    expression: 'κ',
+    substituted: `κ = ${formatNumber(basis.knockdown)}`,
+    value: basis.knockdown,
+    unit: '1',
+    source: userKnockdown
+      ? 'entered by the user'
+      : 'default 1: the imperfection allowance is carried by the design factor 3 below, as in the ASME VIII-1 UG-28 charts (from memory, derived; METHODS.md §f.6). For the EN 13445-3 basis enter κ = 0.5 with a design factor of 1.5 (from memory; METHODS.md §f.5)',
+  });
+  const elastic = common.step({
+    id: 'elastic-pressure',
+    label: 'Knocked-down elastic buckling pressure',
+    expression: 'p_e = κ·p_m',
+    substituted: `p_e = ${formatNumber(knockdown)}·${withUnit(vonMises.pressure, 'Pa')}`,
+    value: knockdown * vonMises.pressure,
+    unit: 'Pa',
+    source: 'knock-down applied to the von Mises minimum',
+  });
+  const rankine = basis.interaction === 'rankine';
+  const userInteraction = input.externalPressure?.interaction !== undefined;
+  const collapse = common.step({
+    id: 'collapse-pressure',
+    label: rankine
+      ? 'Collapse pressure, Rankine interaction of elastic buckling and yield'
+      : 'Collapse pressure, pipeline-code interaction of elastic buckling and yield',
+    expression: rankine ? 'p_c = p_e·p_y/(p_e + p_y)' : 'p_c = p_e·p_y/sqrt(p_e² + p_y²)',
+    substituted: rankine
+      ? `p_c = ${withUnit(elastic, 'Pa')}·${withUnit(plastic, 'Pa')}/(${withUnit(elastic, 'Pa')} + ${withUnit(plastic, 'Pa')})`
+      : `p_c = ${withUnit(elastic, 'Pa')}·${withUnit(plastic, 'Pa')}/sqrt((${withUnit(elastic, 'Pa')})² + (${withUnit(plastic, 'Pa')})²)`,
+    value: collapsePressure(elastic, plastic, basis.interaction),
+    unit: 'Pa',
+    source: rankine
+      ? `Rankine, 1/p_c = 1/p_e + 1/p_y (from memory; METHODS.md §f.5)${userInteraction ? '' : '; default, the more conservative of the two offered'}`
+      : 'API STD 2RD form, as seen implemented in public code (METHODS.md §f.5); less conservative than Rankine',
+  });
+  const userFactor = input.externalPressure?.designFactor !== undefined;
+  const designFactor = common.step({
+    id: 'external-design-factor',
+    label: 'Design factor on the collapse pressure',
+    expression: 'γ',
+    substituted: `γ = ${formatNumber(basis.designFactor)}`,
+    value: basis.designFactor,
+    unit: '1',
+    source: userFactor
+      ? 'entered by the user'
+      : 'default 3: the factor the ASME VIII-1 UG-28 charts imply on the predicted collapse pressure, P_a = 2·A·E/(3·D_o/t) elastic and 4·B/(3·D_o/t) plastic (from memory, derived; METHODS.md §f.6)',
+  });
+  const allowable = common.step({
+    id: 'external-allowable-pressure',
+    label: 'Allowable external pressure difference',
+    expression: 'p_allow = p_c/γ',
+    substituted: `p_allow = ${withUnit(collapse, 'Pa')}/${formatNumber(designFactor)}`,
+    value: collapse / designFactor,
+    unit: 'Pa',
+    source: 'collapse pressure over the design factor',
+  });
+
+  if (elastic > plastic) {
+    warnings.push({
+      code: 'inelastic-buckling',
+      severity: 'info',
+      message: `the elastic buckling pressure p_e (${formatNumber(elastic)} Pa) exceeds the yield pressure p_y (${formatNumber(plastic)} Pa): the shell would buckle above its proportional limit, so the elastic value is not reached; the interaction with p_y accounts for this`,
+    });
+  }
+  return {
+    vonMises: vonMises.pressure,
+    lobes: vonMises.lobes,
+    collapse,
+    allowable,
+    criticalLength: Lc,
+  };
+}
+
+function ringSpacingSteps(
+  common: Trail,
+  warnings: ValidityWarning[],
+  input: Parsed,
+  material: Material,
+  target: number,
+  externalCases: readonly ResolvedLoadCase[],
+): void {
+  const g = geometryFor(input, target);
+  common.step({
+    id: 'ring-spacing-thickness',
+    label: 'Thickness for which the ring spacing is sought (less the allowance)',
+    expression: 't_r = t_target − c',
+    substituted: `t_r = ${withUnit(target, 'm')} − ${withUnit(input.corrosionAllowance ?? 0, 'm')}`,
+    value: g.thickness,
+    unit: 'm',
+    source: 'input ringSpacingFor',
+  });
+  const label = 'Stiffening-ring spacing for the target thickness';
+  const expression =
+    'largest L with p_allow(t_r, L) >= max |p| of the outside-higher cases, by bisection in L';
+  const source =
+    'the external-pressure chain above (von Mises, knock-down, interaction, design factor) solved for L; rings do not help internal pressure, and the rings themselves must be sized (e.g. ASME VIII-1 UG-29, from memory)';
+  if (externalCases.length === 0) {
+    common.step({
+      id: 'ring-spacing',
+      label,
+      expression,
+      substituted: 'no case has the outside pressure higher: no rings are needed',
+      value: null,
+      unit: 'm',
+      source,
+    });
+    return;
+  }
+  let pressure = 0;
+  for (const lc of externalCases) pressure = Math.max(pressure, -lc.differential);
+  const found = ringSpacingFor(externalBasis(input, material), g.thickness, g.meanRadius, pressure);
+  const pText = withUnit(pressure, 'Pa');
+  if (found.kind === 'spacing') {
+    common.step({
+      id: 'ring-spacing',
+      label,
+      expression,
+      substituted: `max |p| = ${pText}; L = ${withUnit(found.length, 'm')} gives p_allow = ${withUnit(found.allowable, 'Pa')}`,
+      value: found.length,
+      unit: 'm',
+      source,
+    });
+    return;
+  }
+  common.step({
+    id: 'ring-spacing',
+    label,
+    expression,
+    substituted:
+      found.kind === 'not-needed'
+        ? `max |p| = ${pText} <= p_allow of an unstiffened long shell = ${withUnit(found.allowable, 'Pa')}: no rings are needed`
+        : `max |p| = ${pText} >= p_y/γ = ${withUnit(found.allowable, 'Pa')}: no ring spacing works, the wall yields first`,
+    value: null,
+    unit: 'm',
+    source,
+  });
+  if (found.kind === 'impossible') {
+    warnings.push({
+      code: 'ring-spacing-impossible',
+      severity: 'caution',
+      message: `no ring spacing lets a ${formatNumber(target * 1000)} mm wall carry ${formatNumber(pressure)} Pa: even with rings close together the allowable tends to p_y/γ = ${formatNumber(found.allowable)} Pa`,
+    });
+  }
+}
+
+/** The cylindrical-shell method: internal pressure (thin wall, Lamé, UG-27) and external pressure (buckling, collapse, ring spacing). */
+export const cylindricalShell = defineMethod({
+  kind: 'cylindrical-shell',
+  name: 'Cylindrical shell',
+  description:
+    'Cylindrical shell (vessel, chamber, drum) for every load case: inside higher, thin-wall and Lamé stresses and the ASME VIII-1 UG-27 thickness and MAWP; outside higher (vacuum), elastic buckling (Bresse, von Mises with its lobe number, Windenburg–Trilling), plastic collapse, their interaction with a knock-down and a design factor, the critical length and the stiffening-ring spacing for a target thickness. The length is the unsupported length between rings or heads; between dished heads add about 1/3 of each head depth (ASME UG-28, from memory).',
+  schema: cylindricalShellSchema,
+  compute(input, context) {
+    const material = resolveMaterial(input.material);
+    const common = new Trail();
+    const warnings: ValidityWarning[] = [];
+    const g = geometryFor(input, input.thickness);
+    const allowance = input.corrosionAllowance ?? 0;
+    const outside = input.diameterBasis === 'outside';
+    common.step({
+      id: 'outside-diameter',
+      label: 'Outside diameter',
+      expression: outside ? 'D_o = D (given as outside diameter)' : 'D_o = D_i + 2·t_nominal',
+      substituted: outside
+        ? `D_o = ${withUnit(input.diameter, 'm')}`
+        : `D_o = ${withUnit(input.diameter, 'm')} + 2·${withUnit(input.thickness, 'm')}`,
+      value: g.outsideDiameter,
+      unit: 'm',
+      source: SOURCE_GEOMETRY,
+    });
+    const t = common.step({
+      id: 'effective-thickness',
+      label: 'Thickness used for strength (corrosion allowance off)',
+      expression: 't = t_nominal − c',
+      substituted: `t = ${withUnit(input.thickness, 'm')} − ${withUnit(allowance, 'm')}`,
+      value: g.thickness,
+      unit: 'm',
+      source: 'corrosion allowance taken off on the inside (common practice, no source)',
+    });
+    common.step({
+      id: 'inside-radius',
+      label: 'Inside radius, corroded',
+      expression: outside ? 'R = D_o/2 − t' : 'R = D_i/2 + c',
+      substituted: outside
+        ? `R = ${withUnit(g.outsideDiameter, 'm')}/2 − ${withUnit(t, 'm')}`
+        : `R = ${withUnit(input.diameter, 'm')}/2 + ${withUnit(allowance, 'm')}`,
+      value: g.insideRadius,
+      unit: 'm',
+      source: SOURCE_GEOMETRY,
+    });
+    common.step({
+      id: 'mean-radius',
+      label: 'Mean radius',
+      expression: 'r = R + t/2',
+      substituted: `r = ${withUnit(g.insideRadius, 'm')} + ${withUnit(t, 'm')}/2`,
+      value: g.meanRadius,
+      unit: 'm',
+      source: SOURCE_GEOMETRY,
+    });
+    common.step({
+      id: 'unsupported-length',
+      label: 'Unsupported length between stiffening rings or heads',
+      expression: 'L',
+      substituted: `L = ${withUnit(input.length, 'm')}`,
+      value: input.length,
+      unit: 'm',
+      source:
+        'input; for a shell between dished heads add about 1/3 of each head depth (ASME VIII-1 UG-28, from memory)',
+    });
+    common.step({
+      id: 'elastic-modulus',
+      label: 'Young’s modulus and Poisson’s ratio',
+      expression: 'E, ν',
+      substituted: `E = ${withUnit(material.elasticModulus, 'Pa')}, ν = ${formatNumber(material.poissonRatio)}`,
+      value: material.elasticModulus,
+      unit: 'Pa',
+      source: `${material.name}: ${material.sources.elasticModulus}; ν: ${material.sources.poissonRatio}`,
+    });
+
+    const internalCases = context.loadCases.filter((lc) => lc.direction === 'internal-over');
+    const externalCases = context.loadCases.filter((lc) => lc.direction === 'external-over');
+    const internal = internalCases.length > 0 ? internalCapacity(common, input, material, g) : null;
+    const external =
+      externalCases.length > 0 ? externalSummary(common, warnings, input, material, g) : null;
+    if (input.ringSpacingFor !== undefined) {
+      ringSpacingSteps(common, warnings, input, material, input.ringSpacingFor, externalCases);
+    }
+
+    const cases = context.loadCases.map((lc) => {
+      if (lc.direction === 'internal-over' && internal)
+        return internalCaseTrail(input, g, internal, lc);
+      if (lc.direction === 'external-over' && external) return externalCaseTrail(external, lc);
+      return balancedCaseTrail(lc);
+    });
+
+    // Validity ranges (METHODS.md §e, §f; the ASME limits from memory).
+    const R = g.insideRadius;
+    if ((internal || external) && R / t < 10) {
+      warnings.push({
+        code: 'thin-wall',
+        // Under internal pressure the checks use Lamé and UG-27, which hold for thick walls;
+        // only the thin-wall stresses shown beside them lose validity. Buckling formulas do not hold.
+        severity: external ? 'outside-validity' : 'caution',
+        message: `R/t = ${formatNumber(R / t)} is below 10: ${
+          internal
+            ? 'the thin-wall hoop and longitudinal stresses do not hold (the Lamé values do)'
+            : ''
+        }${internal && external ? '; ' : ''}${
+          external
+            ? 'the thin-shell buckling formulas (Bresse, von Mises, Windenburg–Trilling) do not hold'
+            : ''
+        }`,
+      });
+    }
+    if (external && g.outsideDiameter / t < 10) {
+      warnings.push({
+        code: 'thick-shell-external',
+        severity: 'outside-validity',
+        message: `D_o/t = ${formatNumber(g.outsideDiameter / t)} is below 10: thin-shell buckling does not apply (ASME VIII-1 UG-28 uses other rules there, from memory); use a code method for thick shells`,
+      });
+    }
+    if (internal && t > R / 2) {
+      warnings.push({
+        code: 'ug27-thickness-limit',
+        severity: 'outside-validity',
+        message: `t = ${formatNumber(t)} m exceeds R/2 = ${formatNumber(R / 2)} m: the UG-27 formulas apply up to t = R/2 (from memory); the thick-wall rules of VIII-1 Appendix 1-2 do beyond. The Lamé check still holds`,
+      });
+    }
+    if (external && material.strengthBasis !== 'yield') {
+      warnings.push({
+        code: 'no-yield-stress',
+        severity: 'caution',
+        message: `${material.name} has no yield stress: its ${material.strengthBasis === 'tensile' ? 'tensile strength' : 'design strength'} stands in for σ_y in the plastic collapse pressure, which is then only nominal; brittle and polymer shells fail by buckling or fracture, and polymers creep (lower long-term E)`,
+      });
+    }
+    if (external && input.ends === 'open') {
+      warnings.push({
+        code: 'open-ends-buckling',
+        severity: 'info',
+        message:
+          'open ends: with no end load the buckling pressure (lateral pressure only) is somewhat higher than the hydrostatic von Mises value used here, which is the conservative one (METHODS.md §f.2)',
+      });
+    }
+
+    const cautions: CautionCode[] = [];
+    if (external) cautions.push('external-pressure-imperfection');
+    if (internal) cautions.push('stored-energy');
+    if (material.brittle) cautions.push('brittle-material');
+    if (material.strengthBasis === 'tensile' || material.id === 'polycarbonate')
+      cautions.push('polymer-creep');
+
+    const basis = externalBasis(input, material);
+    return {
+      title: `Cylindrical shell, ${input.ends} ends, ${material.name}`,
+      inputs: {
+        diameter: input.diameter,
+        diameterBasis: input.diameterBasis,
+        thickness: input.thickness,
+        length: input.length,
+        ends: input.ends,
+        material,
+        ...(input.allowableStress !== undefined ? { allowableStress: input.allowableStress } : {}),
+        ...(input.designFactor !== undefined ? { designFactor: input.designFactor } : {}),
+        jointEfficiency: input.jointEfficiency ?? 1,
+        ...(input.corrosionAllowance !== undefined
+          ? { corrosionAllowance: input.corrosionAllowance }
+          : {}),
+        externalPressure: {
+          knockdown: basis.knockdown,
+          designFactor: basis.designFactor,
+          interaction: basis.interaction,
+        },
+        ...(input.ringSpacingFor !== undefined ? { ringSpacingFor: input.ringSpacingFor } : {}),
+      },
+      steps: common.steps,
+      cases,
+      warnings,
+      cautions,
+    };
+  },
+  sweep: {
+    id: 'thickness',
+    label: 'Wall thickness',
+    unit: 'm',
+    get: (input) => input.thickness,
+    set: (input, value) => ({ ...input, thickness: value }),
+    upperBound: (input) => input.diameter / 2,
+  },
+  examples: [
+    {
+      name: 'Vacuum drum: 1 m outside diameter, 5 mm 304 wall, 1.2 m between rings, full vacuum and vent',
+      input: {
+        kind: 'cylindrical-shell',
+        diameter: '1000 mm',
+        diameterBasis: 'outside',
+        thickness: '5 mm',
+        length: '1.2 m',
+        ends: 'closed',
+        material: 'stainless-304',
+        ringSpacingFor: '3 mm',
+        loadCases: [
+          { name: 'Operating: full vacuum', internal: 'full vacuum' },
+          { name: 'Vent back-fill: +0.5 bar', internal: '0.5 bar(g)' },
+        ],
+      },
+    },
+    {
+      name: 'Small air receiver: 400 mm inside diameter, 6 mm steel, 10 bar and hydrotest',
+      input: {
+        kind: 'cylindrical-shell',
+        diameter: '400 mm',
+        diameterBasis: 'inside',
+        thickness: '6 mm',
+        length: '1.5 m',
+        material: 'carbon-steel',
+        allowableStress: '138 MPa',
+        jointEfficiency: 0.85,
+        corrosionAllowance: '1.5 mm',
+        loadCases: [
+          { name: 'Operating: 10 bar(g)', internal: '10 bar(g)' },
+          { name: 'Hydrotest: 1.3 × operating', internal: '10 bar(g)', factor: 1.3 },
+        ],
+      },
+    },
+  ],
+});
