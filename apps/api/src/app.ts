@@ -1,3 +1,4 @@
+import cookieParser from 'cookie-parser';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { existsSync } from 'node:fs';
@@ -6,17 +7,31 @@ import { pinoHttp } from 'pino-http';
 import type { Logger } from 'pino';
 import type { DataSource } from 'typeorm';
 import type { Config } from './config/config';
+import { signInRequired } from './auth/authenticate';
+import { csrfProtection } from './auth/csrf';
+import type { Notifier } from './domain/notifications/notifier';
+import { createServices } from './domain/services';
 import { apiNotFound, errorMiddleware } from './http/error-middleware';
+import { authRoutes } from './routes/auth.routes';
+import { componentsRoutes } from './routes/components.routes';
 import { healthRoutes } from './routes/health.routes';
+import { meRoutes } from './routes/me.routes';
+import { miscRoutes } from './routes/misc.routes';
+import { projectsRoutes } from './routes/projects.routes';
+import { revisionsRoutes } from './routes/revisions.routes';
+import type { RouteDeps } from './routes/route-deps';
+import { usersRoutes } from './routes/users.routes';
 
 export interface AppDependencies {
   readonly config: Config;
   readonly dataSource: DataSource;
   readonly logger: Logger;
+  /** Where mail will plug in; silent until then. */
+  readonly notifier?: Notifier;
 }
 
 /** Builds the Express app; no listening, no side effects beyond the object. */
-export function createApp({ config, dataSource, logger }: AppDependencies): Express {
+export function createApp({ config, dataSource, logger, notifier }: AppDependencies): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -41,14 +56,35 @@ export function createApp({ config, dataSource, logger }: AppDependencies): Expr
     pinoHttp({
       logger,
       redact: ['req.headers.cookie', 'req.headers.authorization', 'res.headers["set-cookie"]'],
+      serializers: {
+        // Invitation tokens travel in the path of GET /auth/invitations/:token: keep them out of the log.
+        req: (req: { url?: string }) => {
+          if (req.url) req.url = req.url.replace(/(\/auth\/invitations\/)[^/?#]+/, '$1[token]');
+          return req;
+        },
+      },
       customLogLevel: (_req, res, error) =>
         error || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info',
     }),
   );
   app.use(express.json({ limit: '1mb' }));
+  app.use(cookieParser());
 
+  const deps: RouteDeps = {
+    config,
+    services: createServices(dataSource, config, notifier),
+    signedIn: signInRequired(dataSource, config.auth),
+  };
   const api = express.Router();
+  api.use(csrfProtection);
   api.use(healthRoutes(dataSource));
+  api.use(authRoutes(deps));
+  api.use(meRoutes(deps));
+  api.use(usersRoutes(deps));
+  api.use(projectsRoutes(deps));
+  api.use(componentsRoutes(deps));
+  api.use(revisionsRoutes(deps));
+  api.use(miscRoutes(deps));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -19,6 +19,45 @@ const environmentSchema = z.object({
   HOOPLINE_WEB_DIST: z.string().min(1).optional(),
   /** Public base URL, used in links the API writes (mail, verify codes). */
   HOOPLINE_PUBLIC_URL: z.url().optional(),
+  /** Signs access tokens (HS256). Required in production; development and test use DEV_JWT_SECRET. */
+  HOOPLINE_JWT_SECRET: z.string().min(32, 'must be at least 32 characters').optional(),
+  /** Access-token (JWT) lifetime, seconds. */
+  HOOPLINE_ACCESS_TOKEN_TTL: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .max(86_400)
+    .default(15 * 60),
+  /** Refresh-token lifetime, seconds. */
+  HOOPLINE_REFRESH_TOKEN_TTL: z.coerce
+    .number()
+    .int()
+    .min(60)
+    .max(365 * 86_400)
+    .default(30 * 86_400),
+  /** Invitation and password-reset token lifetimes, seconds. */
+  HOOPLINE_INVITATION_TTL: z.coerce
+    .number()
+    .int()
+    .min(60)
+    .max(90 * 86_400)
+    .default(7 * 86_400),
+  HOOPLINE_PASSWORD_RESET_TTL: z.coerce
+    .number()
+    .int()
+    .min(60)
+    .max(7 * 86_400)
+    .default(3600),
+  /** Failed sign-ins allowed per account and per client address in one window. */
+  HOOPLINE_SIGN_IN_LIMIT_PER_ACCOUNT: z.coerce.number().int().min(1).default(10),
+  HOOPLINE_SIGN_IN_LIMIT_PER_ADDRESS: z.coerce.number().int().min(1).default(100),
+  HOOPLINE_SIGN_IN_WINDOW: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .default(15 * 60),
+  /** Secure flag on cookies; defaults to whether the public URL is https. */
+  HOOPLINE_COOKIE_SECURE: z.enum(['true', 'false']).optional(),
 });
 
 export type Environment = z.infer<typeof environmentSchema>;
@@ -31,7 +70,43 @@ export interface Config {
   readonly logLevel: Environment['HOOPLINE_LOG_LEVEL'];
   readonly webDist: string | undefined;
   readonly publicUrl: string;
+  readonly auth: AuthConfig;
 }
+
+export interface AuthConfig {
+  readonly jwtSecret: string;
+  /** True when jwtSecret is the fixed development secret (never in production). */
+  readonly usingDevSecret: boolean;
+  /** Seconds. */
+  readonly accessTokenTtl: number;
+  readonly refreshTokenTtl: number;
+  readonly invitationTtl: number;
+  readonly passwordResetTtl: number;
+  /**
+   * A rotated refresh token presented again within this many seconds is
+   * refused without revoking its family (two tabs refreshing at once);
+   * later it counts as reuse and revokes the family.
+   */
+  readonly refreshReuseGrace: number;
+  readonly signInLimitPerAccount: number;
+  readonly signInLimitPerAddress: number;
+  /** Seconds. */
+  readonly signInWindow: number;
+  readonly cookieSecure: boolean;
+  /** argon2id cost; OWASP's minimum (19 MiB, t = 2) normally, cheap under NODE_ENV=test. */
+  readonly argon2: {
+    readonly memoryCost: number;
+    readonly timeCost: number;
+    readonly parallelism: number;
+  };
+}
+
+/**
+ * Signs tokens in development and test when HOOPLINE_JWT_SECRET is unset. It
+ * is in the source, so it protects nothing: production refuses to start
+ * without a secret of its own.
+ */
+export const DEV_JWT_SECRET = 'hoopline-development-secret-not-for-production-use';
 
 export class ConfigError extends Error {
   override readonly name = 'ConfigError';
@@ -48,6 +123,12 @@ export function loadConfig(environment: NodeJS.ProcessEnv = process.env): Config
     throw new ConfigError(`invalid configuration:\n${lines.join('\n')}`);
   }
   const e = parsed.data;
+  if (e.NODE_ENV === 'production' && !e.HOOPLINE_JWT_SECRET) {
+    throw new ConfigError(
+      'invalid configuration:\n  HOOPLINE_JWT_SECRET: is required in production (at least 32 characters)',
+    );
+  }
+  const publicUrl = e.HOOPLINE_PUBLIC_URL ?? `http://${e.HOOPLINE_HOST}:${e.HOOPLINE_PORT}`;
   return {
     env: e.NODE_ENV,
     host: e.HOOPLINE_HOST,
@@ -55,6 +136,27 @@ export function loadConfig(environment: NodeJS.ProcessEnv = process.env): Config
     databaseUrl: e.DATABASE_URL,
     logLevel: e.HOOPLINE_LOG_LEVEL,
     webDist: e.HOOPLINE_WEB_DIST,
-    publicUrl: e.HOOPLINE_PUBLIC_URL ?? `http://${e.HOOPLINE_HOST}:${e.HOOPLINE_PORT}`,
+    publicUrl,
+    auth: {
+      jwtSecret: e.HOOPLINE_JWT_SECRET ?? DEV_JWT_SECRET,
+      usingDevSecret: !e.HOOPLINE_JWT_SECRET,
+      accessTokenTtl: e.HOOPLINE_ACCESS_TOKEN_TTL,
+      refreshTokenTtl: e.HOOPLINE_REFRESH_TOKEN_TTL,
+      invitationTtl: e.HOOPLINE_INVITATION_TTL,
+      passwordResetTtl: e.HOOPLINE_PASSWORD_RESET_TTL,
+      refreshReuseGrace: 10,
+      signInLimitPerAccount: e.HOOPLINE_SIGN_IN_LIMIT_PER_ACCOUNT,
+      signInLimitPerAddress: e.HOOPLINE_SIGN_IN_LIMIT_PER_ADDRESS,
+      signInWindow: e.HOOPLINE_SIGN_IN_WINDOW,
+      cookieSecure: e.HOOPLINE_COOKIE_SECURE
+        ? e.HOOPLINE_COOKIE_SECURE === 'true'
+        : publicUrl.startsWith('https:'),
+      // Test runs hash hundreds of passwords: the cheapest argon2id the library
+      // accepts keeps the suite fast. Never used outside NODE_ENV=test.
+      argon2:
+        e.NODE_ENV === 'test'
+          ? { memoryCost: 1024, timeCost: 1, parallelism: 1 }
+          : { memoryCost: 19_456, timeCost: 2, parallelism: 1 },
+    },
   };
 }

@@ -1,4 +1,10 @@
 import { Foundation1764640000000 } from './1764640000000-foundation';
+import { Accounts1764700000000 } from './1764700000000-accounts';
+import { ProjectsAndRevisions1764700001000 } from './1764700001000-projects-and-revisions';
 
 /** Every migration class, oldest first. Add new ones at the end. */
-export const migrations = [Foundation1764640000000];
+export const migrations = [
+  Foundation1764640000000,
+  Accounts1764700000000,
+  ProjectsAndRevisions1764700001000,
+];

@@ -1,0 +1,277 @@
+/**
+ * The demo: Larchmont Applied Materials Lab, a small fictional lab, and its
+ * equipment. Our own scenario; every name, address and number in it is
+ * invented. The seed builds it through the same services the API uses, so
+ * every report is computed by the engine and every revision hashed.
+ */
+import type { ComponentKind } from '@hoopline/calc';
+import type { Role } from '../policy/policy';
+
+export type DemoPerson = 'theo' | 'dana' | 'ravi' | 'mara';
+
+export interface DemoUser {
+  readonly key: DemoPerson;
+  readonly email: string;
+  readonly name: string;
+  readonly isAdmin: boolean;
+  /** The role this person shows in the demo, for the printed sign-in sheet. */
+  readonly headline: 'admin' | Role;
+  /** Used when the installation has no secret of its own (development, tests, e2e). */
+  readonly devPassword: string;
+  /** For the printed sign-in sheet. */
+  readonly can: string;
+}
+
+export const DEMO_DOMAIN = 'larchmont.example';
+
+export const DEMO_USERS: readonly DemoUser[] = [
+  {
+    key: 'theo',
+    headline: 'admin',
+    email: `theo.brandt@${DEMO_DOMAIN}`,
+    name: 'Theo Brandt',
+    isAdmin: true,
+    devPassword: 'theo-admin-demo-2026',
+    can: 'admin: invites people, sets memberships, reads the whole audit log; signs nothing',
+  },
+  {
+    key: 'dana',
+    headline: 'designer',
+    email: `dana.okafor@${DEMO_DOMAIN}`,
+    name: 'Dana Okafor',
+    isAdmin: false,
+    devPassword: 'dana-designer-demo-2026',
+    can: 'designer on LAM-2026-014 (enters and submits revisions); checker on LAM-2026-021',
+  },
+  {
+    key: 'ravi',
+    headline: 'checker',
+    email: `ravi.lindqvist@${DEMO_DOMAIN}`,
+    name: 'Ravi Lindqvist',
+    isAdmin: false,
+    devPassword: 'ravi-checker-demo-2026',
+    can: 'checker on LAM-2026-014 (countersigns or returns); designer on LAM-2026-021',
+  },
+  {
+    key: 'mara',
+    headline: 'fabricator',
+    email: `mara.castell@${DEMO_DOMAIN}`,
+    name: 'Mara Castell (Castell Fabrication)',
+    isAdmin: false,
+    devPassword: 'mara-fabricator-demo-2026',
+    can: 'fabricator on LAM-2026-014: sees countersigned revisions only',
+  },
+];
+
+export interface DemoStep {
+  readonly inputs: Record<string, unknown>;
+  readonly note: string;
+  /** Where this revision ends: left a draft, submitted, or decided by the checker. */
+  readonly outcome: 'draft' | 'submitted' | 'countersigned' | 'returned';
+  readonly comment?: string;
+}
+
+export interface DemoComponent {
+  readonly name: string;
+  readonly tag: string;
+  readonly kind: ComponentKind;
+  readonly steps: readonly DemoStep[];
+}
+
+export interface DemoProject {
+  readonly number: string;
+  readonly name: string;
+  readonly client: string;
+  readonly site: { altitude: number };
+  readonly notes: string;
+  readonly designer: DemoPerson;
+  readonly members: readonly { person: DemoPerson; role: Role }[];
+  readonly components: readonly DemoComponent[];
+}
+
+const fullVacuum = { name: 'Operating: full vacuum', internal: 'full vacuum' };
+const ventBackFill = { name: 'Vent back-fill: +0.2 bar', internal: '0.2 bar(g)' };
+
+export const DEMO_PROJECTS: readonly DemoProject[] = [
+  {
+    number: 'LAM-2026-014',
+    name: 'Vacuum drying line, bay 3',
+    client: 'Larchmont Applied Materials',
+    site: { altitude: 340 },
+    notes:
+      'Drying cabinet VDC-3 with its door and viewport, the process chamber and the pilot reactor head. Screening before the vendor’s code calculation.',
+    designer: 'dana',
+    members: [
+      { person: 'ravi', role: 'checker' },
+      { person: 'mara', role: 'fabricator' },
+    ],
+    components: [
+      {
+        name: 'VDC-3 cabinet door',
+        tag: 'VDC-3-D1',
+        kind: 'rectangular-plate',
+        steps: [
+          {
+            inputs: {
+              kind: 'rectangular-plate',
+              width: '600 mm',
+              height: '450 mm',
+              thickness: '15 mm',
+              edge: 'clamped',
+              material: 'stainless-304',
+              deflectionLimit: '1.5 mm',
+              loadCases: [fullVacuum, ventBackFill],
+            },
+            note: 'Door plate welded into its frame: clamped edges.',
+            outcome: 'countersigned',
+            comment:
+              'Clamped edge is right for the welded frame. Deflection within the seal limit.',
+          },
+        ],
+      },
+      {
+        name: 'VDC-3 door latches',
+        tag: 'VDC-3-L1',
+        kind: 'flat-area-load',
+        steps: [
+          {
+            inputs: {
+              kind: 'flat-area-load',
+              outline: { shape: 'rectangle', sealWidth: '620 mm', sealHeight: '470 mm' },
+              seating: 'outside',
+              fastenerCount: 2,
+              fastenerCapacity: '4 kN',
+              loadCases: [fullVacuum, ventBackFill],
+            },
+            note: 'Two cam latches on the hinge-free side.',
+            outcome: 'countersigned',
+            comment:
+              'Latch share at the vent back-fill checked against the catalogue working load.',
+          },
+          {
+            inputs: {
+              kind: 'flat-area-load',
+              outline: { shape: 'rectangle', sealWidth: '620 mm', sealHeight: '470 mm' },
+              seating: 'outside',
+              fastenerCount: 4,
+              fastenerCapacity: '4 kN',
+              loadCases: [
+                fullVacuum,
+                ventBackFill,
+                { name: 'Proof test: +0.3 bar', internal: '0.3 bar(g)' },
+              ],
+            },
+            note: 'Four latches after the proof-test case was added.',
+            outcome: 'countersigned',
+            comment: 'Proof-test case added; four latches carry it.',
+          },
+        ],
+      },
+      {
+        name: 'VDC-3 acrylic viewport',
+        tag: 'VDC-3-W1',
+        kind: 'circular-plate',
+        steps: [
+          {
+            inputs: {
+              kind: 'circular-plate',
+              diameter: '150 mm',
+              thickness: '8 mm',
+              edge: 'simply-supported',
+              material: 'cast-acrylic',
+              loadCases: [fullVacuum],
+            },
+            note: 'Viewport in the door, O-ring seated: simply supported.',
+            outcome: 'returned',
+            comment:
+              'Utilisation is over 1 at full vacuum with the brittle-material factor. Thicken the window.',
+          },
+          {
+            inputs: {
+              kind: 'circular-plate',
+              diameter: '150 mm',
+              thickness: '12 mm',
+              edge: 'simply-supported',
+              material: 'cast-acrylic',
+              loadCases: [fullVacuum],
+            },
+            note: 'Window thickened to 12 mm after the check.',
+            outcome: 'submitted',
+          },
+        ],
+      },
+      {
+        name: 'Process chamber shell',
+        tag: 'PC-1-S1',
+        kind: 'cylindrical-shell',
+        steps: [
+          {
+            inputs: {
+              kind: 'cylindrical-shell',
+              diameter: '400 mm',
+              diameterBasis: 'outside',
+              thickness: '4 mm',
+              length: '600 mm',
+              ends: 'closed',
+              material: 'stainless-304',
+              loadCases: [fullVacuum],
+            },
+            note: 'First look at the wall for full vacuum between the end flanges.',
+            outcome: 'draft',
+          },
+        ],
+      },
+      {
+        name: 'Pilot reactor top head',
+        tag: 'PR-2-H1',
+        kind: 'sphere-or-head',
+        steps: [
+          {
+            inputs: {
+              kind: 'sphere-or-head',
+              shape: 'ellipsoidal-2-1',
+              diameter: '500 mm',
+              diameterBasis: 'outside',
+              thickness: '6 mm',
+              material: 'stainless-316l',
+              loadCases: [{ name: 'Design: 6 bar(g)', internal: '6 bar(g)' }, fullVacuum],
+            },
+            note: '2:1 ellipsoidal head, internal design pressure and a vacuum case for the solvent strip.',
+            outcome: 'submitted',
+          },
+        ],
+      },
+    ],
+  },
+  {
+    number: 'LAM-2026-021',
+    name: 'Glovebox antechamber',
+    client: 'Larchmont Applied Materials',
+    site: { altitude: 340 },
+    notes: 'Small antechamber on glovebox GB-2; Ravi designs, Dana checks.',
+    designer: 'ravi',
+    members: [{ person: 'dana', role: 'checker' }],
+    components: [
+      {
+        name: 'Antechamber blind cover',
+        tag: 'GB-2-A1',
+        kind: 'circular-plate',
+        steps: [
+          {
+            inputs: {
+              kind: 'circular-plate',
+              diameter: '250 mm',
+              thickness: '10 mm',
+              edge: 'clamped',
+              material: 'aluminium-6061-t6',
+              deflectionLimit: '0.5 mm',
+              loadCases: [fullVacuum],
+            },
+            note: 'Bolted cover, treated as clamped.',
+            outcome: 'draft',
+          },
+        ],
+      },
+    ],
+  },
+];

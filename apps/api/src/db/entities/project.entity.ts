@@ -1,0 +1,45 @@
+import { Column, Entity, PrimaryColumn } from 'typeorm';
+import type { JsonObject } from './json';
+import type { UnitSystem } from './user.entity';
+
+export type ProjectRole = 'designer' | 'checker' | 'fabricator';
+
+@Entity('projects')
+export class ProjectEntity {
+  @PrimaryColumn('uuid') id: string;
+  @Column('text') number: string;
+  @Column('text') name: string;
+  @Column('text') client: string;
+  /** Site altitude, m (SI); or the ambient pressure below, never both. */
+  @Column('double precision', { name: 'site_altitude', nullable: true })
+  siteAltitude: number | null;
+  /** Site ambient pressure, Pa (absolute). */
+  @Column('double precision', { name: 'site_ambient_pressure', nullable: true })
+  siteAmbientPressure: number | null;
+  @Column('text', { name: 'unit_system' }) unitSystem: UnitSystem;
+  @Column('text') notes: string;
+  @Column('integer') version: number;
+  @Column('uuid', { name: 'created_by', nullable: true }) createdBy: string | null;
+  @Column('timestamptz', { name: 'created_at' }) createdAt: Date;
+  @Column('timestamptz', { name: 'updated_at' }) updatedAt: Date;
+}
+
+@Entity('project_members')
+export class ProjectMemberEntity {
+  @PrimaryColumn('uuid', { name: 'project_id' }) projectId: string;
+  @PrimaryColumn('uuid', { name: 'user_id' }) userId: string;
+  @Column('text') role: ProjectRole;
+  @Column('uuid', { name: 'added_by', nullable: true }) addedBy: string | null;
+  @Column('timestamptz', { name: 'added_at' }) addedAt: Date;
+}
+
+@Entity('custom_materials')
+export class CustomMaterialEntity {
+  @PrimaryColumn('uuid') id: string;
+  @Column('uuid', { name: 'project_id' }) projectId: string;
+  @Column('text') name: string;
+  /** The material as the calc's customMaterialSchema parsed it (SI numbers). */
+  @Column('jsonb') material: JsonObject;
+  @Column('uuid', { name: 'created_by', nullable: true }) createdBy: string | null;
+  @Column('timestamptz', { name: 'created_at' }) createdAt: Date;
+}

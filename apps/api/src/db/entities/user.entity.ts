@@ -1,0 +1,19 @@
+import { Column, Entity, PrimaryColumn } from 'typeorm';
+
+export type UnitSystem = 'si' | 'us';
+
+@Entity('users')
+export class UserEntity {
+  @PrimaryColumn('uuid') id: string;
+  /** Always lower case (a check constraint holds it). */
+  @Column('text') email: string;
+  @Column('text') name: string;
+  @Column('text', { name: 'password_hash' }) passwordHash: string;
+  @Column('boolean', { name: 'is_admin' }) isAdmin: boolean;
+  @Column('boolean') active: boolean;
+  @Column('text', { name: 'unit_system' }) unitSystem: UnitSystem;
+  /** Bumped to invalidate every access token already issued (password reset, deactivation). */
+  @Column('integer', { name: 'auth_epoch' }) authEpoch: number;
+  @Column('timestamptz', { name: 'created_at' }) createdAt: Date;
+  @Column('timestamptz', { name: 'updated_at' }) updatedAt: Date;
+}

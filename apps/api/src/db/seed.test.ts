@@ -1,0 +1,121 @@
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { COMPONENT_KINDS } from '@hoopline/calc';
+import { loadConfig } from '../config/config';
+import { startTestApp, type TestApp } from '../../test/test-app';
+import { DEMO_PROJECTS, DEMO_USERS } from './demo-scenario';
+import { demoPassword, seedDemo, signInSheet } from './seed-demo';
+
+describe('demo seed (real PostgreSQL)', () => {
+  let t: TestApp;
+  beforeAll(async () => {
+    t = await startTestApp();
+  });
+  afterAll(async () => {
+    await t.close();
+  });
+
+  it('loads the scenario, and a second run adds nothing and prints the same sign-ins', async () => {
+    const first = await seedDemo(t.dataSource, t.config, t.services);
+    const usersAfterFirst = (await t.dataSource.query(
+      'select id, email from users order by email',
+    )) as unknown[];
+    const revisionsAfterFirst = (await t.dataSource.query(
+      'select id, status, content_hash from revisions order by id',
+    )) as unknown[];
+    const second = await seedDemo(t.dataSource, t.config, t.services);
+    expect(second.created).toEqual({ projects: 0, components: 0, revisions: 0 });
+    expect(await t.dataSource.query('select id, email from users order by email')).toEqual(
+      usersAfterFirst,
+    );
+    expect(
+      await t.dataSource.query('select id, status, content_hash from revisions order by id'),
+    ).toEqual(revisionsAfterFirst);
+    expect(second.signIns.map((s) => [s.email, s.password])).toEqual(
+      first.signIns.map((s) => [s.email, s.password]),
+    );
+    const sheet = signInSheet(second, 'http://127.0.0.1:8080');
+    expect(sheet).toContain('dana.okafor@larchmont.example');
+    // The start command prints the same text on every start.
+    expect(sheet).toBe(signInSheet(first, 'http://127.0.0.1:8080'));
+    expect(first.created.projects).toBe(2);
+  });
+
+  it('has a revision in every status, and a countersigned one superseded by a later countersign', async () => {
+    const rows = (await t.dataSource.query(
+      `select status, count(*)::int as n, count(superseded_at)::int as superseded
+         from revisions group by status`,
+    )) as { status: string; n: number; superseded: number }[];
+    const byStatus = Object.fromEntries(rows.map((r) => [r.status, r]));
+    for (const status of ['draft', 'submitted', 'countersigned', 'returned']) {
+      expect(byStatus[status]?.n ?? 0, status).toBeGreaterThan(0);
+    }
+    expect(byStatus['countersigned']?.superseded).toBeGreaterThan(0);
+    // Sign-offs are by someone other than the author (four-eyes, through the real service).
+    const selfSigned = (await t.dataSource.query(
+      `select count(*)::int as n from sign_offs s join revisions r on r.id = s.revision_id
+        where s.checker_id = r.author_id`,
+    )) as { n: number }[];
+    expect(selfSigned[0]?.n).toBe(0);
+  });
+
+  it('loads every demo component whose kind the engine has, and names the ones it skips', async () => {
+    const result = await seedDemo(t.dataSource, t.config, t.services);
+    const names = (
+      (await t.dataSource.query('select name from components')) as { name: string }[]
+    ).map((r) => r.name);
+    for (const project of DEMO_PROJECTS) {
+      for (const component of project.components) {
+        const available = COMPONENT_KINDS.includes(component.kind);
+        expect(names.includes(component.name), `${component.name} (${component.kind})`).toBe(
+          available,
+        );
+        if (!available) {
+          expect(result.skipped.map((s) => s.component)).toContain(
+            `${project.number} ${component.name}`,
+          );
+        }
+      }
+    }
+    // A skip for any other reason than a missing kind means the demo inputs no longer fit the engine.
+    expect(result.skipped.filter((s) => !s.reason.includes('no "'))).toEqual([]);
+  });
+
+  it('the printed passwords sign the demo people in, with their per-project roles', async () => {
+    const result = await seedDemo(t.dataSource, t.config, t.services);
+    const ravi = result.signIns.find((s) => s.email.startsWith('ravi'))!;
+    const res = await request(t.server)
+      .post('/api/auth/sign-in')
+      .send({ email: ravi.email, password: ravi.password })
+      .expect(200);
+    const roles = Object.fromEntries(
+      (res.body.memberships as { projectNumber: string; role: string }[]).map((m) => [
+        m.projectNumber,
+        m.role,
+      ]),
+    );
+    expect(roles).toEqual({ 'LAM-2026-014': 'checker', 'LAM-2026-021': 'designer' });
+    expect(result.signIns).toHaveLength(DEMO_USERS.length);
+  });
+
+  it('derives installation-specific passwords from the secret outside development', () => {
+    const url = 'postgres://u:p@127.0.0.1:5432/db';
+    const dev = loadConfig({ DATABASE_URL: url, NODE_ENV: 'test' });
+    const prodA = loadConfig({
+      DATABASE_URL: url,
+      NODE_ENV: 'production',
+      HOOPLINE_JWT_SECRET: 'a'.repeat(40),
+    });
+    const prodB = loadConfig({
+      DATABASE_URL: url,
+      NODE_ENV: 'production',
+      HOOPLINE_JWT_SECRET: 'b'.repeat(40),
+    });
+    const dana = DEMO_USERS.find((u) => u.key === 'dana')!;
+    expect(demoPassword(dev, dana)).toBe(dana.devPassword);
+    expect(demoPassword(prodA, dana)).not.toBe(dana.devPassword);
+    expect(demoPassword(prodA, dana)).toBe(demoPassword(prodA, dana));
+    expect(demoPassword(prodA, dana)).not.toBe(demoPassword(prodB, dana));
+    expect(demoPassword(prodA, dana)).toMatch(/^[A-Za-z0-9]{4}(-[A-Za-z0-9]{4}){3}$/);
+  });
+});

@@ -1,0 +1,373 @@
+import { randomUUID } from 'node:crypto';
+import type { DataSource, EntityManager } from 'typeorm';
+import { IsNull } from 'typeorm';
+import type { AuthConfig } from '../../config/config';
+import type { IssuedSession } from '../../auth/cookies';
+import type { Passwords } from '../../auth/passwords';
+import { hashToken, randomToken, signAccessToken, verifyAccessToken } from '../../auth/tokens';
+import { InvitationEntity } from '../../db/entities/invitation.entity';
+import { PasswordResetEntity } from '../../db/entities/password-reset.entity';
+import { RefreshTokenEntity } from '../../db/entities/refresh-token.entity';
+import { UserEntity } from '../../db/entities/user.entity';
+import { AppError, badRequest, conflict, notFound, unauthorized } from '../../http/errors';
+import type { Actor } from '../../policy/policy';
+import { recordAudit } from '../audit/audit.service';
+import type { Notifier } from '../notifications/notifier';
+import { rows, run } from '../sql';
+import { meView, type MeView } from '../users/user-views';
+
+export interface SignedInResult {
+  readonly me: MeView;
+  readonly session: IssuedSession;
+}
+
+const invalidCredentials = () =>
+  new AppError(401, 'invalid_credentials', 'the e-mail address or the password is wrong');
+const invalidToken = () =>
+  badRequest('invalid_token', 'this link is invalid, used or expired: ask for a new one');
+
+export const normaliseEmail = (email: string) => email.trim().toLowerCase();
+
+/**
+ * Sessions (sign-in, refresh rotation with reuse detection, sign-out),
+ * accepting invitations and password resets. Refresh tokens and one-time
+ * tokens are stored only as SHA-256 hashes.
+ */
+export class AuthService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly auth: AuthConfig,
+    private readonly passwords: Passwords,
+    private readonly notifier: Notifier,
+  ) {}
+
+  async signIn(email: string, password: string): Promise<SignedInResult> {
+    const user = await this.dataSource
+      .getRepository(UserEntity)
+      .findOneBy({ email: normaliseEmail(email) });
+    const ok = user
+      ? await this.passwords.verify(user.passwordHash, password)
+      : await this.passwords.verifyNothing(password);
+    if (!user || !ok || !user.active) throw invalidCredentials();
+    return this.dataSource.transaction(async (manager) => {
+      const session = await this.issueSession(manager, user, randomUUID());
+      await recordAudit(manager, {
+        actorId: user.id,
+        action: 'session.signed_in',
+        entityType: 'user',
+        entityId: user.id,
+      });
+      return { me: await meView(manager, user), session };
+    });
+  }
+
+  /** Rotates a refresh token: the old one is spent, a new one of the same family issued. */
+  async refresh(refreshToken: string | undefined): Promise<SignedInResult> {
+    if (!refreshToken) throw unauthorized('no session to refresh: sign in');
+    const outcome = await this.dataSource.transaction(async (manager) => {
+      const token = await manager.findOne(RefreshTokenEntity, {
+        where: { tokenHash: hashToken(refreshToken) },
+        lock: { mode: 'pessimistic_write' },
+      });
+      if (!token) return { kind: 'invalid' as const };
+      if (token.revokedAt) {
+        const age = (Date.now() - token.revokedAt.getTime()) / 1000;
+        if (token.revokedReason === 'rotated' && age <= this.auth.refreshReuseGrace) {
+          return { kind: 'superseded' as const };
+        }
+        if (token.revokedReason === 'rotated') {
+          // A spent token came back: someone holds a copy. End the whole family.
+          await this.revokeFamily(manager, token.familyId, 'reuse');
+          await recordAudit(manager, {
+            actorId: token.userId,
+            action: 'session.reuse_detected',
+            entityType: 'user',
+            entityId: token.userId,
+            after: { family: token.familyId },
+          });
+          return { kind: 'reused' as const };
+        }
+        return { kind: 'invalid' as const };
+      }
+      if (token.expiresAt.getTime() <= Date.now()) return { kind: 'expired' as const };
+      const user = await manager.findOneBy(UserEntity, { id: token.userId });
+      if (!user || !user.active) return { kind: 'invalid' as const };
+      const session = await this.issueSession(manager, user, token.familyId, token.id);
+      return { kind: 'ok' as const, result: { me: await meView(manager, user), session } };
+    });
+    switch (outcome.kind) {
+      case 'ok':
+        return outcome.result;
+      case 'superseded':
+        throw new AppError(
+          401,
+          'refresh_superseded',
+          'this session was refreshed a moment ago by another request: retry with the new cookies',
+        );
+      case 'reused':
+        throw new AppError(
+          401,
+          'refresh_reused',
+          'this session was ended because an old refresh token was used again: sign in',
+        );
+      case 'expired':
+        throw new AppError(401, 'refresh_expired', 'your session has expired: sign in again');
+      default:
+        throw unauthorized('your session has ended: sign in again');
+    }
+  }
+
+  /**
+   * Ends the session of the presented cookies: the refresh token's family is
+   * revoked. Works with an expired access token as long as the refresh token
+   * lives; with neither, 401.
+   */
+  async signOut(refreshToken: string | undefined, accessToken: string | undefined): Promise<void> {
+    const access = accessToken ? verifyAccessToken(accessToken, this.auth.jwtSecret) : undefined;
+    await this.dataSource.transaction(async (manager) => {
+      const token = refreshToken
+        ? await manager.findOneBy(RefreshTokenEntity, { tokenHash: hashToken(refreshToken) })
+        : null;
+      const live =
+        token && !token.revokedAt && token.expiresAt.getTime() > Date.now() ? token : null;
+      const userId = live?.userId ?? (access?.ok ? access.claims.sub : undefined);
+      if (!userId) throw unauthorized();
+      if (live) await this.revokeFamily(manager, live.familyId, 'signed-out');
+      await recordAudit(manager, {
+        actorId: userId,
+        action: 'session.signed_out',
+        entityType: 'user',
+        entityId: userId,
+      });
+    });
+  }
+
+  async invitationByToken(token: string): Promise<{ email: string; name: string }> {
+    const invitation = await this.openInvitation(this.dataSource.manager, token);
+    if (!invitation) throw notFound('invitation');
+    return { email: invitation.email, name: invitation.name };
+  }
+
+  async acceptInvitation(token: string, name: string, password: string): Promise<SignedInResult> {
+    const passwordHash = await this.passwords.hash(password);
+    return this.dataSource.transaction(async (manager) => {
+      const invitation = await this.openInvitation(manager, token, true);
+      if (!invitation) throw invalidToken();
+      const taken = await manager.findOneBy(UserEntity, { email: invitation.email });
+      if (taken) throw conflict('email_taken', 'an account with this e-mail address exists');
+      const now = new Date();
+      const user: UserEntity = Object.assign(new UserEntity(), {
+        id: randomUUID(),
+        email: invitation.email,
+        name,
+        passwordHash,
+        isAdmin: invitation.isAdmin,
+        active: true,
+        unitSystem: 'si' as const,
+        authEpoch: 0,
+        createdAt: now,
+        updatedAt: now,
+      });
+      await manager.insert(UserEntity, user);
+      await manager.update(
+        InvitationEntity,
+        { id: invitation.id },
+        { acceptedAt: now, acceptedUserId: user.id },
+      );
+      await recordAudit(manager, {
+        actorId: user.id,
+        action: 'invitation.accepted',
+        entityType: 'invitation',
+        entityId: invitation.id,
+        after: { userId: user.id, email: user.email, isAdmin: user.isAdmin },
+      });
+      const session = await this.issueSession(manager, user, randomUUID());
+      return { me: await meView(manager, user), session };
+    });
+  }
+
+  /** Always succeeds from the caller's view (202), so it does not tell who has an account. */
+  async requestPasswordReset(email: string): Promise<void> {
+    const user = await this.dataSource
+      .getRepository(UserEntity)
+      .findOneBy({ email: normaliseEmail(email) });
+    if (!user || !user.active) return;
+    const { token, expiresAt } = await this.dataSource.transaction((manager) =>
+      this.createPasswordReset(manager, user, null),
+    );
+    this.notifier.passwordResetRequested({ email: user.email, name: user.name, token, expiresAt });
+  }
+
+  /** A one-time reset token for a user; earlier unused ones stop working. */
+  async createPasswordReset(
+    manager: EntityManager,
+    user: UserEntity,
+    createdBy: string | null,
+  ): Promise<{ token: string; expiresAt: Date }> {
+    const token = randomToken();
+    const now = new Date();
+    const expiresAt = new Date(now.getTime() + this.auth.passwordResetTtl * 1000);
+    await manager.update(
+      PasswordResetEntity,
+      { userId: user.id, usedAt: IsNull() },
+      { usedAt: now },
+    );
+    await manager.insert(PasswordResetEntity, {
+      id: randomUUID(),
+      userId: user.id,
+      tokenHash: hashToken(token),
+      createdBy,
+      createdAt: now,
+      expiresAt,
+      usedAt: null,
+    });
+    await recordAudit(manager, {
+      actorId: createdBy ?? user.id,
+      action: 'password_reset.issued',
+      entityType: 'user',
+      entityId: user.id,
+      after: { by: createdBy ? 'admin' : 'request', expiresAt: expiresAt.toISOString() },
+    });
+    return { token, expiresAt };
+  }
+
+  async completePasswordReset(token: string, password: string): Promise<void> {
+    const passwordHash = await this.passwords.hash(password);
+    await this.dataSource.transaction(async (manager) => {
+      const reset = await manager.findOne(PasswordResetEntity, {
+        where: { tokenHash: hashToken(token) },
+        lock: { mode: 'pessimistic_write' },
+      });
+      if (!reset || reset.usedAt || reset.expiresAt.getTime() <= Date.now()) throw invalidToken();
+      const user = await manager.findOneBy(UserEntity, { id: reset.userId });
+      if (!user || !user.active) throw invalidToken();
+      await manager.update(PasswordResetEntity, { id: reset.id }, { usedAt: new Date() });
+      await this.setPassword(manager, user, passwordHash);
+      await recordAudit(manager, {
+        actorId: user.id,
+        action: 'password_reset.completed',
+        entityType: 'user',
+        entityId: user.id,
+      });
+    });
+  }
+
+  /** Changes the actor's own password: every session ends, this one gets fresh cookies. */
+  async changePassword(
+    actor: Actor,
+    currentPassword: string,
+    newPassword: string,
+  ): Promise<IssuedSession> {
+    const user = await this.dataSource.getRepository(UserEntity).findOneByOrFail({ id: actor.id });
+    if (!(await this.passwords.verify(user.passwordHash, currentPassword))) {
+      throw new AppError(400, 'wrong_password', 'the current password is wrong', [
+        { path: 'currentPassword', message: 'is wrong' },
+      ]);
+    }
+    const passwordHash = await this.passwords.hash(newPassword);
+    return this.dataSource.transaction(async (manager) => {
+      const updated = await this.setPassword(manager, user, passwordHash);
+      await recordAudit(manager, {
+        actorId: actor.id,
+        action: 'password.changed',
+        entityType: 'user',
+        entityId: actor.id,
+      });
+      return this.issueSession(manager, updated, randomUUID());
+    });
+  }
+
+  /** Ends every session of a user at once: refresh tokens revoked, access tokens void. */
+  async endAllSessions(manager: EntityManager, userId: string, reason: string): Promise<void> {
+    await run(
+      manager,
+      `update refresh_tokens set revoked_at = now(), revoked_reason = $2
+        where user_id = $1 and revoked_at is null`,
+      [userId, reason],
+    );
+    await run(manager, 'update users set auth_epoch = auth_epoch + 1 where id = $1', [userId]);
+  }
+
+  private async setPassword(
+    manager: EntityManager,
+    user: UserEntity,
+    passwordHash: string,
+  ): Promise<UserEntity> {
+    await this.endAllSessions(manager, user.id, 'password-changed');
+    await manager.update(UserEntity, { id: user.id }, { passwordHash, updatedAt: new Date() });
+    return manager.findOneByOrFail(UserEntity, { id: user.id });
+  }
+
+  private async openInvitation(
+    manager: EntityManager,
+    token: string,
+    lock = false,
+  ): Promise<InvitationEntity | null> {
+    const invitation = await manager.findOne(InvitationEntity, {
+      where: { tokenHash: hashToken(token) },
+      ...(lock ? { lock: { mode: 'pessimistic_write' as const } } : {}),
+    });
+    if (
+      !invitation ||
+      invitation.acceptedAt ||
+      invitation.revokedAt ||
+      invitation.expiresAt.getTime() <= Date.now()
+    ) {
+      return null;
+    }
+    return invitation;
+  }
+
+  private async revokeFamily(manager: EntityManager, familyId: string, reason: string) {
+    await run(
+      manager,
+      `update refresh_tokens set revoked_at = now(), revoked_reason = $2
+        where family_id = $1 and revoked_at is null`,
+      [familyId, reason],
+    );
+  }
+
+  private async issueSession(
+    manager: EntityManager,
+    user: UserEntity,
+    familyId: string,
+    replacing?: string,
+  ): Promise<IssuedSession> {
+    const refreshToken = randomToken();
+    const id = randomUUID();
+    const now = new Date();
+    await manager.insert(RefreshTokenEntity, {
+      id,
+      userId: user.id,
+      familyId,
+      tokenHash: hashToken(refreshToken),
+      createdAt: now,
+      expiresAt: new Date(now.getTime() + this.auth.refreshTokenTtl * 1000),
+      revokedAt: null,
+      revokedReason: null,
+      replacedBy: null,
+    });
+    if (replacing) {
+      await manager.update(
+        RefreshTokenEntity,
+        { id: replacing },
+        { revokedAt: now, revokedReason: 'rotated', replacedBy: id },
+      );
+    }
+    // Old, spent tokens of this user are of no further use: keep the table small.
+    await rows(
+      manager,
+      `delete from refresh_tokens where user_id = $1 and expires_at < now() - interval '1 day'`,
+      [user.id],
+    );
+    return {
+      accessToken: signAccessToken(
+        { sub: user.id, epoch: user.authEpoch },
+        this.auth.jwtSecret,
+        this.auth.accessTokenTtl,
+      ),
+      refreshToken,
+      csrfToken: randomToken(),
+    };
+  }
+}

@@ -1,0 +1,249 @@
+import { randomUUID } from 'node:crypto';
+import type { DataSource, EntityManager } from 'typeorm';
+import { ComponentEntity } from '../../db/entities/component.entity';
+import { RevisionEntity } from '../../db/entities/revision.entity';
+import { forbidden } from '../../http/errors';
+import { pageOf, type Page, type PageRequest } from '../../http/pagination';
+import { canDesign, seesOnlyIssued, type Actor, type Decision } from '../../policy/policy';
+import { recordAudit } from '../audit/audit.service';
+import { requireProjectStanding } from '../projects/project-access';
+import { projectSite, staleVersion } from '../projects/projects.service';
+import { computeContent, contentHash, verdictOf } from '../revisions/revision-content';
+import {
+  revisionView,
+  summariesByIds,
+  type RevisionSummary,
+  type RevisionView,
+} from '../revisions/revision-views';
+import { Where, containsPattern, isoRequired, paged } from '../sql';
+import { requireComponent } from './component-access';
+
+export interface ComponentView {
+  readonly id: string;
+  readonly projectId: string;
+  readonly name: string;
+  readonly kind: string;
+  readonly tag: string;
+  readonly version: number;
+  readonly createdAt: string;
+  readonly updatedAt: string;
+  readonly latestRevision: RevisionSummary | null;
+  readonly issuedRevision: RevisionSummary | null;
+}
+
+function enforce(decision: Decision) {
+  if (!decision.allowed) throw forbidden(decision.code, decision.reason);
+}
+
+/** Builds component views; fabricators see the issued revision as the latest. */
+export async function componentViews(
+  manager: EntityManager,
+  components: readonly ComponentEntity[],
+  onlyIssued: boolean,
+): Promise<ComponentView[]> {
+  const ids = components.flatMap((c) =>
+    [onlyIssued ? null : c.latestRevisionId, c.issuedRevisionId].filter((x): x is string => !!x),
+  );
+  const summaries = await summariesByIds(manager, ids);
+  return components.map((c) => {
+    const issued = c.issuedRevisionId ? (summaries.get(c.issuedRevisionId) ?? null) : null;
+    const latest = onlyIssued
+      ? issued
+      : c.latestRevisionId
+        ? (summaries.get(c.latestRevisionId) ?? null)
+        : null;
+    return {
+      id: c.id,
+      projectId: c.projectId,
+      name: c.name,
+      kind: c.kind,
+      tag: c.tag,
+      version: c.version,
+      createdAt: isoRequired(c.createdAt),
+      updatedAt: isoRequired(c.updatedAt),
+      latestRevision: latest,
+      issuedRevision: issued,
+    };
+  });
+}
+
+/** Components of a project: listing, creating (with revision 1), renaming. */
+export class ComponentsService {
+  constructor(private readonly dataSource: DataSource) {}
+
+  async list(
+    actor: Actor,
+    projectId: string,
+    query: PageRequest & { q?: string | undefined; kind?: string | undefined },
+  ): Promise<Page<ComponentView>> {
+    const manager = this.dataSource.manager;
+    const standing = await requireProjectStanding(manager, actor, projectId);
+    const onlyIssued = seesOnlyIssued(standing);
+    const w = new Where().add('c.project_id = ?', projectId);
+    if (onlyIssued) w.add('c.issued_revision_id is not null');
+    if (query.q)
+      w.add(
+        '(c.name ilike ? or c.tag ilike ?)',
+        containsPattern(query.q),
+        containsPattern(query.q),
+      );
+    if (query.kind) w.add('c.kind = ?', query.kind);
+    const { rows: found, total } = await paged<{ id: string }>(
+      manager,
+      {
+        columns: 'c.id',
+        from: 'components c',
+        where: w.where,
+        params: w.params,
+        orderBy: 'lower(c.name), c.id',
+      },
+      query,
+    );
+    const entities = found.length
+      ? await manager
+          .getRepository(ComponentEntity)
+          .createQueryBuilder('c')
+          .where('c.id in (:...ids)', { ids: found.map((r) => r.id) })
+          .getMany()
+      : [];
+    const byId = new Map(entities.map((c) => [c.id, c]));
+    const ordered = found.map((r) => byId.get(r.id)!);
+    return pageOf(await componentViews(manager, ordered, onlyIssued), query, total);
+  }
+
+  async create(
+    actor: Actor,
+    projectId: string,
+    input: { name: string; tag?: string | undefined; inputs: unknown; note?: string | undefined },
+  ): Promise<{ component: ComponentView; revision: RevisionView }> {
+    return this.dataSource.transaction(async (manager) => {
+      const standing = await requireProjectStanding(manager, actor, projectId);
+      enforce(canDesign(standing));
+      const content = computeContent(input.inputs, projectSite(standing.project));
+      const now = new Date();
+      const component: ComponentEntity = Object.assign(new ComponentEntity(), {
+        id: randomUUID(),
+        projectId,
+        name: input.name,
+        kind: String(content.inputs['kind']),
+        tag: input.tag ?? '',
+        version: 1,
+        latestRevisionId: null,
+        issuedRevisionId: null,
+        createdBy: actor.id,
+        createdAt: now,
+        updatedAt: now,
+      });
+      await manager.insert(ComponentEntity, component);
+      const revision = await insertRevision(
+        manager,
+        actor,
+        component,
+        1,
+        content,
+        input.note ?? '',
+      );
+      await manager.update(
+        ComponentEntity,
+        { id: component.id },
+        { latestRevisionId: revision.id },
+      );
+      component.latestRevisionId = revision.id;
+      await recordAudit(manager, {
+        actorId: actor.id,
+        action: 'component.created',
+        entityType: 'component',
+        entityId: component.id,
+        projectId,
+        after: { name: component.name, kind: component.kind, tag: component.tag },
+      });
+      const [view] = await componentViews(manager, [component], false);
+      return { component: view!, revision: await revisionView(manager, revision.id) };
+    });
+  }
+
+  async get(actor: Actor, componentId: string): Promise<ComponentView> {
+    const manager = this.dataSource.manager;
+    const { component, standing } = await requireComponent(manager, actor, componentId);
+    const [view] = await componentViews(manager, [component], seesOnlyIssued(standing));
+    return view!;
+  }
+
+  async update(
+    actor: Actor,
+    componentId: string,
+    patch: { name?: string | undefined; tag?: string | undefined; version: number },
+  ): Promise<ComponentView> {
+    return this.dataSource.transaction(async (manager) => {
+      const { component: before, standing } = await requireComponent(manager, actor, componentId, {
+        lock: true,
+      });
+      enforce(canDesign(standing));
+      if (before.version !== patch.version) throw staleVersion(before.version);
+      const changes: Partial<ComponentEntity> = {
+        version: before.version + 1,
+        updatedAt: new Date(),
+      };
+      if (patch.name !== undefined) changes.name = patch.name;
+      if (patch.tag !== undefined) changes.tag = patch.tag;
+      await manager.update(ComponentEntity, { id: componentId }, changes);
+      const after = await manager.findOneByOrFail(ComponentEntity, { id: componentId });
+      await recordAudit(manager, {
+        actorId: actor.id,
+        action: 'component.updated',
+        entityType: 'component',
+        entityId: componentId,
+        projectId: after.projectId,
+        before: { name: before.name, tag: before.tag, version: before.version },
+        after: { name: after.name, tag: after.tag, version: after.version },
+      });
+      const [view] = await componentViews(manager, [after], false);
+      return view!;
+    });
+  }
+}
+
+/** Writes a new, immutable revision (draft) and its audit event. */
+export async function insertRevision(
+  manager: EntityManager,
+  actor: Actor,
+  component: ComponentEntity,
+  number: number,
+  content: ReturnType<typeof computeContent>,
+  note: string,
+): Promise<RevisionEntity> {
+  const revision: RevisionEntity = Object.assign(new RevisionEntity(), {
+    id: randomUUID(),
+    componentId: component.id,
+    projectId: component.projectId,
+    number,
+    status: 'draft' as const,
+    note,
+    inputs: content.inputs,
+    engineVersion: content.engineVersion,
+    report: content.report,
+    contentHash: contentHash(content),
+    verdict: verdictOf(content.report),
+    authorId: actor.id,
+    createdAt: new Date(),
+    submittedAt: null,
+    decidedAt: null,
+    supersededAt: null,
+    supersededBy: null,
+  });
+  await manager.insert(RevisionEntity, revision);
+  await recordAudit(manager, {
+    actorId: actor.id,
+    action: 'revision.created',
+    entityType: 'revision',
+    entityId: revision.id,
+    projectId: component.projectId,
+    after: {
+      componentId: component.id,
+      number,
+      verdict: revision.verdict,
+      contentHash: revision.contentHash,
+    },
+  });
+  return revision;
+}

@@ -1,0 +1,434 @@
+import { randomUUID } from 'node:crypto';
+import type { DataSource, EntityManager } from 'typeorm';
+import { STANDARD_ATMOSPHERE, ambientPressureAtAltitude } from '@hoopline/calc';
+import {
+  CustomMaterialEntity,
+  ProjectEntity,
+  ProjectMemberEntity,
+} from '../../db/entities/project.entity';
+import { UserEntity, type UnitSystem } from '../../db/entities/user.entity';
+import { toJson, type JsonObject } from '../../db/entities/json';
+import { conflict, forbidden, notFound } from '../../http/errors';
+import { pageOf, type Page, type PageRequest } from '../../http/pagination';
+import {
+  canCreateProject,
+  canEditProject,
+  canManageMaterials,
+  canManageMembers,
+  type Actor,
+  type Decision,
+  type Role,
+} from '../../policy/policy';
+import { recordAudit } from '../audit/audit.service';
+import { Where, containsPattern, iso, isoRequired, paged, rows } from '../sql';
+import { requireProjectStanding } from './project-access';
+
+export type SiteValue = { altitude?: number | undefined; ambientPressure?: number | undefined };
+
+export interface ProjectView {
+  readonly id: string;
+  readonly number: string;
+  readonly name: string;
+  readonly client: string;
+  readonly site: SiteValue;
+  /** Pa, absolute: from the altitude (standard atmosphere), as given, or sea level. */
+  readonly ambientPressure: number;
+  readonly unitSystem: UnitSystem;
+  readonly notes: string;
+  readonly version: number;
+  readonly createdAt: string;
+  readonly updatedAt: string;
+  readonly myRole: Role | null;
+}
+
+export interface MemberView {
+  readonly user: { id: string; name: string; email: string };
+  readonly role: Role;
+  readonly addedAt: string;
+}
+
+export interface MaterialView {
+  readonly id: string;
+  readonly name: string;
+  readonly material: JsonObject;
+  readonly createdAt: string;
+}
+
+export interface ProjectInput {
+  readonly number: string;
+  readonly name: string;
+  readonly client?: string | undefined;
+  readonly site?: SiteValue | undefined;
+  readonly unitSystem: UnitSystem;
+  readonly notes?: string | undefined;
+}
+
+export interface ProjectPatch {
+  readonly number?: string | undefined;
+  readonly name?: string | undefined;
+  readonly client?: string | undefined;
+  readonly site?: SiteValue | null | undefined;
+  readonly unitSystem?: UnitSystem | undefined;
+  readonly notes?: string | undefined;
+  readonly version: number;
+}
+
+export function projectSite(p: ProjectEntity): SiteValue {
+  if (p.siteAltitude !== null) return { altitude: p.siteAltitude };
+  if (p.siteAmbientPressure !== null) return { ambientPressure: p.siteAmbientPressure };
+  return {};
+}
+
+export function projectView(p: ProjectEntity, myRole: Role | null): ProjectView {
+  return {
+    id: p.id,
+    number: p.number,
+    name: p.name,
+    client: p.client,
+    site: projectSite(p),
+    ambientPressure:
+      p.siteAmbientPressure ??
+      (p.siteAltitude !== null ? ambientPressureAtAltitude(p.siteAltitude) : STANDARD_ATMOSPHERE),
+    unitSystem: p.unitSystem,
+    notes: p.notes,
+    version: p.version,
+    createdAt: isoRequired(p.createdAt),
+    updatedAt: isoRequired(p.updatedAt),
+    myRole,
+  };
+}
+
+function enforce(decision: Decision) {
+  if (!decision.allowed) throw forbidden(decision.code, decision.reason);
+}
+
+const SORTS = {
+  number: 'lower(p.number)',
+  name: 'lower(p.name)',
+  client: 'lower(p.client)',
+  updatedAt: 'p.updated_at',
+} as const;
+
+export type ProjectSort = keyof typeof SORTS;
+
+function isUniqueViolation(error: unknown): boolean {
+  return (error as { code?: string } | null)?.code === '23505';
+}
+
+/** Projects, their members and their custom materials. */
+export class ProjectsService {
+  constructor(private readonly dataSource: DataSource) {}
+
+  async list(
+    actor: Actor,
+    query: PageRequest & { q?: string | undefined; sort: ProjectSort; order: 'asc' | 'desc' },
+  ): Promise<Page<ProjectView>> {
+    const w = new Where();
+    w.params.push(actor.id); // $1, in the membership join
+    w.add('(? or m.user_id is not null)', actor.isAdmin);
+    if (query.q) {
+      const like = containsPattern(query.q);
+      w.add('(p.number ilike ? or p.name ilike ? or p.client ilike ?)', like, like, like);
+    }
+    const { rows: found, total } = await paged<{ id: string; role: Role | null }>(
+      this.dataSource.manager,
+      {
+        columns: 'p.id, m.role',
+        from: `projects p left join project_members m on m.project_id = p.id and m.user_id = $1`,
+        where: w.where,
+        params: w.params,
+        orderBy: `${SORTS[query.sort]} ${query.order}, p.id`,
+      },
+      query,
+    );
+    const projects = await this.byIds(found.map((r) => r.id));
+    return pageOf(
+      found.map((r) => projectView(projects.get(r.id)!, r.role)),
+      query,
+      total,
+    );
+  }
+
+  async create(actor: Actor, input: ProjectInput): Promise<ProjectView> {
+    enforce(canCreateProject(actor));
+    try {
+      return await this.dataSource.transaction(async (manager) => {
+        const now = new Date();
+        const project: ProjectEntity = Object.assign(new ProjectEntity(), {
+          id: randomUUID(),
+          number: input.number,
+          name: input.name,
+          client: input.client ?? '',
+          siteAltitude: input.site?.altitude ?? null,
+          siteAmbientPressure: input.site?.ambientPressure ?? null,
+          unitSystem: input.unitSystem,
+          notes: input.notes ?? '',
+          version: 1,
+          createdBy: actor.id,
+          createdAt: now,
+          updatedAt: now,
+        });
+        await manager.insert(ProjectEntity, project);
+        await manager.insert(ProjectMemberEntity, {
+          projectId: project.id,
+          userId: actor.id,
+          role: 'designer',
+          addedBy: actor.id,
+          addedAt: now,
+        });
+        await recordAudit(manager, {
+          actorId: actor.id,
+          action: 'project.created',
+          entityType: 'project',
+          entityId: project.id,
+          projectId: project.id,
+          after: { number: project.number, name: project.name },
+        });
+        return projectView(project, 'designer');
+      });
+    } catch (error) {
+      if (isUniqueViolation(error)) throw numberTaken();
+      throw error;
+    }
+  }
+
+  async get(actor: Actor, projectId: string): Promise<ProjectView> {
+    const { project, role } = await requireProjectStanding(
+      this.dataSource.manager,
+      actor,
+      projectId,
+    );
+    return projectView(project, role);
+  }
+
+  async update(actor: Actor, projectId: string, patch: ProjectPatch): Promise<ProjectView> {
+    try {
+      return await this.dataSource.transaction(async (manager) => {
+        const standing = await requireProjectStanding(manager, actor, projectId, { lock: true });
+        enforce(canEditProject(standing));
+        const before = standing.project;
+        if (before.version !== patch.version) throw staleVersion(before.version);
+        const changes: Partial<ProjectEntity> = {
+          version: before.version + 1,
+          updatedAt: new Date(),
+        };
+        if (patch.number !== undefined) changes.number = patch.number;
+        if (patch.name !== undefined) changes.name = patch.name;
+        if (patch.client !== undefined) changes.client = patch.client;
+        if (patch.unitSystem !== undefined) changes.unitSystem = patch.unitSystem;
+        if (patch.notes !== undefined) changes.notes = patch.notes;
+        if (patch.site !== undefined) {
+          changes.siteAltitude = patch.site?.altitude ?? null;
+          changes.siteAmbientPressure = patch.site?.ambientPressure ?? null;
+        }
+        await manager.update(ProjectEntity, { id: projectId }, changes);
+        const after = await manager.findOneByOrFail(ProjectEntity, { id: projectId });
+        await recordAudit(manager, {
+          actorId: actor.id,
+          action: 'project.updated',
+          entityType: 'project',
+          entityId: projectId,
+          projectId,
+          before: projectSummary(before),
+          after: projectSummary(after),
+        });
+        return projectView(after, standing.role);
+      });
+    } catch (error) {
+      if (isUniqueViolation(error)) throw numberTaken();
+      throw error;
+    }
+  }
+
+  async members(actor: Actor, projectId: string): Promise<{ items: MemberView[] }> {
+    const manager = this.dataSource.manager;
+    await requireProjectStanding(manager, actor, projectId);
+    return { items: await this.memberList(manager, projectId) };
+  }
+
+  async setMember(
+    actor: Actor,
+    projectId: string,
+    userId: string,
+    role: Role,
+  ): Promise<MemberView> {
+    return this.dataSource.transaction(async (manager) => {
+      const standing = await requireProjectStanding(manager, actor, projectId, { lock: true });
+      enforce(canManageMembers(standing));
+      const user = await manager.findOneBy(UserEntity, { id: userId });
+      if (!user || !user.active) throw notFound('user');
+      const existing = await manager.findOneBy(ProjectMemberEntity, { projectId, userId });
+      if (existing?.role === 'designer' && role !== 'designer') {
+        await this.keepADesigner(manager, projectId, userId);
+      }
+      const now = new Date();
+      if (existing) {
+        await manager.update(ProjectMemberEntity, { projectId, userId }, { role });
+      } else {
+        await manager.insert(ProjectMemberEntity, {
+          projectId,
+          userId,
+          role,
+          addedBy: actor.id,
+          addedAt: now,
+        });
+      }
+      await recordAudit(manager, {
+        actorId: actor.id,
+        action: 'member.set',
+        entityType: 'member',
+        entityId: userId,
+        projectId,
+        ...(existing ? { before: { role: existing.role } } : {}),
+        after: { role, email: user.email },
+      });
+      return {
+        user: { id: user.id, name: user.name, email: user.email },
+        role,
+        addedAt: isoRequired(existing?.addedAt ?? now),
+      };
+    });
+  }
+
+  async removeMember(actor: Actor, projectId: string, userId: string): Promise<void> {
+    await this.dataSource.transaction(async (manager) => {
+      const standing = await requireProjectStanding(manager, actor, projectId, { lock: true });
+      enforce(canManageMembers(standing));
+      const existing = await manager.findOneBy(ProjectMemberEntity, { projectId, userId });
+      if (!existing) throw notFound('member');
+      if (existing.role === 'designer') await this.keepADesigner(manager, projectId, userId);
+      await manager.delete(ProjectMemberEntity, { projectId, userId });
+      await recordAudit(manager, {
+        actorId: actor.id,
+        action: 'member.removed',
+        entityType: 'member',
+        entityId: userId,
+        projectId,
+        before: { role: existing.role },
+      });
+    });
+  }
+
+  async materials(actor: Actor, projectId: string): Promise<{ items: MaterialView[] }> {
+    const manager = this.dataSource.manager;
+    await requireProjectStanding(manager, actor, projectId);
+    const found = await manager.find(CustomMaterialEntity, {
+      where: { projectId },
+      order: { createdAt: 'ASC', id: 'ASC' },
+    });
+    return { items: found.map(materialView) };
+  }
+
+  async addMaterial(
+    actor: Actor,
+    projectId: string,
+    material: { name: string },
+  ): Promise<MaterialView> {
+    return this.dataSource.transaction(async (manager) => {
+      const standing = await requireProjectStanding(manager, actor, projectId);
+      enforce(canManageMaterials(standing));
+      const entity: CustomMaterialEntity = Object.assign(new CustomMaterialEntity(), {
+        id: randomUUID(),
+        projectId,
+        name: material.name,
+        material: toJson(material),
+        createdBy: actor.id,
+        createdAt: new Date(),
+      });
+      await manager.insert(CustomMaterialEntity, entity);
+      await recordAudit(manager, {
+        actorId: actor.id,
+        action: 'material.created',
+        entityType: 'material',
+        entityId: entity.id,
+        projectId,
+        after: { name: entity.name },
+      });
+      return materialView(entity);
+    });
+  }
+
+  async removeMaterial(actor: Actor, projectId: string, materialId: string): Promise<void> {
+    await this.dataSource.transaction(async (manager) => {
+      const standing = await requireProjectStanding(manager, actor, projectId);
+      enforce(canManageMaterials(standing));
+      const existing = await manager.findOneBy(CustomMaterialEntity, { id: materialId, projectId });
+      if (!existing) throw notFound('material');
+      await manager.delete(CustomMaterialEntity, { id: materialId });
+      await recordAudit(manager, {
+        actorId: actor.id,
+        action: 'material.deleted',
+        entityType: 'material',
+        entityId: materialId,
+        projectId,
+        before: { name: existing.name },
+      });
+    });
+  }
+
+  private async memberList(manager: EntityManager, projectId: string): Promise<MemberView[]> {
+    const found = await rows<{
+      id: string;
+      name: string;
+      email: string;
+      role: Role;
+      added_at: Date;
+    }>(
+      manager,
+      `select u.id, u.name, u.email, m.role, m.added_at from project_members m
+         join users u on u.id = m.user_id where m.project_id = $1
+        order by case m.role when 'designer' then 0 when 'checker' then 1 else 2 end, lower(u.name), u.id`,
+      [projectId],
+    );
+    return found.map((r) => ({
+      user: { id: r.id, name: r.name, email: r.email },
+      role: r.role,
+      addedAt: iso(r.added_at) ?? '',
+    }));
+  }
+
+  /** A project keeps at least one designer: someone must be able to change it. */
+  private async keepADesigner(manager: EntityManager, projectId: string, leavingUserId: string) {
+    const [row] = await rows<{ n: string }>(
+      manager,
+      `select count(*) as n from project_members
+        where project_id = $1 and role = 'designer' and user_id <> $2`,
+      [projectId, leavingUserId],
+    );
+    if (Number(row?.n ?? 0) === 0) {
+      throw conflict('last_designer', 'a project keeps at least one designer: add another first');
+    }
+  }
+
+  private async byIds(ids: string[]): Promise<Map<string, ProjectEntity>> {
+    if (ids.length === 0) return new Map();
+    const found = await this.dataSource
+      .getRepository(ProjectEntity)
+      .createQueryBuilder('p')
+      .where('p.id in (:...ids)', { ids })
+      .getMany();
+    return new Map(found.map((p) => [p.id, p]));
+  }
+}
+
+function materialView(m: CustomMaterialEntity): MaterialView {
+  return { id: m.id, name: m.name, material: m.material, createdAt: isoRequired(m.createdAt) };
+}
+
+function projectSummary(p: ProjectEntity) {
+  return {
+    number: p.number,
+    name: p.name,
+    client: p.client,
+    site: projectSite(p),
+    unitSystem: p.unitSystem,
+    version: p.version,
+  };
+}
+
+export const staleVersion = (currentVersion: number) =>
+  conflict('stale_version', 'someone changed this in the meantime: reload and try again', {
+    currentVersion,
+  });
+
+const numberTaken = () => conflict('number_taken', 'another project has this number');

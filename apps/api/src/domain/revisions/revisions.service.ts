@@ -1,0 +1,575 @@
+import { randomUUID } from 'node:crypto';
+import type { DataSource, EntityManager } from 'typeorm';
+import { ENGINE_VERSION, computeReport, parseComponent } from '@hoopline/calc';
+import { ComponentEntity } from '../../db/entities/component.entity';
+import { toJson } from '../../db/entities/json';
+import {
+  RevisionEntity,
+  SignOffEntity,
+  type SignOffDecision,
+} from '../../db/entities/revision.entity';
+import { conflict, forbidden, notFound, validationFailed } from '../../http/errors';
+import { pageOf, type Page, type PageRequest } from '../../http/pagination';
+import {
+  canDesign,
+  canSignOff,
+  canWithdraw,
+  seesOnlyIssued,
+  type Actor,
+  type Decision,
+} from '../../policy/policy';
+import { recordAudit } from '../audit/audit.service';
+import {
+  componentViews,
+  insertRevision,
+  type ComponentView,
+} from '../components/components.service';
+import {
+  requireComponent,
+  requireRevision,
+  type RevisionContext,
+} from '../components/component-access';
+import type { Notifier } from '../notifications/notifier';
+import { projectSite, staleVersion } from '../projects/projects.service';
+import { Where, containsPattern, isoRequired, paged, rows, run } from '../sql';
+import { diffInputs, diffResults, type Change } from './diff';
+import { computeContent, contentHash } from './revision-content';
+import {
+  SUMMARY_COLUMNS,
+  revisionView,
+  summaryFromRow,
+  type RevisionSummary,
+  type RevisionView,
+  type SummaryRow,
+} from './revision-views';
+
+function enforce(decision: Decision) {
+  if (!decision.allowed) throw forbidden(decision.code, decision.reason);
+}
+
+export interface Integrity {
+  /** Whether the stored inputs, engine version and report still hash to the stored hash. */
+  readonly matches: boolean;
+  readonly storedHash: string;
+  readonly recomputedHash: string;
+  /** Whether every sign-off signed the hash the data has now; null without sign-offs. */
+  readonly signOffsMatch: boolean | null;
+  /**
+   * Whether today's engine, run again on the stored inputs, gives the stored
+   * report; null when the revision was computed by another engine version.
+   */
+  readonly reproduces: boolean | null;
+}
+
+export interface QueueItem extends RevisionSummary {
+  readonly project: { id: string; number: string; name: string };
+  readonly component: { id: string; name: string; kind: string };
+}
+
+export interface IssuedItem {
+  readonly project: { id: string; number: string; name: string };
+  readonly component: ComponentView;
+  readonly revision: RevisionSummary;
+}
+
+export type VerifyResult =
+  | { readonly match: false }
+  | {
+      readonly match: true;
+      readonly status: 'current' | 'superseded';
+      readonly projectNumber: string;
+      readonly componentName: string;
+      readonly revisionNumber: number;
+      readonly countersignedAt: string;
+    };
+
+function storedHashOf(revision: RevisionEntity): string {
+  try {
+    return contentHash({
+      inputs: revision.inputs,
+      engineVersion: revision.engineVersion,
+      report: revision.report,
+    });
+  } catch {
+    // Stored data that cannot even be serialised has been tampered with.
+    return '';
+  }
+}
+
+/** Revisions: history, new revisions, the sign-off workflow, diff, integrity, verify. */
+export class RevisionsService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly notifier: Notifier,
+  ) {}
+
+  async list(actor: Actor, componentId: string, page: PageRequest): Promise<Page<RevisionSummary>> {
+    const manager = this.dataSource.manager;
+    const { standing } = await requireComponent(manager, actor, componentId);
+    const w = new Where().add('r.component_id = ?', componentId);
+    if (seesOnlyIssued(standing)) w.add("r.status = 'countersigned'");
+    const { rows: found, total } = await paged<SummaryRow>(
+      manager,
+      {
+        columns: SUMMARY_COLUMNS,
+        from: 'revisions r join users a on a.id = r.author_id',
+        where: w.where,
+        params: w.params,
+        orderBy: 'r.number desc',
+      },
+      page,
+    );
+    return pageOf(found.map(summaryFromRow), page, total);
+  }
+
+  /**
+   * Saves new inputs as the next revision. The component's version must be
+   * the one the designer started from (else 409 stale_version), and a
+   * revision under check must be withdrawn or decided first.
+   */
+  async create(
+    actor: Actor,
+    componentId: string,
+    input: { inputs: unknown; baseVersion: number; note?: string | undefined },
+  ): Promise<{ component: ComponentView; revision: RevisionView }> {
+    return this.dataSource.transaction(async (manager) => {
+      const { component, standing } = await requireComponent(manager, actor, componentId, {
+        lock: true,
+      });
+      enforce(canDesign(standing));
+      if (component.version !== input.baseVersion) throw staleVersion(component.version);
+      const latest = component.latestRevisionId
+        ? await manager.findOneByOrFail(RevisionEntity, { id: component.latestRevisionId })
+        : null;
+      if (latest?.status === 'submitted') {
+        throw conflict(
+          'revision_under_check',
+          `revision ${latest.number} is with a checker: withdraw it before saving a new one`,
+        );
+      }
+      const content = computeContent(input.inputs, projectSite(standing.project));
+      if (content.inputs['kind'] !== component.kind) {
+        throw validationFailed([
+          { path: 'inputs.kind', message: `must stay "${component.kind}" for this component` },
+        ]);
+      }
+      const revision = await insertRevision(
+        manager,
+        actor,
+        component,
+        (latest?.number ?? 0) + 1,
+        content,
+        input.note ?? '',
+      );
+      const { affected } = await run(
+        manager,
+        `update components set version = version + 1, latest_revision_id = $2, updated_at = now()
+          where id = $1 and version = $3`,
+        [componentId, revision.id, input.baseVersion],
+      );
+      if (affected !== 1) throw staleVersion(component.version);
+      const after = await manager.findOneByOrFail(ComponentEntity, { id: componentId });
+      const [view] = await componentViews(manager, [after], false);
+      return { component: view!, revision: await revisionView(manager, revision.id) };
+    });
+  }
+
+  async get(actor: Actor, revisionId: string): Promise<RevisionView> {
+    const manager = this.dataSource.manager;
+    await requireRevision(manager, actor, revisionId);
+    return revisionView(manager, revisionId);
+  }
+
+  /** from = the other revision, to = this one. */
+  async diff(
+    actor: Actor,
+    revisionId: string,
+    againstId: string,
+  ): Promise<{
+    from: RevisionSummary;
+    to: RevisionSummary;
+    inputs: Change[];
+    results: Change[];
+    verdictChanged: boolean;
+  }> {
+    const manager = this.dataSource.manager;
+    const to = await requireRevision(manager, actor, revisionId);
+    const from = await requireRevision(manager, actor, againstId);
+    if (from.revision.componentId !== to.revision.componentId) {
+      throw validationFailed([
+        { path: 'against', message: 'must be a revision of the same component' },
+      ]);
+    }
+    const [fromView, toView] = await Promise.all([
+      revisionView(manager, againstId),
+      revisionView(manager, revisionId),
+    ]);
+    return {
+      from: summaryOnly(fromView),
+      to: summaryOnly(toView),
+      inputs: diffInputs(from.revision.inputs, to.revision.inputs),
+      results: diffResults(from.revision.report, to.revision.report),
+      verdictChanged: from.revision.verdict !== to.revision.verdict,
+    };
+  }
+
+  async integrity(actor: Actor, revisionId: string): Promise<Integrity> {
+    const manager = this.dataSource.manager;
+    const { revision } = await requireRevision(manager, actor, revisionId);
+    const recomputedHash = storedHashOf(revision);
+    const signed = await rows<{ hash_signed: string }>(
+      manager,
+      'select hash_signed from sign_offs where revision_id = $1',
+      [revisionId],
+    );
+    let reproduces: boolean | null = null;
+    if (revision.engineVersion === ENGINE_VERSION) {
+      try {
+        const report = toJson(computeReport(parseComponent(revision.inputs)));
+        reproduces =
+          contentHash({ inputs: {}, engineVersion: '', report }) ===
+          contentHash({ inputs: {}, engineVersion: '', report: revision.report });
+      } catch {
+        reproduces = false;
+      }
+    }
+    return {
+      matches: recomputedHash === revision.contentHash,
+      storedHash: revision.contentHash,
+      recomputedHash,
+      signOffsMatch: signed.length ? signed.every((s) => s.hash_signed === recomputedHash) : null,
+      reproduces,
+    };
+  }
+
+  async submit(actor: Actor, revisionId: string): Promise<RevisionView> {
+    const view = await this.dataSource.transaction(async (manager) => {
+      const ctx = await this.lockForWorkflow(manager, actor, revisionId);
+      enforce(canDesign(ctx.standing));
+      if (ctx.component.latestRevisionId !== revisionId) {
+        throw conflict(
+          'not_latest_revision',
+          'only the latest revision of a component is submitted',
+        );
+      }
+      if (ctx.revision.status !== 'draft') {
+        throw conflict(
+          'revision_not_draft',
+          `this revision is ${ctx.revision.status}, not a draft`,
+        );
+      }
+      await run(
+        manager,
+        `update revisions set status = 'submitted', submitted_at = now() where id = $1 and status = 'draft'`,
+        [revisionId],
+      );
+      await this.audit(manager, actor, ctx, 'revision.submitted', 'draft', 'submitted');
+      return revisionView(manager, revisionId);
+    });
+    this.notifier.revisionSubmitted({ revisionId, projectId: view.projectId });
+    return view;
+  }
+
+  async withdraw(actor: Actor, revisionId: string): Promise<RevisionView> {
+    return this.dataSource.transaction(async (manager) => {
+      const ctx = await this.lockForWorkflow(manager, actor, revisionId);
+      enforce(canWithdraw(ctx.standing, ctx.revision));
+      if (ctx.revision.status !== 'submitted') {
+        throw conflict(
+          'revision_not_submitted',
+          `this revision is ${ctx.revision.status}, not submitted`,
+        );
+      }
+      await run(
+        manager,
+        `update revisions set status = 'draft', submitted_at = null where id = $1 and status = 'submitted'`,
+        [revisionId],
+      );
+      await this.audit(manager, actor, ctx, 'revision.withdrawn', 'submitted', 'draft');
+      return revisionView(manager, revisionId);
+    });
+  }
+
+  /**
+   * Countersign or return, in one transaction holding the revision's row
+   * lock: of several checkers racing, one decides and the others find it
+   * decided (409). The decision records the hash the checker saw; it must
+   * equal the stored hash, and the stored data must still produce it.
+   */
+  async decide(
+    actor: Actor,
+    revisionId: string,
+    decision: SignOffDecision,
+    input: { hash: string; comment?: string | undefined },
+  ): Promise<RevisionView> {
+    const view = await this.dataSource.transaction(async (manager) => {
+      const ctx = await this.lockForWorkflow(manager, actor, revisionId);
+      enforce(canSignOff(ctx.standing, ctx.revision));
+      const { revision } = ctx;
+      if (revision.status === 'countersigned' || revision.status === 'returned') {
+        throw conflict('already_signed', `this revision has been ${revision.status} already`);
+      }
+      if (revision.status !== 'submitted') {
+        throw conflict(
+          'revision_not_submitted',
+          'only a submitted revision is countersigned or returned',
+        );
+      }
+      if (input.hash !== revision.contentHash) {
+        throw conflict(
+          'hash_mismatch',
+          'the hash you signed is not this revision’s: reload it and check again',
+          { currentHash: revision.contentHash },
+        );
+      }
+      if (storedHashOf(revision) !== revision.contentHash) {
+        throw conflict(
+          'integrity_failed',
+          'the stored data of this revision no longer matches its hash: it cannot be signed',
+        );
+      }
+      const now = new Date();
+      await manager.insert(SignOffEntity, {
+        id: randomUUID(),
+        revisionId,
+        checkerId: actor.id,
+        decision,
+        comment: input.comment ?? '',
+        hashSigned: input.hash,
+        createdAt: now,
+      });
+      const { affected } = await run(
+        manager,
+        `update revisions set status = $2, decided_at = $3 where id = $1 and status = 'submitted'`,
+        [revisionId, decision, now],
+      );
+      if (affected !== 1)
+        throw conflict('already_signed', 'this revision has been decided already');
+      if (decision === 'countersigned') {
+        await run(
+          manager,
+          `update revisions set superseded_at = $3, superseded_by = $2
+            where component_id = $1 and status = 'countersigned' and id <> $2 and superseded_at is null`,
+          [revision.componentId, revisionId, now],
+        );
+        await run(
+          manager,
+          'update components set issued_revision_id = $2, updated_at = now() where id = $1',
+          [revision.componentId, revisionId],
+        );
+      }
+      await this.audit(
+        manager,
+        actor,
+        ctx,
+        decision === 'countersigned' ? 'revision.countersigned' : 'revision.returned',
+        'submitted',
+        decision,
+        { hashSigned: input.hash, ...(input.comment ? { comment: input.comment } : {}) },
+      );
+      return revisionView(manager, revisionId);
+    });
+    this.notifier.revisionDecided({ revisionId, projectId: view.projectId, decision });
+    return view;
+  }
+
+  /** Submitted revisions in projects where I check, not mine, oldest first. Admins sign nothing. */
+  async checkQueue(actor: Actor, page: PageRequest): Promise<Page<QueueItem>> {
+    const w = new Where()
+      .add("r.status = 'submitted'")
+      .add('r.author_id <> ?', actor.id)
+      .add('not ?', actor.isAdmin);
+    w.add(
+      `exists (select 1 from project_members m where m.project_id = r.project_id
+                    and m.user_id = ? and m.role = 'checker')`,
+      actor.id,
+    );
+    const { rows: found, total } = await paged<
+      SummaryRow & {
+        p_id: string;
+        p_number: string;
+        p_name: string;
+        c_id: string;
+        c_name: string;
+        c_kind: string;
+      }
+    >(
+      this.dataSource.manager,
+      {
+        columns: `${SUMMARY_COLUMNS}, p.id as p_id, p.number as p_number, p.name as p_name,
+                  c.id as c_id, c.name as c_name, c.kind as c_kind`,
+        from: `revisions r join users a on a.id = r.author_id
+               join components c on c.id = r.component_id join projects p on p.id = r.project_id`,
+        where: w.where,
+        params: w.params,
+        orderBy: 'r.submitted_at, r.id',
+      },
+      page,
+    );
+    return pageOf(
+      found.map((r) => ({
+        ...summaryFromRow(r),
+        project: { id: r.p_id, number: r.p_number, name: r.p_name },
+        component: { id: r.c_id, name: r.c_name, kind: r.c_kind },
+      })),
+      page,
+      total,
+    );
+  }
+
+  /** The issued revision of every component in my projects (admins: every project). */
+  async issued(
+    actor: Actor,
+    query: PageRequest & { q?: string | undefined },
+  ): Promise<Page<IssuedItem>> {
+    const manager = this.dataSource.manager;
+    const w = new Where().add('c.issued_revision_id is not null');
+    w.add(
+      '(? or exists (select 1 from project_members m where m.project_id = c.project_id and m.user_id = ?))',
+      actor.isAdmin,
+      actor.id,
+    );
+    if (query.q) {
+      const like = containsPattern(query.q);
+      w.add(
+        '(p.number ilike ? or p.name ilike ? or c.name ilike ? or c.tag ilike ?)',
+        like,
+        like,
+        like,
+        like,
+      );
+    }
+    const { rows: found, total } = await paged<{
+      id: string;
+      p_id: string;
+      p_number: string;
+      p_name: string;
+    }>(
+      manager,
+      {
+        columns: 'c.id, p.id as p_id, p.number as p_number, p.name as p_name',
+        from: 'components c join projects p on p.id = c.project_id',
+        where: w.where,
+        params: w.params,
+        orderBy: 'lower(p.number), lower(c.name), c.id',
+      },
+      query,
+    );
+    const entities = found.length
+      ? await manager
+          .getRepository(ComponentEntity)
+          .createQueryBuilder('c')
+          .where('c.id in (:...ids)', { ids: found.map((r) => r.id) })
+          .getMany()
+      : [];
+    const byId = new Map(entities.map((c) => [c.id, c]));
+    const views = await componentViews(
+      manager,
+      found.map((r) => byId.get(r.id)!),
+      true,
+    );
+    return pageOf(
+      found.map((r, i) => ({
+        project: { id: r.p_id, number: r.p_number, name: r.p_name },
+        component: views[i]!,
+        revision: views[i]!.issuedRevision!,
+      })),
+      query,
+      total,
+    );
+  }
+
+  /**
+   * Public: does a full hash or a verify code belong to a countersigned
+   * revision whose stored data still produces it? Answers only that, with
+   * the project number, component name, revision number and date.
+   */
+  async verify(normalisedCode: string): Promise<VerifyResult> {
+    const manager = this.dataSource.manager;
+    const candidates = (
+      await manager
+        .getRepository(RevisionEntity)
+        .createQueryBuilder('r')
+        .where("r.status = 'countersigned'")
+        .andWhere(
+          normalisedCode.length === 64 ? 'r.content_hash = :code' : 'r.content_hash like :prefix',
+          { code: normalisedCode, prefix: `${normalisedCode}%` },
+        )
+        .orderBy('r.decided_at', 'DESC')
+        .limit(50)
+        .getMany()
+    ).filter((r) => storedHashOf(r) === r.contentHash);
+    // A verify code shared by two different hashes cannot tell them apart: no answer.
+    // The same hash on several revisions (identical inputs screened twice) names the latest.
+    if (new Set(candidates.map((r) => r.contentHash)).size !== 1) return { match: false };
+    const revision = candidates[0]!;
+    const [names] = await rows<{ number: string; name: string }>(
+      manager,
+      `select p.number, c.name from components c join projects p on p.id = c.project_id where c.id = $1`,
+      [revision.componentId],
+    );
+    if (!names || !revision.decidedAt) return { match: false };
+    return {
+      match: true,
+      status: revision.supersededAt ? 'superseded' : 'current',
+      projectNumber: names.number,
+      componentName: names.name,
+      revisionNumber: revision.number,
+      countersignedAt: isoRequired(revision.decidedAt),
+    };
+  }
+
+  /** Locks the component, then the revision (always in that order: no deadlocks with create). */
+  private async lockForWorkflow(
+    manager: EntityManager,
+    actor: Actor,
+    revisionId: string,
+  ): Promise<RevisionContext> {
+    const peek = await manager.findOneBy(RevisionEntity, { id: revisionId });
+    if (!peek) throw notFound('revision');
+    await requireComponent(manager, actor, peek.componentId, { lock: true }).catch(() => {
+      throw notFound('revision');
+    });
+    return requireRevision(manager, actor, revisionId, { lock: true });
+  }
+
+  private async audit(
+    manager: EntityManager,
+    actor: Actor,
+    ctx: RevisionContext,
+    action: string,
+    before: string,
+    after: string,
+    extra: Record<string, unknown> = {},
+  ) {
+    await recordAudit(manager, {
+      actorId: actor.id,
+      action,
+      entityType: 'revision',
+      entityId: ctx.revision.id,
+      projectId: ctx.revision.projectId,
+      before: { status: before },
+      after: {
+        status: after,
+        number: ctx.revision.number,
+        componentId: ctx.component.id,
+        ...extra,
+      },
+    });
+  }
+}
+
+function summaryOnly(v: RevisionView): RevisionSummary {
+  return {
+    id: v.id,
+    number: v.number,
+    status: v.status,
+    verdict: v.verdict,
+    contentHash: v.contentHash,
+    author: v.author,
+    createdAt: v.createdAt,
+    submittedAt: v.submittedAt,
+    decidedAt: v.decidedAt,
+    superseded: v.superseded,
+  };
+}

@@ -1,0 +1,39 @@
+import type { DataSource } from 'typeorm';
+import { Passwords } from '../auth/passwords';
+import type { Config } from '../config/config';
+import { AuditService } from './audit/audit.service';
+import { AuthService } from './auth/auth.service';
+import { ComponentsService } from './components/components.service';
+import { silentNotifier, type Notifier } from './notifications/notifier';
+import { ProjectsService } from './projects/projects.service';
+import { RevisionsService } from './revisions/revisions.service';
+import { UsersService } from './users/users.service';
+
+/** The services the routes call; each is given only what it uses. */
+export interface Services {
+  readonly passwords: Passwords;
+  readonly auth: AuthService;
+  readonly users: UsersService;
+  readonly projects: ProjectsService;
+  readonly components: ComponentsService;
+  readonly revisions: RevisionsService;
+  readonly audit: AuditService;
+}
+
+export function createServices(
+  dataSource: DataSource,
+  config: Config,
+  notifier: Notifier = silentNotifier,
+): Services {
+  const passwords = new Passwords(config.auth.argon2);
+  const auth = new AuthService(dataSource, config.auth, passwords, notifier);
+  return {
+    passwords,
+    auth,
+    users: new UsersService(dataSource, config.auth, auth, notifier),
+    projects: new ProjectsService(dataSource),
+    components: new ComponentsService(dataSource),
+    revisions: new RevisionsService(dataSource, notifier),
+    audit: new AuditService(dataSource),
+  };
+}

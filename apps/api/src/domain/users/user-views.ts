@@ -1,0 +1,49 @@
+import type { EntityManager } from 'typeorm';
+import type { UserEntity } from '../../db/entities/user.entity';
+import type { Role } from '../../policy/policy';
+import { rows } from '../sql';
+
+export interface UserView {
+  readonly id: string;
+  readonly email: string;
+  readonly name: string;
+  readonly isAdmin: boolean;
+  readonly active: boolean;
+  readonly unitSystem: 'si' | 'us';
+  readonly createdAt: string;
+}
+
+export interface MeView {
+  readonly user: UserView;
+  readonly memberships: readonly { projectId: string; projectNumber: string; role: Role }[];
+}
+
+export function userView(u: UserEntity): UserView {
+  return {
+    id: u.id,
+    email: u.email,
+    name: u.name,
+    isAdmin: u.isAdmin,
+    active: u.active,
+    unitSystem: u.unitSystem,
+    createdAt: new Date(u.createdAt).toISOString(),
+  };
+}
+
+export async function meView(manager: EntityManager, user: UserEntity): Promise<MeView> {
+  const memberships = await rows<{ project_id: string; number: string; role: Role }>(
+    manager,
+    `select m.project_id, p.number, m.role from project_members m
+       join projects p on p.id = m.project_id
+      where m.user_id = $1 order by p.number`,
+    [user.id],
+  );
+  return {
+    user: userView(user),
+    memberships: memberships.map((m) => ({
+      projectId: m.project_id,
+      projectNumber: m.number,
+      role: m.role,
+    })),
+  };
+}

@@ -1,0 +1,286 @@
+import { randomUUID } from 'node:crypto';
+import { In, type DataSource } from 'typeorm';
+import type { AuthConfig } from '../../config/config';
+import { hashToken, randomToken } from '../../auth/tokens';
+import { InvitationEntity } from '../../db/entities/invitation.entity';
+import { UserEntity, type UnitSystem } from '../../db/entities/user.entity';
+import { conflict, forbidden, notFound } from '../../http/errors';
+import { pageOf, type Page, type PageRequest } from '../../http/pagination';
+import { canManagePeople, type Actor } from '../../policy/policy';
+import { recordAudit } from '../audit/audit.service';
+import type { AuthService } from '../auth/auth.service';
+import { normaliseEmail } from '../auth/auth.service';
+import type { Notifier } from '../notifications/notifier';
+import { Where, containsPattern, paged } from '../sql';
+import { meView, userView, type MeView, type UserView } from './user-views';
+
+export interface InvitationView {
+  readonly id: string;
+  readonly email: string;
+  readonly name: string;
+  readonly isAdmin: boolean;
+  readonly invitedBy: { id: string; name: string } | null;
+  readonly createdAt: string;
+  readonly expiresAt: string;
+  readonly acceptedAt: string | null;
+}
+
+function requireAdmin(actor: Actor) {
+  const decision = canManagePeople(actor);
+  if (!decision.allowed) throw forbidden(decision.code, decision.reason);
+}
+
+/** People: the signed-in person's own account, and the admin's management of everyone's. */
+export class UsersService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly auth: AuthConfig,
+    private readonly authService: AuthService,
+    private readonly notifier: Notifier,
+  ) {}
+
+  me(user: UserEntity): Promise<MeView> {
+    return meView(this.dataSource.manager, user);
+  }
+
+  async updateMe(
+    actor: Actor,
+    patch: { name?: string | undefined; unitSystem?: UnitSystem | undefined },
+  ): Promise<MeView> {
+    return this.dataSource.transaction(async (manager) => {
+      const before = await manager.findOneByOrFail(UserEntity, { id: actor.id });
+      const changes: Partial<UserEntity> = { updatedAt: new Date() };
+      if (patch.name !== undefined) changes.name = patch.name;
+      if (patch.unitSystem !== undefined) changes.unitSystem = patch.unitSystem;
+      await manager.update(UserEntity, { id: actor.id }, changes);
+      const after = await manager.findOneByOrFail(UserEntity, { id: actor.id });
+      await recordAudit(manager, {
+        actorId: actor.id,
+        action: 'user.updated',
+        entityType: 'user',
+        entityId: actor.id,
+        before: { name: before.name, unitSystem: before.unitSystem },
+        after: { name: after.name, unitSystem: after.unitSystem },
+      });
+      return meView(manager, after);
+    });
+  }
+
+  async list(
+    actor: Actor,
+    query: PageRequest & { q?: string | undefined },
+  ): Promise<Page<UserView>> {
+    requireAdmin(actor);
+    const w = new Where();
+    if (query.q)
+      w.add(
+        '(u.email ilike ? or u.name ilike ?)',
+        containsPattern(query.q),
+        containsPattern(query.q),
+      );
+    const { rows: found, total } = await paged<{ id: string }>(
+      this.dataSource.manager,
+      {
+        columns: 'u.id',
+        from: 'users u',
+        where: w.where,
+        params: w.params,
+        orderBy: 'lower(u.name), u.id',
+      },
+      query,
+    );
+    const users = found.length
+      ? await this.dataSource.getRepository(UserEntity).findBy({ id: In(found.map((r) => r.id)) })
+      : [];
+    const byId = new Map(users.map((u) => [u.id, u]));
+    return pageOf(
+      found.map((r) => userView(byId.get(r.id)!)),
+      query,
+      total,
+    );
+  }
+
+  async update(
+    actor: Actor,
+    userId: string,
+    patch: {
+      name?: string | undefined;
+      isAdmin?: boolean | undefined;
+      active?: boolean | undefined;
+    },
+  ): Promise<UserView> {
+    requireAdmin(actor);
+    return this.dataSource.transaction(async (manager) => {
+      const before = await manager.findOne(UserEntity, {
+        where: { id: userId },
+        lock: { mode: 'pessimistic_write' },
+      });
+      if (!before) throw notFound('user');
+      if (userId === actor.id && (patch.isAdmin === false || patch.active === false)) {
+        throw conflict(
+          'cannot_change_self',
+          'administrators cannot remove their own admin role or deactivate themselves',
+        );
+      }
+      const changes: Partial<UserEntity> = { updatedAt: new Date() };
+      if (patch.name !== undefined) changes.name = patch.name;
+      if (patch.isAdmin !== undefined) changes.isAdmin = patch.isAdmin;
+      if (patch.active !== undefined) changes.active = patch.active;
+      await manager.update(UserEntity, { id: userId }, changes);
+      if (patch.active === false && before.active) {
+        await this.authService.endAllSessions(manager, userId, 'deactivated');
+      }
+      const after = await manager.findOneByOrFail(UserEntity, { id: userId });
+      await recordAudit(manager, {
+        actorId: actor.id,
+        action: 'user.updated',
+        entityType: 'user',
+        entityId: userId,
+        before: { name: before.name, isAdmin: before.isAdmin, active: before.active },
+        after: { name: after.name, isAdmin: after.isAdmin, active: after.active },
+      });
+      return userView(after);
+    });
+  }
+
+  /** Until mail exists the token goes back to the admin, who passes it on (API.md). */
+  async issuePasswordReset(
+    actor: Actor,
+    userId: string,
+  ): Promise<{ token: string; expiresAt: string }> {
+    requireAdmin(actor);
+    return this.dataSource.transaction(async (manager) => {
+      const user = await manager.findOneBy(UserEntity, { id: userId });
+      if (!user) throw notFound('user');
+      const { token, expiresAt } = await this.authService.createPasswordReset(
+        manager,
+        user,
+        actor.id,
+      );
+      return { token, expiresAt: expiresAt.toISOString() };
+    });
+  }
+
+  async listInvitations(actor: Actor, page: PageRequest): Promise<Page<InvitationView>> {
+    requireAdmin(actor);
+    const { rows: found, total } = await paged<{
+      id: string;
+      email: string;
+      name: string;
+      is_admin: boolean;
+      invited_by: string | null;
+      inviter_name: string | null;
+      created_at: Date;
+      expires_at: Date;
+      accepted_at: Date | null;
+    }>(
+      this.dataSource.manager,
+      {
+        columns: `i.id, i.email, i.name, i.is_admin, i.invited_by, u.name as inviter_name,
+                  i.created_at, i.expires_at, i.accepted_at`,
+        from: 'invitations i left join users u on u.id = i.invited_by',
+        where: ['i.revoked_at is null'],
+        params: [],
+        orderBy: 'i.created_at desc, i.id',
+      },
+      page,
+    );
+    return pageOf(
+      found.map((r) => ({
+        id: r.id,
+        email: r.email,
+        name: r.name,
+        isAdmin: r.is_admin,
+        invitedBy: r.invited_by ? { id: r.invited_by, name: r.inviter_name ?? '' } : null,
+        createdAt: new Date(r.created_at).toISOString(),
+        expiresAt: new Date(r.expires_at).toISOString(),
+        acceptedAt: r.accepted_at ? new Date(r.accepted_at).toISOString() : null,
+      })),
+      page,
+      total,
+    );
+  }
+
+  /** A new invitation replaces an open one for the same address. */
+  async invite(
+    actor: Actor,
+    input: { email: string; name: string; isAdmin?: boolean | undefined },
+  ): Promise<{ invitation: InvitationView; token: string }> {
+    requireAdmin(actor);
+    const email = normaliseEmail(input.email);
+    const token = randomToken();
+    const result = await this.dataSource.transaction(async (manager) => {
+      if (await manager.findOneBy(UserEntity, { email })) {
+        throw conflict('email_taken', 'someone already has an account with this e-mail address');
+      }
+      const now = new Date();
+      await manager
+        .createQueryBuilder()
+        .update(InvitationEntity)
+        .set({ revokedAt: now })
+        .where('email = :email and accepted_at is null and revoked_at is null', { email })
+        .execute();
+      const invitation: InvitationEntity = Object.assign(new InvitationEntity(), {
+        id: randomUUID(),
+        email,
+        name: input.name,
+        isAdmin: input.isAdmin ?? false,
+        tokenHash: hashToken(token),
+        invitedBy: actor.id,
+        createdAt: now,
+        expiresAt: new Date(now.getTime() + this.auth.invitationTtl * 1000),
+        acceptedAt: null,
+        acceptedUserId: null,
+        revokedAt: null,
+      });
+      await manager.insert(InvitationEntity, invitation);
+      await recordAudit(manager, {
+        actorId: actor.id,
+        action: 'invitation.created',
+        entityType: 'invitation',
+        entityId: invitation.id,
+        after: { email, name: input.name, isAdmin: invitation.isAdmin },
+      });
+      const inviter = await manager.findOneByOrFail(UserEntity, { id: actor.id });
+      return {
+        invitation: {
+          id: invitation.id,
+          email,
+          name: invitation.name,
+          isAdmin: invitation.isAdmin,
+          invitedBy: { id: inviter.id, name: inviter.name },
+          createdAt: now.toISOString(),
+          expiresAt: invitation.expiresAt.toISOString(),
+          acceptedAt: null,
+        },
+        expiresAt: invitation.expiresAt,
+      };
+    });
+    this.notifier.invitationCreated({
+      email,
+      name: input.name,
+      token,
+      expiresAt: result.expiresAt,
+    });
+    return { invitation: result.invitation, token };
+  }
+
+  async revokeInvitation(actor: Actor, invitationId: string): Promise<void> {
+    requireAdmin(actor);
+    await this.dataSource.transaction(async (manager) => {
+      const invitation = await manager.findOneBy(InvitationEntity, { id: invitationId });
+      if (!invitation || invitation.revokedAt) throw notFound('invitation');
+      if (invitation.acceptedAt) {
+        throw conflict('invitation_accepted', 'this invitation has been accepted already');
+      }
+      await manager.update(InvitationEntity, { id: invitationId }, { revokedAt: new Date() });
+      await recordAudit(manager, {
+        actorId: actor.id,
+        action: 'invitation.revoked',
+        entityType: 'invitation',
+        entityId: invitationId,
+        before: { email: invitation.email },
+      });
+    });
+  }
+}

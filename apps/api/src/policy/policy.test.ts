@@ -1,0 +1,130 @@
+import { describe, expect, it } from 'vitest';
+import {
+  canCreateProject,
+  canDesign,
+  canEditProject,
+  canManageMaterials,
+  canManageMembers,
+  canManagePeople,
+  canReadProjectAudit,
+  canReadWholeAudit,
+  canSeeComponent,
+  canSeeProject,
+  canSeeRevision,
+  canSignOff,
+  canWithdraw,
+  seesOnlyIssued,
+  type Actor,
+  type ProjectStanding,
+  type RevisionFacts,
+  type Role,
+} from './policy';
+
+const me: Actor = { id: 'me', isAdmin: false };
+const admin: Actor = { id: 'admin', isAdmin: true };
+const as = (role: Role | null, actor: Actor = me): ProjectStanding => ({ actor, role });
+const byOther = (status: RevisionFacts['status'] = 'submitted'): RevisionFacts => ({
+  authorId: 'someone-else',
+  status,
+});
+const byMe = (status: RevisionFacts['status'] = 'submitted'): RevisionFacts => ({
+  authorId: 'me',
+  status,
+});
+const issued = { hasIssuedRevision: true };
+const unissued = { hasIssuedRevision: false };
+const allowed = (d: { allowed: boolean }) => d.allowed;
+const code = (d: { allowed: boolean; code?: string }) => (d.allowed ? 'allowed' : d.code);
+
+describe('policy: admin (not a member)', () => {
+  const s = as(null, admin);
+  it('manages people and memberships, sees everything, edits projects', () => {
+    expect(allowed(canManagePeople(admin))).toBe(true);
+    expect(canSeeProject(s)).toBe(true);
+    expect(allowed(canEditProject(s))).toBe(true);
+    expect(allowed(canManageMembers(s))).toBe(true);
+    expect(canSeeComponent(s, unissued)).toBe(true);
+    expect(canSeeRevision(s, byOther('draft'))).toBe(true);
+    expect(canReadWholeAudit(admin)).toBe(true);
+  });
+  it('does not design and never signs, even as a checker member', () => {
+    expect(code(canDesign(s))).toBe('not_a_designer');
+    expect(code(canManageMaterials(s))).toBe('not_a_designer');
+    expect(code(canSignOff(s, byOther()))).toBe('admin_cannot_sign');
+    expect(code(canSignOff(as('checker', admin), byOther()))).toBe('admin_cannot_sign');
+  });
+});
+
+describe('policy: designer', () => {
+  const s = as('designer');
+  it('creates and edits components and revisions, submits, manages materials and members', () => {
+    expect(allowed(canDesign(s))).toBe(true);
+    expect(allowed(canManageMaterials(s))).toBe(true);
+    expect(allowed(canManageMembers(s))).toBe(true);
+    expect(allowed(canEditProject(s))).toBe(true);
+    expect(seesOnlyIssued(s)).toBe(false);
+  });
+  it('withdraws only their own revision', () => {
+    expect(allowed(canWithdraw(s, byMe()))).toBe(true);
+    expect(code(canWithdraw(s, byOther()))).toBe('not_the_author');
+  });
+  it('does not countersign or return', () => {
+    expect(code(canSignOff(s, byOther()))).toBe('not_a_checker');
+  });
+  it('reads the project audit log, not the whole log', () => {
+    expect(allowed(canReadProjectAudit(s))).toBe(true);
+    expect(canReadWholeAudit(me)).toBe(false);
+  });
+});
+
+describe('policy: checker', () => {
+  const s = as('checker');
+  it('countersigns or returns a revision by someone else', () => {
+    expect(allowed(canSignOff(s, byOther()))).toBe(true);
+  });
+  it('never one they authored (four-eyes)', () => {
+    expect(code(canSignOff(s, byMe()))).toBe('own_revision');
+  });
+  it('sees every revision but does not design, manage members or materials', () => {
+    expect(canSeeRevision(s, byOther('draft'))).toBe(true);
+    expect(canSeeComponent(s, unissued)).toBe(true);
+    expect(code(canDesign(s))).toBe('not_a_designer');
+    expect(code(canManageMembers(s))).toBe('not_a_designer');
+    expect(code(canManageMaterials(s))).toBe('not_a_designer');
+    expect(code(canWithdraw(s, byMe()))).toBe('not_a_designer');
+    expect(allowed(canReadProjectAudit(s))).toBe(true);
+  });
+});
+
+describe('policy: fabricator', () => {
+  const s = as('fabricator');
+  it('sees only components with an issued revision and only countersigned revisions', () => {
+    expect(canSeeProject(s)).toBe(true);
+    expect(canSeeComponent(s, issued)).toBe(true);
+    expect(canSeeComponent(s, unissued)).toBe(false);
+    expect(canSeeRevision(s, byOther('countersigned'))).toBe(true);
+    for (const status of ['draft', 'submitted', 'returned'] as const) {
+      expect(canSeeRevision(s, byOther(status))).toBe(false);
+    }
+    expect(seesOnlyIssued(s)).toBe(true);
+  });
+  it('cannot edit, sign or read the audit log', () => {
+    expect(code(canDesign(s))).toBe('not_a_designer');
+    expect(code(canSignOff(s, byOther()))).toBe('not_a_checker');
+    expect(code(canEditProject(s))).toBe('not_a_designer');
+    expect(code(canReadProjectAudit(s))).toBe('audit_not_permitted');
+  });
+});
+
+describe('policy: signed-in non-member', () => {
+  const s = as(null);
+  it('sees nothing of the project (the service answers 404)', () => {
+    expect(canSeeProject(s)).toBe(false);
+    expect(canSeeComponent(s, issued)).toBe(false);
+    expect(canSeeRevision(s, byOther('countersigned'))).toBe(false);
+  });
+  it('may start a project of their own, and manages no people', () => {
+    expect(allowed(canCreateProject(me))).toBe(true);
+    expect(code(canManagePeople(me))).toBe('not_an_admin');
+  });
+});

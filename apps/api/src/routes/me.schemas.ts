@@ -1,0 +1,16 @@
+import { z } from 'zod';
+import { newPassword, text, unitSystem } from './common.schemas';
+
+export const updateMeBody = z
+  .object({ name: text(1, 120).optional(), unitSystem: unitSystem.optional() })
+  .strict();
+
+export const changePasswordBody = z
+  .object({
+    currentPassword: z
+      .string({ error: (i) => (i.input === undefined ? 'is required' : 'must be text') })
+      .min(1, 'is required')
+      .max(1024, 'must be at most 1024 characters'),
+    newPassword,
+  })
+  .strict();

@@ -1,0 +1,49 @@
+import { z } from 'zod';
+import { customMaterialSchema, siteSchema } from '@hoopline/calc';
+import { paginationShape } from '../http/pagination';
+import { role, text, unitSystem, uuid, version } from './common.schemas';
+
+/** The project site is the calc's own site input (altitude or ambient pressure, with units). */
+const site = siteSchema;
+
+export const listProjectsQuery = z
+  .object({
+    ...paginationShape,
+    q: text(0, 200).optional(),
+    sort: z
+      .enum(['number', 'name', 'client', 'updatedAt'], {
+        error: 'must be "number", "name", "client" or "updatedAt"',
+      })
+      .default('updatedAt'),
+    order: z.enum(['asc', 'desc'], { error: 'must be "asc" or "desc"' }).optional(),
+  })
+  .strict();
+
+export const createProjectBody = z
+  .object({
+    number: text(1, 40),
+    name: text(1, 200),
+    client: text(0, 200).optional(),
+    site: site.optional(),
+    unitSystem,
+    notes: text(0, 5000).optional(),
+  })
+  .strict();
+
+export const updateProjectBody = z
+  .object({
+    number: text(1, 40).optional(),
+    name: text(1, 200).optional(),
+    client: text(0, 200).optional(),
+    site: site.nullable().optional(),
+    unitSystem: unitSystem.optional(),
+    notes: text(0, 5000).optional(),
+    version,
+  })
+  .strict();
+
+export const memberParams = z.object({ id: uuid, userId: uuid }).strict();
+export const setMemberBody = z.object({ role }).strict();
+
+export const materialParams = z.object({ id: uuid, materialId: uuid }).strict();
+export const addMaterialBody = z.object({ material: customMaterialSchema }).strict();
