@@ -246,23 +246,24 @@ function LoadCases({
 
 function Inputs({ data }: { data: SheetData }) {
   const rows = inputRows(data.revision.inputs, data.project.unitSystem);
-  const system = data.project.unitSystem === 'us' ? 'US customary' : 'SI';
+  // A US-customary project shows its own units beside SI; an SI project needs SI once.
+  const both = data.project.unitSystem === 'us';
   return (
     <View>
       <Text style={styles.h2}>2 Inputs</Text>
       <View style={styles.table}>
         <View style={styles.headRow}>
-          <Cell width="30%">Field</Cell>
-          <Cell width="24%">As entered</Cell>
-          <Cell width="23%">{system}</Cell>
-          <Cell width="23%">SI</Cell>
+          <Cell width={both ? '30%' : '40%'}>Field</Cell>
+          <Cell width={both ? '24%' : '32%'}>As entered</Cell>
+          {both ? <Cell width="23%">US customary</Cell> : null}
+          <Cell width={both ? '23%' : '28%'}>SI</Cell>
         </View>
         {rows.map((r) => (
           <View key={r.path} style={styles.row} wrap={false}>
-            <Cell width="30%">{r.path}</Cell>
-            <Cell width="24%">{r.given}</Cell>
-            <Cell width="23%">{r.projectUnits}</Cell>
-            <Cell width="23%">{r.si}</Cell>
+            <Cell width={both ? '30%' : '40%'}>{r.path}</Cell>
+            <Cell width={both ? '24%' : '32%'}>{r.given}</Cell>
+            {both ? <Cell width="23%">{r.projectUnits}</Cell> : null}
+            <Cell width={both ? '23%' : '28%'}>{r.si}</Cell>
           </View>
         ))}
       </View>
