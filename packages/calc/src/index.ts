@@ -143,3 +143,11 @@ export {
   screenMany,
 } from './screen';
 export type { ParsedComponent, ScreenOutcome } from './screen';
+
+// Thickness sweeps
+export { SWEEP_DEFAULT_POINTS, SWEEP_MAX_POINTS, sweepThickness } from './sweep';
+export type { SweepCase, SweepOptions, SweepPoint, SweepResult } from './sweep';
+
+// Batch screening from CSV
+export { CHECKS_CSV_COLUMNS, checksToCsv, csvField, readCsvCases } from './batch/csv';
+export type { CsvCase } from './batch/csv';

@@ -8,6 +8,9 @@ export interface CheckValue {
   readonly inputs: Readonly<Record<string, number | string>>;
   readonly expected: Readonly<Record<string, number>>;
   readonly tolerance_rel: number;
+  /** A second figure worked out from the exact definition or formula, where the file gives one. */
+  readonly computed_check?: Readonly<Record<string, number>>;
+  readonly note?: string;
 }
 
 const all = values as readonly CheckValue[];

@@ -86,17 +86,66 @@ export function assembleReport(
   return report;
 }
 
-/** A report never carries NaN or ±Infinity; finding one is an engine bug, not a user error. */
-function assertFinite(value: unknown, where: string): void {
-  if (typeof value === 'number') {
-    if (!Number.isFinite(value)) throw new Error(`engine bug: non-finite number at ${where}`);
-    return;
+/**
+ * A report never carries NaN or ±Infinity; finding one is an engine bug, not a
+ * user error. The numbers of a report sit in the fields its type names (and
+ * anywhere in `inputs`), so only those are read; nothing is allocated unless
+ * one is found, and then the full walk names where.
+ */
+function assertFinite(report: Report, where: string): void {
+  if (reportHasNonFinite(report)) {
+    throw new Error(`engine bug: non-finite number at ${pathOfNonFinite(report, where)}`);
   }
+}
+
+function bad(value: number): boolean {
+  return !Number.isFinite(value);
+}
+
+function stepsHaveNonFinite(steps: Report['steps']): boolean {
+  for (let i = 0; i < steps.length; i++) {
+    const v = steps[i]!.value;
+    if (v !== null && bad(v)) return true;
+  }
+  return false;
+}
+
+function reportHasNonFinite(report: Report): boolean {
+  if (bad(report.ambient.pressure)) return true;
+  if (report.ambient.altitude !== undefined && bad(report.ambient.altitude)) return true;
+  if (report.governing && bad(report.governing.utilisation)) return true;
+  if (stepsHaveNonFinite(report.steps)) return true;
+  for (const c of report.cases) {
+    const lc = c.loadCase;
+    if (bad(lc.internal) || bad(lc.external) || bad(lc.differential) || bad(lc.factor)) return true;
+    if (stepsHaveNonFinite(c.steps)) return true;
+    for (const k of c.checks)
+      if (bad(k.demand) || bad(k.capacity) || bad(k.utilisation)) return true;
+    for (const o of c.outputs) if (bad(o.value)) return true;
+    if (c.governing && bad(c.governing.utilisation)) return true;
+  }
+  return hasNonFinite(report.inputs);
+}
+
+function hasNonFinite(value: unknown): boolean {
+  if (typeof value === 'number') return !Number.isFinite(value);
+  if (value === null || typeof value !== 'object') return false;
   if (Array.isArray(value)) {
-    value.forEach((v, i) => assertFinite(v, `${where}.${i}`));
-    return;
+    for (let i = 0; i < value.length; i++) if (hasNonFinite(value[i])) return true;
+    return false;
   }
-  if (value !== null && typeof value === 'object') {
-    for (const [k, v] of Object.entries(value)) assertFinite(v, `${where}.${k}`);
+  const record = value as Record<string, unknown>;
+  for (const key in record) if (hasNonFinite(record[key])) return true;
+  return false;
+}
+
+function pathOfNonFinite(value: unknown, where: string): string {
+  if (Array.isArray(value)) {
+    for (let i = 0; i < value.length; i++)
+      if (hasNonFinite(value[i])) return pathOfNonFinite(value[i], `${where}.${i}`);
+  } else if (value !== null && typeof value === 'object') {
+    for (const [k, v] of Object.entries(value))
+      if (hasNonFinite(v)) return pathOfNonFinite(v, `${where}.${k}`);
   }
+  return where;
 }

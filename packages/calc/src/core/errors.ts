@@ -21,7 +21,12 @@ export class CalcInputError extends Error {
 function describeIssue(issue: z.core.$ZodIssue): string {
   switch (issue.code) {
     case 'invalid_type':
-      return issue.input === undefined ? 'is required' : `must be ${article(issue.expected)}`;
+      // A schema's own message (e.g. "fastener count must be a whole number") stands; zod's
+      // default ends "received undefined" for a missing field (issues carry no input).
+      if (!issue.message.startsWith('Invalid input')) return issue.message;
+      return issue.input === undefined && / received undefined$/.test(issue.message)
+        ? 'is required'
+        : `must be ${article(issue.expected)}`;
     case 'unrecognized_keys':
       return issue.keys.length === 1
         ? `unknown field "${issue.keys[0]}"`
@@ -44,13 +49,27 @@ function article(expected: string): string {
   return `a ${expected}`;
 }
 
-/** zod issues → field-named issues; the path is dotted, list indices included. */
+/**
+ * zod issues → field-named issues; the path is dotted, list indices included.
+ * A union none of whose options fits reports the option that the value has
+ * the shape of (all its issues below the value itself), so a custom material
+ * missing its strength says "material.strength: is required" rather than that
+ * the material is neither an id nor an object.
+ */
 export function issuesFromZod(
   error: z.ZodError,
   prefix: readonly (string | number)[] = [],
 ): InputIssue[] {
-  return error.issues.map((issue) => ({
-    path: [...prefix, ...issue.path].map(String).join('.'),
-    message: describeIssue(issue),
-  }));
+  return error.issues.flatMap((issue) => expandIssue(issue, prefix));
+}
+
+function expandIssue(issue: z.core.$ZodIssue, prefix: readonly PropertyKey[]): InputIssue[] {
+  const path = [...prefix, ...issue.path];
+  if (issue.code === 'invalid_union' && issue.errors.length > 0) {
+    const shaped = issue.errors.filter(
+      (branch) => branch.length > 0 && branch.every((i) => i.path.length > 0),
+    );
+    if (shaped.length === 1) return shaped[0]!.flatMap((i) => expandIssue(i, path));
+  }
+  return [{ path: path.map(String).join('.'), message: describeIssue(issue) }];
 }

@@ -25,7 +25,17 @@ export class Trail {
       throw new Error(`engine bug: check ${check.id} has capacity ${check.capacity}`);
     }
     const utilisation = Math.abs(check.demand) / check.capacity;
-    const full: Check = { ...check, utilisation, pass: utilisation <= 1 };
+    // Built field by field (not spread): the same key order for every method.
+    const full: Check = {
+      id: check.id,
+      label: check.label,
+      demand: check.demand,
+      capacity: check.capacity,
+      unit: check.unit,
+      basis: check.basis,
+      utilisation,
+      pass: utilisation <= 1,
+    };
     this.checks.push(full);
     return full;
   }

@@ -132,7 +132,7 @@ export const MATERIALS: readonly Material[] = [
     sources: {
       elasticModulus: '68.9 GPa, Aluminum Association typical values',
       poissonRatio: '0.33, Aluminum Association typical values',
-      strength: 'welded F_ty ≈ 20 ksi (138 MPa), as quoted from MMPDS-01',
+      strength: 'welded F_ty about 20 ksi (138 MPa), as quoted from MMPDS-01',
       density: '2700 kg/m³, Aluminum Association typical values',
       designFactor: '1.5 on yield (common practice, no source)',
     },

@@ -24,9 +24,9 @@ export const ISA_GAS_CONSTANT = 8.31432;
 export const ISA_EARTH_RADIUS = 6_356_766;
 /** Tropopause geopotential altitude, m. */
 export const ISA_TROPOPAUSE = 11_000;
-/** Upper limit of what this module computes (top of the isothermal layer), m geopotential. */
+/** Upper limit of what this module computes (in the isothermal layer), m, geometric or geopotential. */
 export const ISA_MAX_ALTITUDE = 20_000;
-/** Lowest altitude accepted (the Dead Sea shore is at about −430 m; ISO 2533 tables start at −2000 m). */
+/** Lowest site altitude accepted, m geometric (the Dead Sea shore is at about −430 m; ISO 2533 tables start at −2000 m). */
 export const ISA_MIN_ALTITUDE = -2_000;
 
 const TROPOPAUSE_TEMPERATURE = ISA_T0 - ISA_LAPSE_RATE * ISA_TROPOPAUSE; // 216.65 K
@@ -50,16 +50,26 @@ export function geopotentialFromGeometric(geometricAltitude: number): number {
   return (ISA_EARTH_RADIUS * geometricAltitude) / (ISA_EARTH_RADIUS + geometricAltitude);
 }
 
-/** The standard atmosphere at a geopotential altitude (m), −2000 m to 20 000 m. */
+/** Geopotential altitude of the lowest site accepted (−2000 m geometric), m. */
+const MIN_GEOPOTENTIAL = geopotentialFromGeometric(ISA_MIN_ALTITUDE);
+
+/**
+ * The standard atmosphere at a geopotential altitude (m), from that of a
+ * −2000 m site (−2000.63 m) to 20 000 m.
+ */
 export function standardAtmosphereAtGeopotential(
   geopotentialAltitude: number,
 ): StandardAtmospherePoint {
   const H = geopotentialAltitude;
-  if (!Number.isFinite(H) || H < ISA_MIN_ALTITUDE || H > ISA_MAX_ALTITUDE) {
+  if (!Number.isFinite(H) || H < MIN_GEOPOTENTIAL || H > ISA_MAX_ALTITUDE) {
     throw new AtmosphereError(
-      `altitude must be between ${ISA_MIN_ALTITUDE} m and ${ISA_MAX_ALTITUDE} m (got ${H} m)`,
+      `geopotential altitude must be between ${MIN_GEOPOTENTIAL.toFixed(2)} m and ${ISA_MAX_ALTITUDE} m (got ${H} m)`,
     );
   }
+  return atGeopotential(H);
+}
+
+function atGeopotential(H: number): StandardAtmospherePoint {
   if (H <= ISA_TROPOPAUSE) {
     const temperature = ISA_T0 - ISA_LAPSE_RATE * H;
     return {
@@ -78,9 +88,18 @@ export function standardAtmosphereAtGeopotential(
   return { geopotentialAltitude: H, temperature: TROPOPAUSE_TEMPERATURE, pressure };
 }
 
-/** The standard atmosphere at a geometric site altitude above mean sea level (m). */
+/**
+ * The standard atmosphere at a geometric site altitude above mean sea level
+ * (m), −2000 m to 20 000 m: the range a site's altitude may take.
+ */
 export function standardAtmosphere(geometricAltitude: number): StandardAtmospherePoint {
-  return standardAtmosphereAtGeopotential(geopotentialFromGeometric(geometricAltitude));
+  const h = geometricAltitude;
+  if (!Number.isFinite(h) || h < ISA_MIN_ALTITUDE || h > ISA_MAX_ALTITUDE) {
+    throw new AtmosphereError(
+      `altitude must be between ${ISA_MIN_ALTITUDE} m and ${ISA_MAX_ALTITUDE} m (got ${h} m)`,
+    );
+  }
+  return atGeopotential(geopotentialFromGeometric(h));
 }
 
 /** Ambient (absolute) pressure at a site altitude, Pa, by the standard atmosphere. */

@@ -27,12 +27,15 @@ export interface ParseOptions {
 
 // A decimal number, optionally a mixed or simple fraction ("1 1/2", "3/8"), optional exponent.
 const NUMBER = String.raw`[+-]?(?:\d+\s+\d+\s*/\s*\d+|\d+\s*/\s*\d+|(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?)`;
-const QUANTITY = new RegExp(String.raw`^\s*(${NUMBER})\s*(.*?)\s*$`);
+// The number at the start of the (trimmed) text; the rest, trimmed, is the unit.
+const LEADING_NUMBER = new RegExp(String.raw`^${NUMBER}`);
 const REFERENCE_SUFFIX = /^(.*?)\s*\(\s*(a|abs|absolute|g|gauge|d|diff|differential)\s*\)$/i;
 // Trade spellings with the reference glued on: psig, psia, barg, bara, kPag, kPaa, inHgV (vacuum)...
 const GLUED_SUFFIX = /^(psi|bar|kPa|MPa|mbar)(g|a)$/;
 
 function parseNumber(text: string): number {
+  // A plain decimal (the usual case) has no spaces or slash: Number() reads it as it is.
+  if (!text.includes('/')) return Number(text);
   const compact = text.replace(/\s+/g, ' ').trim();
   const mixed = /^([+-]?)(\d+) (\d+) ?\/ ?(\d+)$/.exec(compact);
   if (mixed) {
@@ -64,28 +67,32 @@ export function parseQuantity(text: string, options: ParseOptions = {}): Quantit
   if (typeof text !== 'string') throw new QuantityParseError('expected text such as "12 mm"');
   const trimmed = text.trim();
   if (trimmed === '') throw new QuantityParseError('a value is required');
-  if (/^\s*[+-]?\d{1,3}(,\d{3})+(\.\d+)?\b/.test(trimmed) || /^\s*[+-]?\d+,\d+/.test(trimmed)) {
+  if (
+    trimmed.includes(',') &&
+    (/^\s*[+-]?\d{1,3}(,\d{3})+(\.\d+)?\b/.test(trimmed) || /^\s*[+-]?\d+,\d+/.test(trimmed))
+  ) {
     throw new QuantityParseError(
       `"${trimmed}": use a point as the decimal separator and no thousands separators`,
     );
   }
-  const match = QUANTITY.exec(trimmed);
+  const match = LEADING_NUMBER.exec(trimmed);
   if (!match) throw new QuantityParseError(`"${trimmed}" does not start with a number`);
-  const numberText = match[1] ?? '';
-  let unitText = match[2] ?? '';
+  const numberText = match[0];
+  let unitText = trimmed.slice(numberText.length).trimStart();
+  if (numberText.includes('/') && /\/\s*0+$/.test(numberText.trim()))
+    throw new QuantityParseError(`"${numberText}" divides by zero`);
   const value = parseNumber(numberText);
   if (!Number.isFinite(value))
     throw new QuantityParseError(`"${numberText}" is not a finite number`);
-  if (/\/\s*0+$/.test(numberText.trim()))
-    throw new QuantityParseError(`"${numberText}" divides by zero`);
 
   let reference: PressureReference | undefined;
-  const suffix = REFERENCE_SUFFIX.exec(unitText);
+  const suffix = unitText.endsWith(')') ? REFERENCE_SUFFIX.exec(unitText) : null;
   if (suffix) {
     unitText = suffix[1] ?? '';
     reference = referenceOf(suffix[2] ?? '');
   } else {
-    const glued = GLUED_SUFFIX.exec(unitText);
+    const last = unitText.charCodeAt(unitText.length - 1);
+    const glued = last === 97 || last === 103 ? GLUED_SUFFIX.exec(unitText) : null; // "a" or "g"
     if (glued && !findUnit(unitText)) {
       unitText = glued[1] ?? '';
       reference = referenceOf(glued[2] ?? '');

@@ -160,6 +160,14 @@ export const UNITS: readonly UnitDefinition[] = [
     `${NIST} (inch of water 39.2 °F)`,
   ),
   unit(
+    'inH2O_68F',
+    'pressure',
+    INCH * STANDARD_GRAVITY * 998.2067,
+    'inch of water at 68 °F (20 °C)',
+    ['inH2O(68F)', 'inH2O(20C)'],
+    'not in NIST SP 811: computed as 998.2067 kg/m³ (water at 20 °C, from memory) × g0 × 1 in',
+  ),
+  unit(
     'inH2O_60F',
     'pressure',
     248.84,
@@ -262,7 +270,7 @@ export const UNITS: readonly UnitDefinition[] = [
     TNT_ENERGY_PER_KG,
     'kilogram of TNT (conventional)',
     ['kg TNT'],
-    `${NIST} footnote: 1 ton TNT ≡ 4.184 × 10⁹ J`,
+    `${NIST} footnote: 1 ton TNT = 4.184e9 J (by convention)`,
   ),
 
   // temperature (affine)

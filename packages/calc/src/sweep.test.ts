@@ -1,0 +1,138 @@
+import { describe, expect, it } from 'vitest';
+import { checkValue, relativeError } from '../test/check-values';
+import { CalcInputError, findMethod, screen, sweepThickness } from './index';
+
+const plate = (edge: 'clamped' | 'simply-supported', extra: Record<string, unknown> = {}) => ({
+  kind: 'circular-plate',
+  diameter: 0.5,
+  thickness: 0.01,
+  edge,
+  material: {
+    name: 'check steel',
+    elasticModulus: 200e9,
+    poissonRatio: 0.3,
+    strength: 150e6,
+    designFactor: 1.5,
+  },
+  loadCases: [{ name: 'full vacuum', internal: 'full vacuum' }],
+  ...extra,
+});
+
+function issuePath(fn: () => unknown): string | undefined {
+  try {
+    fn();
+  } catch (error) {
+    if (error instanceof CalcInputError) return error.issues[0]?.path;
+    throw error;
+  }
+  return undefined;
+}
+
+describe('sweepThickness', () => {
+  it('finds the closed-form required thickness of a circular plate (Roark Table 11.2, inverted)', () => {
+    // circ_plate_required_thickness: t = a·sqrt(3q/(4S)) clamped, a·sqrt(3(3+ν)q/(8S)) simply
+    // supported, for q = 101 325 Pa, a = 0.25 m, S = 100 MPa, ν = 0.3 (computed from
+    // Roark's formulas as confirmed in Chen, Civil Engineering Handbook, eqs 47.72–47.76).
+    const cv = checkValue('circ_plate_required_thickness');
+    const clamped = sweepThickness(plate('clamped'), { points: 60 });
+    const ss = sweepThickness(plate('simply-supported'), { points: 60 });
+    expect(
+      relativeError(clamped.minimumPassing.value!, cv.expected.thickness_clamped_m!),
+    ).toBeLessThan(1e-9);
+    expect(
+      relativeError(ss.minimumPassing.value!, cv.expected.thickness_simply_supported_m!),
+    ).toBeLessThan(1e-9);
+  });
+
+  it('returns a minimum that passes while a hair thinner fails', () => {
+    const result = sweepThickness(plate('clamped'));
+    const t = result.minimumPassing.value!;
+    const at = (thickness: number) =>
+      screen(plate('clamped', { thickness })).governing!.utilisation;
+    expect(at(t)).toBeLessThanOrEqual(1);
+    expect(at(t * (1 - 1e-9))).toBeGreaterThan(1);
+  });
+
+  it('samples evenly from a quarter to four times the thickness, with utilisation falling', () => {
+    const result = sweepThickness(plate('simply-supported'));
+    expect(result.parameter).toBe('thickness');
+    expect(result.unit).toBe('m');
+    expect(result.current).toBe(0.01);
+    expect(result.points).toHaveLength(50);
+    expect(result.points[0]!.value).toBeCloseTo(0.0025, 15);
+    expect(result.points[49]!.value).toBe(0.04);
+    for (let i = 1; i < result.points.length; i++) {
+      expect(result.points[i]!.value).toBeGreaterThan(result.points[i - 1]!.value);
+      expect(result.points[i]!.utilisation).toBeLessThan(result.points[i - 1]!.utilisation);
+    }
+  });
+
+  it('gives at each point the numbers a full screening gives', () => {
+    const result = sweepThickness(plate('clamped', { deflectionLimit: '1 mm' }), {
+      from: '4 mm',
+      to: '20 mm',
+      points: 9,
+    });
+    for (const p of result.points) {
+      const report = screen(plate('clamped', { deflectionLimit: '1 mm', thickness: p.value }));
+      expect(p.utilisation).toBe(report.governing!.utilisation);
+      expect(p.pass).toBe(report.verdict !== 'fail');
+      const outputs = Object.fromEntries(report.cases[0]!.outputs.map((o) => [o.id, o.value]));
+      expect(p.cases[0]!.outputs).toEqual(outputs);
+      expect(p.cases[0]!.name).toBe('full vacuum');
+    }
+  });
+
+  it('keeps the default range below the radius (the upper bound)', () => {
+    const result = sweepThickness(plate('clamped', { diameter: '60 mm', thickness: '10 mm' }));
+    expect(result.points.at(-1)!.value).toBeLessThan(0.03);
+    expect(result.points.at(-1)!.value).toBeCloseTo(0.03 * 0.999, 12);
+  });
+
+  it('moves a default end that breaks a rule of the method to the last valid value', () => {
+    // A quarter of 10 mm is below the 3 mm corrosion allowance ("must be less than the thickness").
+    const result = sweepThickness(plate('clamped', { corrosionAllowance: '3 mm' }));
+    expect(result.points[0]!.value).toBeGreaterThan(0.003);
+    expect(result.points[0]!.value).toBeLessThan(0.003 * (1 + 1e-6));
+    expect(result.points.every((p) => Number.isFinite(p.utilisation))).toBe(true);
+    expect(result.minimumPassing.value).toBeGreaterThan(0.003);
+  });
+
+  it('says when the minimum is not in the range', () => {
+    const thin = sweepThickness(plate('clamped'), { from: '0.5 mm', to: '2 mm' });
+    expect(thin.minimumPassing.value).toBeNull();
+    expect(thin.minimumPassing.note).toMatch(/^not found in range: even/);
+    const thick = sweepThickness(plate('clamped'), { from: '20 mm', to: '40 mm' });
+    expect(thick.minimumPassing.value).toBeNull();
+    expect(thick.minimumPassing.note).toMatch(/already passes/);
+  });
+
+  it('names the field of a bad option or input', () => {
+    expect(issuePath(() => sweepThickness(plate('clamped'), { points: 1 }))).toBe('sweep.points');
+    expect(issuePath(() => sweepThickness(plate('clamped'), { points: 501 }))).toBe('sweep.points');
+    expect(issuePath(() => sweepThickness(plate('clamped'), { points: 2.5 }))).toBe('sweep.points');
+    expect(issuePath(() => sweepThickness(plate('clamped'), { from: '12 parsecs' }))).toBe(
+      'sweep.from',
+    );
+    expect(issuePath(() => sweepThickness(plate('clamped'), { from: -1 }))).toBe('sweep.from');
+    expect(issuePath(() => sweepThickness(plate('clamped'), { to: '1 bar' }))).toBe('sweep.to');
+    expect(issuePath(() => sweepThickness(plate('clamped'), { to: '300 mm' }))).toBe('sweep.to');
+    expect(issuePath(() => sweepThickness(plate('clamped'), { from: '9 mm', to: '5 mm' }))).toBe(
+      'sweep.from',
+    );
+    expect(
+      issuePath(() =>
+        sweepThickness(plate('clamped', { corrosionAllowance: '3 mm' }), { from: '2 mm' }),
+      ),
+    ).toBe('sweep.from');
+    expect(issuePath(() => sweepThickness(plate('clamped', { thickness: '-1 mm' })))).toBe(
+      'thickness',
+    );
+  });
+
+  it('refuses a method without a thickness to sweep', () => {
+    expect(findMethod('flat-area-load')?.sweep).toBeUndefined();
+    const example = findMethod('flat-area-load')!.examples[0]!.input;
+    expect(issuePath(() => sweepThickness(example))).toBe('kind');
+  });
+});
