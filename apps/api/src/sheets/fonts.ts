@@ -14,7 +14,51 @@ import woffConverter from 'woff2sfnt-sfnt2woff';
  */
 const FONTS = path.resolve(import.meta.dirname, '../../../../fonts');
 
-export const FONT_FAMILY = ['Plex Sans', 'Plex Sans Greek', 'Plex Sans Latin Ext'];
+/** The family for text the latin subset covers (nearly all of a sheet). */
+export const FONT_FAMILY = 'Plex Sans';
+/** Glyph-by-glyph fallback for text with Greek (σ, ν, Δ) or other letters beyond latin. */
+export const FALLBACK_FAMILY = ['Plex Sans', 'Plex Sans Greek', 'Plex Sans Latin Ext'];
+
+// The unicode-range of the latin subset (fonts/fonts.css), as [first, last] code points.
+const LATIN_SUBSET: ReadonlyArray<readonly [number, number]> = [
+  [0x0000, 0x00ff],
+  [0x0131, 0x0131],
+  [0x0152, 0x0153],
+  [0x02bb, 0x02bc],
+  [0x02c6, 0x02c6],
+  [0x02da, 0x02da],
+  [0x02dc, 0x02dc],
+  [0x0304, 0x0304],
+  [0x0308, 0x0308],
+  [0x0329, 0x0329],
+  [0x2000, 0x206f],
+  [0x20ac, 0x20ac],
+  [0x2122, 0x2122],
+  [0x2191, 0x2191],
+  [0x2193, 0x2193],
+  [0x2212, 0x2212],
+  [0x2215, 0x2215],
+  [0xfeff, 0xfeff],
+  [0xfffd, 0xfffd],
+];
+
+function inLatinSubset(text: string): boolean {
+  for (const char of text) {
+    const code = char.codePointAt(0)!;
+    if (code <= 0xff) continue;
+    if (!LATIN_SUBSET.some(([first, last]) => code >= first && code <= last)) return false;
+  }
+  return true;
+}
+
+/**
+ * The family a piece of text needs. Fallback makes react-pdf test every
+ * character against every font of the list, which nearly doubled the render
+ * time of a sheet; so only text that needs it gets it.
+ */
+export function familyFor(text: string): string | string[] {
+  return inLatinSubset(text) ? FONT_FAMILY : FALLBACK_FAMILY;
+}
 export const MONO_FAMILY = 'Plex Mono';
 
 let registered = false;

@@ -1,6 +1,7 @@
 import { Document, Image, Page, StyleSheet, Text, View } from '@react-pdf/renderer';
+import type { ReactNode } from 'react';
 import type { CaseReport, Check, Report, Step } from '@hoopline/calc';
-import { FONT_FAMILY, MONO_FAMILY } from './fonts';
+import { FONT_FAMILY, MONO_FAMILY, familyFor } from './fonts';
 import { formatReportValue, inputRows, significant } from './quantity-display';
 import { STAMP_TEXT, type SheetData } from './sheet-data';
 
@@ -122,6 +123,39 @@ const styles = StyleSheet.create({
   qr: { width: 54, height: 54 },
 });
 
+function plainText(node: ReactNode): string {
+  if (typeof node === 'string' || typeof node === 'number') return String(node);
+  if (Array.isArray(node)) return node.map(plainText).join('');
+  return '';
+}
+
+type Style = Parameters<typeof StyleSheet.create>[0][string];
+
+interface TextWithFontProps {
+  readonly style?: Style | readonly Style[];
+  readonly children?: ReactNode;
+  readonly fixed?: boolean;
+  readonly minPresenceAhead?: number;
+  readonly render?: (props: { pageNumber: number; totalPages: number }) => ReactNode;
+}
+
+/** Text that picks its font family from what it says (see familyFor). */
+function T({ style, children, fixed, minPresenceAhead, render }: TextWithFontProps) {
+  const family = familyFor(plainText(children));
+  const own: Style[] = family === FONT_FAMILY ? [] : [{ fontFamily: family }];
+  const list: Style[] = [...(Array.isArray(style) ? style : style ? [style as Style] : []), ...own];
+  return (
+    <Text
+      style={list}
+      {...(fixed ? { fixed } : {})}
+      {...(minPresenceAhead !== undefined ? { minPresenceAhead } : {})}
+      {...(render ? { render } : {})}
+    >
+      {children}
+    </Text>
+  );
+}
+
 function Cell({
   width,
   children,
@@ -136,7 +170,7 @@ function Cell({
   color?: string;
 }) {
   return (
-    <Text
+    <T
       style={[
         styles.cell,
         { width },
@@ -146,15 +180,15 @@ function Cell({
       ]}
     >
       {children}
-    </Text>
+    </T>
   );
 }
 
 function TitleCell({ label, value, last }: { label: string; value: string; last?: boolean }) {
   return (
     <View style={last ? styles.titleCellLast : styles.titleCell}>
-      <Text style={styles.label}>{label}</Text>
-      <Text style={styles.value}>{value || '—'}</Text>
+      <T style={styles.label}>{label}</T>
+      <T style={styles.value}>{value || '—'}</T>
     </View>
   );
 }
@@ -189,14 +223,12 @@ function VerdictBanner({ report }: { report: Report }) {
   };
   return (
     <View style={[styles.verdict, { borderColor: colour }]}>
-      <Text style={{ fontWeight: 600, color: colour }}>
-        Screening result: {words[report.verdict]}
-      </Text>
-      <Text>
+      <T style={{ fontWeight: 600, color: colour }}>Screening result: {words[report.verdict]}</T>
+      <T>
         {report.governing
           ? `Governing: ${report.governing.loadCase} — ${report.governing.checkLabel} — ${percent(report.governing.utilisation)}`
           : 'No governing check'}
-      </Text>
+      </T>
     </View>
   );
 }
@@ -210,7 +242,7 @@ function LoadCases({
 }) {
   return (
     <View>
-      <Text style={styles.h2}>1 Load cases</Text>
+      <T style={styles.h2}>1 Load cases</T>
       <View style={styles.table}>
         <View style={styles.headRow}>
           <Cell width="22%">Case</Cell>
@@ -231,7 +263,7 @@ function LoadCases({
           </View>
         ))}
       </View>
-      <Text style={styles.small}>
+      <T style={styles.small}>
         Ambient {formatReportValue(report.ambient.pressure, 'Pa', system)} (
         {report.ambient.basis === 'altitude'
           ? `ISO 2533 standard atmosphere at ${significant(report.ambient.altitude ?? 0)} m`
@@ -239,7 +271,7 @@ function LoadCases({
             ? 'given'
             : 'standard atmosphere at sea level'}
         ).
-      </Text>
+      </T>
     </View>
   );
 }
@@ -250,7 +282,7 @@ function Inputs({ data }: { data: SheetData }) {
   const both = data.project.unitSystem === 'us';
   return (
     <View>
-      <Text style={styles.h2}>2 Inputs</Text>
+      <T style={styles.h2}>2 Inputs</T>
       <View style={styles.table}>
         <View style={styles.headRow}>
           <Cell width={both ? '30%' : '40%'}>Field</Cell>
@@ -290,9 +322,9 @@ function ChecksTable({
   });
   return (
     <View>
-      <Text style={styles.h2}>3 Checks</Text>
+      <T style={styles.h2}>3 Checks</T>
       {rows.length === 0 ? (
-        <Text>This method computes quantities without a pass/fail criterion.</Text>
+        <T>This method computes quantities without a pass/fail criterion.</T>
       ) : (
         <View style={styles.table}>
           <View style={styles.headRow}>
@@ -343,8 +375,8 @@ function StepRows({ steps, prefix }: { steps: readonly Step[]; prefix: string })
           <Cell width="6%">{`${prefix}${i + 1}`}</Cell>
           <Cell width="20%">{s.label}</Cell>
           <View style={[styles.cell, { width: '30%' }]}>
-            <Text>{s.expression}</Text>
-            <Text style={styles.small}>{s.substituted}</Text>
+            <T>{s.expression}</T>
+            <T style={styles.small}>{s.substituted}</T>
           </View>
           <Cell width="16%">
             {s.value === null ? '—' : `${significant(s.value)} ${s.unit === '1' ? '' : s.unit}`}
@@ -359,19 +391,19 @@ function StepRows({ steps, prefix }: { steps: readonly Step[]; prefix: string })
 function Trail({ report }: { report: Report }) {
   return (
     <View>
-      <Text style={styles.h2}>4 Calculation trail</Text>
-      <Text style={styles.small}>Every step as computed by the engine; values in SI units.</Text>
+      <T style={styles.h2}>4 Calculation trail</T>
+      <T style={styles.small}>Every step as computed by the engine; values in SI units.</T>
       {report.steps.length > 0 ? (
         <View>
-          <Text style={styles.h3}>Common to all load cases</Text>
+          <T style={styles.h3}>Common to all load cases</T>
           <StepRows steps={report.steps} prefix="C" />
         </View>
       ) : null}
       {report.cases.map((c: CaseReport, index) => (
         <View key={c.loadCase.name}>
-          <Text style={styles.h3} minPresenceAhead={40}>
+          <T style={styles.h3} minPresenceAhead={40}>
             Load case {index + 1}: {c.loadCase.name}
-          </Text>
+          </T>
           <StepRows steps={c.steps} prefix={`${index + 1}.`} />
         </View>
       ))}
@@ -382,12 +414,12 @@ function Trail({ report }: { report: Report }) {
 function Warnings({ report }: { report: Report }) {
   return (
     <View>
-      <Text style={styles.h2}>5 Validity warnings</Text>
+      <T style={styles.h2}>5 Validity warnings</T>
       {report.warnings.length === 0 ? (
-        <Text>None: every method was used within its stated range.</Text>
+        <T>None: every method was used within its stated range.</T>
       ) : (
         report.warnings.map((w, i) => (
-          <Text
+          <T
             key={`${w.code}-${i}`}
             style={{ marginBottom: 2, color: w.severity === 'outside-validity' ? FAIL : INK }}
           >
@@ -397,7 +429,7 @@ function Warnings({ report }: { report: Report }) {
                 ? 'Caution'
                 : 'Note'}
             {w.loadCase ? ` (${w.loadCase})` : ''}: {w.message}
-          </Text>
+          </T>
         ))
       )}
     </View>
@@ -407,11 +439,11 @@ function Warnings({ report }: { report: Report }) {
 function Cautions({ report }: { report: Report }) {
   return (
     <View>
-      <Text style={styles.h2}>6 Cautions</Text>
+      <T style={styles.h2}>6 Cautions</T>
       {report.cautions.map((c) => (
         <View key={c.code} style={{ marginBottom: 4 }} wrap={false}>
-          <Text style={{ fontWeight: 600 }}>{c.title}</Text>
-          <Text>{c.text}</Text>
+          <T style={{ fontWeight: 600 }}>{c.title}</T>
+          <T>{c.text}</T>
         </View>
       ))}
     </View>
@@ -421,9 +453,9 @@ function Cautions({ report }: { report: Report }) {
 function Attachments({ data }: { data: SheetData }) {
   return (
     <View>
-      <Text style={styles.h2}>7 Attachments</Text>
+      <T style={styles.h2}>7 Attachments</T>
       {data.attachments.length === 0 ? (
-        <Text>None.</Text>
+        <T>None.</T>
       ) : (
         <View style={styles.table}>
           <View style={styles.headRow}>
@@ -460,39 +492,37 @@ export function SheetDocument({ data, qrDataUrl }: { data: SheetData; qrDataUrl:
     >
       <Page size={data.paperSize} style={styles.page}>
         <View style={styles.runningHead} fixed>
-          <Text style={styles.brand}>HOOPLINE · SCREENING SHEET</Text>
-          <Text>
+          <T style={styles.brand}>HOOPLINE · SCREENING SHEET</T>
+          <T>
             {project.number} · {component.name} · rev {revision.number} · {revision.status}
-          </Text>
+          </T>
         </View>
-        <Text style={styles.stamp} fixed>
+        <T style={styles.stamp} fixed>
           {stamp}
-        </Text>
+        </T>
         <View style={styles.footer} fixed>
           <View style={styles.footerText}>
-            <Text>
+            <T>
               Content hash (SHA-256 of inputs, engine version and report):{' '}
-              <Text style={styles.mono}>{revision.contentHash}</Text>
-            </Text>
-            <Text>
+              <T style={styles.mono}>{revision.contentHash}</T>
+            </T>
+            <T>
               Verify code{' '}
-              <Text style={[styles.mono, { fontSize: 9, fontWeight: 500 }]}>
-                {revision.verifyCode}
-              </Text>{' '}
+              <T style={[styles.mono, { fontSize: 9, fontWeight: 500 }]}>{revision.verifyCode}</T>{' '}
               at {data.verifyUrl}
-            </Text>
-            <Text>
+            </T>
+            <T>
               {stamp}. Screening only; defer to the applicable code and a qualified engineer.
               Generated {when(data.generatedAt)}.
-            </Text>
-            <Text render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />
+            </T>
+            <T render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />
           </View>
           <Image style={styles.qr} src={qrDataUrl} />
         </View>
 
         <View style={styles.body}>
           <View style={styles.titleBlock}>
-            <Text style={styles.sheetTitle}>{report.title}</Text>
+            <T style={styles.sheetTitle}>{report.title}</T>
             <View style={styles.titleRow}>
               <TitleCell label="Project" value={`${project.number} — ${project.name}`} />
               <TitleCell label="Client" value={project.client} />
@@ -519,22 +549,20 @@ export function SheetDocument({ data, qrDataUrl }: { data: SheetData; qrDataUrl:
           </View>
 
           <View style={styles.caution}>
-            <Text style={styles.cautionTitle}>Screening only — not a code calculation</Text>
-            <Text>
+            <T style={styles.cautionTitle}>Screening only — not a code calculation</T>
+            <T>
               This sheet records a first-pass screening by textbook formulas. Final design,
               fabrication and testing must follow the applicable pressure-equipment code (for
               example ASME BPVC Section VIII, EN 13445, the Pressure Equipment Directive) and local
               regulations, and be approved by a qualified engineer (licensed where the law requires
               it).
-            </Text>
+            </T>
           </View>
 
           <VerdictBanner report={report} />
-          {revision.note ? (
-            <Text style={{ marginBottom: 6 }}>Revision note: {revision.note}</Text>
-          ) : null}
+          {revision.note ? <T style={{ marginBottom: 6 }}>Revision note: {revision.note}</T> : null}
           {countersign?.comment ? (
-            <Text style={{ marginBottom: 6 }}>Checker’s comment: {countersign.comment}</Text>
+            <T style={{ marginBottom: 6 }}>Checker’s comment: {countersign.comment}</T>
           ) : null}
 
           <LoadCases report={report} system={project.unitSystem} />
