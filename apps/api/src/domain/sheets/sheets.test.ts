@@ -204,6 +204,8 @@ describe('the stamped-for-review sheet (rendered through the API, read back with
       expect(text).toContain('FOR REVIEW — NOT FOR CONSTRUCTION');
       expect(text).not.toContain('DRAFT — NOT CHECKED');
       expect(text).toContain('Screening only — not a code calculation');
+      // Greek symbols of the trail come through the fallback fonts intact.
+      expect(text).toMatch(/[σΔνγ]/);
       expect(text).toMatch(/qualified engineer/);
       for (const caution of created.revision.report['cautions'] as Array<{ title: string }>) {
         expect(text).toContain(caution.title);
