@@ -66,7 +66,7 @@ export type {
 } from './core/report';
 export { CAUTIONS } from './core/cautions';
 export type { CautionCode } from './core/cautions';
-export { CalcInputError } from './core/errors';
+export { CalcInputError, issuesFromZod } from './core/errors';
 export type { InputIssue } from './core/errors';
 export { formatNumber } from './core/format';
 

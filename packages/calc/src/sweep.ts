@@ -1,5 +1,5 @@
 import { CalcInputError, type InputIssue } from './core/errors';
-import { formatNumber } from './core/format';
+import { formatNumber, withoutTrailText } from './core/format';
 import type { MethodDefinition, MethodResult, SweepParameter } from './core/method';
 import { parseComponent, type ParsedComponent } from './screen';
 import { QuantityParseError, parseQuantity } from './units/parse';
@@ -149,8 +149,11 @@ export function sweepThickness(rawInput: unknown, options: SweepOptions = {}): S
   if (!(from < to))
     fail('sweep', `no valid range of ${sweep.id} around ${formatNumber(current)} m`);
 
+  // Each point keeps numbers only, so its trail text is not written (withoutTrailText).
   const evaluate = (value: number) =>
-    method.compute(sweep.set(component.input, value) as never, component.context);
+    withoutTrailText(() =>
+      method.compute(sweep.set(component.input, value) as never, component.context),
+    );
 
   const values: number[] = [];
   for (let i = 0; i < points; i++) {

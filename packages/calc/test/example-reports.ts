@@ -1,8 +1,16 @@
 import type { ComponentKind } from '../src/index';
 import reports from './fixtures/example-reports.json' with { type: 'json' };
 
-/** The kinds whose example reports are stored (the methods that existed when it was written). */
-export const FIXTURE_KINDS: readonly ComponentKind[] = ['flat-area-load', 'circular-plate'];
+/** The kinds whose example reports are stored: every method. */
+export const FIXTURE_KINDS: readonly ComponentKind[] = [
+  'flat-area-load',
+  'circular-plate',
+  'rectangular-plate',
+  'cylindrical-shell',
+  'sphere-or-head',
+  'stored-energy',
+  'pump-down',
+];
 
 /**
  * Inputs beyond the methods' examples, stored too, so that the fixture covers

@@ -37,6 +37,20 @@ function describeIssue(issue: z.core.$ZodIssue): string {
         : issue.message;
     case 'invalid_union':
       return issue.message === 'Invalid input' ? 'is not valid here' : issue.message;
+    case 'too_small':
+      if (!issue.message.startsWith('Too small')) return issue.message;
+      return issue.origin === 'string'
+        ? `must be at least ${String(issue.minimum)} characters`
+        : issue.origin === 'array'
+          ? `must have at least ${String(issue.minimum)} item${Number(issue.minimum) === 1 ? '' : 's'}`
+          : `must be at least ${String(issue.minimum)}`;
+    case 'too_big':
+      if (!issue.message.startsWith('Too big')) return issue.message;
+      return issue.origin === 'string'
+        ? `must be at most ${String(issue.maximum)} characters`
+        : issue.origin === 'array'
+          ? `must have at most ${String(issue.maximum)} item${Number(issue.maximum) === 1 ? '' : 's'}`
+          : `must be at most ${String(issue.maximum)}`;
     default:
       return issue.message;
   }

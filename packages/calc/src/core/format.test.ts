@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { formatNumber, withUnit } from './format';
+import { formatNumber, withUnit, withoutTrailText } from './format';
 
 // The reference is the plain built-in formatting (ECMAScript toPrecision /
 // toExponential, correctly rounded by the spec); formatNumber must give the
@@ -68,5 +68,18 @@ describe('formatNumber', () => {
   it('prints units, none for dimensionless', () => {
     expect(withUnit(0.01, 'm')).toBe('0.01 m');
     expect(withUnit(0.3, '1')).toBe('0.3');
+  });
+});
+
+describe('withoutTrailText', () => {
+  it('switches number text off inside and back on after, even when the callback throws', () => {
+    expect(withoutTrailText(() => `${formatNumber(101325)}|${withUnit(0.012, 'm')}`)).toBe('|');
+    expect(() =>
+      withoutTrailText(() => {
+        throw new Error('boom');
+      }),
+    ).toThrow('boom');
+    expect(formatNumber(101325)).toBe('101325');
+    expect(withUnit(0.012, 'm')).toBe('0.012 m');
   });
 });

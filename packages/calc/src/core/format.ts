@@ -11,6 +11,25 @@
  * checks the shortcut against the built-ins over random doubles.
  */
 
+// While a sweep runs, the trail text it throws away is not written: only the
+// numbers of each point are kept. Set by withoutTrailText(), never left set.
+let textless = false;
+
+/**
+ * Runs `fn` with number formatting switched off (formatNumber and withUnit
+ * return ''), for callers that keep only the numbers of a report, such as a
+ * thickness sweep. The engine is synchronous, so nothing else runs meanwhile.
+ */
+export function withoutTrailText<T>(fn: () => T): T {
+  const before = textless;
+  textless = true;
+  try {
+    return fn();
+  } finally {
+    textless = before;
+  }
+}
+
 // Exact powers of ten as doubles (10^0 … 10^22 are exactly representable).
 const POW10: readonly number[] = Array.from({ length: 23 }, (_, k) => Number(`1e${k}`));
 
@@ -19,6 +38,7 @@ const POW10: readonly number[] = Array.from({ length: 23 }, (_, k) => Number(`1e
  * "3.37668e-4") outside 1e-3…1e7 ("7200000", "3201240" inside).
  */
 export function formatNumber(value: number): string {
+  if (textless) return '';
   if (value === 0) return '0';
   if (!Number.isFinite(value)) return String(value);
   const magnitude = value < 0 ? -value : value;
@@ -113,5 +133,6 @@ function trimZeros(text: string): string {
 
 /** A value with its unit for a substituted expression: "0.01 m", "2e11 Pa". */
 export function withUnit(value: number, unit: string): string {
+  if (textless) return '';
   return unit === '1' || unit === '' ? formatNumber(value) : `${formatNumber(value)} ${unit}`;
 }

@@ -31,7 +31,7 @@ export interface Material {
 }
 
 /**
- * Built-in screening properties at room temperature (METHODS.md §j). Each
+ * Built-in screening properties at room temperature (Hoopline method notes §j). Each
  * value carries its source, or "from memory" where it was recalled.
  */
 export const MATERIALS: readonly Material[] = [
@@ -156,7 +156,7 @@ export const MATERIALS: readonly Material[] = [
       strength: 'tensile 69–75 MPa: US Plastic sheet data, designerdata.nl (72 MPa taken)',
       density: '1190 kg/m³: US Plastic sheet data',
       designFactor:
-        '10 on short-term tensile strength, the level below which METHODS.md §j warns for acrylic windows (derived screening rule; PVHO-1 conversion factors of order 10 from memory)',
+        '10 on short-term tensile strength, the level below which Hoopline method notes §j warns for acrylic windows (derived screening rule; PVHO-1 conversion factors of order 10 from memory)',
     },
     notes:
       'Creeps and crazes; long-term continuous stress is usually held to about 10 MPa at 23 °C (from memory).',
@@ -202,7 +202,7 @@ export const MATERIALS: readonly Material[] = [
         'bending strength reference value 25 MPa (DIN 52292): glass maker’s mechanical properties page',
       density: '2.23 g/cm³: glass maker’s mechanical properties page',
       designFactor:
-        '7, the conservative end of the 4–7 range METHODS.md §j gives for glass on the design value (derived screening rule)',
+        '7, the conservative end of the 4–7 range Hoopline method notes §j gives for glass on the design value (derived screening rule)',
     },
     notes:
       'Strength is statistical and set by surface flaws; tempered glass or a fragment shield is prudent.',

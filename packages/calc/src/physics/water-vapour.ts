@@ -2,14 +2,14 @@
  * Saturation (vapour) pressure of water over liquid water.
  *
  * A chamber that holds liquid water cannot be pumped below this pressure
- * until the water has evaporated or frozen (METHODS.md §i).
+ * until the water has evaporated or frozen (Hoopline method notes §i).
  */
 
 /** Lowest temperature of IAPWS-IF97 Region 4 (the triple point, rounded as in IF97), K. */
 export const IF97_SATURATION_MIN_TEMPERATURE = 273.15;
 /** Highest temperature of IAPWS-IF97 Region 4 (the critical point), K. */
 export const IF97_SATURATION_MAX_TEMPERATURE = 647.096;
-/** Range of the Buck cross-check here: 0–100 °C, the range it was compared with IF97 over (METHODS.md §i). */
+/** Range of the Buck cross-check here: 0–100 °C, the range it was compared with IF97 over (Hoopline method notes §i). */
 export const BUCK_MIN_TEMPERATURE = 273.15;
 export const BUCK_MAX_TEMPERATURE = 373.15;
 
@@ -18,7 +18,7 @@ export class WaterVapourRangeError extends RangeError {
   override readonly name = 'WaterVapourRangeError';
 }
 
-// IAPWS-IF97 Region 4 coefficients n1…n10 (METHODS.md §i; identical in several
+// IAPWS-IF97 Region 4 coefficients n1…n10 (Hoopline method notes §i; identical in several
 // public transcriptions citing "IAPWS IF97 Section 8.1, Eq 30").
 const N1 = 1167.0521452767;
 const N2 = -724213.16703206;

@@ -18,7 +18,7 @@ import {
  * supported or clamped: Roark's Formulas for Stress and Strain, Table 11.2
  * cases 10a and 10b with r0 = 0 (the case numbers from memory); the formulas as
  * confirmed in Chen (ed.), The Civil Engineering Handbook, 2nd ed., eqs
- * 47.72–47.76 (METHODS.md §c). Kirchhoff thin plate, small deflection.
+ * 47.72–47.76 (Hoopline method notes §c). Kirchhoff thin plate, small deflection.
  */
 const SOURCE_SS = 'Roark, Table 11.2 case 10a, r0 = 0 (Chen, Civil Eng. Handbook, eqs 47.72–47.76)';
 const SOURCE_CLAMPED =
@@ -87,7 +87,7 @@ function caseTrail(input: Parsed, c: Common, loadCase: ResolvedLoadCase): Trail 
     }`,
     value: Math.abs(loadCase.differential),
     unit: 'Pa',
-    source: 'definition of differential pressure (METHODS.md §a.2)',
+    source: 'definition of differential pressure (Hoopline method notes §a.2)',
   });
   const clamped = input.edge === 'clamped';
   const source = clamped ? SOURCE_CLAMPED : SOURCE_SS;
@@ -235,7 +235,7 @@ function caseTrail(input: Parsed, c: Common, loadCase: ResolvedLoadCase): Trail 
     );
   }
 
-  // Validity (METHODS.md §c): small-deflection theory holds while y_max ≲ t/2.
+  // Validity (Hoopline method notes §c): small-deflection theory holds while y_max ≲ t/2.
   if (deflection > t / 2) {
     trail.warn(
       'large-deflection',

@@ -35,9 +35,9 @@ import {
 /**
  * Cylindrical shell under a pressure difference, every load case screened:
  * inside higher → thin-wall and Lamé stresses and the ASME VIII-1 UG-27
- * thickness and MAWP (METHODS.md §e); outside higher (vacuum) → elastic
+ * thickness and MAWP (Hoopline method notes §e); outside higher (vacuum) → elastic
  * buckling (Bresse, von Mises, Windenburg–Trilling), plastic collapse, their
- * interaction, a knock-down and a design factor (METHODS.md §f).
+ * interaction, a knock-down and a design factor (Hoopline method notes §f).
  */
 
 /**
@@ -47,7 +47,7 @@ import {
  * §f.6, from memory, derived); the imperfection allowance is inside that factor,
  * so the knock-down on the theoretical elastic pressure defaults to 1. With the
  * Rankine interaction this is never above the EN 13445-3 basis (knock-down 0.5,
- * S = 1.5; METHODS.md §f.5, from memory), which a user can choose instead.
+ * S = 1.5; Hoopline method notes §f.5, from memory), which a user can choose instead.
  */
 export const EXTERNAL_PRESSURE_DEFAULTS = {
   knockdown: 1,
@@ -60,17 +60,17 @@ const NASA_GAMMA = 0.9;
 
 const SOURCE_GEOMETRY = 'geometry';
 const SOURCE_THIN =
-  'thin-wall membrane stress on the mean radius (METHODS.md §e, from memory, standard)';
+  'thin-wall membrane stress on the mean radius (Hoopline method notes §e, from memory, standard)';
 const SOURCE_LAME =
-  'Lamé thick-wall cylinder (METHODS.md §e; Timoshenko, Strength of Materials II; from memory, standard)';
+  'Lamé thick-wall cylinder (Hoopline method notes §e; Timoshenko, Strength of Materials II; from memory, standard)';
 const SOURCE_UG27 =
-  'ASME BPVC VIII-1 UG-27(c)(1) and (c)(2), as reproduced in a mechanical-engineering handbook table (1983 ed.; METHODS.md §e)';
+  'ASME BPVC VIII-1 UG-27(c)(1) and (c)(2), as reproduced in a mechanical-engineering handbook table (1983 ed.; Hoopline method notes §e)';
 const SOURCE_BRESSE =
-  'Bresse/Bryan long cylinder, n = 2: Roark Table 35 case 19a (METHODS.md §f.1), D mean diameter';
+  'Bresse/Bryan long cylinder, n = 2: Roark Table 35 case 19a (Hoopline method notes §f.1), D mean diameter';
 const SOURCE_VON_MISES =
-  'von Mises, lateral plus end pressure, simply supported ends, as PD 5500 §3.6.2 and EN 13445-3 §8.5.2 use it (from memory; METHODS.md §f.2); minimised over integer n >= 2, R mean radius';
+  'von Mises, lateral plus end pressure, simply supported ends, as PD 5500 §3.6.2 and EN 13445-3 §8.5.2 use it (from memory; Hoopline method notes §f.2); minimised over integer n >= 2, R mean radius';
 const SOURCE_WT =
-  'Windenburg & Trilling (1934), Trans. ASME APM-56-20, approximate formula (from memory; METHODS.md §f.3), D mean diameter; cross-check only';
+  'Windenburg & Trilling (1934), Trans. ASME APM-56-20, approximate formula (from memory; Hoopline method notes §f.3), D mean diameter; cross-check only';
 
 /** Input of a cylindrical shell: geometry, material, joint efficiency, external-pressure factors, load cases. */
 export const cylindricalShellSchema = z
@@ -225,7 +225,7 @@ function pressureStep(trail: Trail, loadCase: ResolvedLoadCase): number {
     }`,
     value: Math.abs(loadCase.differential),
     unit: 'Pa',
-    source: 'definition of differential pressure (METHODS.md §a.2)',
+    source: 'definition of differential pressure (Hoopline method notes §a.2)',
   });
 }
 
@@ -401,7 +401,7 @@ function internalCaseTrail(
   // Each check reaches 1 at its own pressure (UG-27: the MAWP); the smallest is the allowable.
   trail.output('allowable-pressure', 'Allowable pressure difference', capacity.allowable, 'Pa');
 
-  // UG-27 applicability (from memory, METHODS.md §e): circumferential P <= 0.385·S·E; the
+  // UG-27 applicability (from memory, Hoopline method notes §e): circumferential P <= 0.385·S·E; the
   // longitudinal limit 1.25·S·E is the looser one, so the first warning covers both.
   if (p > 0.385 * SE) {
     trail.warn(
@@ -644,7 +644,7 @@ function externalSummary(
     value: Lc,
     unit: 'm',
     source:
-      'derived by equating Windenburg–Trilling and Bresse (METHODS.md §f.4); longer shells buckle as long tubes in two lobes',
+      'derived by equating Windenburg–Trilling and Bresse (Hoopline method notes §f.4); longer shells buckle as long tubes in two lobes',
   });
   common.step({
     id: 'long-tube-length',
@@ -653,7 +653,8 @@ function externalSummary(
     substituted: `L_long = 4.90·${rTxt}·sqrt(${rTxt}/${tTxt})`,
     value: roarkLongTubeLength(t, r),
     unit: 'm',
-    source: 'Roark Table 35 case 19a validity, L > 4.90·R·sqrt(R/t) (METHODS.md §f.1, §f.4)',
+    source:
+      'Roark Table 35 case 19a validity, L > 4.90·R·sqrt(R/t) (Hoopline method notes §f.1, §f.4)',
   });
   common.step({
     id: 'nasa-sp8007',
@@ -663,7 +664,7 @@ function externalSummary(
     value: nasaModeratelyLongPressure(E, nu, t, r, L, NASA_GAMMA),
     unit: 'Pa',
     source:
-      'NASA SP-8007 (1968), lateral pressure, moderately long cylinders; formula and γ = 0.90 from memory (METHODS.md §f.6); the same form as Windenburg–Trilling without the 0.45 term; cross-check only',
+      'NASA SP-8007 (1968), lateral pressure, moderately long cylinders; formula and γ = 0.90 from memory (Hoopline method notes §f.6); the same form as Windenburg–Trilling without the 0.45 term; cross-check only',
   });
   const plastic = common.step({
     id: 'plastic-pressure',
@@ -672,7 +673,8 @@ function externalSummary(
     substituted: `p_y = ${withUnit(yieldStress, 'Pa')}·${tTxt}/${rTxt}`,
     value: plasticPressure(yieldStress, t, r),
     unit: 'Pa',
-    source: 'p_y = σ_y·t/R, R mean radius (METHODS.md §f.5; EN 13445-3 P_y, from memory)',
+    source:
+      'p_y = σ_y·t/R, R mean radius (Hoopline method notes §f.5; EN 13445-3 P_y, from memory)',
   });
   const userKnockdown = input.externalPressure?.knockdown !== undefined;
   const knockdown = common.step({
@@ -684,7 +686,7 @@ function externalSummary(
     unit: '1',
     source: userKnockdown
       ? 'entered by the user'
-      : 'default 1: the imperfection allowance is carried by the design factor 3 below, as in the ASME VIII-1 UG-28 charts (from memory, derived; METHODS.md §f.6). For the EN 13445-3 basis enter κ = 0.5 with a design factor of 1.5 (from memory; METHODS.md §f.5)',
+      : 'default 1: the imperfection allowance is carried by the design factor 3 below, as in the ASME VIII-1 UG-28 charts (from memory, derived; Hoopline method notes §f.6). For the EN 13445-3 basis enter κ = 0.5 with a design factor of 1.5 (from memory; Hoopline method notes §f.5)',
   });
   const elastic = common.step({
     id: 'elastic-pressure',
@@ -709,8 +711,8 @@ function externalSummary(
     value: collapsePressure(elastic, plastic, basis.interaction),
     unit: 'Pa',
     source: rankine
-      ? `Rankine, 1/p_c = 1/p_e + 1/p_y (from memory; METHODS.md §f.5)${userInteraction ? '' : '; default, the more conservative of the two offered'}`
-      : 'API STD 2RD form, as seen implemented in public code (METHODS.md §f.5); less conservative than Rankine',
+      ? `Rankine, 1/p_c = 1/p_e + 1/p_y (from memory; Hoopline method notes §f.5)${userInteraction ? '' : '; default, the more conservative of the two offered'}`
+      : 'API STD 2RD form, as seen implemented in public code (Hoopline method notes §f.5); less conservative than Rankine',
   });
   const userFactor = input.externalPressure?.designFactor !== undefined;
   const designFactor = common.step({
@@ -722,7 +724,7 @@ function externalSummary(
     unit: '1',
     source: userFactor
       ? 'entered by the user'
-      : 'default 3: the factor the ASME VIII-1 UG-28 charts imply on the predicted collapse pressure, P_a = 2·A·E/(3·D_o/t) elastic and 4·B/(3·D_o/t) plastic (from memory, derived; METHODS.md §f.6)',
+      : 'default 3: the factor the ASME VIII-1 UG-28 charts imply on the predicted collapse pressure, P_a = 2·A·E/(3·D_o/t) elastic and 4·B/(3·D_o/t) plastic (from memory, derived; Hoopline method notes §f.6)',
   });
   const allowable = common.step({
     id: 'external-allowable-pressure',
@@ -912,7 +914,7 @@ export const cylindricalShell = defineMethod({
       return balancedCaseTrail(lc);
     });
 
-    // Validity ranges (METHODS.md §e, §f; the ASME limits from memory).
+    // Validity ranges (Hoopline method notes §e, §f; the ASME limits from memory).
     const R = g.insideRadius;
     if ((internal || external) && R / t < 10) {
       warnings.push({
@@ -957,7 +959,7 @@ export const cylindricalShell = defineMethod({
         code: 'open-ends-buckling',
         severity: 'info',
         message:
-          'open ends: with no end load the buckling pressure (lateral pressure only) is somewhat higher than the hydrostatic von Mises value used here, which is the conservative one (METHODS.md §f.2)',
+          'open ends: with no end load the buckling pressure (lateral pressure only) is somewhat higher than the hydrostatic von Mises value used here, which is the conservative one (Hoopline method notes §f.2)',
       });
     }
 

@@ -1,6 +1,6 @@
 /**
  * Formulas for cylindrical shells under internal and external pressure
- * (METHODS.md §e and §f), as plain functions of SI numbers so that the
+ * (Hoopline method notes §e and §f), as plain functions of SI numbers so that the
  * method, the ring-spacing search and the tests share one implementation.
  */
 
@@ -19,7 +19,7 @@ export interface LameStresses {
 }
 
 /**
- * Lamé thick-wall cylinder, inner radius a, outer radius b (METHODS.md §e,
+ * Lamé thick-wall cylinder, inner radius a, outer radius b (Hoopline method notes §e,
  * from memory, standard): σ_θ(r) = A + B/r², σ_r(r) = A − B/r² with
  * A = p·a²/(b² − a²), B = p·a²·b²/(b² − a²).
  */
@@ -74,7 +74,7 @@ export function ug27LongitudinalMawp(t: number, R: number, S: number, E: number)
 
 /**
  * Bresse/Bryan long-cylinder elastic buckling (n = 2):
- * p = 2·E/(1 − ν²)·(t/D)³, D mean diameter (Roark Table 35 case 19a, METHODS.md §f.1).
+ * p = 2·E/(1 − ν²)·(t/D)³, D mean diameter (Roark Table 35 case 19a, Hoopline method notes §f.1).
  */
 export function bressePressure(E: number, nu: number, t: number, meanDiameter: number): number {
   const ratio = t / meanDiameter;
@@ -87,7 +87,7 @@ export interface LobeBuckling {
   readonly lobes: number;
 }
 
-/** von Mises hydrostatic buckling pressure for one lobe number n (METHODS.md §f.2). */
+/** von Mises hydrostatic buckling pressure for one lobe number n (Hoopline method notes §f.2). */
 export function vonMisesPressureAt(
   E: number,
   nu: number,
@@ -113,7 +113,7 @@ const MAX_LOBES = 100_000;
 /**
  * von Mises elastic buckling of a cylinder with simply supported ends under
  * lateral plus end pressure (the hydrostatic form of PD 5500 §3.6.2 and
- * EN 13445-3 §8.5.2, from memory; METHODS.md §f.2), minimised over integer
+ * EN 13445-3 §8.5.2, from memory; Hoopline method notes §f.2), minimised over integer
  * n >= 2: p_m = E·t·ε/R, Z = π·R/L, R mean radius. The pressure falls and then
  * rises with n, so the search walks from `startLobes` (a neighbouring
  * solution's n, or 2) and stops once the pressure rises again.
@@ -152,7 +152,7 @@ export function vonMisesHydrostatic(
 
 /**
  * Windenburg–Trilling (1934) approximate short-cylinder formula (from memory,
- * METHODS.md §f.3): p = 2.42·E·(t/D)^2.5/((1 − ν²)^0.75·(L/D − 0.45·(t/D)^0.5)).
+ * Hoopline method notes §f.3): p = 2.42·E·(t/D)^2.5/((1 − ν²)^0.75·(L/D − 0.45·(t/D)^0.5)).
  * Null when the bracket is not positive (a ring-like shell far outside its range).
  */
 export function windenburgTrillingPressure(
@@ -169,21 +169,21 @@ export function windenburgTrillingPressure(
 }
 
 /**
- * Critical length where Windenburg–Trilling equals Bresse (derived, METHODS.md §f.4):
+ * Critical length where Windenburg–Trilling equals Bresse (derived, Hoopline method notes §f.4):
  * L_c = D·(1.21·(1 − ν²)^0.25·sqrt(D/t) + 0.45·sqrt(t/D)).
  */
 export function criticalLength(nu: number, t: number, D: number): number {
   return D * (1.21 * (1 - nu * nu) ** 0.25 * Math.sqrt(D / t) + 0.45 * Math.sqrt(t / D));
 }
 
-/** Roark Table 35 case 19a "long tube" criterion: L > 4.90·R·sqrt(R/t) (METHODS.md §f.4). */
+/** Roark Table 35 case 19a "long tube" criterion: L > 4.90·R·sqrt(R/t) (Hoopline method notes §f.4). */
 export function roarkLongTubeLength(t: number, R: number): number {
   return 4.9 * R * Math.sqrt(R / t);
 }
 
 /**
  * NASA SP-8007 (1968) moderately long cylinder under lateral pressure (from
- * memory, METHODS.md §f.6): p = 0.855·γ·E/(1 − ν²)^0.75·(R/L)·(t/R)^2.5.
+ * memory, Hoopline method notes §f.6): p = 0.855·γ·E/(1 − ν²)^0.75·(R/L)·(t/R)^2.5.
  */
 export function nasaModeratelyLongPressure(
   E: number,
@@ -197,7 +197,7 @@ export function nasaModeratelyLongPressure(
   return ((0.855 * gamma * E) / (1 - nu * nu) ** 0.75) * (R / L) * ratio * ratio * Math.sqrt(ratio);
 }
 
-/** Plastic (yield) collapse pressure p_y = σ_y·t/R, R mean radius (METHODS.md §f.5). */
+/** Plastic (yield) collapse pressure p_y = σ_y·t/R, R mean radius (Hoopline method notes §f.5). */
 export function plasticPressure(yieldStress: number, t: number, R: number): number {
   return (yieldStress * t) / R;
 }
@@ -206,7 +206,7 @@ export function plasticPressure(yieldStress: number, t: number, R: number): numb
 export type Interaction = 'rankine' | 'api-2rd';
 
 /**
- * Elastic–plastic interaction (METHODS.md §f.5): Rankine 1/p_c = 1/p_e + 1/p_y
+ * Elastic–plastic interaction (Hoopline method notes §f.5): Rankine 1/p_c = 1/p_e + 1/p_y
  * (from memory), or the pipeline form p_c = p_e·p_y/sqrt(p_e² + p_y²) attributed
  * to API STD 2RD (seen in public code).
  */

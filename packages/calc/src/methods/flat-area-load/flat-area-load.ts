@@ -9,10 +9,10 @@ import { STANDARD_GRAVITY } from '../../units/units';
 /**
  * Differential-pressure load on a flat closure (door, cover, window) and how
  * it reaches the latches or bolts. F = Δp·A over the area bounded by the seal
- * line (METHODS.md §b).
+ * line (Hoopline method notes §b).
  */
 
-const SOURCE_FORCE = 'F = Δp·A over the seal-line area (statics; METHODS.md §b)';
+const SOURCE_FORCE = 'F = Δp·A over the seal-line area (statics; Hoopline method notes §b)';
 
 const outline = z.discriminatedUnion(
   'shape',
@@ -86,7 +86,7 @@ function caseTrail(
     }`,
     value: dp,
     unit: 'Pa',
-    source: 'definition of differential pressure (METHODS.md §a.2)',
+    source: 'definition of differential pressure (Hoopline method notes §a.2)',
   });
   const totalForce = trail.step({
     id: 'resultant-force',
@@ -139,7 +139,7 @@ function caseTrail(
     substituted: direction,
     value: null,
     unit: '1',
-    source: 'statics of a seated closure (METHODS.md §b caution)',
+    source: 'statics of a seated closure (Hoopline method notes §b caution)',
   });
 
   trail.output('pressure-difference', 'Pressure difference', dp, 'Pa');
@@ -159,8 +159,8 @@ function caseTrail(
       value: perFastener,
       unit: 'N',
       source: pushesOff
-        ? 'equal share, no prying or gasket load (METHODS.md §b)'
-        : 'the pressure holds a seated closure shut (METHODS.md §b caution)',
+        ? 'equal share, no prying or gasket load (Hoopline method notes §b)'
+        : 'the pressure holds a seated closure shut (Hoopline method notes §b caution)',
     });
     trail.output('load-per-fastener', 'Pressure load per fastener', perFastener, 'N');
     if (input.fastenerCapacity !== undefined) {

@@ -23,7 +23,7 @@ import {
 /**
  * Rough-vacuum pump-down of a chamber at a constant effective pumping speed,
  * with a constant gas load (leaks, outgassing) and the pump's own base
- * pressure (METHODS.md §i):
+ * pressure (Hoopline method notes §i):
  *
  *   V·dp/dt = −S·p + Q  →  p(t) = p_u + (p0 − p_u)·e^(−S·t/V),  p_u = p_base + Q/S
  *
@@ -36,9 +36,9 @@ const SOURCE_VENABLES =
 const SOURCE_CONDUCTANCE =
   'conductances add as resistances in series, 1/S_eff = 1/S + 1/C (J.A. Venables, ASU graduate course notes §2.2)';
 
-/** Below this target pressure water desorption dominates an unbaked chamber and the exponential model fails (METHODS.md §i). */
+/** Below this target pressure water desorption dominates an unbaked chamber and the exponential model fails (Hoopline method notes §i). */
 const DESORPTION_LIMIT = 10;
-/** Between this and DESORPTION_LIMIT desorption may already matter (METHODS.md §i, "about 10–100 Pa"). */
+/** Between this and DESORPTION_LIMIT desorption may already matter (Hoopline method notes §i, "about 10–100 Pa"). */
 const DESORPTION_WARNING = 100;
 
 const GAUGE_REFUSED =

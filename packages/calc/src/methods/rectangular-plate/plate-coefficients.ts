@@ -3,7 +3,7 @@ import { formatNumber } from '../../core/format';
 /**
  * Roark's coefficients for rectangular plates under uniform pressure over the
  * whole plate, ν = 0.3 (Roark's Formulas for Stress and Strain, 7th ed.,
- * Table 11.4; METHODS.md §d), and the interpolation between the tabulated
+ * Table 11.4; Hoopline method notes §d), and the interpolation between the tabulated
  * aspect ratios a/b (a = long side, b = short side).
  *
  * Interpolation rule (one rule for every coefficient):
@@ -55,7 +55,7 @@ export const SS_GAMMA: CoefficientTable = {
 /**
  * Roark Table 11.4 case 8a (all edges clamped), ν = 0.3: stress at the centre
  * of the long edge, the maximum. The inf column is the clamped strip,
- * M = q·b²/12 (derived, METHODS.md §d.2).
+ * M = q·b²/12 (derived, Hoopline method notes §d.2).
  */
 export const CLAMPED_BETA1: CoefficientTable = {
   symbol: 'β1',
@@ -81,9 +81,9 @@ export const CLAMPED_ALPHA: CoefficientTable = {
 export const SOURCE_SS_TABLE =
   'Roark’s Formulas for Stress and Strain, 7th ed., Table 11.4 case 1a (all edges simply supported, ν = 0.3)';
 export const SOURCE_CLAMPED_TABLE =
-  'Roark’s Formulas for Stress and Strain, 7th ed., Table 11.4 case 8a (all edges clamped, ν = 0.3); inf column: clamped strip (derived, METHODS.md §d.2)';
+  'Roark’s Formulas for Stress and Strain, 7th ed., Table 11.4 case 8a (all edges clamped, ν = 0.3); inf column: clamped strip (derived, Hoopline method notes §d.2)';
 export const SOURCE_CLAMPED_BETA2 =
-  'Roark’s Formulas for Stress and Strain, 7th ed., Table 11.4 case 8a, centre coefficient (from memory; a finite-difference solution agrees within about 1 %, METHODS.md §d.2); inf column: clamped strip (derived)';
+  'Roark’s Formulas for Stress and Strain, 7th ed., Table 11.4 case 8a, centre coefficient (from memory; a finite-difference solution agrees within about 1 %, Hoopline method notes §d.2); inf column: clamped strip (derived)';
 
 /** A coefficient at one a/b, with the trail text of how it was read or interpolated. */
 export interface InterpolatedCoefficient {

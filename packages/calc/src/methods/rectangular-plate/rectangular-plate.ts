@@ -30,12 +30,12 @@ import {
  * Rectangular flat plate under uniform pressure over its whole area, all
  * edges simply supported or all clamped: Roark's Formulas for Stress and
  * Strain, 7th ed., Table 11.4 cases 1a and 8a (ν = 0.3), σ = β·q·b²/t²,
- * y = α·q·b^4/(E·t³), R = γ·q·b (METHODS.md §d). Kirchhoff thin plate,
+ * y = α·q·b^4/(E·t³), R = γ·q·b (Hoopline method notes §d). Kirchhoff thin plate,
  * small deflection.
  */
 
 const SOURCE_ALPHA_NU =
-  'α proportional to 12·(1 − ν²) through D = E·t³/(12·(1 − ν²)) (METHODS.md §d.3, derived): with simply supported or clamped straight edges w·D/(q·b^4) does not depend on ν, so the scaling is exact in thin-plate theory';
+  'α proportional to 12·(1 − ν²) through D = E·t³/(12·(1 − ν²)) (Hoopline method notes §d.3, derived): with simply supported or clamped straight edges w·D/(q·b^4) does not depend on ν, so the scaling is exact in thin-plate theory';
 /** The Poisson's ratio Roark's Table 11.4 coefficients are for. */
 const TABLE_POISSON = 0.3;
 
@@ -111,7 +111,7 @@ function caseTrail(input: Parsed, c: Common, loadCase: ResolvedLoadCase): Trail 
     }`,
     value: Math.abs(loadCase.differential),
     unit: 'Pa',
-    source: 'definition of differential pressure (METHODS.md §a.2)',
+    source: 'definition of differential pressure (Hoopline method notes §a.2)',
   });
   const source = clamped ? SOURCE_CLAMPED_TABLE : SOURCE_SS_TABLE;
   const bText = withUnit(b, 'm');
@@ -239,7 +239,7 @@ function caseTrail(input: Parsed, c: Common, loadCase: ResolvedLoadCase): Trail 
     );
   }
 
-  // Small-deflection validity: y_max ≲ t/2 (Roark's guideline, from memory; METHODS.md §d.3).
+  // Small-deflection validity: y_max ≲ t/2 (Roark's guideline, from memory; Hoopline method notes §d.3).
   if (deflection > t / 2) {
     trail.warn(
       'large-deflection',
@@ -442,7 +442,7 @@ export const rectangularPlate = defineMethod({
         code: 'clamped-long-plate',
         severity: 'info',
         message:
-          'Roark gives no clamped-plate values between a/b = 2 and inf; the interpolation to the clamped-strip values may read 1–2 % low near a/b = 3, where a finite-difference solution slightly exceeds the strip limits (METHODS.md §d.2, computed)',
+          'Roark gives no clamped-plate values between a/b = 2 and inf; the interpolation to the clamped-strip values may read 1–2 % low near a/b = 3, where a finite-difference solution slightly exceeds the strip limits (Hoopline method notes §d.2, computed)',
       });
     }
     if (!clamped) {
@@ -450,7 +450,7 @@ export const rectangularPlate = defineMethod({
         code: 'corners-held-down',
         severity: 'caution',
         message:
-          'simply supported here means the corners are held down: the corners of a uniformly loaded plate tend to lift, and if they are free the stresses are higher (METHODS.md §d.3)',
+          'simply supported here means the corners are held down: the corners of a uniformly loaded plate tend to lift, and if they are free the stresses are higher (Hoopline method notes §d.3)',
       });
     }
     if (material.brittle && clamped) {

@@ -15,7 +15,7 @@ import {
 
 /**
  * Spheres and dished heads (hemispherical, 2:1 ellipsoidal, torispherical)
- * under internal and external pressure (METHODS.md §e and §g).
+ * under internal and external pressure (Hoopline method notes §e and §g).
  *
  * Internal pressure: the code-form thickness formulas of ASME VIII-1 UG-27(d)
  * and UG-32(d)/(e) (confirmed in the 1983-edition table reproduced in a
@@ -40,7 +40,7 @@ const SOURCE_APPENDIX_1_4 =
 const SOURCE_ZOELLY =
   'Zoelly (1915) / van der Neut, classical buckling of a complete sphere: Huston & Josephs, Practical Stress Analysis in Engineering Design, ch. 31, eq. 31.1';
 const SOURCE_UG28D =
-  'ASME BPVC VIII-1 UG-28(d) for spheres and heads: A = 0.125/(R_o/t), B = A·E/2 in the elastic range, P_a = B/(R_o/t) (from memory; elastic form derived, METHODS.md §g)';
+  'ASME BPVC VIII-1 UG-28(d) for spheres and heads: A = 0.125/(R_o/t), B = A·E/2 in the elastic range, P_a = B/(R_o/t) (from memory; elastic form derived, Hoopline method notes §g)';
 const SOURCE_MEMBRANE =
   'membrane stress of a thin sphere σ = p·R/(2t), mean radius (from memory, standard)';
 
@@ -54,7 +54,7 @@ const SOURCE_MEMBRANE =
 export const DEFAULT_KNOCKDOWN = 0.14;
 /**
  * Design factor on the knocked-down collapse pressure, default: 3, the factor
- * UG-28 implies on predicted collapse for cylinders (METHODS.md §f.6,
+ * UG-28 implies on predicted collapse for cylinders (Hoopline method notes §f.6,
  * derived). With the 0.14 knock-down the elastic allowable is
  * 0.14·1.2105/3 = 0.0565·E·(t/R_o)², within 10 % below the UG-28(d)
  * 0.0625·E·(t/R_o)², so the two routes agree and this one is the lower.
@@ -374,7 +374,7 @@ function pressureStep(trail: Trail, loadCase: ResolvedLoadCase): number {
     }`,
     value: Math.abs(loadCase.differential),
     unit: 'Pa',
-    source: 'definition of differential pressure (METHODS.md §a.2)',
+    source: 'definition of differential pressure (Hoopline method notes §a.2)',
   });
 }
 
@@ -666,7 +666,7 @@ function externalCapacity(
     substituted: `p_e = ${formatNumber(knockdown)}·${withUnit(classical, 'Pa')}`,
     value: knockdown * classical,
     unit: 'Pa',
-    source: 'empirical knock-down on the classical pressure (METHODS.md §g)',
+    source: 'empirical knock-down on the classical pressure (Hoopline method notes §g)',
   });
   const yieldBasis = material.strengthBasis === 'yield';
   const plastic = common.step({
@@ -708,7 +708,7 @@ function externalCapacity(
           value: (elastic * plastic) / Math.hypot(elastic, plastic),
           unit: 'Pa',
           source:
-            'API STD 2RD collapse interaction (confirmed as implemented in public code; METHODS.md §f.5), chosen by the user',
+            'API STD 2RD collapse interaction (confirmed as implemented in public code; Hoopline method notes §f.5), chosen by the user',
         },
   );
   const designFactor = common.step({
@@ -724,7 +724,7 @@ function externalCapacity(
     source:
       options.designFactor !== undefined
         ? 'entered by the user'
-        : 'default 3, the factor ASME VIII-1 UG-28 implies on predicted collapse (METHODS.md §f.6, derived); with γ = 0.14 it lands within 10 % below the UG-28(d) elastic allowable',
+        : 'default 3, the factor ASME VIII-1 UG-28 implies on predicted collapse (Hoopline method notes §f.6, derived); with γ = 0.14 it lands within 10 % below the UG-28(d) elastic allowable',
   });
   const allowable = common.step({
     id: 'allowable-external-pressure',
@@ -733,7 +733,7 @@ function externalCapacity(
     substituted: `p_allow = ${withUnit(collapse, 'Pa')}/${formatNumber(designFactor)}`,
     value: collapse / designFactor,
     unit: 'Pa',
-    source: 'design factor on the collapse pressure (METHODS.md §g)',
+    source: 'design factor on the collapse pressure (Hoopline method notes §g)',
   });
   const factorA = common.step({
     id: 'ug28-factor-a',

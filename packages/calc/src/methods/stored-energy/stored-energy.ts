@@ -8,7 +8,7 @@ import { QuantityParseError, parseQuantity } from '../../units/parse';
 import { TNT_ENERGY_PER_KG } from '../../units/units';
 
 /**
- * Energy stored in a gas-filled or evacuated vessel (METHODS.md §h): the
+ * Energy stored in a gas-filled or evacuated vessel (Hoopline method notes §h): the
  * Brode constant-volume energy, the isentropic expansion work and the
  * isothermal upper bound for a vessel under internal pressure, and the work
  * the atmosphere does on an evacuated vessel that implodes; each also as a
@@ -167,7 +167,7 @@ function caseTrail(input: Parsed, gamma: number, v: number, loadCase: ResolvedLo
     }`,
     value: Math.abs(loadCase.differential),
     unit: 'Pa',
-    source: 'definition of differential pressure (METHODS.md §a.2)',
+    source: 'definition of differential pressure (Hoopline method notes §a.2)',
   });
   trail.output('pressure-difference', 'Pressure difference', dp, 'Pa');
 
@@ -180,7 +180,7 @@ function caseTrail(input: Parsed, gamma: number, v: number, loadCase: ResolvedLo
       value: dp * v,
       unit: 'J',
       source:
-        'work of the outside pressure on a volume that collapses to nothing (METHODS.md §h, derived); an upper bound',
+        'work of the outside pressure on a volume that collapses to nothing (Hoopline method notes §h, derived); an upper bound',
     });
     const tnt = tntStep(trail, 'implosion-tnt', 'Implosion work as TNT equivalent', work);
     trail.output('implosion-energy', 'Implosion work', work, 'J');
@@ -241,7 +241,7 @@ function caseTrail(input: Parsed, gamma: number, v: number, loadCase: ResolvedLo
     value: (dp * v) / (gamma - 1),
     unit: 'J',
     source:
-      'Brode (1959), as used in Baker/Strehlow NASA CR-134779 and CR-3023 (from memory; METHODS.md §h)',
+      'Brode (1959), as used in Baker/Strehlow NASA CR-134779 and CR-3023 (from memory; Hoopline method notes §h)',
   });
   const isentropic = trail.step({
     id: 'isentropic-energy',
@@ -251,7 +251,7 @@ function caseTrail(input: Parsed, gamma: number, v: number, loadCase: ResolvedLo
     value: ((p1 * v) / (gamma - 1)) * (1 - (p0 / p1) ** ((gamma - 1) / gamma)),
     unit: 'J',
     source:
-      'isentropic expansion of an ideal gas (LLNL ES&H Manual form, as quoted; METHODS.md §h)',
+      'isentropic expansion of an ideal gas (LLNL ES&H Manual form, as quoted; Hoopline method notes §h)',
   });
   let isothermal: number | null = null;
   if (p0 > 0) {
@@ -263,7 +263,7 @@ function caseTrail(input: Parsed, gamma: number, v: number, loadCase: ResolvedLo
       value: p1 * v * Math.log(p1 / p0),
       unit: 'J',
       source:
-        'isothermal ideal-gas expansion; worked example "Energy in Pressure Vessels", 50 L CNG cylinder at 200 bar (METHODS.md §h)',
+        'isothermal ideal-gas expansion; worked example "Energy in Pressure Vessels", 50 L CNG cylinder at 200 bar (Hoopline method notes §h)',
     });
   } else {
     trail.step({
@@ -274,7 +274,7 @@ function caseTrail(input: Parsed, gamma: number, v: number, loadCase: ResolvedLo
         'p0 = 0: unbounded for an expansion into vacuum; the Brode and isentropic values stand',
       value: null,
       unit: 'J',
-      source: 'isothermal ideal-gas expansion (METHODS.md §h)',
+      source: 'isothermal ideal-gas expansion (Hoopline method notes §h)',
     });
   }
   const tntBrode = tntStep(trail, 'brode-tnt', 'Brode energy as TNT equivalent', brode);
