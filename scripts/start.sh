@@ -13,6 +13,15 @@ ensure_dependencies
 bash scripts/pg.sh start main
 export DATABASE_URL="${DATABASE_URL:-$(bash scripts/pg.sh url main)}"
 
+# Mail goes to the local fake SMTP server unless HOOPLINE_SMTP_HOST names a real one.
+if [[ -z "${HOOPLINE_SMTP_HOST:-}" ]]; then
+  bash scripts/mail-fake.sh start main
+  export HOOPLINE_SMTP_HOST=127.0.0.1 HOOPLINE_SMTP_PORT="${HOOPLINE_SMTP_PORT:-2525}"
+  mail_note="mail Hoopline sends is stored in $(bash scripts/mail-fake.sh folder main) (one .eml per message)"
+else
+  mail_note="mail goes through $HOOPLINE_SMTP_HOST:${HOOPLINE_SMTP_PORT:-587}"
+fi
+
 # A signing secret for this installation, made once and kept in .data/.
 secret_file="$HOOPLINE_ROOT/.data/jwt-secret"
 if [[ ! -s "$secret_file" ]]; then
@@ -44,7 +53,8 @@ if [[ -f "$demo_file" ]]; then
 else
   log "(no demo scenario yet)"
 fi
-log "stop with Ctrl-C; the database keeps running (scripts/pg.sh stop main stops it)"
+log "$mail_note"
+log "stop with Ctrl-C; the database and the mail fake keep running (scripts/pg.sh stop main, scripts/mail-fake.sh stop main)"
 echo
 cd apps/api
 exec node --import tsx src/main.ts

@@ -19,7 +19,7 @@ step() {
 }
 
 step "dependencies" ensure_dependencies
-step "system packages" bash -c "source scripts/lib.sh && ensure_debian_package /usr/bin/chromium chromium"
+step "system packages" bash -c "source scripts/lib.sh && ensure_debian_package /usr/bin/chromium chromium && ensure_debian_package /usr/bin/pdftoppm poppler-utils"
 step "database" bash scripts/pg.sh start test
 export DATABASE_URL="${DATABASE_URL:-$(bash scripts/pg.sh url test)}"
 export CI="${CI:-}"
@@ -31,5 +31,6 @@ step "unit: web" pnpm --filter @hoopline/web test
 step "integration: api" pnpm --filter @hoopline/api test
 step "build: web" pnpm --filter @hoopline/web build
 step "browser: e2e" pnpm --filter @hoopline/e2e test
+bash scripts/mail-fake.sh stop test >/dev/null 2>&1 || true
 
 log "all tests passed in $((SECONDS - started)) s"

@@ -10,6 +10,8 @@ import type { Config } from './config/config';
 import { signInRequired } from './auth/authenticate';
 import { csrfProtection } from './auth/csrf';
 import type { Notifier } from './domain/notifications/notifier';
+import { createStorage } from './storage/create-storage';
+import type { BlobStorage } from './storage/storage';
 import { createServices } from './domain/services';
 import { apiNotFound, errorMiddleware } from './http/error-middleware';
 import { authRoutes } from './routes/auth.routes';
@@ -17,21 +19,31 @@ import { componentsRoutes } from './routes/components.routes';
 import { healthRoutes } from './routes/health.routes';
 import { meRoutes } from './routes/me.routes';
 import { miscRoutes } from './routes/misc.routes';
+import { attachmentsRoutes } from './routes/attachments.routes';
 import { projectsRoutes } from './routes/projects.routes';
 import { revisionsRoutes } from './routes/revisions.routes';
 import type { RouteDeps } from './routes/route-deps';
+import { sheetsRoutes } from './routes/sheets.routes';
 import { usersRoutes } from './routes/users.routes';
 
 export interface AppDependencies {
   readonly config: Config;
   readonly dataSource: DataSource;
   readonly logger: Logger;
-  /** Where mail will plug in; silent until then. */
+  /** Who is told about what; by default mails written to the outbox. */
   readonly notifier?: Notifier;
+  /** Where uploads live; by default the configured driver. */
+  readonly storage?: BlobStorage;
 }
 
 /** Builds the Express app; no listening, no side effects beyond the object. */
-export function createApp({ config, dataSource, logger, notifier }: AppDependencies): Express {
+export function createApp({
+  config,
+  dataSource,
+  logger,
+  notifier,
+  storage,
+}: AppDependencies): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -72,7 +84,12 @@ export function createApp({ config, dataSource, logger, notifier }: AppDependenc
 
   const deps: RouteDeps = {
     config,
-    services: createServices(dataSource, config, notifier),
+    services: createServices(
+      dataSource,
+      config,
+      storage ?? createStorage(config.storage),
+      notifier,
+    ),
     signedIn: signInRequired(dataSource, config.auth),
   };
   const api = express.Router();
@@ -84,6 +101,8 @@ export function createApp({ config, dataSource, logger, notifier }: AppDependenc
   api.use(projectsRoutes(deps));
   api.use(componentsRoutes(deps));
   api.use(revisionsRoutes(deps));
+  api.use(attachmentsRoutes(deps));
+  api.use(sheetsRoutes(deps));
   api.use(miscRoutes(deps));
   api.use(apiNotFound);
   app.use('/api', api);

@@ -2,6 +2,7 @@ import { pino } from 'pino';
 import { createApp } from './app';
 import { ConfigError, loadConfig } from './config/config';
 import { createDataSource } from './db/data-source';
+import { MailWorker } from './mail/mail-worker';
 
 async function main() {
   let config;
@@ -28,10 +29,22 @@ async function main() {
       `Hoopline API listening on http://${config.host}:${config.port}`,
     );
   });
+  const smtp = config.mail.smtp;
+  const mailWorker = smtp ? new MailWorker(dataSource, { ...config.mail, smtp }, logger) : null;
+  if (mailWorker && smtp) {
+    mailWorker.start();
+    logger.info(`mail: sending through ${smtp.host}:${smtp.port}`);
+  } else {
+    logger.warn(
+      'mail: no HOOPLINE_SMTP_HOST; mail waits in the outbox and tokens are shown to admins',
+    );
+  }
   const shutdown = (signal: string) => {
     logger.info({ signal }, 'shutting down');
     server.close(() => {
-      void dataSource.destroy().finally(() => process.exit(0));
+      void (mailWorker?.stop() ?? Promise.resolve())
+        .then(() => dataSource.destroy())
+        .finally(() => process.exit(0));
     });
     setTimeout(() => process.exit(0), 5000).unref();
   };

@@ -83,7 +83,22 @@ export class Session {
   delete(path: string, body?: unknown) {
     return this.write('delete', path, body);
   }
+  /** A multipart upload of one file in the part named `file`. */
+  upload(path: string, bytes: Buffer, fileName: string) {
+    let r = this.agent.post(path);
+    if (this.csrf) r = r.set('x-csrf-token', this.csrf);
+    // form-data reduces `filename` to its base name; `filepath` sends the name exactly as given,
+    // as a hostile client could.
+    // (superagent's types know only filename and contentType; form-data takes filepath too.)
+    return r.attach('file', bytes, { filepath: fileName } as unknown as { filename: string });
+  }
 }
+
+/** A minimal, well-formed PDF (ISO 32000-1 §7.5: header, one object, trailer). */
+export const TINY_PDF = Buffer.from(
+  '%PDF-1.7\n1 0 obj\n<< /Type /Catalog >>\nendobj\ntrailer\n<< /Root 1 0 R >>\n%%EOF\n',
+  'latin1',
+);
 
 export function anonymous(t: TestApp): Session {
   return new Session(request.agent(t.server), undefined);
@@ -229,6 +244,8 @@ const TABLES = [
   'revisions',
   'sign_offs',
   'audit_events',
+  'mail_outbox',
+  'attachments',
 ] as const;
 
 const digest = (table: string, columns: string) =>
@@ -251,4 +268,12 @@ export async function snapshot(t: TestApp): Promise<Record<string, string | numb
        ${digest('password_resets', 'id, used_at')} as reset_states`,
   )) as Record<string, string | number>[];
   return row ?? {};
+}
+
+/** The token of an invitation or reset shown to the admin (no SMTP server in these tests). */
+export function shownToken(
+  result: { delivery: 'mail' } | { delivery: 'shown'; token: string },
+): string {
+  if (result.delivery !== 'shown') throw new Error('expected the token to be shown to the admin');
+  return result.token;
 }

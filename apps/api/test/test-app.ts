@@ -1,4 +1,7 @@
+import { mkdtemp, rm } from 'node:fs/promises';
 import type { Server } from 'node:http';
+import os from 'node:os';
+import path from 'node:path';
 import { pino } from 'pino';
 import type { Express } from 'express';
 import type { DataSource } from 'typeorm';
@@ -6,6 +9,8 @@ import { createApp } from '../src/app';
 import { loadConfig, type Config } from '../src/config/config';
 import { createDataSource } from '../src/db/data-source';
 import { createServices, type Services } from '../src/domain/services';
+import { createStorage } from '../src/storage/create-storage';
+import type { BlobStorage } from '../src/storage/storage';
 import { createTestDatabase } from './database';
 
 export interface TestApp {
@@ -16,22 +21,30 @@ export interface TestApp {
   readonly dataSource: DataSource;
   /** The same services the routes use, for arranging data without HTTP. */
   readonly services: Services;
+  readonly storage: BlobStorage;
+  /** The folder local-disk uploads of this app go to (a temporary one unless HOOPLINE_UPLOAD_DIR is given). */
+  readonly uploadDir: string;
   readonly close: () => Promise<void>;
 }
 
 /** The real app on a fresh, migrated database of its own. */
 export async function startTestApp(environment: Record<string, string> = {}): Promise<TestApp> {
   const database = await createTestDatabase();
+  const temporaryUploads = environment['HOOPLINE_UPLOAD_DIR']
+    ? null
+    : await mkdtemp(path.join(os.tmpdir(), 'hoopline-uploads-'));
   const config = loadConfig({
     NODE_ENV: 'test',
     DATABASE_URL: database.url,
     HOOPLINE_LOG_LEVEL: 'silent',
+    ...(temporaryUploads ? { HOOPLINE_UPLOAD_DIR: temporaryUploads } : {}),
     ...environment,
   });
+  const storage = createStorage(config.storage);
   const dataSource = createDataSource(config.databaseUrl, { extra: { max: 25 } });
   await dataSource.initialize();
   const logger = pino({ level: 'silent' });
-  const app = createApp({ config, dataSource, logger });
+  const app = createApp({ config, dataSource, logger, storage });
   const server = await new Promise<Server>((resolve) => {
     const s = app.listen(0, '127.0.0.1', () => resolve(s));
   });
@@ -40,11 +53,14 @@ export async function startTestApp(environment: Record<string, string> = {}): Pr
     server,
     config,
     dataSource,
-    services: createServices(dataSource, config),
+    services: createServices(dataSource, config, storage),
+    storage,
+    uploadDir: config.storage.driver === 'local' ? config.storage.folder : '',
     close: async () => {
       await new Promise<void>((resolve) => server.close(() => resolve()));
       if (dataSource.isInitialized) await dataSource.destroy();
       await database.drop();
+      if (temporaryUploads) await rm(temporaryUploads, { recursive: true, force: true });
     },
   };
 }

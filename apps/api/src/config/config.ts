@@ -1,3 +1,4 @@
+import path from 'node:path';
 import { z } from 'zod';
 
 /**
@@ -58,6 +59,34 @@ const environmentSchema = z.object({
     .default(15 * 60),
   /** Secure flag on cookies; defaults to whether the public URL is https. */
   HOOPLINE_COOKIE_SECURE: z.enum(['true', 'false']).optional(),
+
+  /** Mail: the SMTP server the outbox worker sends through. Without a host, mail waits in the outbox. */
+  HOOPLINE_SMTP_HOST: z.string().min(1).optional(),
+  HOOPLINE_SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(587),
+  HOOPLINE_SMTP_SECURE: z.enum(['true', 'false']).default('false'),
+  HOOPLINE_SMTP_USER: z.string().min(1).optional(),
+  HOOPLINE_SMTP_PASSWORD: z.string().min(1).optional(),
+  HOOPLINE_MAIL_FROM: z.string().min(3).default('Hoopline <hoopline@localhost>'),
+  /** How often the worker looks for due mail, milliseconds. */
+  HOOPLINE_MAIL_POLL_MS: z.coerce.number().int().min(50).max(600_000).default(2000),
+  /** First retry delay after a failed send, milliseconds; it doubles per attempt up to 15 minutes. */
+  HOOPLINE_MAIL_RETRY_BASE_MS: z.coerce.number().int().min(10).max(3_600_000).default(5000),
+
+  /** Uploads: 'local' (a folder) or 's3' (an S3-compatible bucket). */
+  HOOPLINE_STORAGE: z.enum(['local', 's3']).default('local'),
+  HOOPLINE_UPLOAD_DIR: z.string().min(1).optional(),
+  HOOPLINE_UPLOAD_MAX_BYTES: z.coerce
+    .number()
+    .int()
+    .min(1024)
+    .max(1024 * 1024 * 1024)
+    .default(20 * 1024 * 1024),
+  HOOPLINE_S3_ENDPOINT: z.url().optional(),
+  HOOPLINE_S3_REGION: z.string().min(1).default('us-east-1'),
+  HOOPLINE_S3_BUCKET: z.string().min(3).optional(),
+  HOOPLINE_S3_PREFIX: z.string().default(''),
+  HOOPLINE_S3_ACCESS_KEY_ID: z.string().min(1).optional(),
+  HOOPLINE_S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
 });
 
 export type Environment = z.infer<typeof environmentSchema>;
@@ -71,7 +100,40 @@ export interface Config {
   readonly webDist: string | undefined;
   readonly publicUrl: string;
   readonly auth: AuthConfig;
+  readonly mail: MailConfig;
+  readonly storage: StorageConfig;
 }
+
+export interface MailConfig {
+  /** null: no SMTP server configured; mail waits in the outbox and tokens are shown to the admin. */
+  readonly smtp: {
+    readonly host: string;
+    readonly port: number;
+    readonly secure: boolean;
+    readonly auth: { readonly user: string; readonly pass: string } | null;
+  } | null;
+  readonly from: string;
+  readonly pollIntervalMs: number;
+  readonly retryBaseMs: number;
+}
+
+export type StorageConfig = {
+  readonly maxUploadBytes: number;
+} & (
+  | { readonly driver: 'local'; readonly folder: string }
+  | {
+      readonly driver: 's3';
+      readonly endpoint: string | undefined;
+      readonly region: string;
+      readonly bucket: string;
+      readonly prefix: string;
+      readonly accessKeyId: string;
+      readonly secretAccessKey: string;
+    }
+);
+
+/** Uploads land here unless HOOPLINE_UPLOAD_DIR says otherwise: the repository's git-ignored .data/. */
+const DEFAULT_UPLOAD_DIR = path.resolve(import.meta.dirname, '../../../../.data/uploads');
 
 export interface AuthConfig {
   readonly jwtSecret: string;
@@ -128,6 +190,21 @@ export function loadConfig(environment: NodeJS.ProcessEnv = process.env): Config
       'invalid configuration:\n  HOOPLINE_JWT_SECRET: is required in production (at least 32 characters)',
     );
   }
+  if (e.HOOPLINE_STORAGE === 's3') {
+    const missing = (
+      ['HOOPLINE_S3_BUCKET', 'HOOPLINE_S3_ACCESS_KEY_ID', 'HOOPLINE_S3_SECRET_ACCESS_KEY'] as const
+    ).filter((name) => !e[name]);
+    if (missing.length > 0) {
+      throw new ConfigError(
+        `invalid configuration:\n${missing.map((m) => `  ${m}: is required when HOOPLINE_STORAGE=s3`).join('\n')}`,
+      );
+    }
+  }
+  if (Boolean(e.HOOPLINE_SMTP_USER) !== Boolean(e.HOOPLINE_SMTP_PASSWORD)) {
+    throw new ConfigError(
+      'invalid configuration:\n  HOOPLINE_SMTP_PASSWORD: give both HOOPLINE_SMTP_USER and HOOPLINE_SMTP_PASSWORD, or neither',
+    );
+  }
   const publicUrl = e.HOOPLINE_PUBLIC_URL ?? `http://${e.HOOPLINE_HOST}:${e.HOOPLINE_PORT}`;
   return {
     env: e.NODE_ENV,
@@ -158,5 +235,38 @@ export function loadConfig(environment: NodeJS.ProcessEnv = process.env): Config
           ? { memoryCost: 1024, timeCost: 1, parallelism: 1 }
           : { memoryCost: 19_456, timeCost: 2, parallelism: 1 },
     },
+    mail: {
+      smtp: e.HOOPLINE_SMTP_HOST
+        ? {
+            host: e.HOOPLINE_SMTP_HOST,
+            port: e.HOOPLINE_SMTP_PORT,
+            secure: e.HOOPLINE_SMTP_SECURE === 'true',
+            auth:
+              e.HOOPLINE_SMTP_USER && e.HOOPLINE_SMTP_PASSWORD
+                ? { user: e.HOOPLINE_SMTP_USER, pass: e.HOOPLINE_SMTP_PASSWORD }
+                : null,
+          }
+        : null,
+      from: e.HOOPLINE_MAIL_FROM,
+      pollIntervalMs: e.HOOPLINE_MAIL_POLL_MS,
+      retryBaseMs: e.HOOPLINE_MAIL_RETRY_BASE_MS,
+    },
+    storage:
+      e.HOOPLINE_STORAGE === 's3'
+        ? {
+            driver: 's3',
+            maxUploadBytes: e.HOOPLINE_UPLOAD_MAX_BYTES,
+            endpoint: e.HOOPLINE_S3_ENDPOINT,
+            region: e.HOOPLINE_S3_REGION,
+            bucket: e.HOOPLINE_S3_BUCKET!,
+            prefix: e.HOOPLINE_S3_PREFIX,
+            accessKeyId: e.HOOPLINE_S3_ACCESS_KEY_ID!,
+            secretAccessKey: e.HOOPLINE_S3_SECRET_ACCESS_KEY!,
+          }
+        : {
+            driver: 'local',
+            maxUploadBytes: e.HOOPLINE_UPLOAD_MAX_BYTES,
+            folder: path.resolve(e.HOOPLINE_UPLOAD_DIR ?? DEFAULT_UPLOAD_DIR),
+          },
   };
 }

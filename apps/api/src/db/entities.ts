@@ -1,7 +1,9 @@
 import type { EntitySchema, MixedList } from 'typeorm';
+import { AttachmentEntity } from './entities/attachment.entity';
 import { AuditEventEntity } from './entities/audit-event.entity';
 import { ComponentEntity } from './entities/component.entity';
 import { InvitationEntity } from './entities/invitation.entity';
+import { MailOutboxEntity } from './entities/mail-outbox.entity';
 import { PasswordResetEntity } from './entities/password-reset.entity';
 import {
   CustomMaterialEntity,
@@ -26,4 +28,6 @@ export const entities: MixedList<Function | string | EntitySchema> = [
   RevisionEntity,
   SignOffEntity,
   AuditEventEntity,
+  MailOutboxEntity,
+  AttachmentEntity,
 ];

@@ -6,6 +6,7 @@
 import { writeFileSync } from 'node:fs';
 import { ConfigError, loadConfig } from '../config/config';
 import { createServices } from '../domain/services';
+import { createStorage } from '../storage/create-storage';
 import { createDataSource } from './data-source';
 import { seedDemo, signInSheet } from './seed-demo';
 
@@ -21,7 +22,11 @@ async function main() {
     if (await dataSource.showMigrations()) {
       throw new ConfigError('the database has pending migrations: run src/db/migrate.ts first');
     }
-    const result = await seedDemo(dataSource, config, createServices(dataSource, config));
+    const result = await seedDemo(
+      dataSource,
+      config,
+      createServices(dataSource, config, createStorage(config.storage)),
+    );
     const { projects, components, revisions } = result.created;
     console.log(
       projects + components + revisions === 0

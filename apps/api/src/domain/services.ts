@@ -1,12 +1,16 @@
 import type { DataSource } from 'typeorm';
 import { Passwords } from '../auth/passwords';
 import type { Config } from '../config/config';
+import type { BlobStorage } from '../storage/storage';
+import { AttachmentsService } from './attachments/attachments.service';
 import { AuditService } from './audit/audit.service';
 import { AuthService } from './auth/auth.service';
 import { ComponentsService } from './components/components.service';
-import { silentNotifier, type Notifier } from './notifications/notifier';
+import { OutboxNotifier } from '../mail/outbox-notifier';
+import type { Notifier } from './notifications/notifier';
 import { ProjectsService } from './projects/projects.service';
 import { RevisionsService } from './revisions/revisions.service';
+import { SheetsService } from './sheets/sheets.service';
 import { UsersService } from './users/users.service';
 
 /** The services the routes call; each is given only what it uses. */
@@ -18,22 +22,28 @@ export interface Services {
   readonly components: ComponentsService;
   readonly revisions: RevisionsService;
   readonly audit: AuditService;
+  readonly attachments: AttachmentsService;
+  readonly sheets: SheetsService;
 }
 
 export function createServices(
   dataSource: DataSource,
   config: Config,
-  notifier: Notifier = silentNotifier,
+  storage: BlobStorage,
+  notifier: Notifier = new OutboxNotifier(config.publicUrl),
 ): Services {
   const passwords = new Passwords(config.auth.argon2);
   const auth = new AuthService(dataSource, config.auth, passwords, notifier);
+  const attachments = new AttachmentsService(dataSource, storage);
   return {
     passwords,
     auth,
-    users: new UsersService(dataSource, config.auth, auth, notifier),
+    users: new UsersService(dataSource, config.auth, auth, notifier, config.mail.smtp !== null),
     projects: new ProjectsService(dataSource),
     components: new ComponentsService(dataSource),
     revisions: new RevisionsService(dataSource, notifier),
     audit: new AuditService(dataSource),
+    attachments,
+    sheets: new SheetsService(dataSource, attachments, config.publicUrl),
   };
 }

@@ -1,4 +1,5 @@
 import type { Request, RequestHandler } from 'express';
+import { issuesFromZod } from '@hoopline/calc';
 import type { z } from 'zod';
 import { validationFailed, type FieldError } from './errors';
 
@@ -25,52 +26,16 @@ export type ValidateMiddleware<S extends RequestSchemas> = RequestHandler & { re
 
 const VALID = Symbol('hoopline.validated');
 
-function article(expected: string): string {
-  if (expected === 'array') return 'a list';
-  if (expected === 'object') return 'an object';
-  if (expected === 'int') return 'a whole number';
-  return `a ${expected}`;
-}
-
-/** One zod issue in words a person can act on. */
-export function describeIssue(issue: z.core.$ZodIssue): string {
-  switch (issue.code) {
-    case 'invalid_type':
-      return issue.input === undefined ? 'is required' : `must be ${article(issue.expected)}`;
-    case 'unrecognized_keys':
-      return issue.keys.length === 1
-        ? `unknown field "${issue.keys[0]}"`
-        : `unknown fields ${issue.keys.map((k) => `"${k}"`).join(', ')}`;
-    case 'invalid_value':
-      return issue.message.startsWith('Invalid')
-        ? `must be one of ${issue.values.map((v) => JSON.stringify(v)).join(', ')}`
-        : issue.message;
-    case 'too_small':
-      if (issue.message.startsWith('Too small')) {
-        return issue.origin === 'string'
-          ? `must be at least ${String(issue.minimum)} characters`
-          : `must be at least ${String(issue.minimum)}`;
-      }
-      return issue.message;
-    case 'too_big':
-      if (issue.message.startsWith('Too big')) {
-        return issue.origin === 'string'
-          ? `must be at most ${String(issue.maximum)} characters`
-          : issue.origin === 'array'
-            ? `must have at most ${String(issue.maximum)} items`
-            : `must be at most ${String(issue.maximum)}`;
-      }
-      return issue.message;
-    default:
-      return issue.message;
-  }
-}
-
+/**
+ * zod issues as field errors. The wording is the engine's (issuesFromZod),
+ * so a route and the calc input inside it speak alike, union options
+ * included ("material.strength: is required").
+ */
 export function fieldErrors(error: z.ZodError, prefix: readonly PropertyKey[] = []): FieldError[] {
-  return error.issues.map((issue) => ({
-    path: [...prefix, ...issue.path].map(String).join('.'),
-    message: describeIssue(issue),
-  }));
+  return issuesFromZod(
+    error,
+    prefix.map((p) => (typeof p === 'number' ? p : String(p))),
+  );
 }
 
 const MAX_DEPTH = 64;

@@ -10,7 +10,9 @@ import {
   makeWorld,
   personaUser,
   plateInputs,
+  shownToken,
   signIn,
+  TINY_PDF,
   type Persona,
   type Session,
   type World,
@@ -125,10 +127,12 @@ describe('role × route matrix (every route, every persona)', () => {
       route: 'GET /api/auth/invitations/:token',
       expect: all(200),
       call: async () => {
-        const { token } = await t.services.users.invite(w.admin, {
-          email: `${randomUUID()}@test.example`,
-          name: 'Invitee',
-        });
+        const token = shownToken(
+          await t.services.users.invite(w.admin, {
+            email: `${randomUUID()}@test.example`,
+            name: 'Invitee',
+          }),
+        );
         return anonymous(t).get(`/api/auth/invitations/${token}`);
       },
     },
@@ -137,10 +141,12 @@ describe('role × route matrix (every route, every persona)', () => {
       expect: all(200),
       fresh: true,
       call: async (s) => {
-        const { token } = await t.services.users.invite(w.admin, {
-          email: `${randomUUID()}@test.example`,
-          name: 'Invitee',
-        });
+        const token = shownToken(
+          await t.services.users.invite(w.admin, {
+            email: `${randomUUID()}@test.example`,
+            name: 'Invitee',
+          }),
+        );
         return s.post('/api/auth/accept-invitation', {
           token,
           name: 'Invitee',
@@ -159,7 +165,7 @@ describe('role × route matrix (every route, every persona)', () => {
       fresh: true,
       call: async (s) => {
         const u = await freshUser();
-        const { token } = await t.services.users.issuePasswordReset(w.admin, u.id);
+        const token = shownToken(await t.services.users.issuePasswordReset(w.admin, u.id));
         return s.post('/api/auth/password-reset/complete', {
           token,
           password: 'a long enough password',
@@ -406,6 +412,68 @@ describe('role × route matrix (every route, every persona)', () => {
         const c = await makeComponent(t, w, 'submitted');
         return s.post(`/api/revisions/${c.revisionId}/return`, { hash: c.hash, comment: 'redo' });
       },
+    },
+    {
+      route: 'GET /api/components/:id/attachments',
+      expect: unissuedRead,
+      call: async (s) =>
+        s.get(`/api/components/${(await makeComponent(t, w)).componentId}/attachments`),
+    },
+    {
+      route: 'GET /api/components/:id/attachments (issued)',
+      expect: issuedRead,
+      call: async (s) =>
+        s.get(
+          `/api/components/${(await makeComponent(t, w, 'countersigned')).componentId}/attachments`,
+        ),
+    },
+    {
+      route: 'POST /api/components/:id/attachments',
+      expect: designerOnly(201, 404),
+      call: async (s) =>
+        s.upload(
+          `/api/components/${(await makeComponent(t, w)).componentId}/attachments`,
+          Buffer.concat([TINY_PDF, Buffer.from(randomUUID())]),
+          'drawing.pdf',
+        ),
+    },
+    {
+      route: 'GET /api/attachments/:id/content',
+      expect: issuedRead,
+      call: async (s) => {
+        const c = await makeComponent(t, w, 'countersigned');
+        const a = await t.services.attachments.upload(w.designer, c.componentId, {
+          originalName: 'certificate.pdf',
+          bytes: TINY_PDF,
+        });
+        return s.get(`/api/attachments/${a.id}/content`);
+      },
+    },
+    {
+      route: 'DELETE /api/attachments/:id',
+      expect: designerOnly(204, 404),
+      call: async (s) => {
+        const c = await makeComponent(t, w);
+        const a = await t.services.attachments.upload(w.designer, c.componentId, {
+          originalName: 'photo.pdf',
+          bytes: TINY_PDF,
+        });
+        return s.delete(`/api/attachments/${a.id}`);
+      },
+    },
+    {
+      route: 'GET /api/revisions/:id/sheet.pdf',
+      expect: unissuedRead,
+      call: async (s) =>
+        s.get(`/api/revisions/${(await makeComponent(t, w)).revisionId}/sheet.pdf`),
+    },
+    {
+      route: 'GET /api/revisions/:id/sheet.pdf (countersigned)',
+      expect: issuedRead,
+      call: async (s) =>
+        s.get(
+          `/api/revisions/${(await makeComponent(t, w, 'countersigned')).revisionId}/sheet.pdf`,
+        ),
     },
     {
       route: 'GET /api/check-queue',

@@ -192,10 +192,15 @@ export class AuthService {
       .getRepository(UserEntity)
       .findOneBy({ email: normaliseEmail(email) });
     if (!user || !user.active) return;
-    const { token, expiresAt } = await this.dataSource.transaction((manager) =>
-      this.createPasswordReset(manager, user, null),
-    );
-    this.notifier.passwordResetRequested({ email: user.email, name: user.name, token, expiresAt });
+    await this.dataSource.transaction(async (manager) => {
+      const { token, expiresAt } = await this.createPasswordReset(manager, user, null);
+      await this.notifier.passwordResetRequested(manager, {
+        email: user.email,
+        name: user.name,
+        token,
+        expiresAt,
+      });
+    });
   }
 
   /** A one-time reset token for a user; earlier unused ones stop working. */

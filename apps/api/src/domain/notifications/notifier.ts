@@ -1,28 +1,31 @@
+import type { EntityManager } from 'typeorm';
+
 /**
- * The seam where mail will plug in (a later issue: a transactional outbox
- * written in the same transaction as the event, sent by a worker). Until then
- * the default does nothing, and invitation and reset tokens are handed to the
- * administrator who asked for them (API.md).
+ * What the workflow tells people about. Each method is called with the
+ * manager of the transaction that does the action, so that what it writes (a
+ * mail in the outbox) commits or rolls back with the action itself: a mail
+ * server that is down delays mail but neither loses it nor fails the action.
  */
 export interface Notifier {
-  invitationCreated(event: { email: string; name: string; token: string; expiresAt: Date }): void;
-  passwordResetRequested(event: {
-    email: string;
-    name: string;
-    token: string;
-    expiresAt: Date;
-  }): void;
-  revisionSubmitted(event: { revisionId: string; projectId: string }): void;
-  revisionDecided(event: {
-    revisionId: string;
-    projectId: string;
-    decision: 'countersigned' | 'returned';
-  }): void;
+  invitationCreated(
+    manager: EntityManager,
+    event: { email: string; name: string; invitedBy: string; token: string; expiresAt: Date },
+  ): Promise<void>;
+  passwordResetRequested(
+    manager: EntityManager,
+    event: { email: string; name: string; token: string; expiresAt: Date },
+  ): Promise<void>;
+  revisionSubmitted(manager: EntityManager, event: { revisionId: string }): Promise<void>;
+  revisionDecided(
+    manager: EntityManager,
+    event: { revisionId: string; decision: 'countersigned' | 'returned'; comment: string },
+  ): Promise<void>;
 }
 
+/** Tells nobody (for callers that want no mail at all). */
 export const silentNotifier: Notifier = {
-  invitationCreated: () => undefined,
-  passwordResetRequested: () => undefined,
-  revisionSubmitted: () => undefined,
-  revisionDecided: () => undefined,
+  invitationCreated: async () => undefined,
+  passwordResetRequested: async () => undefined,
+  revisionSubmitted: async () => undefined,
+  revisionDecided: async () => undefined,
 };

@@ -243,7 +243,7 @@ export class RevisionsService {
   }
 
   async submit(actor: Actor, revisionId: string): Promise<RevisionView> {
-    const view = await this.dataSource.transaction(async (manager) => {
+    return this.dataSource.transaction(async (manager) => {
       const ctx = await this.lockForWorkflow(manager, actor, revisionId);
       enforce(canDesign(ctx.standing));
       if (ctx.component.latestRevisionId !== revisionId) {
@@ -264,10 +264,9 @@ export class RevisionsService {
         [revisionId],
       );
       await this.audit(manager, actor, ctx, 'revision.submitted', 'draft', 'submitted');
+      await this.notifier.revisionSubmitted(manager, { revisionId });
       return revisionView(manager, revisionId);
     });
-    this.notifier.revisionSubmitted({ revisionId, projectId: view.projectId });
-    return view;
   }
 
   async withdraw(actor: Actor, revisionId: string): Promise<RevisionView> {
@@ -302,7 +301,7 @@ export class RevisionsService {
     decision: SignOffDecision,
     input: { hash: string; comment?: string | undefined },
   ): Promise<RevisionView> {
-    const view = await this.dataSource.transaction(async (manager) => {
+    return this.dataSource.transaction(async (manager) => {
       const ctx = await this.lockForWorkflow(manager, actor, revisionId);
       enforce(canSignOff(ctx.standing, ctx.revision));
       const { revision } = ctx;
@@ -367,10 +366,13 @@ export class RevisionsService {
         decision,
         { hashSigned: input.hash, ...(input.comment ? { comment: input.comment } : {}) },
       );
+      await this.notifier.revisionDecided(manager, {
+        revisionId,
+        decision,
+        comment: input.comment ?? '',
+      });
       return revisionView(manager, revisionId);
     });
-    this.notifier.revisionDecided({ revisionId, projectId: view.projectId, decision });
-    return view;
   }
 
   /** Submitted revisions in projects where I check, not mine, oldest first. Admins sign nothing. */

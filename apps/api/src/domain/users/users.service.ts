@@ -30,6 +30,10 @@ function requireAdmin(actor: Actor) {
   if (!decision.allowed) throw forbidden(decision.code, decision.reason);
 }
 
+/** How a one-time token reaches its owner: by mail, or shown to the admin who asked. */
+export type TokenDelivery =
+  { readonly delivery: 'mail' } | { readonly delivery: 'shown'; readonly token: string };
+
 /** People: the signed-in person's own account, and the admin's management of everyone's. */
 export class UsersService {
   constructor(
@@ -37,6 +41,8 @@ export class UsersService {
     private readonly auth: AuthConfig,
     private readonly authService: AuthService,
     private readonly notifier: Notifier,
+    /** With an SMTP server, tokens go to their owner by mail; without, back to the admin. */
+    private readonly deliveryByMail: boolean,
   ) {}
 
   me(user: UserEntity): Promise<MeView> {
@@ -143,11 +149,14 @@ export class UsersService {
     });
   }
 
-  /** Until mail exists the token goes back to the admin, who passes it on (API.md). */
+  /**
+   * A reset for someone else. With mail configured the link goes to them by
+   * mail; without, the token comes back to the admin, who passes it on.
+   */
   async issuePasswordReset(
     actor: Actor,
     userId: string,
-  ): Promise<{ token: string; expiresAt: string }> {
+  ): Promise<TokenDelivery & { expiresAt: string }> {
     requireAdmin(actor);
     return this.dataSource.transaction(async (manager) => {
       const user = await manager.findOneBy(UserEntity, { id: userId });
@@ -157,7 +166,16 @@ export class UsersService {
         user,
         actor.id,
       );
-      return { token, expiresAt: expiresAt.toISOString() };
+      if (this.deliveryByMail) {
+        await this.notifier.passwordResetRequested(manager, {
+          email: user.email,
+          name: user.name,
+          token,
+          expiresAt,
+        });
+        return { delivery: 'mail' as const, expiresAt: expiresAt.toISOString() };
+      }
+      return { delivery: 'shown' as const, token, expiresAt: expiresAt.toISOString() };
     });
   }
 
@@ -205,7 +223,7 @@ export class UsersService {
   async invite(
     actor: Actor,
     input: { email: string; name: string; isAdmin?: boolean | undefined },
-  ): Promise<{ invitation: InvitationView; token: string }> {
+  ): Promise<{ invitation: InvitationView } & TokenDelivery> {
     requireAdmin(actor);
     const email = normaliseEmail(input.email);
     const token = randomToken();
@@ -242,6 +260,13 @@ export class UsersService {
         after: { email, name: input.name, isAdmin: invitation.isAdmin },
       });
       const inviter = await manager.findOneByOrFail(UserEntity, { id: actor.id });
+      await this.notifier.invitationCreated(manager, {
+        email,
+        name: input.name,
+        invitedBy: inviter.name,
+        token,
+        expiresAt: invitation.expiresAt,
+      });
       return {
         invitation: {
           id: invitation.id,
@@ -256,13 +281,9 @@ export class UsersService {
         expiresAt: invitation.expiresAt,
       };
     });
-    this.notifier.invitationCreated({
-      email,
-      name: input.name,
-      token,
-      expiresAt: result.expiresAt,
-    });
-    return { invitation: result.invitation, token };
+    return this.deliveryByMail
+      ? { invitation: result.invitation, delivery: 'mail' }
+      : { invitation: result.invitation, delivery: 'shown', token };
   }
 
   async revokeInvitation(actor: Actor, invitationId: string): Promise<void> {

@@ -1,0 +1,182 @@
+import { createHash, randomUUID } from 'node:crypto';
+import type { DataSource, EntityManager } from 'typeorm';
+import { AttachmentEntity } from '../../db/entities/attachment.entity';
+import { AppError, forbidden, notFound, validationFailed } from '../../http/errors';
+import { canDesign, type Actor, type Decision } from '../../policy/policy';
+import type { BlobStorage } from '../../storage/storage';
+import { ALLOWED_TYPES, checkFileName, sniffFileType } from '../../uploads/file-checks';
+import { recordAudit } from '../audit/audit.service';
+import { requireComponent } from '../components/component-access';
+import { isoRequired } from '../sql';
+
+export interface AttachmentView {
+  readonly id: string;
+  readonly componentId: string;
+  readonly name: string;
+  readonly sha256: string;
+  readonly size: number;
+  readonly contentType: string;
+  readonly kind: string;
+  readonly uploadedBy: { id: string; name: string } | null;
+  readonly createdAt: string;
+}
+
+function enforce(decision: Decision) {
+  if (!decision.allowed) throw forbidden(decision.code, decision.reason);
+}
+
+async function viewsOf(
+  manager: EntityManager,
+  entities: AttachmentEntity[],
+): Promise<AttachmentView[]> {
+  const ids = [
+    ...new Set(entities.map((a) => a.uploadedBy).filter((id): id is string => id !== null)),
+  ];
+  const names = new Map<string, string>();
+  if (ids.length) {
+    const found: Array<{ id: string; name: string }> = await manager.query(
+      'select id, name from users where id = any($1::uuid[])',
+      [ids],
+    );
+    for (const u of found) names.set(u.id, u.name);
+  }
+  return entities.map((a) => ({
+    id: a.id,
+    componentId: a.componentId,
+    name: a.name,
+    sha256: a.sha256,
+    size: a.size,
+    contentType: a.contentType,
+    kind: ALLOWED_TYPES[a.contentType as keyof typeof ALLOWED_TYPES]?.label ?? a.contentType,
+    uploadedBy: a.uploadedBy ? { id: a.uploadedBy, name: names.get(a.uploadedBy) ?? '' } : null,
+    createdAt: isoRequired(a.createdAt),
+  }));
+}
+
+/**
+ * Drawings, photos and certificates attached to a component: checked by
+ * content and name before anything is stored, stored once by content hash.
+ */
+export class AttachmentsService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly storage: BlobStorage,
+  ) {}
+
+  async list(actor: Actor, componentId: string): Promise<AttachmentView[]> {
+    const manager = this.dataSource.manager;
+    await requireComponent(manager, actor, componentId);
+    return viewsOf(
+      manager,
+      await manager.find(AttachmentEntity, {
+        where: { componentId },
+        order: { createdAt: 'DESC', id: 'ASC' },
+      }),
+    );
+  }
+
+  /** Attachments of a component up to a moment (the sheet lists those as of the countersign). */
+  async listAsOf(
+    manager: EntityManager,
+    componentId: string,
+    asOf: Date | null,
+  ): Promise<AttachmentView[]> {
+    const query = manager
+      .getRepository(AttachmentEntity)
+      .createQueryBuilder('a')
+      .where('a.component_id = :componentId', { componentId })
+      .orderBy('a.created_at', 'ASC')
+      .addOrderBy('a.id', 'ASC');
+    if (asOf) query.andWhere('a.created_at <= :asOf', { asOf });
+    return viewsOf(manager, await query.getMany());
+  }
+
+  async upload(
+    actor: Actor,
+    componentId: string,
+    file: { originalName: string; bytes: Buffer },
+  ): Promise<AttachmentView> {
+    const manager = this.dataSource.manager;
+    const { standing } = await requireComponent(manager, actor, componentId);
+    enforce(canDesign(standing));
+    const name = checkFileName(file.originalName);
+    if (!name.ok) throw validationFailed([{ path: 'file', message: name.reason }]);
+    const sniffed = await sniffFileType(file.bytes);
+    if (!sniffed.ok) {
+      throw new AppError(415, 'unsupported_file_type', sniffed.reason, [
+        { path: 'file', message: sniffed.reason },
+      ]);
+    }
+    const sha256 = createHash('sha256').update(file.bytes).digest('hex');
+    // The blob first: a row never points at bytes that are not there. A row
+    // that then fails to commit leaves an unreferenced blob, which is harmless.
+    await this.storage.put(sha256, file.bytes, sniffed.type);
+    return this.dataSource.transaction(async (tx) => {
+      const { component } = await requireComponent(tx, actor, componentId, { lock: true });
+      const entity: AttachmentEntity = Object.assign(new AttachmentEntity(), {
+        id: randomUUID(),
+        componentId,
+        projectId: component.projectId,
+        name: name.name,
+        sha256,
+        size: file.bytes.length,
+        contentType: sniffed.type,
+        uploadedBy: actor.id,
+        createdAt: new Date(),
+      });
+      await tx.insert(AttachmentEntity, entity);
+      await recordAudit(tx, {
+        actorId: actor.id,
+        action: 'attachment.uploaded',
+        entityType: 'attachment',
+        entityId: entity.id,
+        projectId: component.projectId,
+        after: {
+          componentId,
+          name: entity.name,
+          sha256,
+          size: entity.size,
+          contentType: entity.contentType,
+        },
+      });
+      const [view] = await viewsOf(tx, [entity]);
+      return view!;
+    });
+  }
+
+  async content(
+    actor: Actor,
+    attachmentId: string,
+  ): Promise<{ attachment: AttachmentView; bytes: Buffer }> {
+    const manager = this.dataSource.manager;
+    const entity = await manager.findOneBy(AttachmentEntity, { id: attachmentId });
+    if (!entity) throw notFound('attachment');
+    await requireComponent(manager, actor, entity.componentId).catch(() => {
+      throw notFound('attachment');
+    });
+    const bytes = await this.storage.get(entity.sha256);
+    if (!bytes) throw new AppError(410, 'attachment_missing', 'the stored file is missing');
+    const [attachment] = await viewsOf(manager, [entity]);
+    return { attachment: attachment!, bytes };
+  }
+
+  async remove(actor: Actor, attachmentId: string): Promise<void> {
+    await this.dataSource.transaction(async (manager) => {
+      const entity = await manager.findOneBy(AttachmentEntity, { id: attachmentId });
+      if (!entity) throw notFound('attachment');
+      const { standing } = await requireComponent(manager, actor, entity.componentId).catch(() => {
+        throw notFound('attachment');
+      });
+      enforce(canDesign(standing));
+      await manager.delete(AttachmentEntity, { id: attachmentId });
+      await recordAudit(manager, {
+        actorId: actor.id,
+        action: 'attachment.removed',
+        entityType: 'attachment',
+        entityId: attachmentId,
+        projectId: entity.projectId,
+        before: { componentId: entity.componentId, name: entity.name, sha256: entity.sha256 },
+      });
+    });
+  }
+}

@@ -1,0 +1,120 @@
+import type { Report } from '@hoopline/calc';
+import type { DataSource } from 'typeorm';
+import { renderSheet } from '../../sheets/render-sheet';
+import type { SheetData } from '../../sheets/sheet-data';
+import type { AttachmentsService } from '../attachments/attachments.service';
+import { recordAudit } from '../audit/audit.service';
+import { requireRevision } from '../components/component-access';
+import type { Actor } from '../../policy/policy';
+import { iso, isoRequired, rows } from '../sql';
+import { verifyCode } from '../revisions/revision-content';
+
+export type PaperSize = 'A4' | 'LETTER';
+
+/**
+ * The stamped-for-review sheet of one revision. Whoever may see the revision
+ * may have its sheet: a fabricator only sees countersigned revisions, so only
+ * those sheets (stamped FOR REVIEW); designers and checkers may preview any
+ * other revision, stamped DRAFT. Every download is audited.
+ */
+export class SheetsService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly attachments: AttachmentsService,
+    private readonly publicUrl: string,
+  ) {}
+
+  async sheet(
+    actor: Actor,
+    revisionId: string,
+    paperSize: PaperSize,
+  ): Promise<{ pdf: Buffer; fileName: string; stamp: SheetData['stamp'] }> {
+    const manager = this.dataSource.manager;
+    const { revision, component } = await requireRevision(manager, actor, revisionId);
+    const [facts] = await rows<{
+      number: string;
+      name: string;
+      client: string;
+      unit_system: 'si' | 'us';
+      author: string;
+    }>(
+      manager,
+      `select p.number, p.name, p.client, p.unit_system, u.name as author
+         from projects p, users u where p.id = $1 and u.id = $2`,
+      [revision.projectId, revision.authorId],
+    );
+    if (!facts) throw new Error('revision without its project or author');
+    const [countersign] = await rows<{
+      checker: string;
+      created_at: Date;
+      comment: string;
+      hash_signed: string;
+    }>(
+      manager,
+      `select u.name as checker, s.created_at, s.comment, s.hash_signed
+         from sign_offs s join users u on u.id = s.checker_id
+        where s.revision_id = $1 and s.decision = 'countersigned'
+        order by s.created_at desc limit 1`,
+      [revisionId],
+    );
+    const countersigned = revision.status === 'countersigned';
+    const code = verifyCode(revision.contentHash);
+    const data: SheetData = {
+      project: {
+        number: facts.number,
+        name: facts.name,
+        client: facts.client,
+        unitSystem: facts.unit_system,
+      },
+      component: { name: component.name, kind: component.kind, tag: component.tag },
+      revision: {
+        number: revision.number,
+        status:
+          countersigned && revision.supersededAt ? 'countersigned, superseded' : revision.status,
+        contentHash: revision.contentHash,
+        verifyCode: code,
+        engineVersion: revision.engineVersion,
+        createdAt: isoRequired(revision.createdAt),
+        submittedAt: iso(revision.submittedAt),
+        note: revision.note,
+        inputs: revision.inputs,
+        report: revision.report as unknown as Report,
+      },
+      author: { name: facts.author },
+      countersign:
+        countersigned && countersign
+          ? {
+              checker: countersign.checker,
+              at: isoRequired(countersign.created_at),
+              comment: countersign.comment,
+              hashSigned: countersign.hash_signed,
+            }
+          : null,
+      attachments: (
+        await this.attachments.listAsOf(
+          manager,
+          component.id,
+          countersigned ? revision.decidedAt : null,
+        )
+      ).map((a) => ({ name: a.name, sha256: a.sha256, size: a.size })),
+      verifyUrl: `${this.publicUrl.replace(/\/+$/, '')}/verify/${code}`,
+      stamp: countersigned ? 'review' : 'draft',
+      paperSize,
+      generatedAt: new Date().toISOString(),
+    };
+    const pdf = await renderSheet(data);
+    await recordAudit(manager, {
+      actorId: actor.id,
+      action: 'sheet.downloaded',
+      entityType: 'revision',
+      entityId: revision.id,
+      projectId: revision.projectId,
+      after: { number: revision.number, stamp: data.stamp, paperSize, componentId: component.id },
+    });
+    const safe = (text: string) => text.replace(/[^A-Za-z0-9._-]+/g, '-').replace(/^-+|-+$/g, '');
+    const fileName = `${safe(facts.number)}_${safe(component.name) || 'component'}_rev${revision.number}${
+      countersigned ? '' : '_DRAFT'
+    }.pdf`;
+    return { pdf, fileName, stamp: data.stamp };
+  }
+}

@@ -1,0 +1,319 @@
+import { execFileSync } from 'node:child_process';
+import { mkdirSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
+import { PDFParse } from 'pdf-parse';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import {
+  TINY_PDF,
+  anonymous,
+  makeWorld,
+  signIn,
+  type Session,
+  type World,
+} from '../../../test/fixtures';
+import { startTestApp, type TestApp } from '../../../test/test-app';
+
+/**
+ * One component of every kind, each built so that a published or computed
+ * check value appears on its sheet. The sheet is fetched through the API and
+ * its text extracted with pdf-parse.
+ */
+const CASES: ReadonlyArray<{
+  kind: string;
+  inputs: Record<string, unknown>;
+  /** Text the sheet must show, and where the number comes from. */
+  expected: string;
+  source: string;
+}> = [
+  {
+    kind: 'flat-area-load',
+    inputs: {
+      kind: 'flat-area-load',
+      site: { ambientPressure: '101325 Pa' },
+      outline: { shape: 'circle', sealDiameter: '500 mm' },
+      fastenerCount: 12,
+      loadCases: [{ name: 'Full vacuum', internal: 'full vacuum' }],
+    },
+    expected: '19895 N',
+    source: 'force_per_fastener_door: F = Δp·A = 19 895 N (computed from F = Δp·A, METHODS §b)',
+  },
+  {
+    kind: 'circular-plate',
+    inputs: {
+      kind: 'circular-plate',
+      site: { ambientPressure: '101325 Pa' },
+      diameter: '500 mm',
+      thickness: '10 mm',
+      edge: 'clamped',
+      material: 'carbon-steel',
+      loadCases: [{ name: 'Full vacuum', internal: 'full vacuum' }],
+    },
+    expected: '4.75e7 Pa',
+    source: 'circ_plate_clamped_steel_a0p25_t10mm: σ_max = 47.496 MPa (Roark Table 11.2 case 10b)',
+  },
+  {
+    kind: 'rectangular-plate',
+    inputs: {
+      kind: 'rectangular-plate',
+      site: { ambientPressure: '101325 Pa' },
+      width: '600 mm',
+      height: '400 mm',
+      thickness: '12 mm',
+      edge: 'clamped',
+      material: 'carbon-steel',
+      loadCases: [{ name: 'Full vacuum', internal: 'full vacuum' }],
+    },
+    expected: '5.087e7 Pa',
+    source:
+      'rect_clamped_steel_door_600x400: σ_edge = 50.865 MPa (Roark Table 11.4 case 8a, β1 = 0.4680 at a/b = 1.5… interpolated)',
+  },
+  {
+    kind: 'cylindrical-shell',
+    inputs: {
+      kind: 'cylindrical-shell',
+      site: { ambientPressure: '101325 Pa' },
+      diameter: '1005 mm',
+      diameterBasis: 'outside',
+      thickness: '5 mm',
+      length: '20 m',
+      material: 'carbon-steel',
+      loadCases: [{ name: 'Full vacuum', internal: 'full vacuum' }],
+    },
+    expected: '54945 Pa',
+    source:
+      'bresse_steel_D1m_t5mm: p_cr = 2E/(1 − ν²)·(t/D)³ = 54 945 Pa (Roark Table 35 case 19a)',
+  },
+  {
+    kind: 'sphere-or-head',
+    inputs: {
+      kind: 'sphere-or-head',
+      site: { ambientPressure: '101325 Pa' },
+      shape: 'sphere',
+      diameter: '2 m',
+      diameterBasis: 'outside',
+      thickness: '10 mm',
+      material: 'carbon-steel',
+      loadCases: [{ name: 'Full vacuum', internal: 'full vacuum' }],
+    },
+    expected: '2.421e7 Pa',
+    source: 'zoelly_sphere_steel: p_cl = 1.2105·E·(t/R)² = 24.21 MPa (Huston & Josephs eq. 31.1)',
+  },
+  {
+    kind: 'stored-energy',
+    inputs: {
+      kind: 'stored-energy',
+      site: { ambientPressure: '101325 Pa' },
+      volume: '50 L',
+      gas: 'air',
+      loadCases: [{ name: 'Receiver at 1.1 MPa(a)', internal: '1.1 MPa(a)' }],
+    },
+    expected: '124834 J',
+    source: 'brode_air_50L_10barg: E = (p1 − p0)·V/(γ − 1) = 124 834 J (Brode form, METHODS §h)',
+  },
+  {
+    kind: 'pump-down',
+    inputs: {
+      kind: 'pump-down',
+      site: { ambientPressure: '101325 Pa' },
+      volume: '1 m3',
+      pumpingSpeed: '10 L/s',
+      targetPressure: '10 Pa(a)',
+    },
+    expected: '922.4 s',
+    source: 'pumpdown_1m3_10Lps: t = (V/S)·ln(p0/p) = 922.35 s (O’Hanlon, from memory)',
+  },
+];
+
+const ARTIFACTS = path.resolve(import.meta.dirname, '../../../test-results/sheets');
+
+async function pdfText(bytes: Buffer): Promise<string> {
+  const parser = new PDFParse({ data: new Uint8Array(bytes) });
+  try {
+    return (await parser.getText()).text;
+  } finally {
+    await parser.destroy();
+  }
+}
+
+async function binary(session: Session, url: string) {
+  return session
+    .get(url)
+    .buffer(true)
+    .parse((res, done) => {
+      const chunks: Buffer[] = [];
+      res.on('data', (c: Buffer) => chunks.push(c));
+      res.on('end', () => done(null, Buffer.concat(chunks)));
+    });
+}
+
+describe('the stamped-for-review sheet (rendered through the API, read back with pdf-parse)', () => {
+  let t: TestApp;
+  let w: World;
+  let designer: Session;
+  let checker: Session;
+  let fabricator: Session;
+
+  beforeAll(async () => {
+    t = await startTestApp();
+    w = await makeWorld(t);
+    [designer, checker, fabricator] = await Promise.all([
+      signIn(t, w.designer),
+      signIn(t, w.checker),
+      signIn(t, w.fabricator),
+    ]);
+    mkdirSync(ARTIFACTS, { recursive: true });
+  });
+  afterAll(async () => {
+    await t.close();
+  });
+
+  it('requires sign-in', async () => {
+    const c = await t.services.components.create(w.designer, w.projectId, {
+      name: 'Anonymous probe',
+      inputs: CASES[1]!.inputs,
+    });
+    await anonymous(t).get(`/api/revisions/${c.revision.id}/sheet.pdf`).expect(401);
+  });
+
+  it.each(CASES)(
+    'renders a countersigned $kind sheet with hash, stamp, cautions and a known value',
+    async (c) => {
+      const created = await t.services.components.create(w.designer, w.projectId, {
+        name: `Sheet ${c.kind}`,
+        inputs: c.inputs,
+      });
+      const id = created.revision.id;
+      await t.services.attachments.upload(w.designer, created.component.id, {
+        originalName: `${c.kind} drawing.pdf`,
+        bytes: Buffer.concat([TINY_PDF, Buffer.from(c.kind)]),
+      });
+      await t.services.revisions.submit(w.designer, id);
+      await t.services.revisions.decide(w.checker, id, 'countersigned', {
+        hash: created.revision.contentHash,
+        comment: 'checked line by line',
+      });
+      const res = await binary(fabricator, `/api/revisions/${id}/sheet.pdf?paper=letter`);
+      expect(res.status).toBe(200);
+      expect(res.headers['content-type']).toBe('application/pdf');
+      expect(res.headers['x-hoopline-stamp']).toBe('review');
+      const pdf = res.body as Buffer;
+      expect(pdf.subarray(0, 5).toString()).toBe('%PDF-');
+      writeFileSync(path.join(ARTIFACTS, `${c.kind}.pdf`), pdf);
+      const text = (await pdfText(pdf)).replace(/\s+/g, ' ');
+      expect(text).toContain(created.revision.contentHash);
+      expect(text).toContain('FOR REVIEW — NOT FOR CONSTRUCTION');
+      expect(text).not.toContain('DRAFT — NOT CHECKED');
+      expect(text).toContain('Screening only — not a code calculation');
+      // Greek symbols of the trail come through the fallback fonts intact.
+      expect(text).toMatch(/[σΔνγ]/);
+      expect(text).toMatch(/qualified engineer/);
+      for (const caution of created.revision.report['cautions'] as Array<{ title: string }>) {
+        expect(text).toContain(caution.title);
+      }
+      // The known value, source beside it in CASES: c.source.
+      expect(text, c.source).toContain(c.expected);
+      // Attachments as of the countersign are listed by name and hash.
+      expect(text).toContain(`${c.kind} drawing.pdf`);
+      expect(text).toMatch(/Page 1 of \d+/);
+      expect(text).toContain('Checker');
+    },
+  );
+
+  it('previews a draft for its designer and checker, stamped DRAFT, and refuses it to the fabricator', async () => {
+    const created = await t.services.components.create(w.designer, w.projectId, {
+      name: 'Draft preview',
+      inputs: CASES[1]!.inputs,
+    });
+    const url = `/api/revisions/${created.revision.id}/sheet.pdf`;
+    for (const session of [designer, checker]) {
+      const res = await binary(session, url);
+      expect(res.status).toBe(200);
+      expect(res.headers['x-hoopline-stamp']).toBe('draft');
+      const text = await pdfText(res.body as Buffer);
+      expect(text).toContain('DRAFT — NOT CHECKED');
+      expect(text).not.toContain('FOR REVIEW — NOT FOR CONSTRUCTION');
+    }
+    const refused = await fabricator.get(url);
+    expect(refused.status).toBe(404);
+    expect(refused.body.error.code).toBe('not_found');
+  });
+
+  it('audits every download', async () => {
+    const created = await t.services.components.create(w.designer, w.projectId, {
+      name: 'Audited',
+      inputs: CASES[0]!.inputs,
+    });
+    const res = await binary(designer, `/api/revisions/${created.revision.id}/sheet.pdf?paper=a4`);
+    expect(res.status).toBe(200);
+    const events: Array<{
+      action: string;
+      summary: { after: { stamp: string; paperSize: string } };
+    }> = await t.dataSource.query(
+      `select action, summary from audit_events where entity_id = $1 and action = 'sheet.downloaded'`,
+      [created.revision.id],
+    );
+    expect(events).toHaveLength(1);
+    expect(events[0]!.summary.after).toMatchObject({ stamp: 'draft', paperSize: 'A4' });
+  });
+
+  it('refuses a paper size it does not know, naming the field', async () => {
+    const created = await t.services.components.create(w.designer, w.projectId, {
+      name: 'Paper',
+      inputs: CASES[0]!.inputs,
+    });
+    const res = await designer.get(`/api/revisions/${created.revision.id}/sheet.pdf?paper=a3`);
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields).toEqual([{ path: 'paper', message: 'must be "a4" or "letter"' }]);
+  });
+
+  it('turns one sheet into PNG pages with pdftoppm (kept as a test artifact)', () => {
+    const pdf = path.join(ARTIFACTS, 'cylindrical-shell.pdf');
+    execFileSync('pdftoppm', ['-r', '60', '-png', pdf, path.join(ARTIFACTS, 'cylindrical-shell')]);
+    const first = path.join(ARTIFACTS, 'cylindrical-shell-1.png');
+    const png = execFileSync('head', ['-c', '8', first]);
+    expect(png.subarray(1, 4).toString()).toBe('PNG');
+  });
+
+  it('verify: a countersigned sheet matches, a later countersign supersedes it, a made-up code does not match', async () => {
+    const first = await t.services.components.create(w.designer, w.projectId, {
+      name: 'Verify me',
+      inputs: CASES[1]!.inputs,
+    });
+    await t.services.revisions.submit(w.designer, first.revision.id);
+    await t.services.revisions.decide(w.checker, first.revision.id, 'countersigned', {
+      hash: first.revision.contentHash,
+    });
+    const code = first.revision.verifyCode;
+    const now = await anonymous(t).get(`/api/verify/${code}`).expect(200);
+    expect(now.body).toMatchObject({
+      match: true,
+      status: 'current',
+      componentName: 'Verify me',
+      revisionNumber: 1,
+    });
+    expect(Object.keys(now.body).sort()).toEqual(
+      [
+        'componentName',
+        'countersignedAt',
+        'match',
+        'projectNumber',
+        'revisionNumber',
+        'status',
+      ].sort(),
+    );
+
+    const second = await t.services.revisions.create(w.designer, first.component.id, {
+      inputs: { ...CASES[1]!.inputs, thickness: '11 mm' },
+      baseVersion: first.component.version,
+    });
+    await t.services.revisions.submit(w.designer, second.revision.id);
+    await t.services.revisions.decide(w.checker, second.revision.id, 'countersigned', {
+      hash: second.revision.contentHash,
+    });
+    const later = await anonymous(t).get(`/api/verify/${code}`).expect(200);
+    expect(later.body).toMatchObject({ match: true, status: 'superseded', revisionNumber: 1 });
+
+    const made = await anonymous(t).get('/api/verify/0000-0000-0000').expect(200);
+    expect(made.body).toEqual({ match: false });
+  });
+});

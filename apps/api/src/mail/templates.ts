@@ -1,0 +1,115 @@
+/**
+ * The mails Hoopline sends, as plain text with a simple HTML twin. Each says
+ * what happened, what to do and where; none carries numbers the reader might
+ * act on without opening the checked record.
+ */
+export interface MailMessage {
+  readonly to: readonly string[];
+  readonly subject: string;
+  readonly text: string;
+  readonly html: string;
+}
+
+const SIGNATURE =
+  '— Hoopline\nScreening records for pressure and vacuum equipment. A screening is not a code calculation; ' +
+  'the applicable code and a qualified engineer decide.';
+
+function escapeHtml(text: string): string {
+  return text.replace(
+    /[&<>"']/g,
+    (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!,
+  );
+}
+
+function compose(
+  to: readonly string[],
+  subject: string,
+  paragraphs: readonly string[],
+  link?: { label: string; url: string },
+): MailMessage {
+  const text = [...paragraphs, ...(link ? [`${link.label}: ${link.url}`] : []), SIGNATURE].join(
+    '\n\n',
+  );
+  const html = [
+    ...paragraphs.map((p) => `<p>${escapeHtml(p)}</p>`),
+    ...(link ? [`<p><a href="${escapeHtml(link.url)}">${escapeHtml(link.label)}</a></p>`] : []),
+    `<p style="color:#64748b">${escapeHtml(SIGNATURE).replace('\n', '<br>')}</p>`,
+  ].join('\n');
+  return { to, subject, text, html };
+}
+
+export interface RevisionMailContext {
+  readonly projectNumber: string;
+  readonly projectName: string;
+  readonly componentName: string;
+  readonly revisionNumber: number;
+  readonly url: string;
+}
+
+function revisionLabel(c: RevisionMailContext): string {
+  return `${c.projectNumber} ${c.componentName} rev ${c.revisionNumber}`;
+}
+
+export const mails = {
+  invitation(to: string, invitedBy: string, url: string, expiresAt: string): MailMessage {
+    return compose(
+      [to],
+      'You are invited to Hoopline',
+      [
+        `${invitedBy} has invited you to Hoopline, where pressure and vacuum equipment screenings are prepared, checked and issued.`,
+        `The invitation can be used once and expires ${expiresAt.slice(0, 16).replace('T', ' ')} UTC.`,
+      ],
+      { label: 'Accept the invitation', url },
+    );
+  },
+
+  passwordReset(to: string, url: string, expiresAt: string): MailMessage {
+    return compose(
+      [to],
+      'Reset your Hoopline password',
+      [
+        'Someone asked to reset the password of your Hoopline account. If it was not you, ignore this mail: nothing changes.',
+        `The link can be used once and expires ${expiresAt.slice(0, 16).replace('T', ' ')} UTC.`,
+      ],
+      { label: 'Choose a new password', url },
+    );
+  },
+
+  submittedForCheck(to: readonly string[], c: RevisionMailContext, author: string): MailMessage {
+    return compose(
+      to,
+      `Check requested: ${revisionLabel(c)}`,
+      [
+        `${author} has submitted ${revisionLabel(c)} (${c.projectName}) for check.`,
+        'It is in your check queue: read the trail, then countersign or return it with your comments.',
+      ],
+      { label: 'Open the review', url: c.url },
+    );
+  },
+
+  countersigned(to: readonly string[], c: RevisionMailContext, checker: string): MailMessage {
+    return compose(
+      to,
+      `Countersigned: ${revisionLabel(c)}`,
+      [
+        `${checker} has countersigned ${revisionLabel(c)} (${c.projectName}).`,
+        'Its stamped-for-review sheet can now be downloaded by the project’s fabricators. It is for review, not for construction.',
+      ],
+      { label: 'Open the revision', url: c.url },
+    );
+  },
+
+  returned(
+    to: readonly string[],
+    c: RevisionMailContext,
+    checker: string,
+    comment: string,
+  ): MailMessage {
+    return compose(
+      to,
+      `Returned with comments: ${revisionLabel(c)}`,
+      [`${checker} has returned ${revisionLabel(c)} (${c.projectName}).`, `Comment: ${comment}`],
+      { label: 'Open the revision', url: c.url },
+    );
+  },
+};

@@ -1,0 +1,32 @@
+import { Router } from 'express';
+import { actorOf } from '../auth/authenticate';
+import { valid, validate } from '../http/validate';
+import { contentDisposition } from './attachments.routes';
+import { idParams } from './common.schemas';
+import type { RouteDeps } from './route-deps';
+import { sheetQuery } from './sheets.schemas';
+
+/** The stamped-for-review PDF sheet of a revision. */
+export function sheetsRoutes({ services, signedIn }: RouteDeps): Router {
+  const router = Router();
+  const sheet = validate({ params: idParams, query: sheetQuery });
+  router.get('/revisions/:id/sheet.pdf', signedIn, sheet, async (req, res) => {
+    const { params, query } = valid(req, sheet);
+    const { pdf, fileName, stamp } = await services.sheets.sheet(
+      actorOf(req),
+      params.id,
+      query.paper,
+    );
+    res
+      .status(200)
+      .set({
+        'content-type': 'application/pdf',
+        'content-length': String(pdf.length),
+        'content-disposition': contentDisposition('attachment', fileName),
+        'cache-control': 'private, no-store',
+        'x-hoopline-stamp': stamp,
+      })
+      .end(pdf);
+  });
+  return router;
+}

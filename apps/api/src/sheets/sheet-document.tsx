@@ -1,0 +1,579 @@
+import { Document, Image, Page, StyleSheet, Text, View } from '@react-pdf/renderer';
+import type { ReactNode } from 'react';
+import type { CaseReport, Check, Report, Step } from '@hoopline/calc';
+import { FONT_FAMILY, MONO_FAMILY, familyFor } from './fonts';
+import { formatReportValue, inputRows, significant } from './quantity-display';
+import { STAMP_TEXT, type SheetData } from './sheet-data';
+
+/**
+ * The stamped-for-review sheet: a title block of our own, the verdict, load
+ * cases, inputs (project units with SI alongside), checks, the full trail,
+ * validity warnings, cautions and attachments; on every page a diagonal stamp
+ * and a footer with the content hash, the verify code and its QR code.
+ */
+
+const INK = '#1e293b';
+const MUTED = '#64748b';
+const RULE = '#cbd5e1';
+const ACCENT = '#0f766e';
+const FAIL = '#b91c1c';
+
+const styles = StyleSheet.create({
+  page: {
+    fontFamily: FONT_FAMILY,
+    fontSize: 8,
+    color: INK,
+    paddingTop: 56,
+    paddingBottom: 92,
+    paddingHorizontal: 36,
+  },
+  runningHead: {
+    position: 'absolute',
+    top: 22,
+    left: 36,
+    right: 36,
+    flexDirection: 'row',
+    justifyContent: 'space-between',
+    borderBottomWidth: 1,
+    borderBottomColor: ACCENT,
+    paddingBottom: 4,
+    fontSize: 7.5,
+  },
+  brand: { fontWeight: 600, letterSpacing: 1.2, color: ACCENT },
+  titleBlock: { borderWidth: 1, borderColor: INK, marginBottom: 10 },
+  titleRow: { flexDirection: 'row' },
+  titleCell: {
+    flex: 1,
+    padding: 4,
+    borderRightWidth: 1,
+    borderRightColor: RULE,
+    borderBottomWidth: 1,
+    borderBottomColor: RULE,
+  },
+  titleCellLast: { flex: 1, padding: 4, borderBottomWidth: 1, borderBottomColor: RULE },
+  label: { fontSize: 6.5, color: MUTED, textTransform: 'uppercase', letterSpacing: 0.6 },
+  value: { fontSize: 9, fontWeight: 500 },
+  sheetTitle: {
+    fontSize: 13,
+    fontWeight: 600,
+    padding: 6,
+    borderBottomWidth: 1,
+    borderBottomColor: INK,
+  },
+  caution: {
+    borderLeftWidth: 3,
+    borderLeftColor: '#d97706',
+    backgroundColor: '#fffbeb',
+    padding: 6,
+    marginBottom: 10,
+  },
+  cautionTitle: { fontWeight: 600, marginBottom: 2 },
+  verdict: {
+    flexDirection: 'row',
+    justifyContent: 'space-between',
+    padding: 6,
+    marginBottom: 10,
+    borderWidth: 1,
+  },
+  h2: { fontSize: 10, fontWeight: 600, marginTop: 8, marginBottom: 4, color: ACCENT },
+  h3: { fontSize: 8.5, fontWeight: 600, marginTop: 6, marginBottom: 3 },
+  table: { borderTopWidth: 1, borderTopColor: INK },
+  row: {
+    flexDirection: 'row',
+    borderBottomWidth: 0.5,
+    borderBottomColor: RULE,
+    paddingVertical: 2,
+  },
+  headRow: {
+    flexDirection: 'row',
+    borderBottomWidth: 1,
+    borderBottomColor: INK,
+    paddingVertical: 2,
+    fontWeight: 600,
+  },
+  cell: { paddingRight: 4 },
+  small: { fontSize: 7, color: MUTED },
+  mono: { fontFamily: MONO_FAMILY, fontSize: 7 },
+  // No lineHeight factor: on the page it made react-pdf 4.9 drop the fixed,
+  // absolutely placed footer, and on a View it spread lines far apart.
+  body: {},
+  stamp: {
+    position: 'absolute',
+    top: 360,
+    left: -80,
+    width: 760,
+    textAlign: 'center',
+    fontSize: 28,
+    fontWeight: 700,
+    color: FAIL,
+    opacity: 0.16,
+    transform: 'rotate(-32deg)',
+  },
+  footer: {
+    position: 'absolute',
+    bottom: 22,
+    left: 36,
+    right: 36,
+    flexDirection: 'row',
+    borderTopWidth: 1,
+    borderTopColor: INK,
+    paddingTop: 4,
+  },
+  footerText: { flex: 1, fontSize: 6.5, paddingRight: 8 },
+  qr: { width: 54, height: 54 },
+});
+
+function plainText(node: ReactNode): string {
+  if (typeof node === 'string' || typeof node === 'number') return String(node);
+  if (Array.isArray(node)) return node.map(plainText).join('');
+  return '';
+}
+
+type Style = Parameters<typeof StyleSheet.create>[0][string];
+
+interface TextWithFontProps {
+  readonly style?: Style | readonly Style[];
+  readonly children?: ReactNode;
+  readonly fixed?: boolean;
+  readonly minPresenceAhead?: number;
+  readonly render?: (props: { pageNumber: number; totalPages: number }) => ReactNode;
+}
+
+/** Text that picks its font family from what it says (see familyFor). */
+function T({ style, children, fixed, minPresenceAhead, render }: TextWithFontProps) {
+  const family = familyFor(plainText(children));
+  const own: Style[] = family === FONT_FAMILY ? [] : [{ fontFamily: family }];
+  const list: Style[] = [...(Array.isArray(style) ? style : style ? [style as Style] : []), ...own];
+  return (
+    <Text
+      style={list}
+      {...(fixed ? { fixed } : {})}
+      {...(minPresenceAhead !== undefined ? { minPresenceAhead } : {})}
+      {...(render ? { render } : {})}
+    >
+      {children}
+    </Text>
+  );
+}
+
+function Cell({
+  width,
+  children,
+  bold,
+  mono,
+  color,
+}: {
+  width: string;
+  children: React.ReactNode;
+  bold?: boolean;
+  mono?: boolean;
+  color?: string;
+}) {
+  return (
+    <T
+      style={[
+        styles.cell,
+        { width },
+        ...(bold ? [{ fontWeight: 600 }] : []),
+        ...(mono ? [styles.mono] : []),
+        ...(color ? [{ color }] : []),
+      ]}
+    >
+      {children}
+    </T>
+  );
+}
+
+function TitleCell({ label, value, last }: { label: string; value: string; last?: boolean }) {
+  return (
+    <View style={last ? styles.titleCellLast : styles.titleCell}>
+      <T style={styles.label}>{label}</T>
+      <T style={styles.value}>{value || '—'}</T>
+    </View>
+  );
+}
+
+function when(iso: string | null): string {
+  if (!iso) return '—';
+  return `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC`;
+}
+
+const KIND_NAMES: Record<string, string> = {
+  'flat-area-load': 'Flat-area load and fasteners',
+  'circular-plate': 'Circular flat plate',
+  'rectangular-plate': 'Rectangular flat plate',
+  'cylindrical-shell': 'Cylindrical shell',
+  'sphere-or-head': 'Sphere or dished head',
+  'stored-energy': 'Stored energy',
+  'pump-down': 'Pump-down',
+};
+
+function percent(utilisation: number): string {
+  return `${(utilisation * 100).toFixed(utilisation < 0.1 ? 1 : 0)} %`;
+}
+
+function VerdictBanner({ report }: { report: Report }) {
+  const failing = report.verdict === 'fail';
+  const colour = failing ? FAIL : report.verdict === 'pass' ? ACCENT : '#b45309';
+  const words: Record<Report['verdict'], string> = {
+    pass: 'PASSES every check',
+    fail: 'FAILS a check',
+    'outside-validity': 'OUTSIDE the validity range of a method — not a basis for a decision',
+    'no-checks': 'computed quantities only, no pass/fail criterion',
+  };
+  return (
+    <View style={[styles.verdict, { borderColor: colour }]}>
+      <T style={{ fontWeight: 600, color: colour }}>Screening result: {words[report.verdict]}</T>
+      <T>
+        {report.governing
+          ? `Governing: ${report.governing.loadCase} — ${report.governing.checkLabel} — ${percent(report.governing.utilisation)}`
+          : 'No governing check'}
+      </T>
+    </View>
+  );
+}
+
+function LoadCases({
+  report,
+  system,
+}: {
+  report: Report;
+  system: SheetData['project']['unitSystem'];
+}) {
+  return (
+    <View>
+      <T style={styles.h2}>1 Load cases</T>
+      <View style={styles.table}>
+        <View style={styles.headRow}>
+          <Cell width="22%">Case</Cell>
+          <Cell width="14%">Inside (abs)</Cell>
+          <Cell width="14%">Outside (abs)</Cell>
+          <Cell width="14%">Δp (in − out)</Cell>
+          <Cell width="8%">Factor</Cell>
+          <Cell width="28%">As given</Cell>
+        </View>
+        {report.cases.map((c) => (
+          <View key={c.loadCase.name} style={styles.row} wrap={false}>
+            <Cell width="22%">{c.loadCase.name}</Cell>
+            <Cell width="14%">{formatReportValue(c.loadCase.internal, 'Pa', system)}</Cell>
+            <Cell width="14%">{formatReportValue(c.loadCase.external, 'Pa', system)}</Cell>
+            <Cell width="14%">{formatReportValue(c.loadCase.differential, 'Pa', system)}</Cell>
+            <Cell width="8%">{significant(c.loadCase.factor)}</Cell>
+            <Cell width="28%">{c.loadCase.description}</Cell>
+          </View>
+        ))}
+      </View>
+      <T style={styles.small}>
+        Ambient {formatReportValue(report.ambient.pressure, 'Pa', system)} (
+        {report.ambient.basis === 'altitude'
+          ? `ISO 2533 standard atmosphere at ${significant(report.ambient.altitude ?? 0)} m`
+          : report.ambient.basis === 'given'
+            ? 'given'
+            : 'standard atmosphere at sea level'}
+        ).
+      </T>
+    </View>
+  );
+}
+
+function Inputs({ data }: { data: SheetData }) {
+  const rows = inputRows(data.revision.inputs, data.project.unitSystem);
+  // A US-customary project shows its own units beside SI; an SI project needs SI once.
+  const both = data.project.unitSystem === 'us';
+  return (
+    <View>
+      <T style={styles.h2}>2 Inputs</T>
+      <View style={styles.table}>
+        <View style={styles.headRow}>
+          <Cell width={both ? '30%' : '40%'}>Field</Cell>
+          <Cell width={both ? '24%' : '32%'}>As entered</Cell>
+          {both ? <Cell width="23%">US customary</Cell> : null}
+          <Cell width={both ? '23%' : '28%'}>SI</Cell>
+        </View>
+        {rows.map((r) => (
+          <View key={r.path} style={styles.row} wrap={false}>
+            <Cell width={both ? '30%' : '40%'}>{r.path}</Cell>
+            <Cell width={both ? '24%' : '32%'}>{r.given}</Cell>
+            {both ? <Cell width="23%">{r.projectUnits}</Cell> : null}
+            <Cell width={both ? '23%' : '28%'}>{r.si}</Cell>
+          </View>
+        ))}
+      </View>
+    </View>
+  );
+}
+
+function ChecksTable({
+  report,
+  system,
+}: {
+  report: Report;
+  system: SheetData['project']['unitSystem'];
+}) {
+  const rows: Array<{ caseName: string; check: Check; governing: boolean }> = [];
+  report.cases.forEach((c, index) => {
+    for (const check of c.checks) {
+      rows.push({
+        caseName: c.loadCase.name,
+        check,
+        governing: report.governing?.caseIndex === index && report.governing.checkId === check.id,
+      });
+    }
+  });
+  return (
+    <View>
+      <T style={styles.h2}>3 Checks</T>
+      {rows.length === 0 ? (
+        <T>This method computes quantities without a pass/fail criterion.</T>
+      ) : (
+        <View style={styles.table}>
+          <View style={styles.headRow}>
+            <Cell width="18%">Case</Cell>
+            <Cell width="30%">Check</Cell>
+            <Cell width="15%">Demand</Cell>
+            <Cell width="15%">Capacity</Cell>
+            <Cell width="11%">Utilisation</Cell>
+            <Cell width="11%">Result</Cell>
+          </View>
+          {rows.map(({ caseName, check, governing }) => (
+            <View key={`${caseName}/${check.id}`} style={styles.row} wrap={false}>
+              <Cell width="18%">{caseName}</Cell>
+              <Cell width="30%" bold={governing}>
+                {check.label}
+                {governing ? ' (governing)' : ''}
+              </Cell>
+              <Cell width="15%">
+                {formatReportValue(check.demand, check.unit, system, check.capacity)}
+              </Cell>
+              <Cell width="15%">
+                {formatReportValue(check.capacity, check.unit, system, check.capacity)}
+              </Cell>
+              <Cell width="11%">{percent(check.utilisation)}</Cell>
+              <Cell width="11%" bold color={check.pass ? ACCENT : FAIL}>
+                {check.pass ? 'pass' : 'FAIL'}
+              </Cell>
+            </View>
+          ))}
+        </View>
+      )}
+    </View>
+  );
+}
+
+function StepRows({ steps, prefix }: { steps: readonly Step[]; prefix: string }) {
+  return (
+    <View style={styles.table}>
+      <View style={styles.headRow}>
+        <Cell width="6%">#</Cell>
+        <Cell width="20%">Step</Cell>
+        <Cell width="30%">Expression and substituted values</Cell>
+        <Cell width="16%">Value (SI)</Cell>
+        <Cell width="28%">Source</Cell>
+      </View>
+      {steps.map((s, i) => (
+        <View key={s.id} style={styles.row} wrap={false}>
+          <Cell width="6%">{`${prefix}${i + 1}`}</Cell>
+          <Cell width="20%">{s.label}</Cell>
+          <View style={[styles.cell, { width: '30%' }]}>
+            <T>{s.expression}</T>
+            <T style={styles.small}>{s.substituted}</T>
+          </View>
+          <Cell width="16%">
+            {s.value === null ? '—' : `${significant(s.value)} ${s.unit === '1' ? '' : s.unit}`}
+          </Cell>
+          <Cell width="28%">{s.source}</Cell>
+        </View>
+      ))}
+    </View>
+  );
+}
+
+function Trail({ report }: { report: Report }) {
+  return (
+    <View>
+      <T style={styles.h2}>4 Calculation trail</T>
+      <T style={styles.small}>Every step as computed by the engine; values in SI units.</T>
+      {report.steps.length > 0 ? (
+        <View>
+          <T style={styles.h3}>Common to all load cases</T>
+          <StepRows steps={report.steps} prefix="C" />
+        </View>
+      ) : null}
+      {report.cases.map((c: CaseReport, index) => (
+        <View key={c.loadCase.name}>
+          <T style={styles.h3} minPresenceAhead={40}>
+            Load case {index + 1}: {c.loadCase.name}
+          </T>
+          <StepRows steps={c.steps} prefix={`${index + 1}.`} />
+        </View>
+      ))}
+    </View>
+  );
+}
+
+function Warnings({ report }: { report: Report }) {
+  return (
+    <View>
+      <T style={styles.h2}>5 Validity warnings</T>
+      {report.warnings.length === 0 ? (
+        <T>None: every method was used within its stated range.</T>
+      ) : (
+        report.warnings.map((w, i) => (
+          <T
+            key={`${w.code}-${i}`}
+            style={{ marginBottom: 2, color: w.severity === 'outside-validity' ? FAIL : INK }}
+          >
+            {w.severity === 'outside-validity'
+              ? 'OUTSIDE VALIDITY'
+              : w.severity === 'caution'
+                ? 'Caution'
+                : 'Note'}
+            {w.loadCase ? ` (${w.loadCase})` : ''}: {w.message}
+          </T>
+        ))
+      )}
+    </View>
+  );
+}
+
+function Cautions({ report }: { report: Report }) {
+  return (
+    <View>
+      <T style={styles.h2}>6 Cautions</T>
+      {report.cautions.map((c) => (
+        <View key={c.code} style={{ marginBottom: 4 }} wrap={false}>
+          <T style={{ fontWeight: 600 }}>{c.title}</T>
+          <T>{c.text}</T>
+        </View>
+      ))}
+    </View>
+  );
+}
+
+function Attachments({ data }: { data: SheetData }) {
+  return (
+    <View>
+      <T style={styles.h2}>7 Attachments</T>
+      {data.attachments.length === 0 ? (
+        <T>None.</T>
+      ) : (
+        <View style={styles.table}>
+          <View style={styles.headRow}>
+            <Cell width="40%">File</Cell>
+            <Cell width="12%">Size</Cell>
+            <Cell width="48%">SHA-256</Cell>
+          </View>
+          {data.attachments.map((a) => (
+            <View key={a.sha256 + a.name} style={styles.row} wrap={false}>
+              <Cell width="40%">{a.name}</Cell>
+              <Cell width="12%">{`${significant(a.size / 1024)} KiB`}</Cell>
+              <Cell width="48%" mono>
+                {`${a.sha256.slice(0, 32)}\n${a.sha256.slice(32)}`}
+              </Cell>
+            </View>
+          ))}
+        </View>
+      )}
+    </View>
+  );
+}
+
+export function SheetDocument({ data, qrDataUrl }: { data: SheetData; qrDataUrl: string }) {
+  const { project, component, revision, author, countersign } = data;
+  const report = revision.report;
+  const stamp = STAMP_TEXT[data.stamp];
+  return (
+    <Document
+      title={`${project.number} ${component.name} rev ${revision.number}`}
+      author="Hoopline"
+      subject={`Screening sheet, content hash ${revision.contentHash}`}
+      creator="Hoopline"
+      producer="Hoopline"
+    >
+      <Page size={data.paperSize} style={styles.page}>
+        <View style={styles.runningHead} fixed>
+          <T style={styles.brand}>HOOPLINE · SCREENING SHEET</T>
+          <T>
+            {project.number} · {component.name} · rev {revision.number} · {revision.status}
+          </T>
+        </View>
+        <T style={styles.stamp} fixed>
+          {stamp}
+        </T>
+        <View style={styles.footer} fixed>
+          <View style={styles.footerText}>
+            <T>
+              Content hash (SHA-256 of inputs, engine version and report):{' '}
+              <T style={styles.mono}>{revision.contentHash}</T>
+            </T>
+            <T>
+              Verify code{' '}
+              <T style={[styles.mono, { fontSize: 9, fontWeight: 500 }]}>{revision.verifyCode}</T>{' '}
+              at {data.verifyUrl}
+            </T>
+            <T>
+              {stamp}. Screening only; defer to the applicable code and a qualified engineer.
+              Generated {when(data.generatedAt)}.
+            </T>
+            <T render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />
+          </View>
+          <Image style={styles.qr} src={qrDataUrl} />
+        </View>
+
+        <View style={styles.body}>
+          <View style={styles.titleBlock}>
+            <T style={styles.sheetTitle}>{report.title}</T>
+            <View style={styles.titleRow}>
+              <TitleCell label="Project" value={`${project.number} — ${project.name}`} />
+              <TitleCell label="Client" value={project.client} />
+              <TitleCell
+                label="Component"
+                value={`${component.name}${component.tag ? ` (${component.tag})` : ''}`}
+              />
+              <TitleCell label="Kind" value={KIND_NAMES[component.kind] ?? component.kind} last />
+            </View>
+            <View style={styles.titleRow}>
+              <TitleCell label="Revision" value={`${revision.number} — ${revision.status}`} />
+              <TitleCell
+                label="Prepared by"
+                value={`${author.name}, ${when(revision.submittedAt ?? revision.createdAt)}`}
+              />
+              <TitleCell
+                label="Countersigned by"
+                value={
+                  countersign ? `${countersign.checker}, ${when(countersign.at)}` : 'not checked'
+                }
+              />
+              <TitleCell label="Engine" value={`hoopline-calc ${revision.engineVersion}`} last />
+            </View>
+          </View>
+
+          <View style={styles.caution}>
+            <T style={styles.cautionTitle}>Screening only — not a code calculation</T>
+            <T>
+              This sheet records a first-pass screening by textbook formulas. Final design,
+              fabrication and testing must follow the applicable pressure-equipment code (for
+              example ASME BPVC Section VIII, EN 13445, the Pressure Equipment Directive) and local
+              regulations, and be approved by a qualified engineer (licensed where the law requires
+              it).
+            </T>
+          </View>
+
+          <VerdictBanner report={report} />
+          {revision.note ? <T style={{ marginBottom: 6 }}>Revision note: {revision.note}</T> : null}
+          {countersign?.comment ? (
+            <T style={{ marginBottom: 6 }}>Checker’s comment: {countersign.comment}</T>
+          ) : null}
+
+          <LoadCases report={report} system={project.unitSystem} />
+          <Inputs data={data} />
+          <ChecksTable report={report} system={project.unitSystem} />
+          <Trail report={report} />
+          <Warnings report={report} />
+          <Cautions report={report} />
+          <Attachments data={data} />
+        </View>
+      </Page>
+    </Document>
+  );
+}
