@@ -28,8 +28,9 @@ case "$cmd" in
   start)
     mkdir -p "$ROOT/.data"
     if running; then say "already running on 127.0.0.1:$PORT (mail in $FOLDER)"; exit 0; fi
-    (cd "$ROOT/apps/api" && nohup node --import tsx src/mail/fake-smtp-main.ts --port "$PORT" --folder "$FOLDER" >"$LOG" 2>&1 &
-      echo $! >"$PIDFILE")
+    # exec: the background job is node itself, so its PID is the one stop signals.
+    (cd "$ROOT/apps/api" && exec nohup node --import tsx src/mail/fake-smtp-main.ts --port "$PORT" --folder "$FOLDER" >"$LOG" 2>&1) &
+    echo $! >"$PIDFILE"
     for _ in $(seq 1 50); do
       if grep -q "listening" "$LOG" 2>/dev/null; then say "listening on 127.0.0.1:$PORT, mail in $FOLDER"; exit 0; fi
       if ! running; then say "failed to start:"; cat "$LOG" >&2; exit 1; fi
