@@ -38,6 +38,17 @@ export function canManagePeople(actor: Actor): Decision {
   return actor.isAdmin ? allow : deny('not_an_admin', 'only an administrator manages people');
 }
 
+/**
+ * Finding one person by their exact e-mail address, to add them to a
+ * project: admins, and anyone who designs a project (designers manage
+ * members). An exact address only, so nobody can list who has an account.
+ */
+export function canLookUpPerson(actor: Actor, designsAProject: boolean): Decision {
+  return actor.isAdmin || designsAProject
+    ? allow
+    : deny('not_a_designer', 'only administrators and project designers look people up');
+}
+
 // ── Projects ────────────────────────────────────────────────────────────────
 
 /** Members see their projects; admins see every project. Anyone else sees nothing (404). */

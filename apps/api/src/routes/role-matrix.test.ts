@@ -190,6 +190,13 @@ describe('role × route matrix (every route, every persona)', () => {
     },
     { route: 'GET /api/users', expect: adminOnly(200), call: (s) => s.get('/api/users') },
     {
+      route: 'GET /api/users/lookup',
+      // Admins and designers (of any project) find a person by exact address; nobody else.
+      expect: { ...adminOnly(200), designer: 200 },
+      call: async (s) =>
+        s.get(`/api/users/lookup?email=${encodeURIComponent((await freshUser()).email)}`),
+    },
+    {
       route: 'PATCH /api/users/:id',
       expect: adminOnly(200),
       call: async (s) => s.patch(`/api/users/${(await freshUser()).id}`, { name: 'Renamed' }),

@@ -4,7 +4,7 @@ import { paginationQuery } from '../http/pagination';
 import { valid, validate } from '../http/validate';
 import { emptyBody, idParams } from './common.schemas';
 import type { RouteDeps } from './route-deps';
-import { inviteBody, listUsersQuery, updateUserBody } from './users.schemas';
+import { inviteBody, listUsersQuery, lookupQuery, updateUserBody } from './users.schemas';
 
 /** /users and /invitations: the administrator's management of people. */
 export function usersRoutes({ services, signedIn }: RouteDeps): Router {
@@ -14,6 +14,13 @@ export function usersRoutes({ services, signedIn }: RouteDeps): Router {
   router.get('/users', signedIn, list, async (req, res) => {
     const { query } = valid(req, list);
     res.json(await services.users.list(actorOf(req), query));
+  });
+
+  // Before /users/:id, so "lookup" is never read as an id.
+  const lookup = validate({ query: lookupQuery });
+  router.get('/users/lookup', signedIn, lookup, async (req, res) => {
+    const { query } = valid(req, lookup);
+    res.json({ user: await services.users.lookUp(actorOf(req), query.email) });
   });
 
   const update = validate({ params: idParams, body: updateUserBody });

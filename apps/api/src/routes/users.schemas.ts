@@ -19,3 +19,5 @@ export const inviteBody = z
     isAdmin: z.boolean({ error: 'must be true or false' }).optional(),
   })
   .strict();
+
+export const lookupQuery = z.object({ email }).strict();

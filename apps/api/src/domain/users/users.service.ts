@@ -6,7 +6,7 @@ import { InvitationEntity } from '../../db/entities/invitation.entity';
 import { UserEntity, type UnitSystem } from '../../db/entities/user.entity';
 import { conflict, forbidden, notFound } from '../../http/errors';
 import { pageOf, type Page, type PageRequest } from '../../http/pagination';
-import { canManagePeople, type Actor } from '../../policy/policy';
+import { canLookUpPerson, canManagePeople, type Actor } from '../../policy/policy';
 import { recordAudit } from '../audit/audit.service';
 import type { AuthService } from '../auth/auth.service';
 import { normaliseEmail } from '../auth/auth.service';
@@ -70,6 +70,23 @@ export class UsersService {
       });
       return meView(manager, after);
     });
+  }
+
+  /** One active person by exact e-mail address (to add them to a project); 404 otherwise. */
+  async lookUp(actor: Actor, email: string): Promise<{ id: string; name: string; email: string }> {
+    const manager = this.dataSource.manager;
+    const [designs] = await manager.query(
+      `select exists (select 1 from project_members where user_id = $1 and role = 'designer') as yes`,
+      [actor.id],
+    );
+    const decision = canLookUpPerson(actor, Boolean(designs?.yes));
+    if (!decision.allowed) throw forbidden(decision.code, decision.reason);
+    const user = await manager.findOneBy(UserEntity, {
+      email: normaliseEmail(email),
+      active: true,
+    });
+    if (!user) throw notFound('person');
+    return { id: user.id, name: user.name, email: user.email };
   }
 
   async list(
