@@ -136,3 +136,27 @@ describe('sweepThickness', () => {
     expect(issuePath(() => sweepThickness(example))).toBe('kind');
   });
 });
+
+describe('sweepThickness validity flags', () => {
+  it('marks the points where the plate leaves small-deflection theory (y > t/2), as screen() does', () => {
+    // A thin aluminium plate: deflection passes half the thickness below a few millimetres.
+    const input = {
+      kind: 'circular-plate',
+      diameter: '600 mm',
+      thickness: '6 mm',
+      edge: 'simply-supported',
+      material: 'aluminium-6061-t6',
+      loadCases: [{ name: 'Full vacuum', internal: 'full vacuum' }],
+    };
+    const result = sweepThickness(input, { from: 0.002, to: 0.03, points: 15 });
+    const flagged = result.points.filter((p) => p.outsideValidity);
+    expect(flagged.length).toBeGreaterThan(0);
+    expect(flagged.length).toBeLessThan(result.points.length);
+    for (const p of result.points) {
+      const report = screen({ ...input, thickness: p.value });
+      expect(p.outsideValidity, `at ${p.value} m`).toBe(
+        report.warnings.some((w) => w.severity === 'outside-validity'),
+      );
+    }
+  });
+});

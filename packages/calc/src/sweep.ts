@@ -31,6 +31,11 @@ export interface SweepPoint {
   readonly utilisation: number;
   /** Every check of every case passes. */
   readonly pass: boolean;
+  /**
+   * A method is used outside its validity range at this value (a report here
+   * would carry an 'outside-validity' warning and verdict): plot it so.
+   */
+  readonly outsideValidity: boolean;
   readonly cases: readonly SweepCase[];
 }
 
@@ -248,7 +253,10 @@ function point(component: ParsedComponent, value: number, result: MethodResult):
       outputs,
     };
   });
-  return { value, utilisation, pass, cases };
+  const outsideValidity =
+    result.warnings.some((w) => w.severity === 'outside-validity') ||
+    result.cases.some((trail) => trail.warnings.some((w) => w.severity === 'outside-validity'));
+  return { value, utilisation, pass, outsideValidity, cases };
 }
 
 function minimumPassing(
