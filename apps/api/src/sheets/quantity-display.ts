@@ -141,13 +141,43 @@ function leafRows(value: unknown, path: string, system: UnitSystem, rows: InputR
   rows.push({ path, given, projectUnits: '', si: '' });
 }
 
-/** The inputs of a revision flattened to rows; `kind` and `site` are shown elsewhere. */
-export function inputRows(inputs: unknown, system: UnitSystem): InputRow[] {
+// Numbers in the inputs are SI; for these fields the dimension is known (the
+// API writes the project's site into the inputs as SI numbers).
+const KNOWN_NUMBERS: Readonly<Record<string, Dimension>> = {
+  'site.altitude': 'length',
+  'site.ambientPressure': 'pressure',
+};
+
+/**
+ * The inputs of a revision flattened to rows (`kind` is in the title block,
+ * the load cases have their own table). A built-in material is named from the
+ * report, which carries the material it used.
+ */
+export function inputRows(
+  inputs: unknown,
+  system: UnitSystem,
+  report?: { inputs: Record<string, unknown> },
+): InputRow[] {
   const rows: InputRow[] = [];
   if (inputs === null || typeof inputs !== 'object') return rows;
   for (const [key, value] of Object.entries(inputs)) {
     if (key === 'kind' || key === 'loadCases') continue;
     leafRows(value, key, system, rows);
   }
-  return rows;
+  const material = report?.inputs['material'] as { name?: unknown } | undefined;
+  return rows.map((row) => {
+    const dimension = KNOWN_NUMBERS[row.path];
+    const si = Number(row.given);
+    if (dimension && row.si === '' && Number.isFinite(si)) {
+      return {
+        ...row,
+        projectUnits: formatInSystem(si, dimension, system),
+        si: formatInSystem(si, dimension, 'si'),
+      };
+    }
+    if (row.path === 'material' && typeof material?.name === 'string') {
+      return { ...row, projectUnits: material.name, si: material.name };
+    }
+    return row;
+  });
 }

@@ -242,7 +242,9 @@ function LoadCases({
 }) {
   return (
     <View>
-      <T style={styles.h2}>1 Load cases</T>
+      <T style={styles.h2} minPresenceAhead={60}>
+        1 Load cases
+      </T>
       <View style={styles.table}>
         <View style={styles.headRow}>
           <Cell width="22%">Case</Cell>
@@ -277,12 +279,14 @@ function LoadCases({
 }
 
 function Inputs({ data }: { data: SheetData }) {
-  const rows = inputRows(data.revision.inputs, data.project.unitSystem);
+  const rows = inputRows(data.revision.inputs, data.project.unitSystem, data.revision.report);
   // A US-customary project shows its own units beside SI; an SI project needs SI once.
   const both = data.project.unitSystem === 'us';
   return (
     <View>
-      <T style={styles.h2}>2 Inputs</T>
+      <T style={styles.h2} minPresenceAhead={60}>
+        2 Inputs
+      </T>
       <View style={styles.table}>
         <View style={styles.headRow}>
           <Cell width={both ? '30%' : '40%'}>Field</Cell>
@@ -322,7 +326,9 @@ function ChecksTable({
   });
   return (
     <View>
-      <T style={styles.h2}>3 Checks</T>
+      <T style={styles.h2} minPresenceAhead={60}>
+        3 Checks
+      </T>
       {rows.length === 0 ? (
         <T>This method computes quantities without a pass/fail criterion.</T>
       ) : (
@@ -391,7 +397,9 @@ function StepRows({ steps, prefix }: { steps: readonly Step[]; prefix: string })
 function Trail({ report }: { report: Report }) {
   return (
     <View>
-      <T style={styles.h2}>4 Calculation trail</T>
+      <T style={styles.h2} minPresenceAhead={60}>
+        4 Calculation trail
+      </T>
       <T style={styles.small}>Every step as computed by the engine; values in SI units.</T>
       {report.steps.length > 0 ? (
         <View>
@@ -414,7 +422,9 @@ function Trail({ report }: { report: Report }) {
 function Warnings({ report }: { report: Report }) {
   return (
     <View>
-      <T style={styles.h2}>5 Validity warnings</T>
+      <T style={styles.h2} minPresenceAhead={60}>
+        5 Validity warnings
+      </T>
       {report.warnings.length === 0 ? (
         <T>None: every method was used within its stated range.</T>
       ) : (
@@ -439,7 +449,9 @@ function Warnings({ report }: { report: Report }) {
 function Cautions({ report }: { report: Report }) {
   return (
     <View>
-      <T style={styles.h2}>6 Cautions</T>
+      <T style={styles.h2} minPresenceAhead={60}>
+        6 Cautions
+      </T>
       {report.cautions.map((c) => (
         <View key={c.code} style={{ marginBottom: 4 }} wrap={false}>
           <T style={{ fontWeight: 600 }}>{c.title}</T>
@@ -453,7 +465,9 @@ function Cautions({ report }: { report: Report }) {
 function Attachments({ data }: { data: SheetData }) {
   return (
     <View>
-      <T style={styles.h2}>7 Attachments</T>
+      <T style={styles.h2} minPresenceAhead={60}>
+        7 Attachments
+      </T>
       {data.attachments.length === 0 ? (
         <T>None.</T>
       ) : (
