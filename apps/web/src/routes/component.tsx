@@ -4,7 +4,7 @@ import { useProject } from '../api/projects';
 import { useRevision } from '../api/revisions';
 import type { Component, Project, Revision } from '../api/types';
 import { StatusBadge, VerdictBadge } from '../components/badges';
-import { ButtonLink } from '../components/button';
+import { buttonClass, ButtonLink } from '../components/button';
 import { ErrorView } from '../components/error-view';
 import { PageHeader, Panel } from '../components/page';
 import { PageSkeleton } from '../components/skeleton';
@@ -117,6 +117,12 @@ export function ComponentRoute() {
         actions={
           <>
             {r && sheet ? <SheetDownload revision={r} kind={sheet} /> : null}
+            {isDesigner ? (
+              // The attachments panel sits below the long trail: a way straight to it.
+              <a href="#attachments-title" className={buttonClass()}>
+                Attachments
+              </a>
+            ) : null}
             <ButtonLink to={`/components/${c.id}/revisions`}>Revisions</ButtonLink>
           </>
         }
@@ -131,7 +137,10 @@ export function ComponentRoute() {
           revision={r}
           aside={
             <Panel title="Attachments" id="attachments">
-              <AttachmentSummary componentId={c.id} />
+              <AttachmentSummary
+                componentId={c.id}
+                countersignedAt={r.status === 'countersigned' ? r.decidedAt : null}
+              />
             </Panel>
           }
         />

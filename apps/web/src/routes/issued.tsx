@@ -132,7 +132,7 @@ export function IssuedRoute() {
           <p className="mt-3 text-xs text-muted">
             Each sheet is stamped FOR REVIEW — NOT FOR CONSTRUCTION and carries a verify code.
             Anyone can check a sheet on the{' '}
-            <Link to="/verify" className="text-accent hover:underline">
+            <Link to="/verify" className="text-accent underline">
               verify page
             </Link>
             .

@@ -61,7 +61,10 @@ export function RevisionRoute() {
           <>
             {r.status === 'submitted' ? <SignOffPanel revision={r} project={p} /> : null}
             <Panel title="Attachments" id="attachments">
-              <AttachmentSummary componentId={c.id} />
+              <AttachmentSummary
+                componentId={c.id}
+                countersignedAt={r.status === 'countersigned' ? r.decidedAt : null}
+              />
             </Panel>
           </>
         }

@@ -83,4 +83,15 @@ describe('attachments', () => {
     renderApp(<AttachmentSummary componentId="c2" />);
     expect(await screen.findByText('Nothing is attached to this component.')).toBeInTheDocument();
   });
+
+  it('for a countersigned revision, sets apart what was attached after the countersign', async () => {
+    const later = { ...png, createdAt: '2026-03-05T08:00:00Z' };
+    fakeApi({ 'GET /components/c1/attachments': { body: { items: [later, pdf] } } });
+    renderApp(<AttachmentSummary componentId="c1" countersignedAt="2026-03-02T09:30:00Z" />);
+    expect(await screen.findByRole('list', { name: 'Attached files' })).toHaveTextContent(pdf.name);
+    expect(screen.getByRole('list', { name: 'Attached files' })).not.toHaveTextContent(png.name);
+    expect(screen.getByRole('list', { name: 'Attached after the countersign' })).toHaveTextContent(
+      png.name,
+    );
+  });
 });

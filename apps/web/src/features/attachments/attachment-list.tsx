@@ -181,11 +181,50 @@ export function AttachmentTable({
   );
 }
 
+function SummaryItem({
+  attachment: a,
+  busy,
+  onDownload,
+}: {
+  attachment: Attachment;
+  busy: boolean;
+  onDownload: () => void;
+}) {
+  return (
+    <li className="flex gap-2 rounded border border-line px-2 py-1.5">
+      <AttachmentPreview attachment={a} size="sm" />
+      <div className="min-w-0 flex-1">
+        <div className="flex items-start justify-between gap-2">
+          <p className="text-sm font-medium break-all">{a.name}</p>
+          <Button size="sm" busy={busy} onClick={onDownload}>
+            Download<span className="sr-only"> {a.name}</span>
+          </Button>
+        </div>
+        <p className="text-xs text-muted">
+          {a.kind} · {formatBytes(a.size)} · {formatDateTime(a.createdAt)}
+        </p>
+        <p className="font-mono text-xs break-all text-muted">
+          <span className="sr-only">SHA-256 </span>
+          {a.sha256}
+        </p>
+      </div>
+    </li>
+  );
+}
+
 /**
  * The attachments for a reader (the review and revision pages): names and full
- * hashes, the way the sheet lists them, each with a download.
+ * hashes, the way the sheet lists them, each with a download. For a
+ * countersigned revision, `countersignedAt` splits off what was attached
+ * later: its sheet lists only what was there when it was signed.
  */
-export function AttachmentSummary({ componentId }: { componentId: string }) {
+export function AttachmentSummary({
+  componentId,
+  countersignedAt = null,
+}: {
+  componentId: string;
+  countersignedAt?: string | null;
+}) {
   const attachments = useAttachments(componentId);
   const { busy, error, download } = useDownload();
   if (attachments.isPending) return <p className="text-sm text-muted">Loading attachments…</p>;
@@ -194,33 +233,45 @@ export function AttachmentSummary({ componentId }: { componentId: string }) {
       <FormError message={`Attachments could not be loaded: ${messageFor(attachments.error)}`} />
     );
   const items = attachments.data.items;
+  const signedAt = countersignedAt ? new Date(countersignedAt).getTime() : Infinity;
+  const signed = items.filter((a) => new Date(a.createdAt).getTime() <= signedAt);
+  const later = items.filter((a) => new Date(a.createdAt).getTime() > signedAt);
   if (items.length === 0)
     return <p className="text-sm text-muted">Nothing is attached to this component.</p>;
   return (
     <>
       <FormError message={error} />
-      <ul aria-label="Attached files" className="flex flex-col gap-2">
-        {items.map((a) => (
-          <li key={a.id} className="flex gap-2 rounded border border-line px-2 py-1.5">
-            <AttachmentPreview attachment={a} size="sm" />
-            <div className="min-w-0 flex-1">
-              <div className="flex items-start justify-between gap-2">
-                <p className="text-sm font-medium break-all">{a.name}</p>
-                <Button size="sm" busy={busy === a.id} onClick={() => void download(a)}>
-                  Download<span className="sr-only"> {a.name}</span>
-                </Button>
-              </div>
-              <p className="text-xs text-muted">
-                {a.kind} · {formatBytes(a.size)} · {formatDateTime(a.createdAt)}
-              </p>
-              <p className="font-mono text-xs break-all text-muted">
-                <span className="sr-only">SHA-256 </span>
-                {a.sha256}
-              </p>
-            </div>
-          </li>
-        ))}
-      </ul>
+      {signed.length === 0 ? (
+        <p className="text-sm text-muted">Nothing was attached when it was countersigned.</p>
+      ) : (
+        <ul aria-label="Attached files" className="flex flex-col gap-2">
+          {signed.map((a) => (
+            <SummaryItem
+              key={a.id}
+              attachment={a}
+              busy={busy === a.id}
+              onDownload={() => void download(a)}
+            />
+          ))}
+        </ul>
+      )}
+      {later.length > 0 ? (
+        <>
+          <p className="mt-3 text-xs text-muted">
+            Attached after the countersign, so not on this revision&apos;s sheet:
+          </p>
+          <ul aria-label="Attached after the countersign" className="mt-1 flex flex-col gap-2">
+            {later.map((a) => (
+              <SummaryItem
+                key={a.id}
+                attachment={a}
+                busy={busy === a.id}
+                onDownload={() => void download(a)}
+              />
+            ))}
+          </ul>
+        </>
+      ) : null}
     </>
   );
 }

@@ -145,13 +145,13 @@ describe('UploadControl', () => {
     );
     const alert = await screen.findByRole('alert');
     expect(alert).toHaveTextContent(
-      'photo.gif was not uploaded. Not an accepted type: The content is image/gif (.gif); only PDF, PNG, JPEG and DXF files are accepted.',
+      'photo.gif was not uploaded. Not an accepted type: the content is image/gif (.gif); only PDF, PNG, JPEG and DXF files are accepted.',
     );
     expect(alert).toHaveTextContent(
-      'huge.pdf was not uploaded. Too large: The file is larger than 20 MiB.',
+      'huge.pdf was not uploaded. Too large: the file is larger than 20 MiB.',
     );
     expect(alert).toHaveTextContent(
-      'a..pdf was not uploaded. Refused: The file name must not contain "..".',
+      'a..pdf was not uploaded. Refused: the file name must not contain "..".',
     );
     expect(input).toHaveAttribute('aria-invalid', 'true');
     expect(input).toHaveAccessibleDescription(/photo\.gif was not uploaded/);
@@ -199,7 +199,7 @@ describe('refusalReason', () => {
       { path: 'other', message: 'no' },
       { path: 'file', message: 'the content is text/plain' },
     ]);
-    expect(refusalReason(e)).toBe('Not an accepted type: The content is text/plain.');
+    expect(refusalReason(e)).toBe('Not an accepted type: the content is text/plain.');
     expect(refusalReason(new ApiError(403, 'not_a_designer', 'only designers upload'))).toBe(
       'Only designers upload.',
     );

@@ -6,10 +6,14 @@ import { buttonClass } from '../../components/button';
 import { messageFor } from '../../components/server-errors';
 import { ACCEPTED_FILES, formatBytes } from '../../lib/files';
 
-function sentence(text: string): string {
+function withStop(text: string): string {
   const t = text.trim();
-  const capital = t.charAt(0).toUpperCase() + t.slice(1);
-  return /[.!?]$/.test(capital) ? capital : `${capital}.`;
+  return /[.!?]$/.test(t) ? t : `${t}.`;
+}
+
+function sentence(text: string): string {
+  const t = withStop(text);
+  return t.charAt(0).toUpperCase() + t.slice(1);
 }
 
 /**
@@ -22,11 +26,11 @@ export function refusalReason(error: unknown): string {
   const field = error.fields.find((f) => f.path === 'file') ?? error.fields[0];
   switch (error.status) {
     case 413:
-      return `Too large: ${sentence(error.message)}`;
+      return `Too large: ${withStop(error.message)}`;
     case 415:
-      return `Not an accepted type: ${sentence(field?.message ?? error.message)}`;
+      return `Not an accepted type: ${withStop(field?.message ?? error.message)}`;
     case 400:
-      return `Refused: ${sentence(field?.message ?? error.message)}`;
+      return `Refused: ${withStop(field?.message ?? error.message)}`;
     default:
       return sentence(messageFor(error));
   }
