@@ -122,6 +122,15 @@ const styles = StyleSheet.create({
   qr: { width: 54, height: 54 },
 });
 
+/**
+ * A formula with break opportunities (zero-width spaces) after its operators.
+ * Without them a long formula breaks inside a "word" and react-pdf adds a
+ * hyphen there, which in a formula reads as a minus sign.
+ */
+export function breakable(formula: string): string {
+  return formula.replace(/([·/+=(,])(?!\s)/g, '$1\u200b');
+}
+
 function Cell({
   width,
   children,
@@ -349,8 +358,8 @@ function StepRows({ steps, prefix }: { steps: readonly Step[]; prefix: string })
           <Cell width="6%">{`${prefix}${i + 1}`}</Cell>
           <Cell width="20%">{s.label}</Cell>
           <View style={[styles.cell, { width: '30%' }]}>
-            <Text>{s.expression}</Text>
-            <Text style={styles.small}>{s.substituted}</Text>
+            <Text>{breakable(s.expression)}</Text>
+            <Text style={styles.small}>{breakable(s.substituted)}</Text>
           </View>
           <Cell width="16%">
             {s.value === null ? '—' : `${significant(s.value)} ${s.unit === '1' ? '' : s.unit}`}
