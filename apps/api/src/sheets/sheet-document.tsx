@@ -123,12 +123,13 @@ const styles = StyleSheet.create({
 });
 
 /**
- * A formula with break opportunities (zero-width spaces) after its operators.
- * Without them a long formula breaks inside a "word" and react-pdf adds a
- * hyphen there, which in a formula reads as a minus sign.
+ * A formula with room to break: a space between an operator and the
+ * bracket it opens ("·(" → "· ("). react-pdf breaks lines only at spaces;
+ * inside a "word" it breaks anyway and adds a hyphen, which in a formula
+ * reads as a minus sign.
  */
 export function breakable(formula: string): string {
-  return formula.replace(/([·/+=(,])(?!\s)/g, '$1\u200b');
+  return formula.replace(/([·/+=×])\(/g, '$1 (');
 }
 
 function Cell({
