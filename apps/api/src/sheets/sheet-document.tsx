@@ -128,6 +128,9 @@ const styles = StyleSheet.create({
  * inside a "word" it breaks anyway and adds a hyphen, which in a formula
  * reads as a minus sign.
  */
+// The line breaker's "infinite" penalty: it never breaks there unless nothing else fits.
+const NEVER_HYPHENATE = 10_000;
+
 export function breakable(formula: string): string {
   return formula.replace(/([·/+=×])\(/g, '$1 (');
 }
@@ -359,8 +362,10 @@ function StepRows({ steps, prefix }: { steps: readonly Step[]; prefix: string })
           <Cell width="6%">{`${prefix}${i + 1}`}</Cell>
           <Cell width="20%">{s.label}</Cell>
           <View style={[styles.cell, { width: '30%' }]}>
-            <Text>{breakable(s.expression)}</Text>
-            <Text style={styles.small}>{breakable(s.substituted)}</Text>
+            <Text hyphenationPenalty={NEVER_HYPHENATE}>{breakable(s.expression)}</Text>
+            <Text style={styles.small} hyphenationPenalty={NEVER_HYPHENATE}>
+              {breakable(s.substituted)}
+            </Text>
           </View>
           <Cell width="16%">
             {s.value === null ? '—' : `${significant(s.value)} ${s.unit === '1' ? '' : s.unit}`}
