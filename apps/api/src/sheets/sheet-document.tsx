@@ -157,6 +157,7 @@ function Cell({
         ...(mono ? [styles.mono] : []),
         ...(color ? [{ color }] : []),
       ]}
+      hyphenationPenalty={NEVER_HYPHENATE}
     >
       {children}
     </Text>
