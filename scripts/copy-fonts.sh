@@ -20,4 +20,17 @@ for sub in latin latin-ext; do
 done
 cp "$sans/LICENSE" "$ROOT/fonts/ibm-plex-sans/LICENSE"
 cp "$mono/LICENSE" "$ROOT/fonts/ibm-plex-mono/LICENSE"
+
+# The complete character sets, one file per weight, for the PDF sheet.
+npm pack --silent @ibm/plex@6.4.1 >/dev/null
+complete_sans=package/IBM-Plex-Sans/fonts/complete/woff
+complete_mono=package/IBM-Plex-Mono/fonts/complete/woff
+tar xzf ibm-plex-6.4.1.tgz package/LICENSE.txt \
+  "$complete_sans"/IBMPlexSans-{Regular,Medium,SemiBold,Bold}.woff \
+  "$complete_mono"/IBMPlexMono-{Regular,Medium}.woff
+mkdir -p "$ROOT/fonts/ibm-plex-sans-complete" "$ROOT/fonts/ibm-plex-mono-complete"
+cp "$complete_sans"/*.woff "$ROOT/fonts/ibm-plex-sans-complete/"
+cp "$complete_mono"/*.woff "$ROOT/fonts/ibm-plex-mono-complete/"
+cp package/LICENSE.txt "$ROOT/fonts/ibm-plex-sans-complete/LICENSE.txt"
+cp package/LICENSE.txt "$ROOT/fonts/ibm-plex-mono-complete/LICENSE.txt"
 echo "fonts copied into $ROOT/fonts"

@@ -1,7 +1,6 @@
 import { Document, Image, Page, StyleSheet, Text, View } from '@react-pdf/renderer';
-import type { ReactNode } from 'react';
 import type { CaseReport, Check, Report, Step } from '@hoopline/calc';
-import { FONT_FAMILY, MONO_FAMILY, familyFor } from './fonts';
+import { FONT_FAMILY, MONO_FAMILY } from './fonts';
 import { formatReportValue, inputRows, significant } from './quantity-display';
 import { STAMP_TEXT, type SheetData } from './sheet-data';
 
@@ -123,37 +122,17 @@ const styles = StyleSheet.create({
   qr: { width: 54, height: 54 },
 });
 
-function plainText(node: ReactNode): string {
-  if (typeof node === 'string' || typeof node === 'number') return String(node);
-  if (Array.isArray(node)) return node.map(plainText).join('');
-  return '';
-}
+/**
+ * A formula with room to break: a space between an operator and the
+ * bracket it opens ("·(" → "· ("). react-pdf breaks lines only at spaces;
+ * inside a "word" it breaks anyway and adds a hyphen, which in a formula
+ * reads as a minus sign.
+ */
+// The line breaker's "infinite" penalty: it never breaks there unless nothing else fits.
+const NEVER_HYPHENATE = 10_000;
 
-type Style = Parameters<typeof StyleSheet.create>[0][string];
-
-interface TextWithFontProps {
-  readonly style?: Style | readonly Style[];
-  readonly children?: ReactNode;
-  readonly fixed?: boolean;
-  readonly minPresenceAhead?: number;
-  readonly render?: (props: { pageNumber: number; totalPages: number }) => ReactNode;
-}
-
-/** Text that picks its font family from what it says (see familyFor). */
-function T({ style, children, fixed, minPresenceAhead, render }: TextWithFontProps) {
-  const family = familyFor(plainText(children));
-  const own: Style[] = family === FONT_FAMILY ? [] : [{ fontFamily: family }];
-  const list: Style[] = [...(Array.isArray(style) ? style : style ? [style as Style] : []), ...own];
-  return (
-    <Text
-      style={list}
-      {...(fixed ? { fixed } : {})}
-      {...(minPresenceAhead !== undefined ? { minPresenceAhead } : {})}
-      {...(render ? { render } : {})}
-    >
-      {children}
-    </Text>
-  );
+export function breakable(formula: string): string {
+  return formula.replace(/([·/+=×])\(/g, '$1 (');
 }
 
 function Cell({
@@ -170,7 +149,7 @@ function Cell({
   color?: string;
 }) {
   return (
-    <T
+    <Text
       style={[
         styles.cell,
         { width },
@@ -178,17 +157,18 @@ function Cell({
         ...(mono ? [styles.mono] : []),
         ...(color ? [{ color }] : []),
       ]}
+      hyphenationPenalty={NEVER_HYPHENATE}
     >
       {children}
-    </T>
+    </Text>
   );
 }
 
 function TitleCell({ label, value, last }: { label: string; value: string; last?: boolean }) {
   return (
     <View style={last ? styles.titleCellLast : styles.titleCell}>
-      <T style={styles.label}>{label}</T>
-      <T style={styles.value}>{value || '—'}</T>
+      <Text style={styles.label}>{label}</Text>
+      <Text style={styles.value}>{value || '—'}</Text>
     </View>
   );
 }
@@ -223,12 +203,14 @@ function VerdictBanner({ report }: { report: Report }) {
   };
   return (
     <View style={[styles.verdict, { borderColor: colour }]}>
-      <T style={{ fontWeight: 600, color: colour }}>Screening result: {words[report.verdict]}</T>
-      <T>
+      <Text style={{ fontWeight: 600, color: colour }}>
+        Screening result: {words[report.verdict]}
+      </Text>
+      <Text>
         {report.governing
           ? `Governing: ${report.governing.loadCase} — ${report.governing.checkLabel} — ${percent(report.governing.utilisation)}`
           : 'No governing check'}
-      </T>
+      </Text>
     </View>
   );
 }
@@ -242,9 +224,9 @@ function LoadCases({
 }) {
   return (
     <View>
-      <T style={styles.h2} minPresenceAhead={60}>
+      <Text style={styles.h2} minPresenceAhead={60}>
         1 Load cases
-      </T>
+      </Text>
       <View style={styles.table}>
         <View style={styles.headRow}>
           <Cell width="22%">Case</Cell>
@@ -265,7 +247,7 @@ function LoadCases({
           </View>
         ))}
       </View>
-      <T style={styles.small}>
+      <Text style={styles.small}>
         Ambient {formatReportValue(report.ambient.pressure, 'Pa', system)} (
         {report.ambient.basis === 'altitude'
           ? `ISO 2533 standard atmosphere at ${significant(report.ambient.altitude ?? 0)} m`
@@ -273,7 +255,7 @@ function LoadCases({
             ? 'given'
             : 'standard atmosphere at sea level'}
         ).
-      </T>
+      </Text>
     </View>
   );
 }
@@ -284,9 +266,9 @@ function Inputs({ data }: { data: SheetData }) {
   const both = data.project.unitSystem === 'us';
   return (
     <View>
-      <T style={styles.h2} minPresenceAhead={60}>
+      <Text style={styles.h2} minPresenceAhead={60}>
         2 Inputs
-      </T>
+      </Text>
       <View style={styles.table}>
         <View style={styles.headRow}>
           <Cell width={both ? '30%' : '40%'}>Field</Cell>
@@ -326,11 +308,11 @@ function ChecksTable({
   });
   return (
     <View>
-      <T style={styles.h2} minPresenceAhead={60}>
+      <Text style={styles.h2} minPresenceAhead={60}>
         3 Checks
-      </T>
+      </Text>
       {rows.length === 0 ? (
-        <T>This method computes quantities without a pass/fail criterion.</T>
+        <Text>This method computes quantities without a pass/fail criterion.</Text>
       ) : (
         <View style={styles.table}>
           <View style={styles.headRow}>
@@ -381,8 +363,10 @@ function StepRows({ steps, prefix }: { steps: readonly Step[]; prefix: string })
           <Cell width="6%">{`${prefix}${i + 1}`}</Cell>
           <Cell width="20%">{s.label}</Cell>
           <View style={[styles.cell, { width: '30%' }]}>
-            <T>{s.expression}</T>
-            <T style={styles.small}>{s.substituted}</T>
+            <Text hyphenationPenalty={NEVER_HYPHENATE}>{breakable(s.expression)}</Text>
+            <Text style={styles.small} hyphenationPenalty={NEVER_HYPHENATE}>
+              {breakable(s.substituted)}
+            </Text>
           </View>
           <Cell width="16%">
             {s.value === null ? '—' : `${significant(s.value)} ${s.unit === '1' ? '' : s.unit}`}
@@ -397,21 +381,21 @@ function StepRows({ steps, prefix }: { steps: readonly Step[]; prefix: string })
 function Trail({ report }: { report: Report }) {
   return (
     <View>
-      <T style={styles.h2} minPresenceAhead={60}>
+      <Text style={styles.h2} minPresenceAhead={60}>
         4 Calculation trail
-      </T>
-      <T style={styles.small}>Every step as computed by the engine; values in SI units.</T>
+      </Text>
+      <Text style={styles.small}>Every step as computed by the engine; values in SI units.</Text>
       {report.steps.length > 0 ? (
         <View>
-          <T style={styles.h3}>Common to all load cases</T>
+          <Text style={styles.h3}>Common to all load cases</Text>
           <StepRows steps={report.steps} prefix="C" />
         </View>
       ) : null}
       {report.cases.map((c: CaseReport, index) => (
         <View key={c.loadCase.name}>
-          <T style={styles.h3} minPresenceAhead={40}>
+          <Text style={styles.h3} minPresenceAhead={40}>
             Load case {index + 1}: {c.loadCase.name}
-          </T>
+          </Text>
           <StepRows steps={c.steps} prefix={`${index + 1}.`} />
         </View>
       ))}
@@ -422,14 +406,14 @@ function Trail({ report }: { report: Report }) {
 function Warnings({ report }: { report: Report }) {
   return (
     <View>
-      <T style={styles.h2} minPresenceAhead={60}>
+      <Text style={styles.h2} minPresenceAhead={60}>
         5 Validity warnings
-      </T>
+      </Text>
       {report.warnings.length === 0 ? (
-        <T>None: every method was used within its stated range.</T>
+        <Text>None: every method was used within its stated range.</Text>
       ) : (
         report.warnings.map((w, i) => (
-          <T
+          <Text
             key={`${w.code}-${i}`}
             style={{ marginBottom: 2, color: w.severity === 'outside-validity' ? FAIL : INK }}
           >
@@ -439,7 +423,7 @@ function Warnings({ report }: { report: Report }) {
                 ? 'Caution'
                 : 'Note'}
             {w.loadCase ? ` (${w.loadCase})` : ''}: {w.message}
-          </T>
+          </Text>
         ))
       )}
     </View>
@@ -449,13 +433,13 @@ function Warnings({ report }: { report: Report }) {
 function Cautions({ report }: { report: Report }) {
   return (
     <View>
-      <T style={styles.h2} minPresenceAhead={60}>
+      <Text style={styles.h2} minPresenceAhead={60}>
         6 Cautions
-      </T>
+      </Text>
       {report.cautions.map((c) => (
         <View key={c.code} style={{ marginBottom: 4 }} wrap={false}>
-          <T style={{ fontWeight: 600 }}>{c.title}</T>
-          <T>{c.text}</T>
+          <Text style={{ fontWeight: 600 }}>{c.title}</Text>
+          <Text>{c.text}</Text>
         </View>
       ))}
     </View>
@@ -465,11 +449,11 @@ function Cautions({ report }: { report: Report }) {
 function Attachments({ data }: { data: SheetData }) {
   return (
     <View>
-      <T style={styles.h2} minPresenceAhead={60}>
+      <Text style={styles.h2} minPresenceAhead={60}>
         7 Attachments
-      </T>
+      </Text>
       {data.attachments.length === 0 ? (
-        <T>None.</T>
+        <Text>None.</Text>
       ) : (
         <View style={styles.table}>
           <View style={styles.headRow}>
@@ -506,37 +490,39 @@ export function SheetDocument({ data, qrDataUrl }: { data: SheetData; qrDataUrl:
     >
       <Page size={data.paperSize} style={styles.page}>
         <View style={styles.runningHead} fixed>
-          <T style={styles.brand}>HOOPLINE · SCREENING SHEET</T>
-          <T>
+          <Text style={styles.brand}>HOOPLINE · SCREENING SHEET</Text>
+          <Text>
             {project.number} · {component.name} · rev {revision.number} · {revision.status}
-          </T>
+          </Text>
         </View>
-        <T style={styles.stamp} fixed>
+        <Text style={styles.stamp} fixed>
           {stamp}
-        </T>
+        </Text>
         <View style={styles.footer} fixed>
           <View style={styles.footerText}>
-            <T>
+            <Text>
               Content hash (SHA-256 of inputs, engine version and report):{' '}
-              <T style={styles.mono}>{revision.contentHash}</T>
-            </T>
-            <T>
+              <Text style={styles.mono}>{revision.contentHash}</Text>
+            </Text>
+            <Text>
               Verify code{' '}
-              <T style={[styles.mono, { fontSize: 9, fontWeight: 500 }]}>{revision.verifyCode}</T>{' '}
+              <Text style={[styles.mono, { fontSize: 9, fontWeight: 500 }]}>
+                {revision.verifyCode}
+              </Text>{' '}
               at {data.verifyUrl}
-            </T>
-            <T>
+            </Text>
+            <Text>
               {stamp}. Screening only; defer to the applicable code and a qualified engineer.
               Generated {when(data.generatedAt)}.
-            </T>
-            <T render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />
+            </Text>
+            <Text render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />
           </View>
           <Image style={styles.qr} src={qrDataUrl} />
         </View>
 
         <View style={styles.body}>
           <View style={styles.titleBlock}>
-            <T style={styles.sheetTitle}>{report.title}</T>
+            <Text style={styles.sheetTitle}>{report.title}</Text>
             <View style={styles.titleRow}>
               <TitleCell label="Project" value={`${project.number} — ${project.name}`} />
               <TitleCell label="Client" value={project.client} />
@@ -563,20 +549,22 @@ export function SheetDocument({ data, qrDataUrl }: { data: SheetData; qrDataUrl:
           </View>
 
           <View style={styles.caution}>
-            <T style={styles.cautionTitle}>Screening only — not a code calculation</T>
-            <T>
+            <Text style={styles.cautionTitle}>Screening only — not a code calculation</Text>
+            <Text>
               This sheet records a first-pass screening by textbook formulas. Final design,
               fabrication and testing must follow the applicable pressure-equipment code (for
               example ASME BPVC Section VIII, EN 13445, the Pressure Equipment Directive) and local
               regulations, and be approved by a qualified engineer (licensed where the law requires
               it).
-            </T>
+            </Text>
           </View>
 
           <VerdictBanner report={report} />
-          {revision.note ? <T style={{ marginBottom: 6 }}>Revision note: {revision.note}</T> : null}
+          {revision.note ? (
+            <Text style={{ marginBottom: 6 }}>Revision note: {revision.note}</Text>
+          ) : null}
           {countersign?.comment ? (
-            <T style={{ marginBottom: 6 }}>Checker’s comment: {countersign.comment}</T>
+            <Text style={{ marginBottom: 6 }}>Checker’s comment: {countersign.comment}</Text>
           ) : null}
 
           <LoadCases report={report} system={project.unitSystem} />

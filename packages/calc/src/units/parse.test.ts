@@ -86,3 +86,15 @@ describe('parseQuantity', () => {
     expect(() => parseQuantity(12 as unknown as string)).toThrow('expected text such as "12 mm"');
   });
 });
+
+describe('parseQuantity remembers recent answers', () => {
+  it('gives the same (frozen) reading for the same text, and still throws for nonsense every time', () => {
+    const first = parseQuantity('12 mm', { dimension: 'length' });
+    expect(parseQuantity('12 mm', { dimension: 'length' })).toBe(first);
+    expect(Object.isFrozen(first)).toBe(true);
+    // The dimension is part of the key: the same text may be refused elsewhere.
+    expect(() => parseQuantity('12 mm', { dimension: 'pressure' })).toThrow(/unit of length/);
+    expect(() => parseQuantity('12 parsecs')).toThrow(/unknown unit/);
+    expect(() => parseQuantity('12 parsecs')).toThrow(/unknown unit/);
+  });
+});

@@ -65,6 +65,22 @@ function referenceOf(word: string): PressureReference {
  */
 export function parseQuantity(text: string, options: ParseOptions = {}): Quantity {
   if (typeof text !== 'string') throw new QuantityParseError('expected text such as "12 mm"');
+  // Live recomputation parses the same few texts over and over (every field but
+  // the one being typed): remember recent answers. A Quantity is immutable, and
+  // only successes are kept, so errors are always freshly thrown.
+  const key = `${options.dimension ?? ''}|${options.defaultUnit ?? ''}|${text}`;
+  const known = RECENT.get(key);
+  if (known) return known;
+  const quantity = Object.freeze(parseUncached(text, options));
+  if (RECENT.size >= RECENT_LIMIT) RECENT.clear();
+  RECENT.set(key, quantity);
+  return quantity;
+}
+
+const RECENT_LIMIT = 1024;
+const RECENT = new Map<string, Quantity>();
+
+function parseUncached(text: string, options: ParseOptions): Quantity {
   const trimmed = text.trim();
   if (trimmed === '') throw new QuantityParseError('a value is required');
   if (
