@@ -1,9 +1,11 @@
 import { request, type APIRequestContext } from '@playwright/test';
+import { linkIn, waitForMail } from './mailbox';
 
 /**
  * People for the journeys, made through the API the way an admin would: the
- * seeded admin invites them and each accepts the invitation. Every run makes
- * new addresses, so runs never share users.
+ * seeded admin invites them, the invitation arrives by mail (the e2e server's
+ * fake SMTP server) and each accepts it with the token from the mail's link.
+ * Every run makes new addresses, so runs never share users.
  */
 export interface Person {
   readonly id: string;
@@ -73,7 +75,14 @@ export async function createPerson(admin: Api, label: string): Promise<Person> {
   const email = `${label.toLowerCase().replace(/\W+/g, '-')}-${stamp}@journeys.example`;
   const name = `${label} ${stamp.slice(-4).toUpperCase()}`;
   const password = `journey-${stamp}-password`;
-  const { token } = await admin.send<{ token: string }>('POST', '/invitations', { email, name });
+  const sent = await admin.send<{ delivery: 'mail' | 'shown'; token?: string }>(
+    'POST',
+    '/invitations',
+    { email, name },
+  );
+  if (sent.delivery !== 'mail') throw new Error('the e2e server should mail invitations');
+  const link = linkIn(await waitForMail(email, { subject: /invited/i }), /^\/invitation\/[^/]+$/);
+  const token = decodeURIComponent(link.split('/').pop()!);
   const context = await request.newContext({ baseURL: admin.base });
   const accepted = await context.post('/api/auth/accept-invitation', {
     data: { token, name, password },

@@ -1,11 +1,19 @@
+import { createHash } from 'node:crypto';
+import { readFile } from 'node:fs/promises';
+import type { Page } from '@playwright/test';
 import { expect, expectAccessible, screenshot, signIn, signOut, test } from '../support/fixtures';
+import { onePagePdf, tinyPng } from '../support/files';
+import { linkIn, waitForMail } from '../support/mailbox';
+import { Api } from '../support/people';
 
 /**
  * The journeys of the web issue, in order, on one project: a designer
  * creates a project and a door plate, sees the result change live as the
  * thickness changes, saves and submits; cannot countersign it; a checker
  * countersigns it from the queue; a fabricator sees the issued revision and
- * not the drafts. Each main screen is photographed and checked with axe.
+ * not the drafts, and downloads its sheet; the public verify page tells the
+ * sheet's code matches, then that it is superseded. Each main screen is
+ * photographed and checked with axe.
  */
 test.describe.configure({ mode: 'serial' });
 
@@ -13,6 +21,33 @@ const run = Date.now().toString(36).toUpperCase();
 const projectNumber = `J-${run}`;
 let projectPath = '';
 let doorPath = '';
+
+// The attachments of the door: a drawing (PDF, padded so that its upload takes a moment on a
+// throttled connection and the progress bar can be seen moving) and a photo (PNG).
+const drawing = { name: 'door-drawing-D-1.pdf', buffer: onePagePdf('Cabinet door D-1', 400_000) };
+const photo = { name: 'seal-photo.png', buffer: tinyPng(32) };
+const sha256 = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
+
+/** Drops files on an element the way a browser does: a drop event carrying a DataTransfer. */
+async function dropFiles(
+  page: Page,
+  selector: string,
+  files: { name: string; mimeType: string; buffer: Buffer }[],
+): Promise<void> {
+  const dataTransfer = await page.evaluateHandle(
+    (list) => {
+      const dt = new DataTransfer();
+      for (const f of list) {
+        const bytes = Uint8Array.from(atob(f.base64), (c) => c.charCodeAt(0));
+        dt.items.add(new File([bytes], f.name, { type: f.mimeType }));
+      }
+      return dt;
+    },
+    files.map((f) => ({ name: f.name, mimeType: f.mimeType, base64: f.buffer.toString('base64') })),
+  );
+  await page.locator(selector).dispatchEvent('dragenter', { dataTransfer });
+  await page.locator(selector).dispatchEvent('drop', { dataTransfer });
+}
 
 test('a designer creates a project and a door plate, sees results change live, saves and submits', async ({
   page,
@@ -40,14 +75,28 @@ test('a designer creates a project and a door plate, sees results change live, s
     page.getByRole('heading', { name: `${projectNumber} Journey drying cabinet` }),
   ).toBeVisible();
   projectPath = new URL(page.url()).pathname;
-  const projectId = projectPath.split('/').pop()!;
-  // Membership of the other two, as an admin sets it up (the designer cannot list people).
-  await cast.admin.send('PUT', `/projects/${projectId}/members/${cast.checker.id}`, {
-    role: 'checker',
-  });
-  await cast.admin.send('PUT', `/projects/${projectId}/members/${cast.fabricator.id}`, {
-    role: 'fabricator',
-  });
+  // The designer adds the other two by their e-mail addresses (GET /users/lookup behind the form).
+  await page.goto(`${projectPath}/members`);
+  await expect(page.getByRole('heading', { name: 'Members' })).toBeVisible();
+  const addMember = async (email: string, role: string) => {
+    await page.getByLabel('E-mail address').fill(email);
+    await page.getByLabel('Role', { exact: true }).selectOption({ label: role });
+    await page.getByRole('button', { name: 'Add member' }).click();
+    await expect(page.getByRole('status').filter({ hasText: `added as ${role}` })).toBeVisible();
+  };
+  await addMember(cast.checker.email, 'Checker');
+  await addMember(cast.fabricator.email, 'Fabricator');
+  const membersTable = page.getByRole('table', { name: 'Project members' });
+  await expect(membersTable).toContainText(cast.checker.name);
+  await expect(membersTable).toContainText(cast.fabricator.name);
+  await page.getByLabel('E-mail address').fill(`nobody-${run.toLowerCase()}@journeys.example`);
+  await page.getByRole('button', { name: 'Add member' }).click();
+  await expect(page.getByLabel('E-mail address')).toHaveAccessibleDescription(
+    /No active Hoopline account has this address/,
+  );
+  await expectAccessible(page, 'members');
+  await screenshot(page, 'members');
+  await page.goto(projectPath);
 
   await page.getByRole('link', { name: 'New component' }).click();
   await page.getByLabel('Flat circular plate').click();
@@ -98,6 +147,66 @@ test('a designer creates a project and a door plate, sees results change live, s
   await page.getByRole('button', { name: 'Save as revision 1' }).click();
   await expect(page.getByText('Revision 1 as saved, computed by the server')).toBeVisible();
   doorPath = new URL(page.url()).pathname;
+
+  // Attachments: the drawing through the file picker on a throttled connection (the bar moves),
+  // the photo dropped on the control; a file of another type is refused on the control.
+  const attachments = page.getByRole('region', { name: 'Attachments', exact: true });
+  await expect(attachments).toContainText('Nothing is attached to this component.');
+  const cdp = await page.context().newCDPSession(page);
+  await cdp.send('Network.enable');
+  await cdp.send('Network.emulateNetworkConditions', {
+    offline: false,
+    latency: 0,
+    downloadThroughput: -1,
+    uploadThroughput: 160 * 1024,
+  });
+  await attachments
+    .getByLabel('Choose files')
+    .setInputFiles({ name: drawing.name, mimeType: 'application/pdf', buffer: drawing.buffer });
+  const bar = attachments.getByRole('progressbar', { name: `Upload of ${drawing.name}` });
+  await expect
+    .poll(async () => Number(await bar.getAttribute('aria-valuenow')), { timeout: 10_000 })
+    .toBeGreaterThan(0);
+  const midway = Number(await bar.getAttribute('aria-valuenow'));
+  expect(midway).toBeLessThan(100);
+  await screenshot(page, 'attachment-uploading');
+  await expect(bar).toHaveAttribute('aria-valuetext', 'Uploaded', { timeout: 20_000 });
+  await cdp.send('Network.emulateNetworkConditions', {
+    offline: false,
+    latency: 0,
+    downloadThroughput: -1,
+    uploadThroughput: -1,
+  });
+  await cdp.detach();
+  await dropFiles(page, '[data-testid="drop-zone"]', [
+    { name: photo.name, mimeType: 'image/png', buffer: photo.buffer },
+  ]);
+  await expect(
+    attachments.getByRole('progressbar', { name: `Upload of ${photo.name}` }),
+  ).toHaveAttribute('aria-valuetext', 'Uploaded');
+  const table = attachments.getByRole('table', { name: 'Attachments of Cabinet door plate' });
+  await expect(table.getByRole('row', { name: new RegExp(drawing.name) })).toContainText(
+    'PDF document',
+  );
+  const thumbnail = table.getByRole('img', { name: `Preview of ${photo.name}` });
+  await expect(thumbnail).toBeVisible();
+  await expect
+    .poll(() => thumbnail.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth))
+    .toBe(32);
+  await expect(table.getByTitle(sha256(photo.buffer))).toBeAttached();
+  await attachments.getByLabel('Choose files').setInputFiles({
+    name: 'notes.txt',
+    mimeType: 'text/plain',
+    buffer: Buffer.from('not a drawing'),
+  });
+  await expect(attachments.getByRole('alert')).toContainText(
+    'notes.txt was not uploaded. Not an accepted type',
+  );
+  await expect(attachments.getByLabel('Choose files')).toHaveAttribute('aria-invalid', 'true');
+  await expect(table.getByRole('row')).toHaveCount(3); // header and the two accepted files
+  await expectAccessible(page, 'component attachments');
+  await screenshot(page, 'component-attachments');
+
   await page.getByRole('button', { name: 'Submit revision 1 for check' }).click();
   await expect(page.getByText('Awaiting check').first()).toBeVisible();
   await expect(page.getByText(/Revision 1 is awaiting check/)).toBeVisible();
@@ -134,6 +243,15 @@ test('the designer cannot countersign their own revision, and is told why', asyn
     page.getByText(/You authored this revision, so you cannot countersign or return it/),
   ).toBeVisible();
   await expect(page.getByRole('button', { name: 'Return to designer' })).toBeDisabled();
+  // Not countersigned yet: the designer may preview the sheet, stamped DRAFT by the server.
+  const [draft] = await Promise.all([
+    page.waitForResponse((r) => r.url().includes('/sheet.pdf')),
+    page.waitForEvent('download'),
+    page.getByRole('button', { name: 'Preview draft sheet' }).click(),
+  ]);
+  expect(draft.status()).toBe(200);
+  expect(draft.headers()['x-hoopline-stamp']).toBe('draft');
+  await expect(page.getByRole('button', { name: 'Download sheet' })).toHaveCount(0);
   await expectAccessible(page, 'own revision');
   await screenshot(page, 'revision-own');
   await signOut(page);
@@ -158,7 +276,13 @@ test('a checker follows a deep link, then countersigns from the queue, which upd
 
   await row.getByRole('link', { name: /Cabinet door plate · revision 1/ }).click();
   await expect(page.getByRole('table', { name: 'Calculation trail' })).toBeVisible();
-  await expect(page.getByRole('region', { name: 'Attachments' })).toBeVisible();
+  const attached = page.getByRole('region', { name: 'Attachments', exact: true });
+  // Names and full hashes, as the sheet lists them.
+  await expect(attached.getByRole('list', { name: 'Attached files' })).toContainText(drawing.name);
+  await expect(attached).toContainText(sha256(drawing.buffer));
+  await expect(attached).toContainText(photo.name);
+  await expect(attached).toContainText(sha256(photo.buffer));
+  await expect(attached.getByRole('img', { name: `Preview of ${photo.name}` })).toBeVisible();
   await page
     .getByLabel('Comment')
     .fill('Trail read line by line; stress and deflection agree with Roark 11.2.');
@@ -184,11 +308,25 @@ test('a fabricator sees the issued revision and not the drafts', async ({ page, 
   await expect(issued).toBeVisible();
   await expect(issued.getByText('Passes', { exact: true })).toBeVisible();
   await expect(page.getByText('Door latches (draft)')).toHaveCount(0);
-  // No download button until sheets exist: absent, not fake.
-  await expect(page.getByRole('button', { name: /download/i })).toHaveCount(0);
-  await expect(page.getByRole('link', { name: /download/i })).toHaveCount(0);
   await expectAccessible(page, 'issued');
   await screenshot(page, 'issued');
+  // The stamped-for-review sheet, A4 chosen, saved under the server's name.
+  await issued.getByLabel(/Paper size/).selectOption('a4');
+  const [sheet, download] = await Promise.all([
+    page.waitForResponse((r) => r.url().includes('/sheet.pdf')),
+    page.waitForEvent('download'),
+    issued.getByRole('button', { name: /Download sheet/ }).click(),
+  ]);
+  expect(sheet.status()).toBe(200);
+  expect(new URL(sheet.url()).searchParams.get('paper')).toBe('a4');
+  expect(sheet.headers()['content-type']).toBe('application/pdf');
+  expect(sheet.headers()['x-hoopline-stamp']).toBe('review');
+  expect(Number(sheet.headers()['content-length'])).toBeGreaterThan(1000);
+  // What the fabricator's browser saved: the bytes of the Blob the app got through its client.
+  const pdf = await readFile(await download.path());
+  expect(pdf.length).toBe(Number(sheet.headers()['content-length']));
+  expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+  expect(download.suggestedFilename()).toBe(`${projectNumber}_Cabinet-door-plate_rev1.pdf`);
 
   await page.goto(projectPath);
   await expect(page.getByRole('link', { name: 'Cabinet door plate' })).toBeVisible();
@@ -196,8 +334,82 @@ test('a fabricator sees the issued revision and not the drafts', async ({ page, 
   await page.getByRole('link', { name: 'Cabinet door plate' }).click();
   await expect(page.getByText('Countersigned').first()).toBeVisible();
   await expect(page.getByRole('button', { name: /Save as revision/ })).toHaveCount(0);
+  // The attachments of an issued component, and its sheet; never a draft preview.
+  await expect(page.getByRole('region', { name: 'Attachments', exact: true })).toContainText(
+    drawing.name,
+  );
+  await expect(page.getByRole('button', { name: 'Download sheet' })).toBeVisible();
+  await expect(page.getByRole('button', { name: 'Preview draft sheet' })).toHaveCount(0);
+  await expectAccessible(page, 'fabricator revision');
   await screenshot(page, 'fabricator-revision');
   await signOut(page);
+});
+
+test('the public verify page says the sheet matches, then that a later countersign superseded it', async ({
+  page,
+  cast,
+}) => {
+  const componentId = doorPath.split('/').pop()!;
+  const component = await cast.admin.send<{
+    version: number;
+    issuedRevision: { id: string; contentHash: string };
+  }>('GET', `/components/${componentId}`);
+  const issued = await cast.admin.send<{ verifyCode: string; inputs: Record<string, unknown> }>(
+    'GET',
+    `/revisions/${component.issuedRevision.id}`,
+  );
+  // Signed out, as anyone scanning the sheet's QR code.
+  await page.goto(`/verify/${issued.verifyCode}`);
+  const answer = page.getByRole('region', { name: /matches a countersigned revision/ });
+  await expect(answer).toBeVisible();
+  await expect(answer).toContainText(projectNumber);
+  await expect(answer).toContainText('Cabinet door plate');
+  await expect(answer).toContainText('latest countersigned revision');
+  await expect(page.getByRole('complementary', { name: 'Screening caution' })).toBeVisible();
+  await expect(page.getByRole('navigation')).toHaveCount(0);
+  await expect(page.getByRole('link', { name: 'Sign in' })).toBeVisible();
+  await expectAccessible(page, 'verify: match');
+  await screenshot(page, 'verify-match');
+
+  // The form: a malformed code is refused on the field, an unknown one matches nothing.
+  const field = page.getByLabel('Verify code or content hash');
+  await field.fill('12-34');
+  await page.getByRole('button', { name: 'Verify' }).click();
+  await expect(field).toHaveAccessibleDescription(/That is 4 digits/);
+  await field.fill('0000-0000-0000');
+  await page.getByRole('button', { name: 'Verify' }).click();
+  await expect(page).toHaveURL(/\/verify\/0000-0000-0000$/);
+  await expect(
+    page.getByRole('region', { name: /does not match any countersigned revision/ }),
+  ).toBeVisible();
+  await expectAccessible(page, 'verify: no match');
+  await screenshot(page, 'verify-no-match');
+
+  // Revision 2 (a thicker plate), submitted by the designer and countersigned by the checker.
+  const designer = await Api.signIn(cast.admin.base, cast.designer.email, cast.designer.password);
+  const saved = await designer.send<{ revision: { id: string } }>(
+    'POST',
+    `/components/${componentId}/revisions`,
+    { inputs: { ...issued.inputs, thickness: '11 mm' }, baseVersion: component.version },
+  );
+  await designer.send('POST', `/revisions/${saved.revision.id}/submit`);
+  const checker = await Api.signIn(cast.admin.base, cast.checker.email, cast.checker.password);
+  const second = await checker.send<{ contentHash: string }>(
+    'GET',
+    `/revisions/${saved.revision.id}`,
+  );
+  await checker.send('POST', `/revisions/${saved.revision.id}/countersign`, {
+    hash: second.contentHash,
+  });
+  await designer.dispose();
+  await checker.dispose();
+
+  await page.goto(`/verify/${issued.verifyCode}`);
+  const superseded = page.getByRole('region', { name: /has been superseded/ });
+  await expect(superseded).toBeVisible();
+  await expect(superseded).toContainText('ask for the current sheet');
+  await expectAccessible(page, 'verify: superseded');
+  await screenshot(page, 'verify-superseded');
 });
 
 test('an admin sees people and the audit log', async ({ page }) => {
@@ -239,8 +451,13 @@ test('an invitation sent from People is accepted in the browser', async ({ page 
   await page.getByLabel('E-mail').fill(email);
   await page.getByLabel('Name').fill('Ines Invitee');
   await page.getByRole('button', { name: 'Send invitation' }).click();
-  const link = await page.getByRole('textbox', { name: 'Link' }).inputValue();
-  expect(link).toMatch(/\/invitation\/[^/]+$/);
+  // Mailed, not shown: the e2e server has an SMTP server (the fake one).
+  await expect(page.getByText(`Invitation mailed to ${email}.`, { exact: false })).toBeVisible();
+  await expect(page.getByRole('textbox', { name: 'Link' })).toHaveCount(0);
+  await screenshot(page, 'people-invitation-mailed');
+  const mail = await waitForMail(email, { subject: /invited/i });
+  expect(mail.text).toContain('has invited you to Hoopline');
+  const link = linkIn(mail, /^\/invitation\/[^/]+$/);
   await signOut(page);
   await page.goto(link);
   await expect(page.getByRole('heading', { name: 'Accept your invitation' })).toBeVisible();
@@ -252,4 +469,27 @@ test('an invitation sent from People is accepted in the browser', async ({ page 
   await page.getByRole('button', { name: 'Accept and sign in' }).click();
   await expect(page.getByRole('heading', { name: 'Projects' })).toBeVisible();
   await expect(page.getByRole('link', { name: 'Ines Invitee' })).toBeVisible();
+  await signOut(page);
+
+  // The admin resets her password: the link is mailed to her, and works.
+  await page.goto('/people');
+  await signIn(page, { email: 'theo.brandt@larchmont.example', password: 'theo-admin-demo-2026' });
+  await page.getByRole('searchbox', { name: 'Search people' }).fill(email);
+  await page.getByRole('button', { name: 'Search', exact: true }).click();
+  const since = new Date(Date.now() - 1000);
+  await page.getByRole('button', { name: /Reset password\s*of Ines Invitee/ }).click();
+  await expect(page.getByText(`Reset link mailed to ${email}.`, { exact: false })).toBeVisible();
+  const reset = linkIn(
+    await waitForMail(email, { subject: /reset/i, since }),
+    /^\/reset-password\/[^/]+$/,
+  );
+  await signOut(page);
+  await page.goto(reset);
+  await page.getByLabel(/^New password/).fill('invitee-new-password-2026');
+  await page.getByLabel('Repeat the new password').fill('invitee-new-password-2026');
+  await page.getByRole('button', { name: 'Set the new password' }).click();
+  await expect(page.getByText('Your password has been changed')).toBeVisible();
+  await page.getByRole('link', { name: 'Sign in with the new password' }).click();
+  await signIn(page, { email, password: 'invitee-new-password-2026' });
+  await expect(page.getByRole('heading', { name: 'Projects' })).toBeVisible();
 });

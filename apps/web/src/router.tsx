@@ -21,6 +21,7 @@ import { PeopleRoute } from './routes/people';
 import { AuditLogRoute } from './routes/audit-log';
 import { AccountRoute } from './routes/account';
 import { NotFoundRoute } from './routes/not-found';
+import { VerifyRoute } from './routes/verify';
 
 export const routes: RouteObject[] = [
   {
@@ -30,6 +31,9 @@ export const routes: RouteObject[] = [
       { path: '/invitation/:token', element: <AcceptInvitationRoute /> },
       { path: '/reset-password', element: <RequestResetRoute /> },
       { path: '/reset-password/:token', element: <CompleteResetRoute /> },
+      // Public: what a sheet's QR code opens; no sign-in, no app navigation.
+      { path: '/verify', element: <VerifyRoute /> },
+      { path: '/verify/:code', element: <VerifyRoute /> },
       {
         path: '/',
         id: 'session',

@@ -1,6 +1,6 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiFetch, json, query, type Page } from './client';
-import type { AuditEvent, Invitation, User } from './types';
+import type { AuditEvent, Invitation, InvitationCreated, PasswordResetIssued, User } from './types';
 
 export function useUsers(params: { q?: string; page?: number; pageSize?: number }) {
   return useQuery({
@@ -29,7 +29,7 @@ export function useUpdateUser() {
 export function useIssuePasswordReset() {
   return useMutation({
     mutationFn: (id: string) =>
-      apiFetch<{ token: string; expiresAt: string }>(`/users/${id}/password-reset`, json('POST')),
+      apiFetch<PasswordResetIssued>(`/users/${id}/password-reset`, json('POST')),
   });
 }
 
@@ -45,7 +45,7 @@ export function useCreateInvitation() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: (body: { email: string; name: string; isAdmin?: boolean }) =>
-      apiFetch<{ invitation: Invitation; token: string }>('/invitations', json('POST', body)),
+      apiFetch<InvitationCreated>('/invitations', json('POST', body)),
     onSuccess: () => client.invalidateQueries({ queryKey: ['invitations'] }),
   });
 }

@@ -1,5 +1,12 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { ApiError, apiFetch, ConnectionError, json, onSessionLost } from './client';
+import {
+  ApiError,
+  apiFetch,
+  ConnectionError,
+  fileNameFromDisposition,
+  json,
+  onSessionLost,
+} from './client';
 import { fakeApi } from '../test/render';
 
 describe('apiFetch', () => {
@@ -96,5 +103,24 @@ describe('apiFetch', () => {
       vi.fn(async () => Promise.reject(new TypeError('offline'))),
     );
     await expect(apiFetch('/me')).rejects.toBeInstanceOf(ConnectionError);
+  });
+});
+
+describe('fileNameFromDisposition (RFC 6266)', () => {
+  it('prefers the UTF-8 filename* to the ASCII fallback', () => {
+    expect(
+      fileNameFromDisposition(
+        `attachment; filename="HL-1_T_r_rev2.pdf"; filename*=UTF-8''HL-1_T%C3%BCr_rev2.pdf`,
+      ),
+    ).toBe('HL-1_Tür_rev2.pdf');
+  });
+  it('reads a plain quoted or bare name, and nothing from nothing', () => {
+    expect(fileNameFromDisposition('attachment; filename="a \\"b\\".pdf"')).toBe('a "b".pdf');
+    expect(fileNameFromDisposition('inline; filename=photo.png')).toBe('photo.png');
+    expect(fileNameFromDisposition(`attachment; filename*=UTF-8''%E0%A4%A; filename="x.pdf"`)).toBe(
+      'x.pdf',
+    );
+    expect(fileNameFromDisposition('attachment')).toBeNull();
+    expect(fileNameFromDisposition(null)).toBeNull();
   });
 });

@@ -44,6 +44,11 @@ export function onSessionLost(listener: SessionListener): () => void {
   return () => sessionLostListeners.delete(listener);
 }
 
+/** Tells the listeners the session is gone (for requests made outside apiFetch: uploads). */
+export function notifySessionLost(): void {
+  sessionLostListeners.forEach((l) => l());
+}
+
 let refreshing: Promise<boolean> | null = null;
 
 /**
@@ -100,7 +105,8 @@ async function readBody(response: Response): Promise<unknown> {
   }
 }
 
-function toApiError(status: number, body: unknown): ApiError {
+/** The API's error body (or none) as an ApiError. */
+export function toApiError(status: number, body: unknown): ApiError {
   const error = (
     body as { error?: { code?: string; message?: string; fields?: ApiFieldError[] } } | undefined
   )?.error;
@@ -114,24 +120,81 @@ function toApiError(status: number, body: unknown): ApiError {
 }
 
 /**
- * Calls the API. A 401 on an ordinary route means the 15-minute access token
+ * Sends a request; a 401 on an ordinary route means the 15-minute access token
  * has expired (code `token_expired`, or no access cookie at all once the
- * browser has dropped it): refresh once and retry once.
+ * browser has dropped it): refresh once and retry once. A refused refresh
+ * tells the session-lost listeners and throws the 401.
  */
+async function sendWithRefresh(path: string, init: RequestInit): Promise<Response> {
+  const response = await send(path, init);
+  if (response.status !== 401 || NO_REFRESH.some((p) => path.startsWith(p))) return response;
+  const body = await readBody(response);
+  if (await refreshSession()) return send(path, init);
+  notifySessionLost();
+  throw toApiError(401, body);
+}
+
+/** Calls the API and reads its JSON answer; an error status becomes an ApiError. */
 export async function apiFetch<T>(path: string, init: RequestInit = {}): Promise<T> {
-  let response = await send(path, init);
-  if (response.status === 401 && !NO_REFRESH.some((p) => path.startsWith(p))) {
-    const body = await readBody(response);
-    if (await refreshSession()) {
-      response = await send(path, init);
-    } else {
-      sessionLostListeners.forEach((l) => l());
-      throw toApiError(401, body);
-    }
-  }
+  const response = await sendWithRefresh(path, init);
   const body = await readBody(response);
   if (!response.ok) throw toApiError(response.status, body);
   return body as T;
+}
+
+/** A file the API sent: its bytes and the name the server gave it. */
+export interface DownloadedFile {
+  readonly blob: Blob;
+  /** From Content-Disposition (RFC 6266 `filename*` first); null when the server named none. */
+  readonly fileName: string | null;
+  readonly headers: Headers;
+}
+
+/**
+ * Downloads a file through the same path as every other call, so an expired
+ * access token is refreshed first (a plain link would just fail with a 401).
+ */
+export async function apiDownload(path: string): Promise<DownloadedFile> {
+  const response = await sendWithRefresh(path, { headers: { accept: '*/*' } });
+  if (!response.ok) throw toApiError(response.status, await readBody(response));
+  return {
+    blob: await response.blob(),
+    fileName: fileNameFromDisposition(response.headers.get('content-disposition')),
+    headers: response.headers,
+  };
+}
+
+/**
+ * The file name of a Content-Disposition header: the UTF-8 `filename*` of
+ * RFC 6266 / RFC 8187 when present, else the plain `filename`.
+ */
+export function fileNameFromDisposition(header: string | null): string | null {
+  if (!header) return null;
+  const extended = /filename\*\s*=\s*([^']*)'[^']*'([^;]+)/i.exec(header);
+  if (extended?.[2]) {
+    try {
+      return decodeURIComponent(extended[2].trim());
+    } catch {
+      // A malformed escape: fall back to the plain name.
+    }
+  }
+  const plain = /filename\s*=\s*(?:"((?:[^"\\]|\\.)*)"|([^;]+))/i.exec(header);
+  const name = plain?.[1]?.replace(/\\(.)/g, '$1') ?? plain?.[2]?.trim();
+  return name ? name : null;
+}
+
+/** Hands a downloaded file to the browser to save, under the given name. */
+export function saveFile(file: DownloadedFile, fallbackName: string): void {
+  const url = URL.createObjectURL(file.blob);
+  const link = document.createElement('a');
+  link.href = url;
+  link.download = file.fileName ?? fallbackName;
+  link.rel = 'noopener';
+  document.body.append(link);
+  link.click();
+  link.remove();
+  // Revoked later, not at once: a browser may still be reading the blob after the click returns.
+  setTimeout(() => URL.revokeObjectURL(url), 10_000);
 }
 
 /** JSON body helper: `apiFetch(path, json('POST', {...}))`. */

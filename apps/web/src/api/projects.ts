@@ -6,7 +6,15 @@ import {
   useQueryClient,
 } from '@tanstack/react-query';
 import { apiFetch, json, query, type Page } from './client';
-import type { CustomMaterialItem, Member, Project, Role, Site, UnitSystem } from './types';
+import type {
+  CustomMaterialItem,
+  Member,
+  Project,
+  Role,
+  Site,
+  UnitSystem,
+  UserLookup,
+} from './types';
 
 export interface ProjectListParams {
   readonly q?: string;
@@ -120,4 +128,9 @@ export function useAddProjectMaterial(projectId: string) {
       apiFetch<CustomMaterialItem>(`/projects/${projectId}/materials`, json('POST', { material })),
     onSuccess: () => client.invalidateQueries({ queryKey: projectKeys.materials(projectId) }),
   });
+}
+
+/** One person by their exact e-mail address (admins and designers; 404 when there is none). */
+export function lookUpUser(email: string) {
+  return apiFetch<UserLookup>(`/users/lookup${query({ email })}`);
 }

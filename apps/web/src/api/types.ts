@@ -154,3 +154,48 @@ export interface CustomMaterialItem {
   readonly material: Record<string, unknown>;
   readonly createdAt: string;
 }
+
+/** POST /invitations: mailed to the invitee, or (no SMTP server configured) the token for the admin. */
+export type InvitationCreated =
+  | { readonly invitation: Invitation; readonly delivery: 'mail' }
+  | { readonly invitation: Invitation; readonly delivery: 'shown'; readonly token: string };
+
+/** POST /users/:id/password-reset: mailed to the user, or the token shown to the admin. */
+export type PasswordResetIssued =
+  | { readonly delivery: 'mail'; readonly expiresAt: string }
+  | { readonly delivery: 'shown'; readonly token: string; readonly expiresAt: string };
+
+export interface Attachment {
+  readonly id: string;
+  readonly componentId: string;
+  readonly name: string;
+  /** SHA-256 of the bytes, hex. */
+  readonly sha256: string;
+  /** Bytes. */
+  readonly size: number;
+  /** As sniffed from the content by the server: application/pdf, image/png, image/jpeg, image/vnd.dxf. */
+  readonly contentType: string;
+  /** The server's words for the type ("PDF document"). */
+  readonly kind: string;
+  readonly uploadedBy: PersonRef | null;
+  readonly createdAt: string;
+}
+
+/** GET /verify/:code (public). */
+export type VerifyResult =
+  | { readonly match: false }
+  | {
+      readonly match: true;
+      readonly status: 'current' | 'superseded';
+      readonly projectNumber: string;
+      readonly componentName: string;
+      readonly revisionNumber: number;
+      readonly countersignedAt: string;
+    };
+
+/** GET /users/lookup?email= (admins and designers): one person by their exact address. */
+export interface UserLookup {
+  readonly user: PersonRef & { readonly email: string };
+}
+
+export type PaperSize = 'a4' | 'letter';

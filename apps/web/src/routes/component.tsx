@@ -4,13 +4,16 @@ import { useProject } from '../api/projects';
 import { useRevision } from '../api/revisions';
 import type { Component, Project, Revision } from '../api/types';
 import { StatusBadge, VerdictBadge } from '../components/badges';
-import { ButtonLink } from '../components/button';
+import { buttonClass, ButtonLink } from '../components/button';
 import { ErrorView } from '../components/error-view';
-import { PageHeader } from '../components/page';
+import { PageHeader, Panel } from '../components/page';
 import { PageSkeleton } from '../components/skeleton';
 import { Workbench } from '../features/editor/workbench';
 import { RevisionBody } from '../features/revisions/revision-body';
 import { WorkflowActions } from '../features/revisions/workflow-actions';
+import { AttachmentSummary } from '../features/attachments/attachment-list';
+import { AttachmentsPanel } from '../features/attachments/attachments-panel';
+import { SheetDownload, sheetKind } from '../features/sheets/sheet-download';
 import { kindLabel } from '../lib/kinds';
 import type { Raw } from '../features/editor/paths';
 
@@ -79,6 +82,7 @@ export function ComponentRoute() {
   const p = project.data;
   const r = revision.data;
   const isDesigner = p.myRole === 'designer';
+  const sheet = r ? sheetKind(r, p.myRole) : null;
 
   return (
     <>
@@ -112,14 +116,34 @@ export function ComponentRoute() {
         }
         actions={
           <>
+            {r && sheet ? <SheetDownload revision={r} kind={sheet} /> : null}
+            {isDesigner ? (
+              // The attachments panel sits below the long trail: a way straight to it.
+              <a href="#attachments-title" className={buttonClass()}>
+                Attachments
+              </a>
+            ) : null}
             <ButtonLink to={`/components/${c.id}/revisions`}>Revisions</ButtonLink>
           </>
         }
       />
       {isDesigner ? (
-        <DesignerView component={c} project={p} revision={r} />
+        <div className="flex flex-col gap-4">
+          <DesignerView component={c} project={p} revision={r} />
+          <AttachmentsPanel component={c} project={p} />
+        </div>
       ) : r ? (
-        <RevisionBody revision={r} />
+        <RevisionBody
+          revision={r}
+          aside={
+            <Panel title="Attachments" id="attachments">
+              <AttachmentSummary
+                componentId={c.id}
+                countersignedAt={r.status === 'countersigned' ? r.decidedAt : null}
+              />
+            </Panel>
+          }
+        />
       ) : (
         <p className="text-sm text-muted">No revision of this component is visible to you yet.</p>
       )}

@@ -9,12 +9,12 @@ import { INPUT_CLASS } from '../components/field';
 import { PageHeader } from '../components/page';
 import { TableSkeleton } from '../components/skeleton';
 import { formatDateTime, verifyCodeOf } from '../lib/dates';
+import { SheetDownload } from '../features/sheets/sheet-download';
 import { kindLabel } from '../lib/kinds';
 
 /**
  * Countersigned revisions across my projects: what the shop may quote or
- * build from. The stamped-for-review sheet arrives with the PDF release; until
- * then there is no download button, rather than one that does nothing.
+ * build from, each with its stamped-for-review sheet.
  */
 export function IssuedRoute() {
   const [page, setPage] = useState(1);
@@ -61,6 +61,18 @@ export function IssuedRoute() {
       header: 'Verify code',
       render: (i) => (
         <span className="font-mono text-xs">{verifyCodeOf(i.revision.contentHash)}</span>
+      ),
+    },
+    {
+      key: 'sheet',
+      header: 'Sheet',
+      render: (i) => (
+        <SheetDownload
+          revision={i.revision}
+          kind="review"
+          size="sm"
+          context={`${i.component.name} revision ${i.revision.number}`}
+        />
       ),
     },
   ];
@@ -118,8 +130,12 @@ export function IssuedRoute() {
             label="Issued pages"
           />
           <p className="mt-3 text-xs text-muted">
-            The stamped-for-review sheet of each revision will be downloadable here once sheets are
-            issued.
+            Each sheet is stamped FOR REVIEW — NOT FOR CONSTRUCTION and carries a verify code.
+            Anyone can check a sheet on the{' '}
+            <Link to="/verify" className="text-accent underline">
+              verify page
+            </Link>
+            .
           </p>
         </>
       )}

@@ -17,40 +17,7 @@ import { messageFor } from '../components/server-errors';
 import { TableSkeleton } from '../components/skeleton';
 import { formatDate, formatDateTime } from '../lib/dates';
 import { InviteForm } from '../features/admin/invite-form';
-
-function LinkNotice({
-  title,
-  link,
-  onDismiss,
-}: {
-  title: string;
-  link: string;
-  onDismiss: () => void;
-}) {
-  return (
-    <div role="status" className="rounded border border-accent bg-accent-soft px-3 py-2 text-sm">
-      <p className="font-medium">{title}</p>
-      <p className="mt-1 text-xs">
-        Pass this link on (mail delivery arrives with a later release):
-      </p>
-      <div className="mt-1 flex items-center gap-2">
-        <input
-          readOnly
-          aria-label="Link"
-          value={link}
-          className={`${INPUT_CLASS} font-mono text-xs`}
-          onFocus={(e) => e.target.select()}
-        />
-        <Button size="sm" onClick={() => void navigator.clipboard?.writeText(link)}>
-          Copy
-        </Button>
-        <Button size="sm" variant="ghost" onClick={onDismiss}>
-          Dismiss
-        </Button>
-      </div>
-    </div>
-  );
-}
+import { DeliveryNotice, resetDelivery, type Delivery } from '../features/admin/delivery-notice';
 
 export function PeopleRoute() {
   const me = useMe();
@@ -62,7 +29,7 @@ export function PeopleRoute() {
   const updateUser = useUpdateUser();
   const revoke = useRevokeInvitation();
   const reset = useIssuePasswordReset();
-  const [notice, setNotice] = useState<{ title: string; link: string } | null>(null);
+  const [notice, setNotice] = useState<Delivery | null>(null);
   const [error, setError] = useState<string | null>(null);
 
   if (!me.user.isAdmin) return <NotFoundView />;
@@ -118,11 +85,10 @@ export function PeopleRoute() {
           size="sm"
           onClick={() =>
             reset.mutate(u.id, {
-              onSuccess: (r) =>
-                setNotice({
-                  title: `Password reset link for ${u.name}`,
-                  link: `${window.location.origin}/reset-password/${r.token}`,
-                }),
+              onSuccess: (r) => {
+                setError(null);
+                setNotice(resetDelivery(r, u));
+              },
               onError: (e) => setError(messageFor(e)),
             })
           }
@@ -174,12 +140,13 @@ export function PeopleRoute() {
       />
       <div className="flex flex-col gap-4">
         <FormError message={error} />
-        {notice ? (
-          <LinkNotice title={notice.title} link={notice.link} onDismiss={() => setNotice(null)} />
-        ) : null}
+        {notice ? <DeliveryNotice delivery={notice} onDismiss={() => setNotice(null)} /> : null}
         <Panel title="Invite someone" id="invite">
           <InviteForm
-            onInvited={(link, email) => setNotice({ title: `Invitation for ${email}`, link })}
+            onInvited={(delivery) => {
+              setError(null);
+              setNotice(delivery);
+            }}
           />
         </Panel>
         <section aria-labelledby="people-title">

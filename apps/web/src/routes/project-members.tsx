@@ -13,7 +13,7 @@ import { PageHeader, Panel } from '../components/page';
 import { messageFor } from '../components/server-errors';
 import { PageSkeleton, TableSkeleton } from '../components/skeleton';
 import { formatDate } from '../lib/dates';
-import { AddMemberForm } from '../features/projects/add-member-form';
+import { AddMemberForm, AdminAddMemberForm } from '../features/projects/add-member-form';
 
 export function ProjectMembersRoute() {
   const { projectId = '' } = useParams();
@@ -102,12 +102,9 @@ export function ProjectMembersRoute() {
           {canManage ? (
             <Panel title="Add a member">
               {me.user.isAdmin ? (
-                <AddMemberForm projectId={p.id} members={members.data.items} />
+                <AdminAddMemberForm projectId={p.id} members={members.data.items} />
               ) : (
-                <p className="text-sm text-muted">
-                  Only an administrator can see the list of people to add from. You can change the
-                  roles of members already here, or remove them.
-                </p>
+                <AddMemberForm projectId={p.id} members={members.data.items} />
               )}
             </Panel>
           ) : null}

@@ -5,11 +5,13 @@ import { useRevision } from '../api/revisions';
 import { StatusBadge, VerdictBadge } from '../components/badges';
 import { ButtonLink } from '../components/button';
 import { ErrorView } from '../components/error-view';
-import { PageHeader } from '../components/page';
+import { PageHeader, Panel } from '../components/page';
 import { PageSkeleton } from '../components/skeleton';
 import { SignOffPanel } from '../features/check/sign-off-panel';
 import { RevisionBody } from '../features/revisions/revision-body';
 import { WorkflowActions } from '../features/revisions/workflow-actions';
+import { AttachmentSummary } from '../features/attachments/attachment-list';
+import { SheetDownload, sheetKind } from '../features/sheets/sheet-download';
 import { kindLabel } from '../lib/kinds';
 
 /** One revision, read-only; the check and sign-off panel while it awaits check (the review page). */
@@ -27,6 +29,7 @@ export function RevisionRoute() {
   const c = component.data;
   const p = project.data;
   const latest = c.latestRevision?.id === r.id;
+  const sheet = sheetKind(r, p.myRole);
   return (
     <>
       <PageHeader
@@ -47,13 +50,24 @@ export function RevisionRoute() {
         actions={
           <>
             {latest ? <WorkflowActions project={p} revision={r} /> : null}
+            {sheet ? <SheetDownload revision={r} kind={sheet} /> : null}
             <ButtonLink to={`/components/${c.id}/revisions`}>All revisions</ButtonLink>
           </>
         }
       />
       <RevisionBody
         revision={r}
-        aside={r.status === 'submitted' ? <SignOffPanel revision={r} project={p} /> : null}
+        aside={
+          <>
+            {r.status === 'submitted' ? <SignOffPanel revision={r} project={p} /> : null}
+            <Panel title="Attachments" id="attachments">
+              <AttachmentSummary
+                componentId={c.id}
+                countersignedAt={r.status === 'countersigned' ? r.decidedAt : null}
+              />
+            </Panel>
+          </>
+        }
       />
     </>
   );

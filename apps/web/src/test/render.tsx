@@ -42,7 +42,11 @@ export function renderApp(
 
 export interface Reply {
   readonly status?: number;
+  /** Sent as JSON. */
   readonly body?: unknown;
+  /** Sent as is instead of `body` (a file download), with `headers`. */
+  readonly raw?: BodyInit;
+  readonly headers?: Record<string, string>;
 }
 
 /**
@@ -52,12 +56,13 @@ export interface Reply {
 export function fakeApi(
   routes: Record<string, Reply | ((init: RequestInit | undefined) => Reply)>,
 ) {
-  const calls: { method: string; path: string; init: RequestInit | undefined }[] = [];
+  const calls: { method: string; path: string; search: string; init: RequestInit | undefined }[] =
+    [];
   const fetchMock = vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
     const url = new URL(String(input), 'http://localhost');
     const method = (init?.method ?? 'GET').toUpperCase();
     const path = url.pathname.replace(/^\/api/, '');
-    calls.push({ method, path, init });
+    calls.push({ method, path, search: url.search, init });
     const route = routes[`${method} ${path}`];
     const reply = typeof route === 'function' ? route(init) : route;
     if (!reply) {
@@ -65,9 +70,15 @@ export function fakeApi(
         status: 404,
       });
     }
-    return new Response(reply.body === undefined ? '' : JSON.stringify(reply.body), {
+    if (reply.raw !== undefined) {
+      return new Response(reply.raw, { status: reply.status ?? 200, headers: reply.headers ?? {} });
+    }
+    // A 204 may carry no body at all (the Response constructor refuses even an empty one).
+    const text =
+      reply.body === undefined ? (reply.status === 204 ? null : '') : JSON.stringify(reply.body);
+    return new Response(text, {
       status: reply.status ?? 200,
-      headers: { 'content-type': 'application/json' },
+      headers: { 'content-type': 'application/json', ...reply.headers },
     });
   });
   vi.stubGlobal('fetch', fetchMock);

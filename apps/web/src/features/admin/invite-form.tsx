@@ -6,6 +6,7 @@ import { Button } from '../../components/button';
 import { FormError, FormikTextField } from '../../components/field';
 import { serverFieldErrors } from '../../components/server-errors';
 import { Field } from 'formik';
+import { invitationDelivery, type Delivery } from './delivery-notice';
 
 const schema = yup.object({
   email: yup
@@ -17,8 +18,8 @@ const schema = yup.object({
   isAdmin: yup.boolean(),
 });
 
-/** Until mail exists the API returns the invitation token; the admin passes the link on. */
-export function InviteForm({ onInvited }: { onInvited: (link: string, email: string) => void }) {
+/** Sends an invitation; the page says whether it was mailed or shows the link to pass on. */
+export function InviteForm({ onInvited }: { onInvited: (delivery: Delivery) => void }) {
   const create = useCreateInvitation();
   const [formError, setFormError] = useState<string | null>(null);
   return (
@@ -33,7 +34,7 @@ export function InviteForm({ onInvited }: { onInvited: (link: string, email: str
             name: values.name.trim(),
             isAdmin: values.isAdmin,
           });
-          onInvited(`${window.location.origin}/invitation/${result.token}`, values.email.trim());
+          onInvited(invitationDelivery(result, values.email.trim()));
           helpers.resetForm();
         } catch (error) {
           const mapped = serverFieldErrors(error, ['email', 'name', 'isAdmin']);

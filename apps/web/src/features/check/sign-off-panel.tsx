@@ -27,21 +27,13 @@ export function SignOffPanel({ revision, project }: { revision: Revision; projec
   const navigate = useNavigate();
   const blocked = signOffBlockedReason(revision, project, me.user);
   return (
-    <>
-      <Panel title="Check and sign off" id="sign-off">
-        <SignOffForm
-          revision={revision}
-          blockedReason={blocked}
-          countersignBlockedReason={null}
-          onDone={() => navigate('/check-queue')}
-        />
-      </Panel>
-      <Panel title="Attachments" id="attachments">
-        <p className="text-sm text-muted">
-          Drawings, photos and certificates attached to this component will be listed here. Uploads
-          arrive with a later release; until then nothing is attached.
-        </p>
-      </Panel>
-    </>
+    <Panel title="Check and sign off" id="sign-off">
+      <SignOffForm
+        revision={revision}
+        blockedReason={blocked}
+        countersignBlockedReason={null}
+        onDone={() => navigate('/check-queue')}
+      />
+    </Panel>
   );
 }

@@ -11,8 +11,10 @@ const M = { left: 50, right: 14, top: 14, bottom: 40 };
 
 /**
  * Governing utilisation against thickness: the curve, the 100 % line, the
- * current design and the smallest thickness that passes. Utilisations above
- * the top of the chart are drawn at the top (the caption has the numbers).
+ * current design and the smallest thickness that passes. Where the engine
+ * flags the method as outside its validity range the curve is dashed over a
+ * shaded band (a legend entry says so). Utilisations above the top of the
+ * chart are drawn at the top (the caption has the numbers).
  */
 export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSystem }) {
   const titleId = useId();
@@ -27,12 +29,22 @@ export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSys
   const x = linearScale([toLen(sweep.from), toLen(sweep.to)], [M.left, W - M.right]);
   const y = linearScale([0, yTop], [H - M.bottom, M.top]);
   const yOf = (u: number) => y(Math.min(u * 100, yTop));
-  const path = pts
-    .map(
-      (p, i) =>
-        `${i === 0 ? 'M' : 'L'}${x(toLen(p.thickness)).toFixed(1)},${yOf(p.utilisation).toFixed(1)}`,
-    )
-    .join(' ');
+  // Two paths: intervals with a flagged end go into the dashed one (sweep.ts, outsideRuns).
+  const at = (p: (typeof pts)[number]) =>
+    `${x(toLen(p.thickness)).toFixed(1)},${yOf(p.utilisation).toFixed(1)}`;
+  let inside = '';
+  let outside = '';
+  for (let i = 0; i + 1 < pts.length; i++) {
+    const a = pts[i]!;
+    const b = pts[i + 1]!;
+    const flagged = a.outsideValidity || b.outsideValidity;
+    const previousFlagged = i > 0 && (pts[i - 1]!.outsideValidity || a.outsideValidity);
+    const continues = i > 0 && previousFlagged === flagged;
+    const segment = `${continues ? '' : `M${at(a)} `}L${at(b)} `;
+    if (flagged) outside += segment;
+    else inside += segment;
+  }
+  const runs = sweep.outsideValidity;
   const xTicks = niceTicks(toLen(sweep.from), toLen(sweep.to), 6);
   const yTicks = niceTicks(0, yTop, 5);
   const current = sweep.current;
@@ -48,7 +60,12 @@ export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSys
       ? `Smallest thickness that passes: ${lenText(min)}.`
       : min === 'below'
         ? `Every thickness from ${lenText(sweep.from)} passes.`
-        : `No thickness up to ${lenText(sweep.to)} passes.`);
+        : `No thickness up to ${lenText(sweep.to)} passes.`) +
+    (runs.length > 0
+      ? ` Outside the method's validity range (dashed, shaded): ${runs
+          .map((r) => `${lenText(r.from)} to ${lenText(r.to)}`)
+          .join(' and ')}; results there are not reliable.`
+      : '');
 
   return (
     <figure className="m-0">
@@ -59,6 +76,17 @@ export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSys
         className="h-auto w-full max-w-[640px] text-ink"
       >
         <title id={titleId}>{`Utilisation against thickness. ${summary}`}</title>
+        {runs.map((r) => (
+          <rect
+            key={`outside-${r.from}`}
+            data-testid="outside-validity-band"
+            x={x(toLen(r.from))}
+            width={Math.max(x(toLen(r.to)) - x(toLen(r.from)), 1)}
+            y={M.top}
+            height={H - M.bottom - M.top}
+            className="fill-warn-soft"
+          />
+        ))}
 
         {yTicks.map((t) => (
           <g key={`y${t}`}>
@@ -114,7 +142,19 @@ export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSys
         <text x={W - M.right - 2} y={y(100) - 4} textAnchor="end" className="fill-fail text-[10px]">
           100 % (limit)
         </text>
-        <path d={path} fill="none" className="stroke-accent" strokeWidth={2} />
+        {inside ? (
+          <path d={inside.trim()} fill="none" className="stroke-accent" strokeWidth={2} />
+        ) : null}
+        {outside ? (
+          <path
+            d={outside.trim()}
+            fill="none"
+            data-testid="outside-validity-curve"
+            className="stroke-warn"
+            strokeWidth={2}
+            strokeDasharray="6 4"
+          />
+        ) : null}
         {typeof min === 'number' ? (
           <g>
             <line
@@ -169,9 +209,46 @@ export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSys
           className="stroke-line-strong"
         />
       </svg>
-      <figcaption className="mt-1 text-xs text-muted">
-        {summary} Validity warnings, if any, are those listed for the current design.
-      </figcaption>
+      <ul aria-label="Legend" className="mt-1 flex flex-wrap gap-x-4 gap-y-1 text-xs text-muted">
+        <li className="flex items-center gap-1.5">
+          <svg aria-hidden="true" width="22" height="8">
+            <line x1="1" x2="21" y1="4" y2="4" className="stroke-accent" strokeWidth={2} />
+          </svg>
+          Governing utilisation
+        </li>
+        <li className="flex items-center gap-1.5">
+          <svg aria-hidden="true" width="22" height="8">
+            <line
+              x1="1"
+              x2="21"
+              y1="4"
+              y2="4"
+              className="stroke-fail"
+              strokeWidth={1.2}
+              strokeDasharray="5 3"
+            />
+          </svg>
+          100 % limit
+        </li>
+        {runs.length > 0 ? (
+          <li className="flex items-center gap-1.5">
+            <svg aria-hidden="true" width="22" height="10">
+              <rect x="0" y="0" width="22" height="10" className="fill-warn-soft" />
+              <line
+                x1="1"
+                x2="21"
+                y1="5"
+                y2="5"
+                className="stroke-warn"
+                strokeWidth={2}
+                strokeDasharray="6 4"
+              />
+            </svg>
+            Outside the method&apos;s validity range
+          </li>
+        ) : null}
+      </ul>
+      <figcaption className="mt-1 text-xs text-muted">{summary}</figcaption>
     </figure>
   );
 }

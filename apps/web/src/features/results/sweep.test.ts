@@ -1,7 +1,7 @@
-import { screen as screenComponent } from '@hoopline/calc';
+import { findMaterial, screen as screenComponent } from '@hoopline/calc';
 import { describe, expect, it } from 'vitest';
 import { niceCeil, niceTicks } from './chart-scale';
-import { sweepForPlot } from './sweep';
+import { outsideRuns, sweepForPlot } from './sweep';
 
 // A 500 mm clamped stainless-304 door at full vacuum (PRODUCT.md's drying cabinet), stress check only.
 const door = {
@@ -79,5 +79,50 @@ describe('chart scales', () => {
     expect(niceCeil(137)).toBe(200);
     expect(niceCeil(230)).toBe(250);
     expect(niceCeil(100)).toBe(100);
+  });
+});
+
+describe('the sweep outside the method’s validity range', () => {
+  it('flags exactly the thicknesses outside thin-plate and small-deflection theory, and draws them as runs', () => {
+    const sweep = sweepForPlot(door, null, { from: 0.002, to: 0.1, points: 50 })!;
+    // Computed from the clamped-plate centre deflection y = q·a⁴/(64·D), D = E·t³/(12·(1 − ν²))
+    // (Roark Table 11.2 case 10b) and the limits of the Hoopline method notes §c: small deflection
+    // while y <= t/2, i.e. t⁴ >= 3·q·a⁴·(1 − ν²)/(8·E); thin plate while t/d <= 0.1.
+    const steel = findMaterial('stainless-304')!;
+    const q = 101325;
+    const a = 0.25;
+    const thinnestSmallDeflection =
+      ((3 * q * a ** 4 * (1 - steel.poissonRatio ** 2)) / (8 * steel.elasticModulus)) ** 0.25;
+    const thickestThinPlate = 0.1 * 2 * a;
+    for (const p of sweep.points) {
+      const expected = p.thickness < thinnestSmallDeflection || p.thickness > thickestThinPlate;
+      expect(p.outsideValidity, `t = ${p.thickness} m`).toBe(expected);
+    }
+    // Two stretches, one at each end, each reaching to the first point known to be inside.
+    expect(sweep.outsideValidity).toHaveLength(2);
+    const [thin, thick] = sweep.outsideValidity;
+    expect(thin!.from).toBe(sweep.from);
+    expect(thin!.to).toBeGreaterThan(thinnestSmallDeflection);
+    expect(sweep.points.find((p) => p.thickness === thin!.to)!.outsideValidity).toBe(false);
+    expect(thick!.to).toBe(sweep.to);
+    expect(thick!.from).toBeLessThan(thickestThinPlate);
+  });
+
+  it('merges neighbouring flagged intervals and leaves a fully valid sweep without any', () => {
+    const pt = (thickness: number, outsideValidity: boolean) => ({
+      thickness,
+      utilisation: 1,
+      pass: true,
+      outsideValidity,
+    });
+    expect(
+      outsideRuns([pt(1, true), pt(2, true), pt(3, false), pt(4, false), pt(5, true)]),
+    ).toEqual([
+      { from: 1, to: 3 },
+      { from: 4, to: 5 },
+    ]);
+    expect(outsideRuns([pt(1, false), pt(2, true), pt(3, false)])).toEqual([{ from: 1, to: 3 }]);
+    expect(outsideRuns([pt(1, false), pt(2, false)])).toEqual([]);
+    expect(sweepForPlot(door, null, { from: 0.012, to: 0.03 })!.outsideValidity).toEqual([]);
   });
 });

@@ -18,6 +18,14 @@ export interface PlotPoint {
   readonly utilisation: number;
   /** No check fails. */
   readonly pass: boolean;
+  /** A method is outside its validity range at this thickness (the engine's flag). */
+  readonly outsideValidity: boolean;
+}
+
+/** A stretch of thicknesses, m, where the engine flags the method as outside its validity range. */
+export interface ThicknessRange {
+  readonly from: number;
+  readonly to: number;
 }
 
 export interface PlotSweep {
@@ -32,6 +40,28 @@ export interface PlotSweep {
   readonly minimumPassing: number | 'below' | 'above';
   readonly from: number;
   readonly to: number;
+  /** Where the curve is outside the method's validity range (see outsideRuns). */
+  readonly outsideValidity: readonly ThicknessRange[];
+}
+
+/**
+ * The stretches of the sweep drawn as outside validity: every interval between
+ * two neighbouring points of which at least one is flagged. The engine says
+ * nothing about the thicknesses between two points, so an interval with one
+ * flagged end counts as outside: the limit lies somewhere in it, and the plot
+ * does not claim validity it has not been told.
+ */
+export function outsideRuns(points: readonly PlotPoint[]): ThicknessRange[] {
+  const runs: { from: number; to: number }[] = [];
+  for (let i = 0; i + 1 < points.length; i++) {
+    const a = points[i]!;
+    const b = points[i + 1]!;
+    if (!a.outsideValidity && !b.outsideValidity) continue;
+    const last = runs[runs.length - 1];
+    if (last && last.to === a.thickness) last.to = b.thickness;
+    else runs.push({ from: a.thickness, to: b.thickness });
+  }
+  return runs;
 }
 
 /** Points on the chart when the caller gives none: enough for a smooth 1/t² curve. */
@@ -58,6 +88,7 @@ export function sweepForPlot(
     thickness: p.value,
     utilisation: p.utilisation,
     pass: p.pass,
+    outsideValidity: p.outsideValidity,
   }));
   const hasChecks = result.points.some((p) => p.cases.some((c) => c.utilisation > 0));
   if (points.length < 2 || !hasChecks) return null;
@@ -69,5 +100,6 @@ export function sweepForPlot(
     minimumPassing: min !== null ? min : points[0]!.pass ? 'below' : 'above',
     from: points[0]!.thickness,
     to: points[points.length - 1]!.thickness,
+    outsideValidity: outsideRuns(points),
   };
 }

@@ -1,0 +1,14 @@
+import { useQuery } from '@tanstack/react-query';
+import { apiFetch } from './client';
+import type { VerifyResult } from './types';
+
+/** The public verify answer for a code as typed (the server ignores dashes and case). */
+export function useVerify(code: string) {
+  return useQuery({
+    queryKey: ['verify', code],
+    queryFn: () => apiFetch<VerifyResult>(`/verify/${encodeURIComponent(code)}`),
+    enabled: code !== '',
+    // An answer may change (a later countersign supersedes it): ask again on every visit.
+    staleTime: 0,
+  });
+}
