@@ -13,4 +13,7 @@ export class AttachmentEntity {
   @Column('text', { name: 'content_type' }) contentType: string;
   @Column('uuid', { name: 'uploaded_by', nullable: true }) uploadedBy: string | null;
   @Column('timestamptz', { name: 'created_at' }) createdAt: Date;
+  /** Removed from the component (kept, so sheets countersigned before still name it). */
+  @Column('timestamptz', { name: 'removed_at', nullable: true }) removedAt: Date | null;
+  @Column('uuid', { name: 'removed_by', nullable: true }) removedBy: string | null;
 }

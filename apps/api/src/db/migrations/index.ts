@@ -2,6 +2,7 @@ import { Foundation1764640000000 } from './1764640000000-foundation';
 import { Accounts1764700000000 } from './1764700000000-accounts';
 import { ProjectsAndRevisions1764700001000 } from './1764700001000-projects-and-revisions';
 import { MailAndAttachments1764800000000 } from './1764800000000-mail-and-attachments';
+import { AttachmentRemoval1764800001000 } from './1764800001000-attachment-removal';
 
 /** Every migration class, oldest first. Add new ones at the end. */
 export const migrations = [
@@ -9,4 +10,5 @@ export const migrations = [
   Accounts1764700000000,
   ProjectsAndRevisions1764700001000,
   MailAndAttachments1764800000000,
+  AttachmentRemoval1764800001000,
 ];

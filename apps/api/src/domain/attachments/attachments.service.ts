@@ -1,5 +1,5 @@
 import { createHash, randomUUID } from 'node:crypto';
-import type { DataSource, EntityManager } from 'typeorm';
+import { IsNull, type DataSource, type EntityManager } from 'typeorm';
 import { AttachmentEntity } from '../../db/entities/attachment.entity';
 import { AppError, forbidden, notFound, validationFailed } from '../../http/errors';
 import { canDesign, type Actor, type Decision } from '../../policy/policy';
@@ -69,7 +69,7 @@ export class AttachmentsService {
     return viewsOf(
       manager,
       await manager.find(AttachmentEntity, {
-        where: { componentId },
+        where: { componentId, removedAt: IsNull() },
         order: { createdAt: 'DESC', id: 'ASC' },
       }),
     );
@@ -87,7 +87,13 @@ export class AttachmentsService {
       .where('a.component_id = :componentId', { componentId })
       .orderBy('a.created_at', 'ASC')
       .addOrderBy('a.id', 'ASC');
-    if (asOf) query.andWhere('a.created_at <= :asOf', { asOf });
+    if (asOf) {
+      query
+        .andWhere('a.created_at <= :asOf', { asOf })
+        .andWhere('(a.removed_at is null or a.removed_at > :asOf)', { asOf });
+    } else {
+      query.andWhere('a.removed_at is null');
+    }
     return viewsOf(manager, await query.getMany());
   }
 
@@ -123,6 +129,8 @@ export class AttachmentsService {
         contentType: sniffed.type,
         uploadedBy: actor.id,
         createdAt: new Date(),
+        removedAt: null,
+        removedBy: null,
       });
       await tx.insert(AttachmentEntity, entity);
       await recordAudit(tx, {
@@ -149,7 +157,10 @@ export class AttachmentsService {
     attachmentId: string,
   ): Promise<{ attachment: AttachmentView; bytes: Buffer }> {
     const manager = this.dataSource.manager;
-    const entity = await manager.findOneBy(AttachmentEntity, { id: attachmentId });
+    const entity = await manager.findOneBy(AttachmentEntity, {
+      id: attachmentId,
+      removedAt: IsNull(),
+    });
     if (!entity) throw notFound('attachment');
     await requireComponent(manager, actor, entity.componentId).catch(() => {
       throw notFound('attachment');
@@ -162,13 +173,21 @@ export class AttachmentsService {
 
   async remove(actor: Actor, attachmentId: string): Promise<void> {
     await this.dataSource.transaction(async (manager) => {
-      const entity = await manager.findOneBy(AttachmentEntity, { id: attachmentId });
+      const entity = await manager.findOneBy(AttachmentEntity, {
+        id: attachmentId,
+        removedAt: IsNull(),
+      });
       if (!entity) throw notFound('attachment');
       const { standing } = await requireComponent(manager, actor, entity.componentId).catch(() => {
         throw notFound('attachment');
       });
       enforce(canDesign(standing));
-      await manager.delete(AttachmentEntity, { id: attachmentId });
+      // Kept, marked removed: a sheet countersigned before still names it.
+      await manager.update(
+        AttachmentEntity,
+        { id: attachmentId },
+        { removedAt: new Date(), removedBy: actor.id },
+      );
       await recordAudit(manager, {
         actorId: actor.id,
         action: 'attachment.removed',

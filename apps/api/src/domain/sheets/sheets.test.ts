@@ -238,6 +238,46 @@ describe('the stamped-for-review sheet (rendered through the API, read back with
     expect(refused.body.error.code).toBe('not_found');
   });
 
+  it('an issued sheet keeps naming the attachments it had at the countersign', async () => {
+    const created = await t.services.components.create(w.designer, w.projectId, {
+      name: 'Stable sheet',
+      inputs: CASES[1]!.inputs,
+    });
+    const withdrawn = await t.services.attachments.upload(w.designer, created.component.id, {
+      originalName: 'withdrawn before the check.pdf',
+      bytes: Buffer.concat([TINY_PDF, Buffer.from('before')]),
+    });
+    await t.services.attachments.remove(w.designer, withdrawn.id);
+    const kept = await t.services.attachments.upload(w.designer, created.component.id, {
+      originalName: 'drawing at the check.pdf',
+      bytes: Buffer.concat([TINY_PDF, Buffer.from('kept')]),
+    });
+    await t.services.revisions.submit(w.designer, created.revision.id);
+    await t.services.revisions.decide(w.checker, created.revision.id, 'countersigned', {
+      hash: created.revision.contentHash,
+    });
+    const url = `/api/revisions/${created.revision.id}/sheet.pdf`;
+    const before = (await pdfText((await binary(fabricator, url)).body as Buffer)).replace(
+      /\s+/g,
+      ' ',
+    );
+    // Removing the file from the component later does not change the issued sheet.
+    await t.services.attachments.remove(w.designer, kept.id);
+    const after = (await pdfText((await binary(fabricator, url)).body as Buffer)).replace(
+      /\s+/g,
+      ' ',
+    );
+    for (const text of [before, after]) {
+      expect(text).toContain('drawing at the check.pdf');
+      expect(text).toContain(kept.sha256.slice(0, 32));
+      expect(text).not.toContain('withdrawn before the check.pdf');
+    }
+    const list = await designer
+      .get(`/api/components/${created.component.id}/attachments`)
+      .expect(200);
+    expect(list.body.items).toEqual([]);
+  });
+
   it('audits every download', async () => {
     const created = await t.services.components.create(w.designer, w.projectId, {
       name: 'Audited',
