@@ -49,4 +49,45 @@ describe('POST /api/screen (stateless)', () => {
     const notObject = await s.post('/api/screen', [plateInputs()]).expect(400);
     expect(notObject.body.error.code).toBe('validation_failed');
   });
+
+  it('screens a CSV table (dotted headers, one component per row), naming each row', async () => {
+    const csv = [
+      'kind,diameter,thickness,edge,material,loadCases.0.name,loadCases.0.internal',
+      'circular-plate,500 mm,12 mm,clamped,stainless-304,Full vacuum,full vacuum',
+      'circular-plate,500 mm,12 mm,glued,stainless-304,Full vacuum,full vacuum',
+    ].join('\r\n');
+    const res = await s.post('/api/screen').set('content-type', 'text/csv').send(csv).expect(200);
+    expect(res.body.results.map((r: { row: number; ok: boolean }) => [r.row, r.ok])).toEqual([
+      [2, true],
+      [3, false],
+    ]);
+    // The CSV row and the same input as JSON give the same report.
+    const json = screen({
+      kind: 'circular-plate',
+      diameter: '500 mm',
+      thickness: '12 mm',
+      edge: 'clamped',
+      material: 'stainless-304',
+      loadCases: [{ name: 'Full vacuum', internal: 'full vacuum' }],
+    });
+    expect(res.body.results[0].report).toEqual(JSON.parse(JSON.stringify(json)));
+    expect(res.body.results[1].issues.map((i: { path: string }) => i.path)).toEqual(['edge']);
+  });
+
+  it('refuses a CSV table it cannot read, naming where, and writes nothing', async () => {
+    const before = await snapshot(t);
+    const broken = await s
+      .post('/api/screen')
+      .set('content-type', 'text/csv')
+      .send('kind,thickness\n"circular-plate,12 mm\n')
+      .expect(400);
+    expect(broken.body.error.code).toBe('validation_failed');
+    const empty = await s
+      .post('/api/screen')
+      .set('content-type', 'text/csv')
+      .send('kind,thickness\n')
+      .expect(400);
+    expect(empty.body.error.fields).toEqual([{ path: 'csv', message: 'has no component rows' }]);
+    expect(await snapshot(t)).toEqual(before);
+  });
 });
