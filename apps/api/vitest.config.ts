@@ -2,7 +2,7 @@ import { defineConfig } from 'vitest/config';
 
 export default defineConfig({
   test: {
-    include: ['src/**/*.test.ts'],
+    include: ['src/**/*.test.ts', 'src/**/*.test.tsx'],
     globalSetup: ['./test/global-setup.ts'],
     setupFiles: ['./test/fail-on-console-error.ts'],
     testTimeout: 20_000,

@@ -32,10 +32,26 @@ const MONO: ReadonlyArray<readonly [number, string]> = [
 ];
 
 let registered = false;
+const unpacked = new Map<string, Buffer>();
+
+function trueType(woffPath: string): Buffer {
+  let sfnt = unpacked.get(woffPath);
+  if (!sfnt) {
+    sfnt = woffConverter.toSfnt(readFileSync(woffPath));
+    unpacked.set(woffPath, sfnt);
+  }
+  return sfnt;
+}
 
 function trueTypeDataUrl(woffPath: string): string {
-  const sfnt = woffConverter.toSfnt(readFileSync(woffPath));
-  return `data:font/ttf;base64,${sfnt.toString('base64')}`;
+  return `data:font/ttf;base64,${trueType(woffPath).toString('base64')}`;
+}
+
+/** The TrueType bytes of one weight of the sheet's sans face (for pdf-lib, see page-numbers.ts). */
+export function sheetFontBytes(fontWeight: 400 | 500 | 600 | 700): Buffer {
+  const file = SANS.find(([weight]) => weight === fontWeight)?.[1];
+  if (!file) throw new Error(`no sheet font of weight ${fontWeight}`);
+  return trueType(path.join(FONTS, 'ibm-plex-sans-complete', file));
 }
 
 /** Registers the sheet's fonts once per process. */

@@ -1,6 +1,7 @@
 import { renderToBuffer } from '@react-pdf/renderer';
 import QRCode from 'qrcode';
 import { registerSheetFonts } from './fonts';
+import { numberPages } from './page-numbers';
 import { SheetDocument } from './sheet-document';
 import type { SheetData } from './sheet-data';
 
@@ -12,5 +13,6 @@ export async function renderSheet(data: SheetData): Promise<Buffer> {
     margin: 0,
     scale: 4,
   });
-  return renderToBuffer(<SheetDocument data={data} qrDataUrl={qrDataUrl} />);
+  const laidOut = await renderToBuffer(<SheetDocument data={data} qrDataUrl={qrDataUrl} />);
+  return numberPages(laidOut);
 }

@@ -8,7 +8,8 @@ import { STAMP_TEXT, type SheetData } from './sheet-data';
  * The stamped-for-review sheet: a title block of our own, the verdict, load
  * cases, inputs (project units with SI alongside), checks, the full trail,
  * validity warnings, cautions and attachments; on every page a diagonal stamp
- * and a footer with the content hash, the verify code and its QR code.
+ * and a footer with the content hash, the verify code and its QR code
+ * ("Page x of y" goes below it after layout: page-numbers.ts).
  */
 
 const INK = '#1e293b';
@@ -117,6 +118,8 @@ const styles = StyleSheet.create({
     borderTopWidth: 1,
     borderTopColor: INK,
     paddingTop: 4,
+    // Below the footer the bottom margin stays empty: "Page x of y" is drawn
+    // there after layout (page-numbers.ts).
   },
   footerText: { flex: 1, fontSize: 6.5, paddingRight: 8 },
   qr: { width: 54, height: 54 },
@@ -515,7 +518,6 @@ export function SheetDocument({ data, qrDataUrl }: { data: SheetData; qrDataUrl:
               {stamp}. Screening only; defer to the applicable code and a qualified engineer.
               Generated {when(data.generatedAt)}.
             </Text>
-            <Text render={({ pageNumber, totalPages }) => `Page ${pageNumber} of ${totalPages}`} />
           </View>
           <Image style={styles.qr} src={qrDataUrl} />
         </View>

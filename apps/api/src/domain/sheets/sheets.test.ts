@@ -204,7 +204,7 @@ describe('the stamped-for-review sheet (rendered through the API, read back with
       expect(text).toContain('FOR REVIEW — NOT FOR CONSTRUCTION');
       expect(text).not.toContain('DRAFT — NOT CHECKED');
       expect(text).toContain('Screening only — not a code calculation');
-      // Greek symbols of the trail come through the fallback fonts intact.
+      // Greek symbols of the trail come through the sheet's fonts intact.
       expect(text).toMatch(/[σΔνγ]/);
       expect(text).toMatch(/qualified engineer/);
       for (const caution of created.revision.report['cautions'] as Array<{ title: string }>) {
@@ -214,7 +214,13 @@ describe('the stamped-for-review sheet (rendered through the API, read back with
       expect(text, c.source).toContain(c.expected);
       // Attachments as of the countersign are listed by name and hash.
       expect(text).toContain(`${c.kind} drawing.pdf`);
-      expect(text).toMatch(/Page 1 of \d+/);
+      // Every page numbered, in order, against one total (page-numbers.ts).
+      const numbers = [...text.matchAll(/Page (\d+) of (\d+)/g)].map((m) => [
+        Number(m[1]),
+        Number(m[2]),
+      ]);
+      expect(numbers.length).toBeGreaterThan(0);
+      expect(numbers).toEqual(numbers.map((_, i) => [i + 1, numbers.length]));
       expect(text).toContain('Checker');
     },
   );
