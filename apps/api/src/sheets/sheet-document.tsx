@@ -365,12 +365,13 @@ function StepRows({ steps, prefix }: { steps: readonly Step[]; prefix: string })
         <View key={s.id} style={styles.row} wrap={false}>
           <Cell width="6%">{`${prefix}${i + 1}`}</Cell>
           <Cell width="20%">{s.label}</Cell>
-          <View style={[styles.cell, { width: '30%' }]}>
-            <Text hyphenationPenalty={NEVER_HYPHENATE}>{breakable(s.expression)}</Text>
-            <Text style={styles.small} hyphenationPenalty={NEVER_HYPHENATE}>
-              {breakable(s.substituted)}
-            </Text>
-          </View>
+          {/* One text block (expression, then the substituted values in small type):
+              one layout instead of two per step. */}
+          <Text style={[styles.cell, { width: '30%' }]} hyphenationPenalty={NEVER_HYPHENATE}>
+            {breakable(s.expression)}
+            {'\n'}
+            <Text style={styles.small}>{breakable(s.substituted)}</Text>
+          </Text>
           <Cell width="16%">
             {s.value === null ? '—' : `${significant(s.value)} ${s.unit === '1' ? '' : s.unit}`}
           </Cell>
