@@ -1,4 +1,12 @@
-import type { Check, Output, Step, ValidityWarning, WarningSeverity } from './report';
+import { formatNumber } from './format';
+import type {
+  Check,
+  Output,
+  ResolvedLoadCase,
+  Step,
+  ValidityWarning,
+  WarningSeverity,
+} from './report';
 
 /**
  * Collects steps, checks, outputs and warnings while a method computes, so
@@ -17,6 +25,28 @@ export class Trail {
   step(step: Step): number | null {
     this.steps.push(step);
     return step.value;
+  }
+
+  /**
+   * The first step of every load case: the magnitude of the pressure
+   * difference, |p_inside − p_outside| times the case's factor. Each method
+   * names it in its own symbol ("q" on a plate, "p" on a shell).
+   */
+  differential(
+    loadCase: ResolvedLoadCase,
+    name: { readonly id: string; readonly label: string; readonly symbol: string },
+  ): number {
+    return this.step({
+      id: name.id,
+      label: name.label,
+      expression: `${name.symbol} = |p_inside − p_outside|`,
+      substituted: `${name.symbol} = |${formatNumber(loadCase.internal)} Pa − ${formatNumber(loadCase.external)} Pa|${
+        loadCase.factor !== 1 ? ` × ${formatNumber(loadCase.factor)}` : ''
+      }`,
+      value: Math.abs(loadCase.differential),
+      unit: 'Pa',
+      source: 'definition of differential pressure (Hoopline method notes §a.2)',
+    });
   }
 
   /** Records demand ≤ capacity. A capacity must be positive and finite. */

@@ -4,6 +4,7 @@ import { formatNumber, withUnit } from '../../core/format';
 import { componentShape, defineMethod } from '../../core/method';
 import type { ResolvedLoadCase } from '../../core/report';
 import { Trail } from '../../core/trail';
+import { plateLimits } from '../plate-limits';
 import type { CautionCode } from '../../core/cautions';
 import {
   allowableOverrides,
@@ -78,16 +79,10 @@ interface Common {
 function caseTrail(input: Parsed, c: Common, loadCase: ResolvedLoadCase): Trail {
   const trail = new Trail();
   const { a, t, nu, D, S } = c;
-  const q = trail.step({
+  const q = trail.differential(loadCase, {
     id: 'pressure',
     label: 'Uniform pressure on the plate',
-    expression: 'q = |p_inside − p_outside|',
-    substituted: `q = |${formatNumber(loadCase.internal)} Pa − ${formatNumber(loadCase.external)} Pa|${
-      loadCase.factor !== 1 ? ` × ${formatNumber(loadCase.factor)}` : ''
-    }`,
-    value: Math.abs(loadCase.differential),
-    unit: 'Pa',
-    source: 'definition of differential pressure (Hoopline method notes §a.2)',
+    symbol: 'q',
   });
   const clamped = input.edge === 'clamped';
   const source = clamped ? SOURCE_CLAMPED : SOURCE_SS;
@@ -181,59 +176,19 @@ function caseTrail(input: Parsed, c: Common, loadCase: ResolvedLoadCase): Trail 
   const allowance = input.corrosionAllowance ?? 0;
   trail.output('max-stress', 'Maximum stress', maxStress, 'Pa');
   trail.output('max-deflection', 'Maximum deflection', deflection, 'm');
-  trail.output(
-    'required-thickness-stress',
-    'Thickness for the allowable stress (with allowance)',
-    thicknessForStress + allowance,
-    'm',
-  );
-  trail.check({
-    id: 'stress',
-    label: 'Maximum stress against the allowable stress',
-    demand: maxStress,
-    capacity: S,
-    unit: 'Pa',
-    basis: 'σ_max <= S',
+  plateLimits(trail, {
+    t,
+    S,
+    allowance,
+    maxStress,
+    stressPerPressure,
+    thicknessForStress,
+    deflection,
+    deflectionPerPressure,
+    deflectionLimit: input.deflectionLimit,
+    deflectionSource: `${source}; y_max varies as 1/t³ through D`,
+    material: c.material,
   });
-  let allowablePressure = S / stressPerPressure;
-
-  if (input.deflectionLimit !== undefined) {
-    const limit = input.deflectionLimit;
-    // y ∝ 1/t³, so the thickness for y_lim is t·(y_max/y_lim)^(1/3).
-    const thicknessForDeflection = trail.step({
-      id: 'required-thickness-deflection',
-      label: 'Thickness needed for the deflection limit',
-      expression: 't_y = t·(y_max/y_lim)^(1/3)',
-      substituted: `t_y = ${tText}·(${withUnit(deflection, 'm')}/${withUnit(limit, 'm')})^(1/3)`,
-      value: t * Math.cbrt(deflection / limit),
-      unit: 'm',
-      source: `${source}; y_max varies as 1/t³ through D`,
-    });
-    trail.output(
-      'required-thickness-deflection',
-      'Thickness for the deflection limit (with allowance)',
-      thicknessForDeflection + allowance,
-      'm',
-    );
-    trail.check({
-      id: 'deflection',
-      label: 'Centre deflection against the limit',
-      demand: deflection,
-      capacity: limit,
-      unit: 'm',
-      basis: 'y_max <= y_lim',
-    });
-    allowablePressure = Math.min(allowablePressure, limit / deflectionPerPressure);
-  }
-  trail.output('allowable-pressure', 'Allowable pressure difference', allowablePressure, 'Pa');
-  if (c.material.brittle && maxStress > 0) {
-    trail.output(
-      'strength-ratio',
-      'Material strength over maximum stress',
-      c.material.strength / maxStress,
-      '1',
-    );
-  }
 
   // Validity (Hoopline method notes §c): small-deflection theory holds while y_max ≲ t/2.
   if (deflection > t / 2) {

@@ -211,7 +211,7 @@ interface ExternalSummary {
 }
 
 function pressureStep(trail: Trail, loadCase: ResolvedLoadCase): number {
-  return trail.step({
+  return trail.differential(loadCase, {
     id: 'pressure',
     label:
       loadCase.direction === 'external-over'
@@ -219,13 +219,7 @@ function pressureStep(trail: Trail, loadCase: ResolvedLoadCase): number {
         : loadCase.direction === 'internal-over'
           ? 'Pressure difference, inside higher'
           : 'Pressure difference',
-    expression: 'p = |p_inside − p_outside|',
-    substituted: `p = |${formatNumber(loadCase.internal)} Pa − ${formatNumber(loadCase.external)} Pa|${
-      loadCase.factor !== 1 ? ` × ${formatNumber(loadCase.factor)}` : ''
-    }`,
-    value: Math.abs(loadCase.differential),
-    unit: 'Pa',
-    source: 'definition of differential pressure (Hoopline method notes §a.2)',
+    symbol: 'p',
   });
 }
 

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { count, force, length } from '../../core/fields';
-import { formatNumber, withUnit } from '../../core/format';
+import { withUnit } from '../../core/format';
 import { componentShape, defineMethod } from '../../core/method';
 import type { ResolvedLoadCase } from '../../core/report';
 import { Trail } from '../../core/trail';
@@ -76,17 +76,10 @@ function caseTrail(
   loadCase: ResolvedLoadCase,
 ): Trail {
   const trail = new Trail();
-  const dp = Math.abs(loadCase.differential);
-  trail.step({
+  const dp = trail.differential(loadCase, {
     id: 'pressure-difference',
     label: 'Pressure difference across the closure',
-    expression: 'Δp = |p_inside − p_outside|',
-    substituted: `Δp = |${formatNumber(loadCase.internal)} Pa − ${formatNumber(loadCase.external)} Pa|${
-      loadCase.factor !== 1 ? ` × ${formatNumber(loadCase.factor)}` : ''
-    }`,
-    value: dp,
-    unit: 'Pa',
-    source: 'definition of differential pressure (Hoopline method notes §a.2)',
+    symbol: 'Δp',
   });
   const totalForce = trail.step({
     id: 'resultant-force',

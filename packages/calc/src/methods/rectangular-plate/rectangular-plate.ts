@@ -5,6 +5,7 @@ import { formatNumber, withUnit } from '../../core/format';
 import { componentShape, defineMethod } from '../../core/method';
 import type { ResolvedLoadCase, ValidityWarning } from '../../core/report';
 import { Trail } from '../../core/trail';
+import { plateLimits } from '../plate-limits';
 import {
   allowableOverrides,
   allowableStress,
@@ -102,16 +103,10 @@ interface Common {
 function caseTrail(input: Parsed, c: Common, loadCase: ResolvedLoadCase): Trail {
   const trail = new Trail();
   const { b, t, E, S, clamped, beta, alpha } = c;
-  const q = trail.step({
+  const q = trail.differential(loadCase, {
     id: 'pressure',
     label: 'Uniform pressure on the plate',
-    expression: 'q = |p_inside − p_outside|',
-    substituted: `q = |${formatNumber(loadCase.internal)} Pa − ${formatNumber(loadCase.external)} Pa|${
-      loadCase.factor !== 1 ? ` × ${formatNumber(loadCase.factor)}` : ''
-    }`,
-    value: Math.abs(loadCase.differential),
-    unit: 'Pa',
-    source: 'definition of differential pressure (Hoopline method notes §a.2)',
+    symbol: 'q',
   });
   const source = clamped ? SOURCE_CLAMPED_TABLE : SOURCE_SS_TABLE;
   const bText = withUnit(b, 'm');
@@ -184,60 +179,19 @@ function caseTrail(input: Parsed, c: Common, loadCase: ResolvedLoadCase): Trail 
   if (edgeReaction !== null) {
     trail.output('edge-reaction', 'Edge reaction per unit length (long side)', edgeReaction, 'N/m');
   }
-  trail.output(
-    'required-thickness-stress',
-    'Thickness for the allowable stress (with allowance)',
-    thicknessForStress + allowance,
-    'm',
-  );
-  trail.check({
-    id: 'stress',
-    label: 'Maximum stress against the allowable stress',
-    demand: maxStress,
-    capacity: S,
-    unit: 'Pa',
-    basis: 'σ_max <= S',
+  plateLimits(trail, {
+    t,
+    S,
+    allowance,
+    maxStress,
+    stressPerPressure,
+    thicknessForStress,
+    deflection,
+    deflectionPerPressure,
+    deflectionLimit: input.deflectionLimit,
+    deflectionSource: `${source}; y_max = α·q·b^4/(E·t³) solved for t`,
+    material: c.material,
   });
-  let allowablePressure = S / stressPerPressure;
-
-  if (input.deflectionLimit !== undefined) {
-    const limit = input.deflectionLimit;
-    // y ∝ 1/t³, so the thickness for y_lim is t·(y_max/y_lim)^(1/3).
-    const thicknessForDeflection = trail.step({
-      id: 'required-thickness-deflection',
-      label: 'Thickness needed for the deflection limit',
-      expression: 't_y = t·(y_max/y_lim)^(1/3)',
-      substituted: `t_y = ${tText}·(${withUnit(deflection, 'm')}/${withUnit(limit, 'm')})^(1/3)`,
-      value: t * Math.cbrt(deflection / limit),
-      unit: 'm',
-      source: `${source}; y_max = α·q·b^4/(E·t³) solved for t`,
-    });
-    trail.output(
-      'required-thickness-deflection',
-      'Thickness for the deflection limit (with allowance)',
-      thicknessForDeflection + allowance,
-      'm',
-    );
-    trail.check({
-      id: 'deflection',
-      label: 'Centre deflection against the limit',
-      demand: deflection,
-      capacity: limit,
-      unit: 'm',
-      basis: 'y_max <= y_lim',
-    });
-    allowablePressure = Math.min(allowablePressure, limit / deflectionPerPressure);
-  }
-  // Both checks are linear in q, so the governing one reaches 1 at the smaller of the two.
-  trail.output('allowable-pressure', 'Allowable pressure difference', allowablePressure, 'Pa');
-  if (c.material.brittle && maxStress > 0) {
-    trail.output(
-      'strength-ratio',
-      'Material strength over maximum stress',
-      c.material.strength / maxStress,
-      '1',
-    );
-  }
 
   // Small-deflection validity: y_max ≲ t/2 (Roark's guideline, from memory; Hoopline method notes §d.3).
   if (deflection > t / 2) {

@@ -360,7 +360,7 @@ interface Common {
 }
 
 function pressureStep(trail: Trail, loadCase: ResolvedLoadCase): number {
-  return trail.step({
+  return trail.differential(loadCase, {
     id: 'pressure-difference',
     label:
       loadCase.direction === 'external-over'
@@ -368,13 +368,7 @@ function pressureStep(trail: Trail, loadCase: ResolvedLoadCase): number {
         : loadCase.direction === 'internal-over'
           ? 'Pressure difference, inside higher (internal pressure)'
           : 'No pressure difference (screened as internal pressure)',
-    expression: 'P = |p_inside − p_outside|',
-    substituted: `P = |${formatNumber(loadCase.internal)} Pa − ${formatNumber(loadCase.external)} Pa|${
-      loadCase.factor !== 1 ? ` × ${formatNumber(loadCase.factor)}` : ''
-    }`,
-    value: Math.abs(loadCase.differential),
-    unit: 'Pa',
-    source: 'definition of differential pressure (Hoopline method notes §a.2)',
+    symbol: 'P',
   });
 }
 

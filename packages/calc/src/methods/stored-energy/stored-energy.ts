@@ -158,16 +158,10 @@ function energyCheck(
 
 function caseTrail(input: Parsed, gamma: number, v: number, loadCase: ResolvedLoadCase): Trail {
   const trail = new Trail();
-  const dp = trail.step({
+  const dp = trail.differential(loadCase, {
     id: 'pressure-difference',
     label: 'Pressure difference across the wall',
-    expression: 'Δp = |p_inside − p_outside|',
-    substituted: `Δp = |${formatNumber(loadCase.internal)} Pa − ${formatNumber(loadCase.external)} Pa|${
-      loadCase.factor !== 1 ? ` × ${formatNumber(loadCase.factor)}` : ''
-    }`,
-    value: Math.abs(loadCase.differential),
-    unit: 'Pa',
-    source: 'definition of differential pressure (Hoopline method notes §a.2)',
+    symbol: 'Δp',
   });
   trail.output('pressure-difference', 'Pressure difference', dp, 'Pa');
 
