@@ -11,6 +11,7 @@ import {
   type MethodDefinition,
   type Report,
 } from './index';
+import { disallowedCharacters, walk } from '../test/report-checks';
 
 /**
  * Engine-wide properties, over every method in METHODS: a method added later
@@ -24,36 +25,6 @@ const EXAMPLES = METHODS.flatMap((method) =>
     input: example.input as unknown,
   })),
 );
-
-/**
- * COMMON.md: engine text uses ASCII, Latin-1, Greek (U+0370–03FF), the minus
- * sign U+2212 and general punctuation U+2000–206F — what the shipped fonts cover.
- */
-function disallowedCharacters(text: string): string[] {
-  const bad: string[] = [];
-  for (const ch of text) {
-    const c = ch.codePointAt(0)!;
-    const ok =
-      (c >= 0x20 && c <= 0x7e) ||
-      (c >= 0xa0 && c <= 0xff) ||
-      (c >= 0x370 && c <= 0x3ff) ||
-      c === 0x2212 ||
-      (c >= 0x2000 && c <= 0x206f);
-    if (!ok) bad.push(`U+${c.toString(16).toUpperCase().padStart(4, '0')} "${ch}"`);
-  }
-  return bad;
-}
-
-function walk(value: unknown, path: string, visit: (value: unknown, path: string) => void): void {
-  visit(value, path);
-  if (Array.isArray(value)) value.forEach((v, i) => walk(v, `${path}.${i}`, visit));
-  else if (value !== null && typeof value === 'object') {
-    for (const [k, v] of Object.entries(value)) {
-      visit(k, `${path}.{key ${k}}`);
-      walk(v, `${path}.${k}`, visit);
-    }
-  }
-}
 
 function problemsOf(report: unknown): string[] {
   const problems: string[] = [];

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
+import { issuesOf, textProblems } from '../../../test/report-checks';
 import { checkValue, relativeError } from '../../../test/check-values';
-import { CalcInputError } from '../../core/errors';
 import type { CaseReport, Report } from '../../core/report';
-import { parseComponent, screen } from '../../screen';
+import { screen } from '../../screen';
 import { pumpDown, pumpDownCurve, pumpDownTime, type PumpDownInput } from './pump-down';
 
 function chamber(overrides: Partial<PumpDownInput>): PumpDownInput {
@@ -23,27 +23,6 @@ function output(c: CaseReport | undefined, id: string): number {
 
 function hasOutput(report: Report, id: string): boolean {
   return report.cases[0]!.outputs.some((o) => o.id === id);
-}
-
-function issuesOf(input: unknown): { path: string; message: string }[] {
-  try {
-    parseComponent(input);
-  } catch (error) {
-    if (error instanceof CalcInputError) return [...error.issues];
-    throw error;
-  }
-  throw new Error('expected a CalcInputError');
-}
-
-// Text the engine writes keeps to ASCII, Latin-1, Greek, U+2212 and general punctuation (COMMON.md).
-const ALLOWED_TEXT = /^[\x20-\x7E\u00A0-\u00FF\u0370-\u03FF\u2212\u2000-\u206F]*$/;
-function badText(value: unknown, path = 'report'): string[] {
-  if (typeof value === 'string') return ALLOWED_TEXT.test(value) ? [] : [`${path}: ${value}`];
-  if (Array.isArray(value)) return value.flatMap((v, i) => badText(v, `${path}.${i}`));
-  if (value !== null && typeof value === 'object') {
-    return Object.entries(value).flatMap(([k, v]) => badText(v, `${path}.${k}`));
-  }
-  return [];
 }
 
 describe('rough-vacuum pump-down time', () => {
@@ -271,7 +250,7 @@ describe('pump-down: determinism and text', () => {
     for (const example of pumpDown.examples) {
       const a = screen(example.input);
       expect(JSON.stringify(screen(example.input))).toBe(JSON.stringify(a));
-      expect(badText(a)).toEqual([]);
+      expect(textProblems(a)).toEqual([]);
     }
     const parameters = {
       volume: 0.05,
@@ -292,6 +271,6 @@ describe('pump-down: determinism and text', () => {
         waterTemperature: 300,
       }),
     );
-    expect(badText(busy)).toEqual([]);
+    expect(textProblems(busy)).toEqual([]);
   });
 });

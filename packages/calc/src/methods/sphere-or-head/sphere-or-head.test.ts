@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { issuesOf, textProblems } from '../../../test/report-checks';
 import { checkValue, relativeError } from '../../../test/check-values';
-import { CalcInputError } from '../../core/errors';
 import type { CaseReport, Report } from '../../core/report';
 import { parseComponent, screen } from '../../screen';
 import {
@@ -41,27 +41,6 @@ function step(report: Report, id: string, caseIndex?: number): number {
   const found = steps.find((s) => s.id === id);
   if (found?.value === null || found === undefined) throw new Error(`no step value ${id}`);
   return found.value;
-}
-
-function issuesOf(input: unknown): { path: string; message: string }[] {
-  try {
-    parseComponent(input);
-  } catch (error) {
-    if (error instanceof CalcInputError) return [...error.issues];
-    throw error;
-  }
-  throw new Error('expected a CalcInputError');
-}
-
-// Text the engine writes keeps to ASCII, Latin-1, Greek, U+2212 and general punctuation (COMMON.md).
-const ALLOWED_TEXT = /^[\x20-\x7E\u00A0-\u00FF\u0370-\u03FF\u2212\u2000-\u206F]*$/;
-function badText(value: unknown, path = 'report'): string[] {
-  if (typeof value === 'string') return ALLOWED_TEXT.test(value) ? [] : [`${path}: ${value}`];
-  if (Array.isArray(value)) return value.flatMap((v, i) => badText(v, `${path}.${i}`));
-  if (value !== null && typeof value === 'object') {
-    return Object.entries(value).flatMap(([k, v]) => badText(v, `${path}.${k}`));
-  }
-  return [];
 }
 
 describe('sphere and heads under external pressure', () => {
@@ -408,7 +387,7 @@ describe('sphere-or-head: properties', () => {
       const a = screen(example.input);
       const b = screen(example.input);
       expect(JSON.stringify(a)).toBe(JSON.stringify(b));
-      expect(badText(a)).toEqual([]);
+      expect(textProblems(a)).toEqual([]);
     }
     const busy = screen(
       head({
@@ -427,7 +406,7 @@ describe('sphere-or-head: properties', () => {
       }),
     );
     expect(busy.warnings.length).toBeGreaterThan(3);
-    expect(badText(busy)).toEqual([]);
+    expect(textProblems(busy)).toEqual([]);
   });
 
   it('the sweep varies the thickness below the radius', () => {

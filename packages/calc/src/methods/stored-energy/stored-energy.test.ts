@@ -1,9 +1,9 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { issuesOf, textProblems } from '../../../test/report-checks';
 import { checkValue, relativeError } from '../../../test/check-values';
-import { CalcInputError } from '../../core/errors';
 import type { CaseReport, Report } from '../../core/report';
-import { parseComponent, screen } from '../../screen';
+import { screen } from '../../screen';
 import { GASES, storedEnergy, type StoredEnergyInput } from './stored-energy';
 
 function vessel(overrides: Partial<StoredEnergyInput>): StoredEnergyInput {
@@ -25,27 +25,6 @@ function caseStep(report: Report, id: string, caseIndex = 0): number | null {
   const found = report.cases[caseIndex]!.steps.find((s) => s.id === id);
   if (!found) throw new Error(`no step ${id}`);
   return found.value;
-}
-
-function issuesOf(input: unknown): { path: string; message: string }[] {
-  try {
-    parseComponent(input);
-  } catch (error) {
-    if (error instanceof CalcInputError) return [...error.issues];
-    throw error;
-  }
-  throw new Error('expected a CalcInputError');
-}
-
-// Text the engine writes keeps to ASCII, Latin-1, Greek, U+2212 and general punctuation (COMMON.md).
-const ALLOWED_TEXT = /^[\x20-\x7E\u00A0-\u00FF\u0370-\u03FF\u2212\u2000-\u206F]*$/;
-function badText(value: unknown, path = 'report'): string[] {
-  if (typeof value === 'string') return ALLOWED_TEXT.test(value) ? [] : [`${path}: ${value}`];
-  if (Array.isArray(value)) return value.flatMap((v, i) => badText(v, `${path}.${i}`));
-  if (value !== null && typeof value === 'object') {
-    return Object.entries(value).flatMap(([k, v]) => badText(v, `${path}.${k}`));
-  }
-  return [];
 }
 
 describe('stored energy of a gas-filled vessel', () => {
@@ -242,7 +221,7 @@ describe('stored-energy: input and text', () => {
     for (const example of storedEnergy.examples) {
       const a = screen(example.input);
       expect(JSON.stringify(screen(example.input))).toBe(JSON.stringify(a));
-      expect(badText(a)).toEqual([]);
+      expect(textProblems(a)).toEqual([]);
     }
     const busy = screen(
       vessel({
@@ -256,6 +235,6 @@ describe('stored-energy: input and text', () => {
         ],
       }),
     );
-    expect(badText(busy)).toEqual([]);
+    expect(textProblems(busy)).toEqual([]);
   });
 });
