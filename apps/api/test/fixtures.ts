@@ -66,6 +66,17 @@ export class Session {
   get(path: string) {
     return this.agent.get(path);
   }
+  /** A GET whose body is kept as raw bytes (a sheet, an attachment) in `res.body`. */
+  download(path: string) {
+    return this.agent
+      .get(path)
+      .buffer(true)
+      .parse((res, done) => {
+        const chunks: Buffer[] = [];
+        res.on('data', (c: Buffer) => chunks.push(c));
+        res.on('end', () => done(null, Buffer.concat(chunks)));
+      });
+  }
   private write(method: 'post' | 'put' | 'patch' | 'delete', path: string, body?: unknown) {
     let r = this.agent[method](path);
     if (this.csrf) r = r.set('x-csrf-token', this.csrf);

@@ -51,17 +51,6 @@ async function filesUnder(folder: string): Promise<string[]> {
   }
 }
 
-function download(session: Session, url: string) {
-  return session
-    .get(url)
-    .buffer(true)
-    .parse((res, done) => {
-      const chunks: Buffer[] = [];
-      res.on('data', (c: Buffer) => chunks.push(c));
-      res.on('end', () => done(null, Buffer.concat(chunks)));
-    });
-}
-
 describe('attachments (local disk storage)', () => {
   let t: TestApp;
   let w: World;
@@ -101,7 +90,7 @@ describe('attachments (local disk storage)', () => {
     expect(await t.storage.has(sha256(bytes))).toBe(true);
     const list = await designer.get(`/api/components/${c.componentId}/attachments`).expect(200);
     expect(list.body.items.map((a: { name: string }) => a.name)).toEqual([name]);
-    const got = await download(designer, `/api/attachments/${res.body.id}/content`);
+    const got = await designer.download(`/api/attachments/${res.body.id}/content`);
     expect(got.status).toBe(200);
     expect((got.body as Buffer).equals(bytes)).toBe(true);
     expect(got.headers['content-type']).toBe(type);
@@ -119,15 +108,9 @@ describe('attachments (local disk storage)', () => {
       originalName: 'd.pdf',
       bytes: TINY_PDF,
     });
-    const inline = await download(
-      designer,
-      `/api/attachments/${png.id}/content?disposition=inline`,
-    );
+    const inline = await designer.download(`/api/attachments/${png.id}/content?disposition=inline`);
     expect(inline.headers['content-disposition']).toMatch(/^inline;/);
-    const forced = await download(
-      designer,
-      `/api/attachments/${pdf.id}/content?disposition=inline`,
-    );
+    const forced = await designer.download(`/api/attachments/${pdf.id}/content?disposition=inline`);
     expect(forced.headers['content-disposition']).toMatch(/^attachment;/);
   });
 
@@ -282,7 +265,7 @@ describe('attachments on an S3-compatible bucket (local fake S3 server, s3rver)'
     expect(res.status).toBe(201);
     expect(await t.storage.has(sha256(bytes))).toBe(true);
     expect(t.storage.description).toContain('S3 bucket hoopline-uploads');
-    const got = await download(designer, `/api/attachments/${res.body.id}/content`);
+    const got = await designer.download(`/api/attachments/${res.body.id}/content`);
     expect((got.body as Buffer).equals(bytes)).toBe(true);
   });
 });

@@ -35,6 +35,21 @@ function enforce(decision: Decision) {
   if (!decision.allowed) throw forbidden(decision.code, decision.reason);
 }
 
+/** The components with these ids, in the order of the ids (a page's order). */
+export async function componentsInOrder(
+  manager: EntityManager,
+  ids: readonly string[],
+): Promise<ComponentEntity[]> {
+  if (ids.length === 0) return [];
+  const entities = await manager
+    .getRepository(ComponentEntity)
+    .createQueryBuilder('c')
+    .where('c.id in (:...ids)', { ids })
+    .getMany();
+  const byId = new Map(entities.map((c) => [c.id, c]));
+  return ids.map((id) => byId.get(id)!);
+}
+
 /** Builds component views; fabricators see the issued revision as the latest. */
 export async function componentViews(
   manager: EntityManager,
@@ -99,15 +114,10 @@ export class ComponentsService {
       },
       query,
     );
-    const entities = found.length
-      ? await manager
-          .getRepository(ComponentEntity)
-          .createQueryBuilder('c')
-          .where('c.id in (:...ids)', { ids: found.map((r) => r.id) })
-          .getMany()
-      : [];
-    const byId = new Map(entities.map((c) => [c.id, c]));
-    const ordered = found.map((r) => byId.get(r.id)!);
+    const ordered = await componentsInOrder(
+      manager,
+      found.map((r) => r.id),
+    );
     return pageOf(await componentViews(manager, ordered, onlyIssued), query, total);
   }
 

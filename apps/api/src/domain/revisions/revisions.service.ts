@@ -21,6 +21,7 @@ import {
 import { recordAudit } from '../audit/audit.service';
 import {
   componentViews,
+  componentsInOrder,
   insertRevision,
   type ComponentView,
 } from '../components/components.service';
@@ -457,17 +458,12 @@ export class RevisionsService {
       },
       query,
     );
-    const entities = found.length
-      ? await manager
-          .getRepository(ComponentEntity)
-          .createQueryBuilder('c')
-          .where('c.id in (:...ids)', { ids: found.map((r) => r.id) })
-          .getMany()
-      : [];
-    const byId = new Map(entities.map((c) => [c.id, c]));
     const views = await componentViews(
       manager,
-      found.map((r) => byId.get(r.id)!),
+      await componentsInOrder(
+        manager,
+        found.map((r) => r.id),
+      ),
       true,
     );
     return pageOf(

@@ -135,17 +135,6 @@ async function pdfText(bytes: Buffer): Promise<string> {
   }
 }
 
-async function binary(session: Session, url: string) {
-  return session
-    .get(url)
-    .buffer(true)
-    .parse((res, done) => {
-      const chunks: Buffer[] = [];
-      res.on('data', (c: Buffer) => chunks.push(c));
-      res.on('end', () => done(null, Buffer.concat(chunks)));
-    });
-}
-
 describe('the stamped-for-review sheet (rendered through the API, read back with pdf-parse)', () => {
   let t: TestApp;
   let w: World;
@@ -192,7 +181,7 @@ describe('the stamped-for-review sheet (rendered through the API, read back with
         hash: created.revision.contentHash,
         comment: 'checked line by line',
       });
-      const res = await binary(fabricator, `/api/revisions/${id}/sheet.pdf?paper=letter`);
+      const res = await fabricator.download(`/api/revisions/${id}/sheet.pdf?paper=letter`);
       expect(res.status).toBe(200);
       expect(res.headers['content-type']).toBe('application/pdf');
       expect(res.headers['x-hoopline-stamp']).toBe('review');
@@ -232,7 +221,7 @@ describe('the stamped-for-review sheet (rendered through the API, read back with
     });
     const url = `/api/revisions/${created.revision.id}/sheet.pdf`;
     for (const session of [designer, checker]) {
-      const res = await binary(session, url);
+      const res = await session.download(url);
       expect(res.status).toBe(200);
       expect(res.headers['x-hoopline-stamp']).toBe('draft');
       const text = await pdfText(res.body as Buffer);
@@ -263,13 +252,13 @@ describe('the stamped-for-review sheet (rendered through the API, read back with
       hash: created.revision.contentHash,
     });
     const url = `/api/revisions/${created.revision.id}/sheet.pdf`;
-    const before = (await pdfText((await binary(fabricator, url)).body as Buffer)).replace(
+    const before = (await pdfText((await fabricator.download(url)).body as Buffer)).replace(
       /\s+/g,
       ' ',
     );
     // Removing the file from the component later does not change the issued sheet.
     await t.services.attachments.remove(w.designer, kept.id);
-    const after = (await pdfText((await binary(fabricator, url)).body as Buffer)).replace(
+    const after = (await pdfText((await fabricator.download(url)).body as Buffer)).replace(
       /\s+/g,
       ' ',
     );
@@ -289,7 +278,7 @@ describe('the stamped-for-review sheet (rendered through the API, read back with
       name: 'Audited',
       inputs: CASES[0]!.inputs,
     });
-    const res = await binary(designer, `/api/revisions/${created.revision.id}/sheet.pdf?paper=a4`);
+    const res = await designer.download(`/api/revisions/${created.revision.id}/sheet.pdf?paper=a4`);
     expect(res.status).toBe(200);
     const events: Array<{
       action: string;
