@@ -5,12 +5,12 @@ import { useIssued } from '../api/work';
 import { VerdictBadge } from '../components/badges';
 import { DataTable, Pagination, type Column } from '../components/data-table';
 import { ErrorView } from '../components/error-view';
-import { INPUT_CLASS } from '../components/field';
 import { PageHeader } from '../components/page';
 import { TableSkeleton } from '../components/skeleton';
 import { formatDateTime, verifyCodeOf } from '../lib/dates';
 import { SheetDownload } from '../features/sheets/sheet-download';
 import { kindLabel } from '../lib/kinds';
+import { SearchForm } from '../components/search-form';
 
 /**
  * Countersigned revisions across my projects: what the shop may quote or
@@ -82,33 +82,17 @@ export function IssuedRoute() {
         title="Issued"
         subtitle="The latest countersigned revision of every component in your projects."
       />
-      <form
-        role="search"
-        className="mb-3 flex max-w-md items-center gap-2"
-        onSubmit={(event) => {
-          event.preventDefault();
-          setQ(search.trim());
+      <SearchForm
+        id="issued-search"
+        label="Search issued components"
+        placeholder="Search by project or component"
+        value={search}
+        onChange={setSearch}
+        onSearch={(query) => {
+          setQ(query);
           setPage(1);
         }}
-      >
-        <label htmlFor="issued-search" className="sr-only">
-          Search issued components
-        </label>
-        <input
-          id="issued-search"
-          type="search"
-          className={INPUT_CLASS}
-          placeholder="Search by project or component"
-          value={search}
-          onChange={(event) => setSearch(event.target.value)}
-        />
-        <button
-          type="submit"
-          className="rounded border border-line-strong bg-panel px-3 py-1.5 text-sm hover:bg-sunken"
-        >
-          Search
-        </button>
-      </form>
+      />
       {issued.isPending ? (
         <TableSkeleton label="Loading issued components" />
       ) : issued.isError ? (

@@ -11,13 +11,14 @@ import type { Invitation, User } from '../api/types';
 import { Button } from '../components/button';
 import { DataTable, Pagination, type Column } from '../components/data-table';
 import { ErrorView, NotFoundView } from '../components/error-view';
-import { FormError, INPUT_CLASS } from '../components/field';
+import { FormError } from '../components/field';
 import { PageHeader, Panel } from '../components/page';
 import { messageFor } from '../components/server-errors';
 import { TableSkeleton } from '../components/skeleton';
 import { formatDate, formatDateTime } from '../lib/dates';
 import { InviteForm } from '../features/admin/invite-form';
 import { DeliveryNotice, resetDelivery, type Delivery } from '../features/admin/delivery-notice';
+import { SearchForm } from '../components/search-form';
 
 export function PeopleRoute() {
   const me = useMe();
@@ -154,28 +155,18 @@ export function PeopleRoute() {
             <h2 id="people-title" className="text-sm font-semibold">
               Accounts
             </h2>
-            <form
-              role="search"
-              className="flex items-center gap-2"
-              onSubmit={(event) => {
-                event.preventDefault();
-                setQ(search.trim());
+            <SearchForm
+              id="people-search"
+              label="Search people"
+              placeholder="Name or e-mail"
+              value={search}
+              onChange={setSearch}
+              onSearch={(query) => {
+                setQ(query);
                 setPage(1);
               }}
-            >
-              <label htmlFor="people-search" className="sr-only">
-                Search people
-              </label>
-              <input
-                id="people-search"
-                type="search"
-                className={INPUT_CLASS}
-                placeholder="Name or e-mail"
-                value={search}
-                onChange={(e) => setSearch(e.target.value)}
-              />
-              <Button type="submit">Search</Button>
-            </form>
+              className=""
+            />
           </div>
           {users.isPending ? (
             <TableSkeleton label="Loading people" />

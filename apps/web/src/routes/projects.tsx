@@ -6,12 +6,12 @@ import { RoleBadge } from '../components/badges';
 import { ButtonLink } from '../components/button';
 import { DataTable, Pagination, type Column } from '../components/data-table';
 import { ErrorView } from '../components/error-view';
-import { INPUT_CLASS } from '../components/field';
 import { PageHeader } from '../components/page';
 import { TableSkeleton } from '../components/skeleton';
 import { formatDateTime } from '../lib/dates';
 import { show } from '../lib/units';
 import { useUnitSystem } from '../lib/unit-system';
+import { SearchForm } from '../components/search-form';
 
 const SORTS = ['number', 'name', 'client', 'updatedAt'] as const;
 const PAGE_SIZE = 25;
@@ -105,32 +105,14 @@ export function ProjectsRoute() {
           </ButtonLink>
         }
       />
-      <form
-        role="search"
-        className="mb-3 flex max-w-md items-center gap-2"
-        onSubmit={(event) => {
-          event.preventDefault();
-          update({ q: search.trim(), page: undefined });
-        }}
-      >
-        <label htmlFor="project-search" className="sr-only">
-          Search projects
-        </label>
-        <input
-          id="project-search"
-          type="search"
-          className={INPUT_CLASS}
-          placeholder="Search by number, name or client"
-          value={search}
-          onChange={(event) => setSearch(event.target.value)}
-        />
-        <button
-          type="submit"
-          className="rounded border border-line-strong bg-panel px-3 py-1.5 text-sm hover:bg-sunken"
-        >
-          Search
-        </button>
-      </form>
+      <SearchForm
+        id="project-search"
+        label="Search projects"
+        placeholder="Search by number, name or client"
+        value={search}
+        onChange={setSearch}
+        onSearch={(query) => update({ q: query, page: undefined })}
+      />
       {projects.isPending ? (
         <TableSkeleton label="Loading projects" />
       ) : projects.isError ? (
