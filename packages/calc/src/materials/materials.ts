@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { density, factor, poissonRatio, stress } from '../core/fields';
 import { formatNumber } from '../core/format';
+import type { CautionCode } from '../core/cautions';
 import type { Trail } from '../core/trail';
 
 /** What the strength figure of a material is. */
@@ -294,6 +295,19 @@ export const allowableOverrides = {
   /** A design factor on the material strength, instead of the material's suggested one. */
   designFactor: factor(1, 50, 'design factor').optional(),
 };
+
+/**
+ * The cautions a material brings to any method: brittle fracture, and creep
+ * for polymers (a material rated on short-term tensile strength, or
+ * polycarbonate, which is rated on yield).
+ */
+export function materialCautions(material: Material): CautionCode[] {
+  const cautions: CautionCode[] = [];
+  if (material.brittle) cautions.push('brittle-material');
+  if (material.strengthBasis === 'tensile' || material.id === 'polycarbonate')
+    cautions.push('polymer-creep');
+  return cautions;
+}
 
 /**
  * Writes the allowable stress step into the trail and returns it, Pa:

@@ -11,6 +11,7 @@ import {
   allowableStress,
   materialSchema,
   resolveMaterial,
+  materialCautions,
   type Material,
 } from '../../materials/materials';
 
@@ -265,9 +266,7 @@ export const circularPlate = defineMethod({
       });
     }
     const cautions: CautionCode[] = ['small-deflection', 'edge-condition'];
-    if (material.brittle) cautions.push('brittle-material');
-    if (material.strengthBasis === 'tensile' || material.id === 'polycarbonate')
-      cautions.push('polymer-creep');
+    cautions.push(...materialCautions(material));
 
     return {
       title: `Circular flat plate, ${input.edge === 'clamped' ? 'clamped' : 'simply supported'} edge, ${material.name}`,

@@ -10,6 +10,7 @@ import {
   allowableStress,
   materialSchema,
   resolveMaterial,
+  materialCautions,
   type Material,
 } from '../../materials/materials';
 import {
@@ -960,9 +961,7 @@ export const cylindricalShell = defineMethod({
     const cautions: CautionCode[] = [];
     if (external) cautions.push('external-pressure-imperfection');
     if (internal) cautions.push('stored-energy');
-    if (material.brittle) cautions.push('brittle-material');
-    if (material.strengthBasis === 'tensile' || material.id === 'polycarbonate')
-      cautions.push('polymer-creep');
+    cautions.push(...materialCautions(material));
 
     const basis = externalBasis(input, material);
     return {

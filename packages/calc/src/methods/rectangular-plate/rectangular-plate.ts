@@ -11,6 +11,7 @@ import {
   allowableStress,
   materialSchema,
   resolveMaterial,
+  materialCautions,
   type Material,
 } from '../../materials/materials';
 import {
@@ -416,9 +417,7 @@ export const rectangularPlate = defineMethod({
       });
     }
     const cautions: CautionCode[] = ['small-deflection', 'edge-condition'];
-    if (material.brittle) cautions.push('brittle-material');
-    if (material.strengthBasis === 'tensile' || material.id === 'polycarbonate')
-      cautions.push('polymer-creep');
+    cautions.push(...materialCautions(material));
 
     return {
       title: `Rectangular flat plate, ${clamped ? 'clamped' : 'simply supported'} edges, ${material.name}`,

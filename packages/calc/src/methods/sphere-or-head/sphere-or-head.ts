@@ -10,6 +10,7 @@ import {
   allowableStress,
   materialSchema,
   resolveMaterial,
+  materialCautions,
   type Material,
 } from '../../materials/materials';
 
@@ -1025,9 +1026,7 @@ export const sphereOrHead = defineMethod({
 
     const cautions: CautionCode[] = [];
     if (hasExternal) cautions.push('external-pressure-imperfection');
-    if (material.brittle) cautions.push('brittle-material');
-    if (material.strengthBasis === 'tensile' || material.id === 'polycarbonate')
-      cautions.push('polymer-creep');
+    cautions.push(...materialCautions(material));
 
     return {
       title: `${SHAPE_NAMES[input.shape]}, ${material.name}`,
