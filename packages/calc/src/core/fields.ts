@@ -106,6 +106,8 @@ function describe(si: number, dimension: Dimension, unit: string): string {
 
 /** A length, m ("12 mm", "0.5 in", "3/8 in", 0.012). */
 export const length = (options?: QuantityFieldOptions) => quantity('length', '12 mm', options);
+/** An energy, J ("50 kJ", "0.1 kgTNT", 5e4). */
+export const energy = (options?: QuantityFieldOptions) => quantity('energy', '100 kJ', options);
 /** A stress or pressure magnitude (not a load-case pressure), Pa ("200 GPa", "138 MPa", "20 ksi"). */
 export const stress = (options?: QuantityFieldOptions) => quantity('pressure', '138 MPa', options);
 /** A force, N ("5 kN", "1100 lbf"). */

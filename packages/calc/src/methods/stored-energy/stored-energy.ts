@@ -1,10 +1,9 @@
 import { z } from 'zod';
-import { factor, volume } from '../../core/fields';
+import { energy, factor, volume } from '../../core/fields';
 import { formatNumber, withUnit } from '../../core/format';
 import { componentShape, defineMethod } from '../../core/method';
 import type { ResolvedLoadCase } from '../../core/report';
 import { Trail } from '../../core/trail';
-import { QuantityParseError, parseQuantity } from '../../units/parse';
 import { TNT_ENERGY_PER_KG } from '../../units/units';
 
 /**
@@ -55,38 +54,6 @@ export const GASES: Readonly<
   },
 };
 
-/** An energy, J ("50 kJ", "0.1 kgTNT", 5e4). */
-function energy() {
-  return z.unknown().transform((raw, ctx): number => {
-    let si: number;
-    if (typeof raw === 'number') {
-      si = raw;
-    } else if (typeof raw === 'string') {
-      try {
-        si = parseQuantity(raw, { dimension: 'energy' }).si;
-      } catch (error) {
-        ctx.addIssue({
-          code: 'custom',
-          message: error instanceof QuantityParseError ? error.message : 'cannot be read',
-        });
-        return z.NEVER;
-      }
-    } else {
-      ctx.addIssue({
-        code: 'custom',
-        message:
-          raw === undefined ? 'is required' : 'expected a number in J or text such as "100 kJ"',
-      });
-      return z.NEVER;
-    }
-    if (!Number.isFinite(si) || !(si > 0)) {
-      ctx.addIssue({ code: 'custom', message: 'must be a finite energy greater than zero' });
-      return z.NEVER;
-    }
-    return si;
-  });
-}
-
 export const storedEnergySchema = z
   .object(
     componentShape('stored-energy', {
@@ -100,7 +67,7 @@ export const storedEnergySchema = z
       /** γ = cp/cv, instead of the gas's own value. */
       heatCapacityRatio: factor(1.01, 1.7, 'heat capacity ratio').optional(),
       /** An energy above which the case fails (checked against the Brode or implosion energy). */
-      energyLimit: energy().optional(),
+      energyLimit: energy({ positive: true }).optional(),
     }),
   )
   .strict();
