@@ -6,6 +6,31 @@ export interface Crumb {
   readonly to?: string;
 }
 
+/** Crumbs down to a project, then the page's own. */
+export function projectCrumbs(
+  project: { readonly id: string; readonly number: string; readonly name: string },
+  ...rest: readonly Crumb[]
+): Crumb[] {
+  return [
+    { label: 'Projects', to: '/projects' },
+    { label: `${project.number} ${project.name}`, to: `/projects/${project.id}` },
+    ...rest,
+  ];
+}
+
+/** Crumbs down to a component in its project, then the page's own. */
+export function componentCrumbs(
+  project: { readonly id: string; readonly number: string; readonly name: string },
+  component: { readonly id: string; readonly name: string },
+  ...rest: readonly Crumb[]
+): Crumb[] {
+  return projectCrumbs(
+    project,
+    { label: component.name, to: `/components/${component.id}` },
+    ...rest,
+  );
+}
+
 export function PageHeader({
   title,
   subtitle,

@@ -3,7 +3,7 @@ import { useComponent } from '../api/components';
 import { useProject } from '../api/projects';
 import { useRevision, useRevisionDiff } from '../api/revisions';
 import { ErrorView, NotFoundView } from '../components/error-view';
-import { PageHeader } from '../components/page';
+import { componentCrumbs, PageHeader } from '../components/page';
 import { PageSkeleton } from '../components/skeleton';
 import { DiffView } from '../features/revisions/diff-view';
 import { ScreeningCaution } from '../components/screening-caution';
@@ -30,13 +30,12 @@ export function CompareRoute() {
   return (
     <>
       <PageHeader
-        crumbs={[
-          { label: 'Projects', to: '/projects' },
-          { label: `${p.number} ${p.name}`, to: `/projects/${p.id}` },
-          { label: c.name, to: `/components/${c.id}` },
+        crumbs={componentCrumbs(
+          p,
+          c,
           { label: 'Revisions', to: `/components/${c.id}/revisions` },
           { label: 'Compare' },
-        ]}
+        )}
         title={`${c.name}: revision ${from.data.number} against ${to.data.number}`}
       />
       <div className="flex flex-col gap-4">

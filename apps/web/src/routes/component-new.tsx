@@ -6,7 +6,7 @@ import { useCreateComponent } from '../api/components';
 import { useProject } from '../api/projects';
 import { ErrorView } from '../components/error-view';
 import { TextField } from '../components/field';
-import { PageHeader } from '../components/page';
+import { PageHeader, projectCrumbs } from '../components/page';
 import { PageSkeleton } from '../components/skeleton';
 import { KindPicker } from '../features/editor/kind-picker';
 import { templateFor } from '../features/editor/kind-forms';
@@ -32,11 +32,7 @@ export function NewComponentRoute() {
     <>
       <PageHeader
         title="New component"
-        crumbs={[
-          { label: 'Projects', to: '/projects' },
-          { label: `${p.number} ${p.name}`, to: `/projects/${p.id}` },
-          { label: 'New component' },
-        ]}
+        crumbs={projectCrumbs(p, { label: 'New component' })}
         subtitle={kind ? KIND_LABEL[kind] : 'Pick a kind; results appear as you type.'}
       />
       <div className="mb-4">

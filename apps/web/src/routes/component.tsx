@@ -6,7 +6,7 @@ import type { Component, Project, Revision } from '../api/types';
 import { StatusBadge, VerdictBadge } from '../components/badges';
 import { buttonClass, ButtonLink } from '../components/button';
 import { ErrorView } from '../components/error-view';
-import { PageHeader, Panel } from '../components/page';
+import { PageHeader, Panel, projectCrumbs } from '../components/page';
 import { PageSkeleton } from '../components/skeleton';
 import { Workbench } from '../features/editor/workbench';
 import { RevisionBody } from '../features/revisions/revision-body';
@@ -87,11 +87,7 @@ export function ComponentRoute() {
   return (
     <>
       <PageHeader
-        crumbs={[
-          { label: 'Projects', to: '/projects' },
-          { label: `${p.number} ${p.name}`, to: `/projects/${p.id}` },
-          { label: c.name },
-        ]}
+        crumbs={projectCrumbs(p, { label: c.name })}
         title={
           <span className="flex flex-wrap items-center gap-2">
             {c.name}

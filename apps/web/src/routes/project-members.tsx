@@ -9,7 +9,7 @@ import { DataTable, type Column } from '../components/data-table';
 import { Dialog } from '../components/dialog';
 import { ErrorView } from '../components/error-view';
 import { FormError } from '../components/field';
-import { PageHeader, Panel } from '../components/page';
+import { PageHeader, Panel, projectCrumbs } from '../components/page';
 import { messageFor } from '../components/server-errors';
 import { PageSkeleton, TableSkeleton } from '../components/skeleton';
 import { formatDate } from '../lib/dates';
@@ -79,11 +79,7 @@ export function ProjectMembersRoute() {
     <>
       <PageHeader
         title="Members"
-        crumbs={[
-          { label: 'Projects', to: '/projects' },
-          { label: `${p.number} ${p.name}`, to: `/projects/${p.id}` },
-          { label: 'Members' },
-        ]}
+        crumbs={projectCrumbs(p, { label: 'Members' })}
         subtitle="Designers create and submit components; checkers countersign or return them; fabricators see issued revisions only."
       />
       <FormError message={error} />

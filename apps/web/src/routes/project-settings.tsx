@@ -1,7 +1,7 @@
 import { useNavigate, useParams } from 'react-router-dom';
 import { useProject, useUpdateProject } from '../api/projects';
 import { ErrorView } from '../components/error-view';
-import { PageHeader } from '../components/page';
+import { PageHeader, projectCrumbs } from '../components/page';
 import { PageSkeleton } from '../components/skeleton';
 import { ProjectForm, projectFormValues } from '../features/projects/project-form';
 
@@ -15,14 +15,7 @@ export function ProjectSettingsRoute() {
   const p = project.data;
   return (
     <>
-      <PageHeader
-        title="Project settings"
-        crumbs={[
-          { label: 'Projects', to: '/projects' },
-          { label: `${p.number} ${p.name}`, to: `/projects/${p.id}` },
-          { label: 'Settings' },
-        ]}
-      />
+      <PageHeader title="Project settings" crumbs={projectCrumbs(p, { label: 'Settings' })} />
       <ProjectForm
         initialValues={projectFormValues(p, p.unitSystem)}
         submitLabel="Save project"

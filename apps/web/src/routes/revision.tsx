@@ -5,7 +5,7 @@ import { useRevision } from '../api/revisions';
 import { StatusBadge, VerdictBadge } from '../components/badges';
 import { ButtonLink } from '../components/button';
 import { ErrorView } from '../components/error-view';
-import { PageHeader, Panel } from '../components/page';
+import { componentCrumbs, PageHeader, Panel } from '../components/page';
 import { PageSkeleton } from '../components/skeleton';
 import { SignOffPanel } from '../features/check/sign-off-panel';
 import { RevisionBody } from '../features/revisions/revision-body';
@@ -33,12 +33,7 @@ export function RevisionRoute() {
   return (
     <>
       <PageHeader
-        crumbs={[
-          { label: 'Projects', to: '/projects' },
-          { label: `${p.number} ${p.name}`, to: `/projects/${p.id}` },
-          { label: c.name, to: `/components/${c.id}` },
-          { label: `Revision ${r.number}` },
-        ]}
+        crumbs={componentCrumbs(p, c, { label: `Revision ${r.number}` })}
         title={
           <span className="flex flex-wrap items-center gap-2">
             {c.name} · revision {r.number}

@@ -8,7 +8,7 @@ import { StatusBadge, VerdictBadge } from '../components/badges';
 import { Button } from '../components/button';
 import { DataTable, type Column } from '../components/data-table';
 import { ErrorView } from '../components/error-view';
-import { PageHeader } from '../components/page';
+import { componentCrumbs, PageHeader } from '../components/page';
 import { PageSkeleton, TableSkeleton } from '../components/skeleton';
 import { formatDateTime, verifyCodeOf } from '../lib/dates';
 
@@ -92,12 +92,7 @@ export function RevisionsRoute() {
   return (
     <>
       <PageHeader
-        crumbs={[
-          { label: 'Projects', to: '/projects' },
-          { label: `${p.number} ${p.name}`, to: `/projects/${p.id}` },
-          { label: c.name, to: `/components/${c.id}` },
-          { label: 'Revisions' },
-        ]}
+        crumbs={componentCrumbs(p, c, { label: 'Revisions' })}
         title={`${c.name}: revisions`}
         subtitle="Revisions are never changed once saved: an edit makes a new one, and a signature stays on the revision it covers."
         actions={
