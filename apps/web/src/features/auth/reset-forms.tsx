@@ -5,7 +5,7 @@ import { ApiError } from '../../api/client';
 import { useCompletePasswordReset, useRequestPasswordReset } from '../../api/session';
 import { Button } from '../../components/button';
 import { FormError, FormikTextField } from '../../components/field';
-import { messageFor, serverFieldErrors } from '../../components/server-errors';
+import { serverFieldErrors } from '../../components/server-errors';
 import { confirmPassword, newPassword } from './password-rules';
 
 export function RequestResetForm({ onSent }: { onSent: () => void }) {
@@ -71,9 +71,7 @@ export function CompleteResetForm({ token, onDone }: { token: string; onDone: ()
           }
           const mapped = serverFieldErrors(error, ['password']);
           helpers.setErrors(mapped.fields);
-          setFormError(
-            mapped.message ?? (Object.keys(mapped.fields).length ? null : messageFor(error)),
-          );
+          setFormError(mapped.message);
         }
       }}
     >

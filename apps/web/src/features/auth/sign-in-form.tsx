@@ -7,7 +7,7 @@ import { useSignIn } from '../../api/session';
 import type { Me } from '../../api/types';
 import { Button } from '../../components/button';
 import { FormError, FormikTextField } from '../../components/field';
-import { messageFor, serverFieldErrors } from '../../components/server-errors';
+import { serverFieldErrors } from '../../components/server-errors';
 
 const schema = yup.object({
   email: yup
@@ -40,9 +40,7 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (me: Me) => void }) {
           }
           const mapped = serverFieldErrors(error, ['email', 'password']);
           helpers.setErrors(mapped.fields);
-          setFormError(
-            mapped.message ?? (Object.keys(mapped.fields).length ? null : messageFor(error)),
-          );
+          setFormError(mapped.message);
         }
       }}
     >
