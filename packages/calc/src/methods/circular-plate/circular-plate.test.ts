@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
+import { issuesOf } from '../../../test/report-checks';
 import { checkValue, relativeError } from '../../../test/check-values';
-import { CalcInputError, screen, screenMany, type CaseReport, type Report } from '../../index';
+import { screen, screenMany, type CaseReport, type Report } from '../../index';
 
 type Edge = 'clamped' | 'simply-supported';
 
@@ -24,16 +25,6 @@ function out(c: CaseReport, id: string): number {
   const found = c.outputs.find((o) => o.id === id);
   if (!found) throw new Error(`no output ${id}`);
   return found.value;
-}
-
-function issues(raw: unknown): Array<{ path: string; message: string }> {
-  try {
-    screen(raw);
-  } catch (error) {
-    if (error instanceof CalcInputError) return [...error.issues];
-    throw error;
-  }
-  throw new Error('expected an input error');
 }
 
 // The built-in materials carry the check cases' E and ν: carbon steel 200 GPa / 0.3,
@@ -346,7 +337,7 @@ describe('circular-plate: bad input names the field and yields no report', () =>
     ],
   ];
   it.each(bad)('%s', (_what, raw, path, message) => {
-    const found = issues(raw);
+    const found = issuesOf(raw);
     expect(found[0]!.path).toBe(path);
     if (typeof message === 'string') expect(found[0]!.message).toBe(message);
     else expect(found[0]!.message).toMatch(message);

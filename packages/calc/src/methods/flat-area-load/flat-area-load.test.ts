@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
+import { issuesOf } from '../../../test/report-checks';
 import { checkValue, relativeError } from '../../../test/check-values';
-import { CalcInputError, screen, screenMany, type CaseReport, type Report } from '../../index';
+import { screen, screenMany, type CaseReport, type Report } from '../../index';
 
 const circle = (extra: Record<string, unknown> = {}) => ({
   kind: 'flat-area-load',
@@ -17,16 +18,6 @@ function step(c: CaseReport, id: string): number {
 
 function output(c: CaseReport, id: string): number | undefined {
   return c.outputs.find((o) => o.id === id)?.value;
-}
-
-function issues(raw: unknown): Array<{ path: string; message: string }> {
-  try {
-    screen(raw);
-  } catch (error) {
-    if (error instanceof CalcInputError) return [...error.issues];
-    throw error;
-  }
-  throw new Error('expected an input error');
 }
 
 describe('flat-area-load: check values (F = Δp·A; METHODS.md §b)', () => {
@@ -248,7 +239,7 @@ describe('flat-area-load: bad input names the field and yields no report', () =>
     ['an unknown field', circle({ colour: 'red' }), '', 'unknown field "colour"'],
   ];
   it.each(bad)('%s', (_what, raw, path, message) => {
-    const found = issues(raw);
+    const found = issuesOf(raw);
     expect(found[0]!.path).toBe(path);
     if (typeof message === 'string') expect(found[0]!.message).toBe(message);
     else expect(found[0]!.message).toMatch(message);
