@@ -27,6 +27,7 @@ export CI="${CI:-}"
 step "lint" pnpm lint
 step "typecheck" pnpm -r --workspace-concurrency=1 typecheck
 step "unit: calc" pnpm --filter @hoopline/calc test
+step "unit: present" pnpm --filter @hoopline/present test
 step "unit: web" pnpm --filter @hoopline/web test
 step "integration: api" pnpm --filter @hoopline/api test
 step "build: web" pnpm --filter @hoopline/web build

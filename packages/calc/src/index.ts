@@ -69,6 +69,12 @@ export type { CautionCode } from './core/cautions';
 export { CalcInputError, issuesFromZod } from './core/errors';
 export type { InputIssue } from './core/errors';
 export { formatNumber } from './core/format';
+export { describeFields, fieldAt } from './core/describe';
+export { COMMON_VOCABULARY, wordsFor } from './core/vocabulary';
+export type { FieldWords, Vocabulary } from './core/vocabulary';
+export type { FieldDescription } from './core/describe';
+export { fieldMetaOf } from './core/fields';
+export type { FieldMeta } from './core/fields';
 
 // Inputs shared by every component
 export { loadCaseSchema, loadCasesSchema, siteSchema } from './core/load-cases';

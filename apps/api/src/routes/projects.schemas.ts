@@ -1,10 +1,22 @@
 import { z } from 'zod';
-import { customMaterialSchema, siteSchema } from '@hoopline/calc';
+import { customMaterialSchema, siteSchema, type SiteInput } from '@hoopline/calc';
 import { paginationShape } from '../http/pagination';
 import { role, text, unitSystem, uuid, version } from './common.schemas';
 
-/** The project site is the calc's own site input (altitude or ambient pressure, with units). */
-const site = siteSchema;
+/**
+ * The project site: checked by the calc's own site schema (altitude or
+ * ambient pressure, with units), but passed on as typed, so the project keeps
+ * "5280 ft" and its revisions show it so.
+ */
+const site = z
+  .unknown()
+  .superRefine((raw, ctx) => {
+    const parsed = siteSchema.safeParse(raw);
+    if (parsed.success) return;
+    for (const issue of parsed.error.issues)
+      ctx.addIssue({ code: 'custom', message: issue.message, path: issue.path });
+  })
+  .transform((raw) => raw as SiteInput);
 
 export const listProjectsQuery = z
   .object({

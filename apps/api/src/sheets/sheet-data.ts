@@ -1,5 +1,5 @@
 import type { Report } from '@hoopline/calc';
-import type { UnitSystem } from './quantity-display';
+import type { UnitSystem } from '@hoopline/present';
 
 /** Everything a sheet prints, gathered by the sheet service from the stored revision. */
 export interface SheetData {

@@ -1,7 +1,13 @@
 import { Document, Image, Page, StyleSheet, Text, View } from '@react-pdf/renderer';
-import type { CaseReport, Check, Report, Step } from '@hoopline/calc';
+import {
+  formatSignificant,
+  kindName,
+  presentInputs,
+  presentReport,
+  type PresentedReport,
+  type PresentedStep,
+} from '@hoopline/present';
 import { FONT_FAMILY, MONO_FAMILY } from './fonts';
-import { formatReportValue, inputRows, significant } from './quantity-display';
 import { STAMP_TEXT, type SheetData } from './sheet-data';
 
 /**
@@ -10,6 +16,10 @@ import { STAMP_TEXT, type SheetData } from './sheet-data';
  * validity warnings, cautions and attachments; on every page a diagonal stamp
  * and a footer with the content hash, the verify code and its QR code
  * ("Page x of y" goes below it after layout: page-numbers.ts).
+ *
+ * Every number and word of the report comes from @hoopline/present's
+ * presentReport, the same one the web app's report view prints, so the sheet
+ * cannot show a number differently from the screen.
  */
 
 const INK = '#1e293b';
@@ -181,50 +191,24 @@ function when(iso: string | null): string {
   return `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC`;
 }
 
-const KIND_NAMES: Record<string, string> = {
-  'flat-area-load': 'Flat-area load and fasteners',
-  'circular-plate': 'Circular flat plate',
-  'rectangular-plate': 'Rectangular flat plate',
-  'cylindrical-shell': 'Cylindrical shell',
-  'sphere-or-head': 'Sphere or dished head',
-  'stored-energy': 'Stored energy',
-  'pump-down': 'Pump-down',
-};
-
-function percent(utilisation: number): string {
-  return `${(utilisation * 100).toFixed(utilisation < 0.1 ? 1 : 0)} %`;
-}
-
-function VerdictBanner({ report }: { report: Report }) {
-  const failing = report.verdict === 'fail';
-  const colour = failing ? FAIL : report.verdict === 'pass' ? ACCENT : '#b45309';
-  const words: Record<Report['verdict'], string> = {
-    pass: 'PASSES every check',
-    fail: 'FAILS a check',
-    'outside-validity': 'OUTSIDE the validity range of a method — not a basis for a decision',
-    'no-checks': 'computed quantities only, no pass/fail criterion',
-  };
+function VerdictBanner({ shown }: { shown: PresentedReport }) {
+  const colour =
+    shown.verdict.code === 'fail' ? FAIL : shown.verdict.code === 'pass' ? ACCENT : '#b45309';
   return (
     <View style={[styles.verdict, { borderColor: colour }]}>
       <Text style={{ fontWeight: 600, color: colour }}>
-        Screening result: {words[report.verdict]}
+        Screening result: {shown.verdict.word.toUpperCase()}: {shown.verdict.sentence}
       </Text>
       <Text>
-        {report.governing
-          ? `Governing: ${report.governing.loadCase} — ${report.governing.checkLabel} — ${percent(report.governing.utilisation)}`
+        {shown.governing
+          ? `Governing: ${shown.governing.checkLabel} in load case ${shown.governing.loadCase} at ${shown.governing.utilisation}`
           : 'No governing check'}
       </Text>
     </View>
   );
 }
 
-function LoadCases({
-  report,
-  system,
-}: {
-  report: Report;
-  system: SheetData['project']['unitSystem'];
-}) {
+function LoadCases({ shown }: { shown: PresentedReport }) {
   return (
     <View>
       <Text style={styles.h2} minPresenceAhead={60}>
@@ -232,39 +216,35 @@ function LoadCases({
       </Text>
       <View style={styles.table}>
         <View style={styles.headRow}>
-          <Cell width="22%">Case</Cell>
-          <Cell width="14%">Inside (abs)</Cell>
-          <Cell width="14%">Outside (abs)</Cell>
-          <Cell width="14%">Δp (in − out)</Cell>
-          <Cell width="8%">Factor</Cell>
-          <Cell width="28%">As given</Cell>
+          <Cell width="20%">Case</Cell>
+          <Cell width="13%">Inside (abs)</Cell>
+          <Cell width="13%">Outside (abs)</Cell>
+          <Cell width="13%">Δp</Cell>
+          <Cell width="11%">Higher side</Cell>
+          <Cell width="7%">Factor</Cell>
+          <Cell width="23%">As given</Cell>
         </View>
-        {report.cases.map((c) => (
-          <View key={c.loadCase.name} style={styles.row} wrap={false}>
-            <Cell width="22%">{c.loadCase.name}</Cell>
-            <Cell width="14%">{formatReportValue(c.loadCase.internal, 'Pa', system)}</Cell>
-            <Cell width="14%">{formatReportValue(c.loadCase.external, 'Pa', system)}</Cell>
-            <Cell width="14%">{formatReportValue(c.loadCase.differential, 'Pa', system)}</Cell>
-            <Cell width="8%">{significant(c.loadCase.factor)}</Cell>
-            <Cell width="28%">{c.loadCase.description}</Cell>
+        {shown.cases.map((c, index) => (
+          <View key={`${c.name}-${index}`} style={styles.row} wrap={false}>
+            <Cell width="20%">{c.name}</Cell>
+            <Cell width="13%">{c.inside}</Cell>
+            <Cell width="13%">{c.outside}</Cell>
+            <Cell width="13%">{c.differential}</Cell>
+            <Cell width="11%">{c.direction}</Cell>
+            <Cell width="7%">{c.factor ?? '1'}</Cell>
+            <Cell width="23%">{c.description}</Cell>
           </View>
         ))}
       </View>
-      <Text style={styles.small}>
-        Ambient {formatReportValue(report.ambient.pressure, 'Pa', system)} (
-        {report.ambient.basis === 'altitude'
-          ? `ISO 2533 standard atmosphere at ${significant(report.ambient.altitude ?? 0)} m`
-          : report.ambient.basis === 'given'
-            ? 'given'
-            : 'standard atmosphere at sea level'}
-        ).
-      </Text>
+      <Text style={styles.small}>Ambient {shown.ambient}.</Text>
     </View>
   );
 }
 
 function Inputs({ data }: { data: SheetData }) {
-  const rows = inputRows(data.revision.inputs, data.project.unitSystem, data.revision.report);
+  const rows = presentInputs(data.revision.inputs, data.project.unitSystem, {
+    omit: ['loadCases'],
+  });
   // A US-customary project shows its own units beside SI; an SI project needs SI once.
   const both = data.project.unitSystem === 'us';
   return (
@@ -281,10 +261,10 @@ function Inputs({ data }: { data: SheetData }) {
         </View>
         {rows.map((r) => (
           <View key={r.path} style={styles.row} wrap={false}>
-            <Cell width={both ? '30%' : '40%'}>{r.path}</Cell>
-            <Cell width={both ? '24%' : '32%'}>{r.given}</Cell>
-            {both ? <Cell width="23%">{r.projectUnits}</Cell> : null}
-            <Cell width={both ? '23%' : '28%'}>{r.si}</Cell>
+            <Cell width={both ? '30%' : '40%'}>{r.label}</Cell>
+            <Cell width={both ? '24%' : '32%'}>{r.asTyped}</Cell>
+            {both ? <Cell width="23%">{r.inSystem}</Cell> : null}
+            <Cell width={both ? '23%' : '28%'}>{r.inSi}</Cell>
           </View>
         ))}
       </View>
@@ -292,23 +272,8 @@ function Inputs({ data }: { data: SheetData }) {
   );
 }
 
-function ChecksTable({
-  report,
-  system,
-}: {
-  report: Report;
-  system: SheetData['project']['unitSystem'];
-}) {
-  const rows: Array<{ caseName: string; check: Check; governing: boolean }> = [];
-  report.cases.forEach((c, index) => {
-    for (const check of c.checks) {
-      rows.push({
-        caseName: c.loadCase.name,
-        check,
-        governing: report.governing?.caseIndex === index && report.governing.checkId === check.id,
-      });
-    }
-  });
+function ChecksTable({ shown }: { shown: PresentedReport }) {
+  const rows = shown.cases.flatMap((c) => c.checks.map((check) => ({ caseName: c.name, check })));
   return (
     <View>
       <Text style={styles.h2} minPresenceAhead={60}>
@@ -326,22 +291,18 @@ function ChecksTable({
             <Cell width="11%">Utilisation</Cell>
             <Cell width="11%">Result</Cell>
           </View>
-          {rows.map(({ caseName, check, governing }) => (
-            <View key={`${caseName}/${check.id}`} style={styles.row} wrap={false}>
+          {rows.map(({ caseName, check }, index) => (
+            <View key={`${index}/${check.id}`} style={styles.row} wrap={false}>
               <Cell width="18%">{caseName}</Cell>
-              <Cell width="30%" bold={governing}>
+              <Cell width="30%" bold={check.governing}>
                 {check.label}
-                {governing ? ' (governing)' : ''}
+                {check.governing ? ' (governing)' : ''}
               </Cell>
-              <Cell width="15%">
-                {formatReportValue(check.demand, check.unit, system, check.capacity)}
-              </Cell>
-              <Cell width="15%">
-                {formatReportValue(check.capacity, check.unit, system, check.capacity)}
-              </Cell>
-              <Cell width="11%">{percent(check.utilisation)}</Cell>
+              <Cell width="15%">{check.demand}</Cell>
+              <Cell width="15%">{check.capacity}</Cell>
+              <Cell width="11%">{check.utilisation}</Cell>
               <Cell width="11%" bold color={check.pass ? ACCENT : FAIL}>
-                {check.pass ? 'pass' : 'FAIL'}
+                {check.result}
               </Cell>
             </View>
           ))}
@@ -351,19 +312,19 @@ function ChecksTable({
   );
 }
 
-function StepRows({ steps, prefix }: { steps: readonly Step[]; prefix: string }) {
+function StepRows({ steps }: { steps: readonly PresentedStep[] }) {
   return (
     <View style={styles.table}>
       <View style={styles.headRow}>
         <Cell width="6%">#</Cell>
         <Cell width="20%">Step</Cell>
         <Cell width="30%">Expression and substituted values</Cell>
-        <Cell width="16%">Value (SI)</Cell>
+        <Cell width="16%">Value</Cell>
         <Cell width="28%">Source</Cell>
       </View>
-      {steps.map((s, i) => (
-        <View key={s.id} style={styles.row} wrap={false}>
-          <Cell width="6%">{`${prefix}${i + 1}`}</Cell>
+      {steps.map((s) => (
+        <View key={s.number} style={styles.row} wrap={false}>
+          <Cell width="6%">{String(s.number)}</Cell>
           <Cell width="20%">{s.label}</Cell>
           {/* One text block (expression, then the substituted values in small type):
               one layout instead of two per step. */}
@@ -372,9 +333,15 @@ function StepRows({ steps, prefix }: { steps: readonly Step[]; prefix: string })
             {'\n'}
             <Text style={styles.small}>{breakable(s.substituted)}</Text>
           </Text>
-          <Cell width="16%">
-            {s.value === null ? '—' : `${significant(s.value)} ${s.unit === '1' ? '' : s.unit}`}
-          </Cell>
+          <Text style={[styles.cell, { width: '16%' }]} hyphenationPenalty={NEVER_HYPHENATE}>
+            {s.unit ? `${s.value} ${s.unit}` : s.value}
+            {s.shownAs ? (
+              <Text style={styles.small}>
+                {'\n'}
+                {s.shownAs}
+              </Text>
+            ) : null}
+          </Text>
           <Cell width="28%">{s.source}</Cell>
         </View>
       ))}
@@ -382,50 +349,50 @@ function StepRows({ steps, prefix }: { steps: readonly Step[]; prefix: string })
   );
 }
 
-function Trail({ report }: { report: Report }) {
+function Trail({ shown }: { shown: PresentedReport }) {
+  const common = shown.steps.filter((s) => s.caseIndex === null);
   return (
     <View>
       <Text style={styles.h2} minPresenceAhead={60}>
         4 Calculation trail
       </Text>
-      <Text style={styles.small}>Every step as computed by the engine; values in SI units.</Text>
-      {report.steps.length > 0 ? (
+      <Text style={styles.small}>
+        Every step as computed by the engine, numbered as on screen; values in SI, with the
+        project’s units below where they differ.
+      </Text>
+      {common.length > 0 ? (
         <View>
-          <Text style={styles.h3}>Common to all load cases</Text>
-          <StepRows steps={report.steps} prefix="C" />
+          <Text style={styles.h3}>Common to every load case</Text>
+          <StepRows steps={common} />
         </View>
       ) : null}
-      {report.cases.map((c: CaseReport, index) => (
-        <View key={c.loadCase.name}>
+      {shown.cases.map((c, index) => (
+        <View key={`${c.name}-${index}`}>
           <Text style={styles.h3} minPresenceAhead={40}>
-            Load case {index + 1}: {c.loadCase.name}
+            Load case {index + 1}: {c.name}
           </Text>
-          <StepRows steps={c.steps} prefix={`${index + 1}.`} />
+          <StepRows steps={shown.steps.filter((s) => s.caseIndex === index)} />
         </View>
       ))}
     </View>
   );
 }
 
-function Warnings({ report }: { report: Report }) {
+function Warnings({ shown }: { shown: PresentedReport }) {
   return (
     <View>
       <Text style={styles.h2} minPresenceAhead={60}>
         5 Validity warnings
       </Text>
-      {report.warnings.length === 0 ? (
+      {shown.warnings.length === 0 ? (
         <Text>None: every method was used within its stated range.</Text>
       ) : (
-        report.warnings.map((w, i) => (
+        shown.warnings.map((w, i) => (
           <Text
             key={`${w.code}-${i}`}
-            style={{ marginBottom: 2, color: w.severity === 'outside-validity' ? FAIL : INK }}
+            style={{ marginBottom: 2, color: w.severityCode === 'outside-validity' ? FAIL : INK }}
           >
-            {w.severity === 'outside-validity'
-              ? 'OUTSIDE VALIDITY'
-              : w.severity === 'caution'
-                ? 'Caution'
-                : 'Note'}
+            {w.severity}
             {w.loadCase ? ` (${w.loadCase})` : ''}: {w.message}
           </Text>
         ))
@@ -434,13 +401,13 @@ function Warnings({ report }: { report: Report }) {
   );
 }
 
-function Cautions({ report }: { report: Report }) {
+function Cautions({ shown }: { shown: PresentedReport }) {
   return (
     <View>
       <Text style={styles.h2} minPresenceAhead={60}>
         6 Cautions
       </Text>
-      {report.cautions.map((c) => (
+      {shown.cautions.map((c) => (
         <View key={c.code} style={{ marginBottom: 4 }} wrap={false}>
           <Text style={{ fontWeight: 600 }}>{c.title}</Text>
           <Text>{c.text}</Text>
@@ -468,7 +435,7 @@ function Attachments({ data }: { data: SheetData }) {
           {data.attachments.map((a) => (
             <View key={a.sha256 + a.name} style={styles.row} wrap={false}>
               <Cell width="40%">{a.name}</Cell>
-              <Cell width="12%">{`${significant(a.size / 1024)} KiB`}</Cell>
+              <Cell width="12%">{`${formatSignificant(a.size / 1024)} KiB`}</Cell>
               <Cell width="48%" mono>
                 {`${a.sha256.slice(0, 32)}\n${a.sha256.slice(32)}`}
               </Cell>
@@ -483,6 +450,7 @@ function Attachments({ data }: { data: SheetData }) {
 export function SheetDocument({ data, qrDataUrl }: { data: SheetData; qrDataUrl: string }) {
   const { project, component, revision, author, countersign } = data;
   const report = revision.report;
+  const shown = presentReport(report, project.unitSystem);
   const stamp = STAMP_TEXT[data.stamp];
   return (
     <Document
@@ -533,7 +501,7 @@ export function SheetDocument({ data, qrDataUrl }: { data: SheetData; qrDataUrl:
                 label="Component"
                 value={`${component.name}${component.tag ? ` (${component.tag})` : ''}`}
               />
-              <TitleCell label="Kind" value={KIND_NAMES[component.kind] ?? component.kind} last />
+              <TitleCell label="Kind" value={kindName(component.kind)} last />
             </View>
             <View style={styles.titleRow}>
               <TitleCell label="Revision" value={`${revision.number} — ${revision.status}`} />
@@ -562,7 +530,7 @@ export function SheetDocument({ data, qrDataUrl }: { data: SheetData; qrDataUrl:
             </Text>
           </View>
 
-          <VerdictBanner report={report} />
+          <VerdictBanner shown={shown} />
           {revision.note ? (
             <Text style={{ marginBottom: 6 }}>Revision note: {revision.note}</Text>
           ) : null}
@@ -570,12 +538,12 @@ export function SheetDocument({ data, qrDataUrl }: { data: SheetData; qrDataUrl:
             <Text style={{ marginBottom: 6 }}>Checker’s comment: {countersign.comment}</Text>
           ) : null}
 
-          <LoadCases report={report} system={project.unitSystem} />
+          <LoadCases shown={shown} />
           <Inputs data={data} />
-          <ChecksTable report={report} system={project.unitSystem} />
-          <Trail report={report} />
-          <Warnings report={report} />
-          <Cautions report={report} />
+          <ChecksTable shown={shown} />
+          <Trail shown={shown} />
+          <Warnings shown={shown} />
+          <Cautions shown={shown} />
           <Attachments data={data} />
         </View>
       </Page>

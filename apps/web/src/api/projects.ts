@@ -10,8 +10,8 @@ import type {
   CustomMaterialItem,
   Member,
   Project,
+  SiteAsTyped,
   Role,
-  Site,
   UnitSystem,
   UserLookup,
 } from './types';
@@ -29,7 +29,7 @@ export interface ProjectInput {
   readonly name: string;
   readonly client?: string;
   /** null clears the site (sea level); on create it is left out. */
-  readonly site?: Site | null;
+  readonly site?: SiteAsTyped | null;
   readonly unitSystem: UnitSystem;
   readonly notes?: string;
 }

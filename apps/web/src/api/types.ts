@@ -26,7 +26,11 @@ export interface Me {
   readonly memberships: readonly Membership[];
 }
 
+/** A site in SI (m, Pa). */
 export type Site = { readonly altitude?: number } | { readonly ambientPressure?: number };
+/** A site as typed ("5280 ft"), or SI numbers for a project from before typed sites were kept. */
+export type SiteAsTyped =
+  { readonly altitude?: string | number } | { readonly ambientPressure?: string | number };
 
 export interface Project {
   readonly id: string;
@@ -34,6 +38,7 @@ export interface Project {
   readonly name: string;
   readonly client: string;
   readonly site: Site | null;
+  readonly siteAsTyped: SiteAsTyped;
   readonly ambientPressure: number;
   readonly unitSystem: UnitSystem;
   readonly notes: string;

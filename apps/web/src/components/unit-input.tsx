@@ -1,6 +1,5 @@
 import {
   findUnit,
-  fromSi,
   loadCaseSchema,
   parseQuantity,
   QuantityParseError,
@@ -9,7 +8,7 @@ import {
 } from '@hoopline/calc';
 import { useId, type InputHTMLAttributes } from 'react';
 import type { UnitSystem } from '../api/types';
-import { displayUnitFor, formatValue, prettyUnit } from '../lib/units';
+import { displayUnitSymbol as displayUnitFor, formatSignificant, show } from '@hoopline/present';
 import { describedBy, FieldShell, INPUT_CLASS } from './field';
 
 /**
@@ -26,9 +25,8 @@ export type Reading =
 
 function inUnit(si: number, symbol: string): string {
   const unit = findUnit(symbol);
-  if (!unit) return `${formatValue(si)} ${symbol}`;
-  const pretty = prettyUnit(unit.symbol);
-  return `${formatValue(fromSi(si, unit))}${pretty ? ` ${pretty}` : ''}`;
+  if (!unit) return `${formatSignificant(si)} ${symbol}`;
+  return show(si, SI_UNIT[unit.dimension], 'si', { unit: unit.symbol });
 }
 
 /** The reading line for a typed value: `12.7 mm = 0.0127 m`, in the reader's display unit and SI. */

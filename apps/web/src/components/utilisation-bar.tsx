@@ -1,4 +1,4 @@
-import { percent } from '../lib/units';
+import { formatPercent as percent } from '@hoopline/present';
 
 /**
  * Demand over capacity as a bar with its value in text. The bar is drawn to

@@ -1,28 +1,18 @@
-import type { ComponentKind } from '@hoopline/calc';
+import { COMPONENT_KINDS, type ComponentKind } from '@hoopline/calc';
+import { kindName } from '@hoopline/present';
 
-/** Menu names of the component kinds (the engine's method names where it has them). */
-export const KIND_LABEL: Record<ComponentKind, string> = {
-  'circular-plate': 'Flat circular plate',
-  'rectangular-plate': 'Flat rectangular plate',
-  'cylindrical-shell': 'Cylindrical shell',
-  'sphere-or-head': 'Sphere or dished head',
-  'flat-area-load': 'Flat-area load and fasteners',
-  'stored-energy': 'Stored energy',
-  'pump-down': 'Pump-down',
-};
+// The engine's order of its methods.
+const KIND_ORDER_SOURCE: readonly ComponentKind[] = COMPONENT_KINDS;
 
-export const KIND_ORDER: readonly ComponentKind[] = [
-  'circular-plate',
-  'rectangular-plate',
-  'cylindrical-shell',
-  'sphere-or-head',
-  'flat-area-load',
-  'stored-energy',
-  'pump-down',
-];
+/** Menu names of the component kinds: the engine's method names, the ones the sheet prints. */
+export const KIND_LABEL: Record<ComponentKind, string> = Object.fromEntries(
+  KIND_ORDER_SOURCE.map((kind) => [kind, kindName(kind)]),
+) as Record<ComponentKind, string>;
+
+export const KIND_ORDER: readonly ComponentKind[] = KIND_ORDER_SOURCE;
 
 export function kindLabel(kind: string): string {
-  return (KIND_LABEL as Record<string, string>)[kind] ?? kind;
+  return kindName(kind);
 }
 
 /** One line on what each kind covers, for the picker (the engine's method description is the long form). */

@@ -40,7 +40,7 @@ export function CompareRoute() {
       />
       <div className="flex flex-col gap-4">
         <ScreeningCaution />
-        <DiffView from={from.data} to={to.data} diff={diff.data} />
+        <DiffView from={from.data} to={to.data} diff={diff.data} kind={c.kind} />
       </div>
     </>
   );

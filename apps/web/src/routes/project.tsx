@@ -11,7 +11,7 @@ import { PageHeader } from '../components/page';
 import { PageSkeleton, TableSkeleton } from '../components/skeleton';
 import { formatDateTime } from '../lib/dates';
 import { kindLabel } from '../lib/kinds';
-import { show } from '../lib/units';
+import { show } from '@hoopline/present';
 import { useUnitSystem } from '../lib/unit-system';
 import { useMe } from '../api/session';
 

@@ -9,7 +9,7 @@ import { ErrorView } from '../components/error-view';
 import { PageHeader } from '../components/page';
 import { TableSkeleton } from '../components/skeleton';
 import { formatDateTime } from '../lib/dates';
-import { show } from '../lib/units';
+import { show } from '@hoopline/present';
 import { useUnitSystem } from '../lib/unit-system';
 import { SearchForm } from '../components/search-form';
 

@@ -31,7 +31,32 @@ function describeType(value: unknown): string {
   return typeof value === 'object' ? 'an object' : typeof value;
 }
 
+/**
+ * What a field builder records about its field, in zod's global registry, so
+ * that the field's dimension is known from the schema itself (for display of
+ * numbers given in SI, and for the list of a method's fields: describeFields).
+ */
+export interface FieldMeta {
+  readonly dimension: Dimension;
+  /** Load-case pressures are absolute or gauge ("10 torr", "2 bar(g)"), differentials neither. */
+  readonly pressureKind?: 'load-case' | 'differential';
+}
+
+function withMeta<T extends z.ZodType>(schema: T, meta: FieldMeta): T {
+  return schema.meta({ ...meta }) as T;
+}
+
+/** The dimension a field builder recorded for a schema, if any. */
+export function fieldMetaOf(schema: z.ZodType): FieldMeta | undefined {
+  const meta = z.globalRegistry.get(schema) as Partial<FieldMeta> | undefined;
+  return meta?.dimension ? (meta as FieldMeta) : undefined;
+}
+
 function quantity(dimension: Dimension, example: string, options: QuantityFieldOptions = {}) {
+  return withMeta(quantitySchema(dimension, example, options), { dimension });
+}
+
+function quantitySchema(dimension: Dimension, example: string, options: QuantityFieldOptions) {
   return z.unknown().transform((raw, ctx): number => {
     let si: number;
     if (raw === undefined) {
@@ -171,6 +196,9 @@ const ABSOLUTE_BY_CONVENTION = new Set(['torr', 'mTorr', 'mmHg']);
  * than torr, mTorr and mmHg must say whether they are absolute or gauge.
  */
 export const loadCasePressure = () =>
+  withMeta(loadCasePressureSchema(), { dimension: 'pressure', pressureKind: 'load-case' });
+
+const loadCasePressureSchema = () =>
   z.unknown().transform((raw, ctx): PressureSpec => {
     if (raw === undefined) {
       ctx.addIssue({ code: 'custom', message: 'is required' });
@@ -238,6 +266,9 @@ export const loadCasePressure = () =>
 
 /** A differential pressure magnitude: "1 atm", "0.2 bar", "0.2 bar(d)", 101325. */
 export const differentialPressure = () =>
+  withMeta(differentialPressureSchema(), { dimension: 'pressure', pressureKind: 'differential' });
+
+const differentialPressureSchema = () =>
   z.unknown().transform((raw, ctx): number => {
     if (raw === undefined) {
       ctx.addIssue({ code: 'custom', message: 'is required' });

@@ -3,6 +3,7 @@ import type { CautionCode } from './cautions';
 import { loadCasesSchema, siteSchema, type Ambient } from './load-cases';
 import type { ComponentKind, ResolvedLoadCase, Step, ValidityWarning } from './report';
 import type { Trail } from './trail';
+import type { Vocabulary } from './vocabulary';
 
 /** What a method's compute function is given besides its parsed input. */
 export interface MethodContext {
@@ -46,6 +47,12 @@ export interface MethodDefinition<Schema extends z.ZodType = z.ZodType> {
   readonly description: string;
   /** Input schema: the component's fields, `kind`, `site` and `loadCases` included. */
   readonly schema: Schema;
+  /**
+   * The words of its fields (labels, option words), by generic path; the
+   * shared fields (name, site, load cases) are in COMMON_VOCABULARY. A test
+   * checks every field of the schema has words.
+   */
+  readonly vocabulary: Vocabulary;
   readonly compute: (input: z.output<Schema>, context: MethodContext) => MethodResult;
   readonly sweep?: SweepParameter<z.output<Schema>>;
   /**

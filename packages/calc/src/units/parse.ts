@@ -26,7 +26,11 @@ export interface ParseOptions {
 }
 
 // A decimal number, optionally a mixed or simple fraction ("1 1/2", "3/8"), optional exponent.
-const NUMBER = String.raw`[+-]?(?:\d+\s+\d+\s*/\s*\d+|\d+\s*/\s*\d+|(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?)`;
+// Digit groups of three may be set off by a thin space (U+2009) or a narrow
+// no-break space (U+202F), as ISO 80000-1 §7.3.1 writes them and as Hoopline
+// prints them ("101 325 Pa"); an ordinary space is not a group separator.
+const NUMBER = String.raw`[+-]?(?:\d+\s+\d+\s*/\s*\d+|\d+\s*/\s*\d+|(?:\d{1,3}(?:[\u2009\u202F]\d{3})+(?:\.\d*)?|\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?)`;
+const DIGIT_GROUP_SEPARATOR = /[\u2009\u202F]/g;
 // The number at the start of the (trimmed) text; the rest, trimmed, is the unit.
 const LEADING_NUMBER = new RegExp(String.raw`^${NUMBER}`);
 const REFERENCE_SUFFIX = /^(.*?)\s*\(\s*(a|abs|absolute|g|gauge|d|diff|differential)\s*\)$/i;
@@ -34,8 +38,9 @@ const REFERENCE_SUFFIX = /^(.*?)\s*\(\s*(a|abs|absolute|g|gauge|d|diff|different
 const GLUED_SUFFIX = /^(psi|bar|kPa|MPa|mbar)(g|a)$/;
 
 function parseNumber(text: string): number {
-  // A plain decimal (the usual case) has no spaces or slash: Number() reads it as it is.
-  if (!text.includes('/')) return Number(text);
+  // A plain decimal (the usual case) has no spaces or slash: Number() reads it
+  // as it is, once any thin-space digit groups are closed up.
+  if (!text.includes('/')) return Number(text.replace(DIGIT_GROUP_SEPARATOR, ''));
   const compact = text.replace(/\s+/g, ' ').trim();
   const mixed = /^([+-]?)(\d+) (\d+) ?\/ ?(\d+)$/.exec(compact);
   if (mixed) {

@@ -21,6 +21,10 @@ export type Dimension =
   | 'density'
   | 'volumeFlow'
   | 'throughput'
+  /** Force per unit length: a line load, an edge reaction (N/m). */
+  | 'lineForce'
+  /** Force times length: a moment, a flexural rigidity (N·m). */
+  | 'moment'
   | 'dimensionless';
 
 export interface UnitDefinition {
@@ -354,7 +358,7 @@ export const UNITS: readonly UnitDefinition[] = [
     'throughput',
     1,
     'pascal cubic metre per second',
-    ['Pa*m3/s', 'Pa.m3/s', 'Pa m3/s'],
+    ['Pa·m³/s', 'Pa*m3/s', 'Pa.m3/s', 'Pa m3/s'],
     'SI',
   ),
   unit(
@@ -374,6 +378,46 @@ export const UNITS: readonly UnitDefinition[] = [
     `${NIST}; exact as atm/760`,
   ),
   unit('Pa·L/s', 'throughput', 1e-3, 'pascal litre per second', ['Pa*L/s', 'Pa L/s'], 'SI'),
+
+  // force per length (line load, edge reaction)
+  unit('N/m', 'lineForce', 1, 'newton per metre', [], 'SI'),
+  unit('N/mm', 'lineForce', 1e3, 'newton per millimetre', ['kN/m'], 'SI prefix'),
+  unit(
+    'lbf/in',
+    'lineForce',
+    POUND_FORCE / INCH,
+    'pound-force per inch',
+    [],
+    `${NIST}; exact from lb, g0 and inch`,
+  ),
+  unit(
+    'lbf/ft',
+    'lineForce',
+    POUND_FORCE / FOOT,
+    'pound-force per foot',
+    [],
+    `${NIST}; exact from lb, g0 and foot`,
+  ),
+
+  // moment (and a plate's flexural rigidity, N·m)
+  unit('N·m', 'moment', 1, 'newton metre', ['N*m', 'N.m'], 'SI'),
+  unit('kN·m', 'moment', 1e3, 'kilonewton metre', ['kN*m', 'kN.m', 'kNm'], 'SI prefix'),
+  unit(
+    'lbf·in',
+    'moment',
+    POUND_FORCE * INCH,
+    'pound-force inch',
+    ['lbf*in', 'lbf.in', 'in·lbf', 'in*lbf'],
+    `${NIST}; exact from lb, g0 and inch`,
+  ),
+  unit(
+    'lbf·ft',
+    'moment',
+    POUND_FORCE * FOOT,
+    'pound-force foot',
+    ['lbf*ft', 'lbf.ft'],
+    `${NIST}; exact from lb, g0 and foot`,
+  ),
 
   unit('1', 'dimensionless', 1, 'dimensionless', ['-', ''], 'SI'),
 ];
@@ -408,6 +452,8 @@ export const SI_UNIT: Readonly<Record<Dimension, string>> = {
   density: 'kg/m3',
   volumeFlow: 'm3/s',
   throughput: 'Pa·m3/s',
+  lineForce: 'N/m',
+  moment: 'N·m',
   dimensionless: '1',
 };
 

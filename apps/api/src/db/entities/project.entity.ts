@@ -2,6 +2,9 @@ import { Column, Entity, PrimaryColumn } from 'typeorm';
 import type { JsonObject } from './json';
 import type { UnitSystem } from './user.entity';
 
+/** A site field as typed: text with its unit, or an SI number. */
+export type SiteAsTyped = { altitude?: string | number; ambientPressure?: string | number };
+
 export type ProjectRole = 'designer' | 'checker' | 'fabricator';
 
 @Entity('projects')
@@ -16,6 +19,9 @@ export class ProjectEntity {
   /** Site ambient pressure, Pa (absolute). */
   @Column('double precision', { name: 'site_ambient_pressure', nullable: true })
   siteAmbientPressure: number | null;
+  /** The site as typed ({ altitude: "5280 ft" }); null for projects from before it was kept. */
+  @Column('jsonb', { name: 'site_as_typed', nullable: true })
+  siteAsTyped: SiteAsTyped | null;
   @Column('text', { name: 'unit_system' }) unitSystem: UnitSystem;
   @Column('text') notes: string;
   @Column('integer') version: number;

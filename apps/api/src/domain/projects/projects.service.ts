@@ -1,10 +1,16 @@
 import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
-import { STANDARD_ATMOSPHERE, ambientPressureAtAltitude } from '@hoopline/calc';
+import {
+  STANDARD_ATMOSPHERE,
+  ambientPressureAtAltitude,
+  siteSchema,
+  type SiteInput,
+} from '@hoopline/calc';
 import {
   CustomMaterialEntity,
   ProjectEntity,
   ProjectMemberEntity,
+  type SiteAsTyped,
 } from '../../db/entities/project.entity';
 import { UserEntity, type UnitSystem } from '../../db/entities/user.entity';
 import { toJson, type JsonObject } from '../../db/entities/json';
@@ -23,14 +29,20 @@ import { recordAudit } from '../audit/audit.service';
 import { Where, containsPattern, iso, isoRequired, paged, rows } from '../sql';
 import { requireProjectStanding } from './project-access';
 
+/** A site in SI (m, Pa). */
 export type SiteValue = { altitude?: number | undefined; ambientPressure?: number | undefined };
+/** A site as a client sends it: text with units ("5280 ft") or SI numbers; checked by the calc's siteSchema. */
+export type SiteGiven = SiteInput;
 
 export interface ProjectView {
   readonly id: string;
   readonly number: string;
   readonly name: string;
   readonly client: string;
+  /** The site in SI: altitude in m or ambient pressure in Pa. */
   readonly site: SiteValue;
+  /** The site as it was typed ("5280 ft"); SI numbers for a project from before typed sites were kept. */
+  readonly siteAsTyped: SiteAsTyped;
   /** Pa, absolute: from the altitude (standard atmosphere), as given, or sea level. */
   readonly ambientPressure: number;
   readonly unitSystem: UnitSystem;
@@ -58,7 +70,7 @@ export interface ProjectInput {
   readonly number: string;
   readonly name: string;
   readonly client?: string | undefined;
-  readonly site?: SiteValue | undefined;
+  readonly site?: SiteGiven | undefined;
   readonly unitSystem: UnitSystem;
   readonly notes?: string | undefined;
 }
@@ -67,16 +79,42 @@ export interface ProjectPatch {
   readonly number?: string | undefined;
   readonly name?: string | undefined;
   readonly client?: string | undefined;
-  readonly site?: SiteValue | null | undefined;
+  readonly site?: SiteGiven | null | undefined;
   readonly unitSystem?: UnitSystem | undefined;
   readonly notes?: string | undefined;
   readonly version: number;
 }
 
-export function projectSite(p: ProjectEntity): SiteValue {
+function siteInSi(p: ProjectEntity): { altitude?: number; ambientPressure?: number } {
   if (p.siteAltitude !== null) return { altitude: p.siteAltitude };
   if (p.siteAmbientPressure !== null) return { ambientPressure: p.siteAmbientPressure };
   return {};
+}
+
+/** The site a revision takes into its inputs: as typed where the project kept it, else SI. */
+export function projectSite(p: ProjectEntity): SiteAsTyped {
+  return p.siteAsTyped ?? siteInSi(p);
+}
+
+/**
+ * The columns of a site as given: SI values (checked and converted by the
+ * calc's siteSchema) and the text as typed. A client sends only valid sites
+ * (the route checks them); a bad one here is a bug, and throws.
+ */
+function siteColumns(
+  given: SiteGiven | null | undefined,
+): Pick<ProjectEntity, 'siteAltitude' | 'siteAmbientPressure' | 'siteAsTyped'> {
+  if (!given) return { siteAltitude: null, siteAmbientPressure: null, siteAsTyped: null };
+  const si = siteSchema.parse(given);
+  const typed: SiteAsTyped = {};
+  if (given.altitude !== undefined) typed.altitude = given.altitude as string | number;
+  if (given.ambientPressure !== undefined)
+    typed.ambientPressure = given.ambientPressure as string | number;
+  return {
+    siteAltitude: si.altitude ?? null,
+    siteAmbientPressure: si.ambientPressure ?? null,
+    siteAsTyped: Object.keys(typed).length > 0 ? typed : null,
+  };
 }
 
 export function projectView(p: ProjectEntity, myRole: Role | null): ProjectView {
@@ -85,7 +123,8 @@ export function projectView(p: ProjectEntity, myRole: Role | null): ProjectView 
     number: p.number,
     name: p.name,
     client: p.client,
-    site: projectSite(p),
+    site: siteInSi(p),
+    siteAsTyped: projectSite(p),
     ambientPressure:
       p.siteAmbientPressure ??
       (p.siteAltitude !== null ? ambientPressureAtAltitude(p.siteAltitude) : STANDARD_ATMOSPHERE),
@@ -159,8 +198,7 @@ export class ProjectsService {
           number: input.number,
           name: input.name,
           client: input.client ?? '',
-          siteAltitude: input.site?.altitude ?? null,
-          siteAmbientPressure: input.site?.ambientPressure ?? null,
+          ...siteColumns(input.site),
           unitSystem: input.unitSystem,
           notes: input.notes ?? '',
           version: 1,
@@ -217,10 +255,7 @@ export class ProjectsService {
         if (patch.client !== undefined) changes.client = patch.client;
         if (patch.unitSystem !== undefined) changes.unitSystem = patch.unitSystem;
         if (patch.notes !== undefined) changes.notes = patch.notes;
-        if (patch.site !== undefined) {
-          changes.siteAltitude = patch.site?.altitude ?? null;
-          changes.siteAmbientPressure = patch.site?.ambientPressure ?? null;
-        }
+        if (patch.site !== undefined) Object.assign(changes, siteColumns(patch.site));
         await manager.update(ProjectEntity, { id: projectId }, changes);
         const after = await manager.findOneByOrFail(ProjectEntity, { id: projectId });
         await recordAudit(manager, {

@@ -9,7 +9,7 @@ import {
 } from '@hoopline/calc';
 import { toJson, type JsonObject } from '../../db/entities/json';
 import { AppError, validationFailed } from '../../http/errors';
-import type { SiteValue } from '../projects/projects.service';
+import type { SiteAsTyped } from '../../db/entities/project.entity';
 
 /** What a revision holds and its hash covers. */
 export interface RevisionContent {
@@ -60,7 +60,7 @@ export function inputIssues(error: CalcInputError, prefix = 'inputs') {
  * parses with the calc (its issues become 400s under `inputs.`), computes the
  * report and stamps the engine version.
  */
-export function computeContent(rawInputs: unknown, projectSite: SiteValue): RevisionContent {
+export function computeContent(rawInputs: unknown, projectSite: SiteAsTyped): RevisionContent {
   if (rawInputs === null || typeof rawInputs !== 'object' || Array.isArray(rawInputs)) {
     throw validationFailed([
       { path: 'inputs', message: 'must be a component object with a "kind"' },

@@ -6,7 +6,7 @@ import { Button } from '../../components/button';
 import { CheckboxField, SelectField, TextField } from '../../components/field';
 import { messageFor } from '../../components/server-errors';
 import { UnitInput } from '../../components/unit-input';
-import { show } from '../../lib/units';
+import { show } from '@hoopline/present';
 import type { EditorApi } from './editor-state';
 import { fieldId, numberText, quantityText } from './fields';
 import { getIn, sameInputs, type Raw } from './paths';

@@ -4,7 +4,7 @@ import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { ApiError } from '../../api/client';
 import type { Project } from '../../api/types';
-import { percent } from '../../lib/units';
+import { formatPercent as percent } from '@hoopline/present';
 import { fakeApi, renderApp } from '../../test/render';
 import { KIND_FORMS } from './kind-forms';
 import { Workbench } from './workbench';
@@ -14,6 +14,7 @@ const project = {
   number: 'HL-1',
   name: 'Drying cabinet',
   site: {},
+  siteAsTyped: {},
   ambientPressure: 101325,
   unitSystem: 'si',
   myRole: 'designer',

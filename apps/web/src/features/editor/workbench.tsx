@@ -21,13 +21,17 @@ import { InputsForm } from './inputs-form';
 import { evaluate, serverInputIssues } from './live-report';
 import { sameInputs, type Raw } from './paths';
 
-/** The project's site as an engine `site` input (SI numbers), or nothing for sea level. */
+/**
+ * The project's site as an engine `site` input, as it was typed ("5280 ft";
+ * SI numbers for an older project), or nothing for sea level. The engine reads
+ * either; a revision keeps the text, so its sheet shows what was typed.
+ */
 export function siteInput(project: Project): Raw | undefined {
-  const site = (project.site ?? {}) as { altitude?: unknown; ambientPressure?: unknown };
-  if (typeof site.altitude === 'number' && Number.isFinite(site.altitude))
-    return { altitude: site.altitude };
-  if (typeof site.ambientPressure === 'number' && Number.isFinite(site.ambientPressure))
-    return { ambientPressure: site.ambientPressure };
+  const site = (project.siteAsTyped ?? {}) as { altitude?: unknown; ambientPressure?: unknown };
+  const given = (value: unknown) =>
+    typeof value === 'string' || (typeof value === 'number' && Number.isFinite(value));
+  if (given(site.altitude)) return { altitude: site.altitude };
+  if (given(site.ambientPressure)) return { ambientPressure: site.ambientPressure };
   return undefined;
 }
 

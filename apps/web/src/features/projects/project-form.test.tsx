@@ -21,7 +21,7 @@ describe('ProjectForm', () => {
     expect(onSubmit).not.toHaveBeenCalled();
   });
 
-  it('reads the site altitude with the engine’s parser and sends it in metres', async () => {
+  it('reads the site altitude with the engine’s parser and sends it as typed', async () => {
     const onSubmit = vi.fn(async () => undefined);
     renderApp(
       <ProjectForm
@@ -36,9 +36,9 @@ describe('ProjectForm', () => {
     await userEvent.type(screen.getByLabelText('Site altitude'), '5000 ft');
     await userEvent.click(screen.getByRole('button', { name: 'Create' }));
     await vi.waitFor(() => expect(onSubmit).toHaveBeenCalledTimes(1));
-    // 5000 ft = 1524 m exactly (1 ft = 0.3048 m, NIST SP 811 B.8).
+    // As typed, so the project and its sheets show "5000 ft"; the API converts it (1524 m).
     const input = (onSubmit.mock.calls[0] as unknown as [ReturnType<typeof projectInput>])[0];
-    expect((input.site as { altitude: number }).altitude).toBeCloseTo(1524, 9);
+    expect(input.site).toEqual({ altitude: '5000 ft' });
     expect(input).toMatchObject({ number: 'HL-7', name: 'Drying cabinet', unitSystem: 'si' });
   });
 

@@ -3,7 +3,7 @@ import { Form, Formik, useFormikContext } from 'formik';
 import { useState } from 'react';
 import * as yup from 'yup';
 import type { ProjectInput } from '../../api/projects';
-import type { Project, Site, UnitSystem } from '../../api/types';
+import type { Project, SiteAsTyped, UnitSystem } from '../../api/types';
 import { Button } from '../../components/button';
 import {
   FormError,
@@ -12,7 +12,6 @@ import {
   FormikTextField,
 } from '../../components/field';
 import { serverFieldErrors } from '../../components/server-errors';
-import { formatValue } from '../../lib/units';
 
 export type SiteBasis = 'standard' | 'altitude' | 'ambient';
 
@@ -95,7 +94,13 @@ export function projectFormValues(
   project: Project | undefined,
   defaultSystem: UnitSystem,
 ): ProjectFormValues {
-  const site = (project?.site ?? {}) as { altitude?: number; ambientPressure?: number };
+  const site = (project?.siteAsTyped ?? {}) as {
+    altitude?: string | number;
+    ambientPressure?: string | number;
+  };
+  // As typed; a number is SI (a project saved before typed sites were kept).
+  const typed = (value: string | number | undefined, siUnit: string) =>
+    value === undefined ? '' : typeof value === 'number' ? `${value} ${siUnit}` : value;
   return {
     number: project?.number ?? '',
     name: project?.name ?? '',
@@ -106,26 +111,22 @@ export function projectFormValues(
         : site.ambientPressure !== undefined
           ? 'ambient'
           : 'standard',
-    altitude: site.altitude !== undefined ? `${formatValue(site.altitude, 6)} m` : '',
-    ambientPressure:
-      site.ambientPressure !== undefined
-        ? `${formatValue(site.ambientPressure / 1000, 6)} kPa`
-        : '',
+    altitude: typed(site.altitude, 'm'),
+    ambientPressure: typed(site.ambientPressure, 'Pa'),
     unitSystem: project?.unitSystem ?? defaultSystem,
     notes: project?.notes ?? '',
   };
 }
 
 /**
- * Form values → the API body (site in SI numbers). Sea level is "no site":
+ * Form values → the API body: the site as typed ("5280 ft"; the API checks it
+ * with the engine's site schema and keeps the text). Sea level is "no site":
  * left out on create, `null` on edit (the API's way to clear it).
  */
 export function projectInput(values: ProjectFormValues): ProjectInput {
-  let site: Site | null = null;
-  if (values.siteBasis === 'altitude')
-    site = { altitude: parseQuantity(values.altitude, { dimension: 'length' }).si };
-  if (values.siteBasis === 'ambient')
-    site = { ambientPressure: parseQuantity(values.ambientPressure, { dimension: 'pressure' }).si };
+  let site: SiteAsTyped | null = null;
+  if (values.siteBasis === 'altitude') site = { altitude: values.altitude.trim() };
+  if (values.siteBasis === 'ambient') site = { ambientPressure: values.ambientPressure.trim() };
   return {
     number: values.number.trim(),
     name: values.name.trim(),

@@ -1,41 +1,53 @@
-import type { CaseReport, Report } from '@hoopline/calc';
+import type { Report } from '@hoopline/calc';
 import { useDeferredValue, useMemo, type ReactNode } from 'react';
 import type { UnitSystem } from '../../api/types';
 import { VerdictBadge } from '../../components/badges';
 import { ScreeningCaution } from '../../components/screening-caution';
 import { UtilisationBar } from '../../components/utilisation-bar';
-import { percent, show } from '../../lib/units';
+import { presentReport, type PresentedReport, type PresentedWarning } from '@hoopline/present';
 import { BucklingModeShape } from './buckling-mode';
 import { ComponentSketch, lobeCount } from './sketches';
 import { sweepForPlot } from './sweep';
 import { SweepPlot } from './sweep-plot';
 import { TrailTable } from './trail-table';
 
-const DIRECTION: Record<CaseReport['loadCase']['direction'], string> = {
-  'external-over': 'outside higher',
-  'internal-over': 'inside higher',
-  balanced: 'balanced',
+const SEVERITY_CLASS: Record<PresentedWarning['severityCode'], string> = {
+  'outside-validity': 'border-warn bg-warn-soft',
+  caution: 'border-line-strong bg-sunken',
+  info: 'border-line bg-panel',
 };
 
-const SEVERITY: Record<string, { label: string; className: string }> = {
-  'outside-validity': { label: 'Outside validity', className: 'border-warn bg-warn-soft' },
-  caution: { label: 'Caution', className: 'border-line-strong bg-sunken' },
-  info: { label: 'Note', className: 'border-line bg-panel' },
-};
+/**
+ * The report as @hoopline/present shows it: every number and word here comes
+ * from presentReport, the same one the PDF sheet prints, so screen and sheet
+ * cannot disagree.
+ */
+export function usePresented(report: Report, system: UnitSystem): PresentedReport {
+  return useMemo(() => presentReport(report, system), [report, system]);
+}
 
-export function ReportSummary({ report, source }: { report: Report; source?: ReactNode }) {
-  const g = report.governing;
+export function ReportSummary({
+  report,
+  source,
+  system = 'si',
+}: {
+  report: Report;
+  source?: ReactNode;
+  system?: UnitSystem;
+}) {
+  const shown = usePresented(report, system);
+  const g = shown.governing;
   return (
     <div className="flex flex-col gap-1.5">
       <div className="flex flex-wrap items-center gap-2">
         <VerdictBadge verdict={report.verdict} size="lg" />
-        <span className="text-sm font-medium">{report.title}</span>
+        <span className="text-sm font-medium">{shown.title}</span>
       </div>
       <p className="text-sm">
         {g ? (
           <>
             Governing: <strong>{g.checkLabel}</strong> in load case <strong>{g.loadCase}</strong> at{' '}
-            <strong className="num">{percent(g.utilisation)}</strong>.
+            <strong className="num">{g.utilisation}</strong>.
           </>
         ) : (
           'No pass/fail checks for this component: the numbers below are for information.'
@@ -44,38 +56,30 @@ export function ReportSummary({ report, source }: { report: Report; source?: Rea
       <p className="text-xs text-muted">
         {source}
         {source ? ' · ' : ''}
-        {report.engine.name} {report.engine.version} · ambient{' '}
-        {show(report.ambient.pressure, 'Pa', 'si')}
-        {report.ambient.basis === 'altitude' && report.ambient.altitude !== undefined
-          ? ` (standard atmosphere at ${show(report.ambient.altitude, 'm', 'si')})`
-          : report.ambient.basis === 'default'
-            ? ' (sea level)'
-            : ' (given)'}
+        {report.engine.name} {report.engine.version} · ambient {shown.ambient}
       </p>
     </div>
   );
 }
 
 export function WarningsList({ report }: { report: Report }) {
-  if (report.warnings.length === 0) return null;
+  const shown = usePresented(report, 'si');
+  if (shown.warnings.length === 0) return null;
   return (
     <section aria-labelledby="warnings-title" className="flex flex-col gap-1.5">
       <h3 id="warnings-title" className="text-sm font-semibold">
         Validity warnings
       </h3>
       <ul className="flex flex-col gap-1.5">
-        {report.warnings.map((w, i) => {
-          const s = SEVERITY[w.severity] ?? SEVERITY['info']!;
-          return (
-            <li
-              key={`${w.code}-${i}`}
-              className={`rounded border px-2.5 py-1.5 text-sm ${s.className}`}
-            >
-              <span className="font-semibold">{s.label}</span>
-              {w.loadCase ? <span className="text-muted"> ({w.loadCase})</span> : null}: {w.message}
-            </li>
-          );
-        })}
+        {shown.warnings.map((w, i) => (
+          <li
+            key={`${w.code}-${i}`}
+            className={`rounded border px-2.5 py-1.5 text-sm ${SEVERITY_CLASS[w.severityCode]}`}
+          >
+            <span className="font-semibold">{w.severity}</span>
+            {w.loadCase ? <span className="text-muted"> ({w.loadCase})</span> : null}: {w.message}
+          </li>
+        ))}
       </ul>
     </section>
   );
@@ -110,97 +114,92 @@ export function CautionsList({ report }: { report: Report }) {
 }
 
 export function ChecksByCase({ report, system }: { report: Report; system: UnitSystem }) {
+  const shown = usePresented(report, system);
   return (
     <section aria-labelledby="checks-title" className="flex flex-col gap-3">
       <h3 id="checks-title" className="text-sm font-semibold">
         Checks by load case
       </h3>
-      {report.cases.map((c, index) => {
-        const governing = report.governing?.caseIndex === index;
-        return (
-          <article
-            key={`${c.loadCase.name}-${index}`}
-            aria-label={`Load case ${c.loadCase.name}`}
-            className={`rounded-md border bg-panel ${governing ? 'border-accent' : 'border-line'}`}
-          >
-            <header className="flex flex-wrap items-baseline justify-between gap-2 border-b border-line px-3 py-1.5">
-              <h4 className="text-sm font-semibold">
-                {c.loadCase.name}
-                {governing ? (
-                  <span className="ml-2 rounded bg-accent px-1.5 py-px text-xs font-medium text-accent-ink">
-                    Governing
-                  </span>
-                ) : null}
-              </h4>
-              <span className="num text-xs text-muted">
-                Δp {show(Math.abs(c.loadCase.differential), 'Pa', system)},{' '}
-                {DIRECTION[c.loadCase.direction]}
-                {c.loadCase.factor !== 1 ? ` (× ${c.loadCase.factor})` : ''}
-              </span>
-            </header>
-            <p className="px-3 pt-1 text-xs text-muted">{c.loadCase.description}</p>
-            {c.checks.length > 0 ? (
-              <table className="mt-1 w-full text-sm">
-                <caption className="sr-only">Checks for {c.loadCase.name}</caption>
-                <thead>
-                  <tr className="text-left text-xs text-muted">
-                    <th scope="col" className="px-3 py-1 font-medium">
-                      Check
+      {shown.cases.map((c, index) => (
+        <article
+          key={`${c.name}-${index}`}
+          aria-label={`Load case ${c.name}`}
+          className={`rounded-md border bg-panel ${c.governing ? 'border-accent' : 'border-line'}`}
+        >
+          <header className="flex flex-wrap items-baseline justify-between gap-2 border-b border-line px-3 py-1.5">
+            <h4 className="text-sm font-semibold">
+              {c.name}
+              {c.governing ? (
+                <span className="ml-2 rounded bg-accent px-1.5 py-px text-xs font-medium text-accent-ink">
+                  Governing
+                </span>
+              ) : null}
+            </h4>
+            <span className="num text-xs text-muted">
+              Δp {c.differential}, {c.direction}
+              {c.factor !== null ? ` (× ${c.factor})` : ''}
+            </span>
+          </header>
+          <p className="px-3 pt-1 text-xs text-muted">
+            Inside {c.inside} (abs), outside {c.outside} (abs): {c.description}
+          </p>
+          {c.checks.length > 0 ? (
+            <table className="mt-1 w-full text-sm">
+              <caption className="sr-only">Checks for {c.name}</caption>
+              <thead>
+                <tr className="text-left text-xs text-muted">
+                  <th scope="col" className="px-3 py-1 font-medium">
+                    Check
+                  </th>
+                  <th scope="col" className="px-3 py-1 text-right font-medium">
+                    Demand
+                  </th>
+                  <th scope="col" className="px-3 py-1 text-right font-medium">
+                    Capacity
+                  </th>
+                  <th scope="col" className="px-3 py-1 font-medium">
+                    Utilisation
+                  </th>
+                </tr>
+              </thead>
+              <tbody>
+                {c.checks.map((k) => (
+                  <tr
+                    key={k.id}
+                    className={`border-t border-line ${k.governing ? 'bg-accent-soft/50' : ''}`}
+                  >
+                    <th scope="row" className="px-3 py-1.5 text-left font-normal">
+                      {k.label}
+                      <span className="block font-mono text-xs text-muted">{k.basis}</span>
                     </th>
-                    <th scope="col" className="px-3 py-1 text-right font-medium">
-                      Demand
-                    </th>
-                    <th scope="col" className="px-3 py-1 text-right font-medium">
-                      Capacity
-                    </th>
-                    <th scope="col" className="px-3 py-1 font-medium">
-                      Utilisation
-                    </th>
+                    <td className="num px-3 py-1.5 text-right whitespace-nowrap">{k.demand}</td>
+                    <td className="num px-3 py-1.5 text-right whitespace-nowrap">{k.capacity}</td>
+                    <td className="px-3 py-1.5">
+                      <UtilisationBar
+                        utilisation={k.utilisationRatio}
+                        pass={k.pass}
+                        label={`${k.label}, ${c.name}`}
+                      />
+                    </td>
                   </tr>
-                </thead>
-                <tbody>
-                  {c.checks.map((k) => (
-                    <tr
-                      key={k.id}
-                      className={`border-t border-line ${c.governing?.checkId === k.id ? 'bg-accent-soft/50' : ''}`}
-                    >
-                      <th scope="row" className="px-3 py-1.5 text-left font-normal">
-                        {k.label}
-                        <span className="block font-mono text-xs text-muted">{k.basis}</span>
-                      </th>
-                      <td className="num px-3 py-1.5 text-right whitespace-nowrap">
-                        {show(k.demand, k.unit, system)}
-                      </td>
-                      <td className="num px-3 py-1.5 text-right whitespace-nowrap">
-                        {show(k.capacity, k.unit, system)}
-                      </td>
-                      <td className="px-3 py-1.5">
-                        <UtilisationBar
-                          utilisation={k.utilisation}
-                          pass={k.pass}
-                          label={`${k.label}, ${c.loadCase.name}`}
-                        />
-                      </td>
-                    </tr>
-                  ))}
-                </tbody>
-              </table>
-            ) : (
-              <p className="px-3 py-1.5 text-xs text-muted">No checks in this load case.</p>
-            )}
-            {c.outputs.length > 0 ? (
-              <dl className="grid grid-cols-[1fr_auto] gap-x-4 gap-y-0.5 border-t border-line px-3 py-1.5 text-xs sm:grid-cols-[1fr_auto_1fr_auto]">
-                {c.outputs.map((o) => (
-                  <div key={o.id} className="contents">
-                    <dt className="text-muted">{o.label}</dt>
-                    <dd className="num text-right font-medium">{show(o.value, o.unit, system)}</dd>
-                  </div>
                 ))}
-              </dl>
-            ) : null}
-          </article>
-        );
-      })}
+              </tbody>
+            </table>
+          ) : (
+            <p className="px-3 py-1.5 text-xs text-muted">No checks in this load case.</p>
+          )}
+          {c.outputs.length > 0 ? (
+            <dl className="grid grid-cols-[1fr_auto] gap-x-4 gap-y-0.5 border-t border-line px-3 py-1.5 text-xs sm:grid-cols-[1fr_auto_1fr_auto]">
+              {c.outputs.map((o) => (
+                <div key={o.id} className="contents">
+                  <dt className="text-muted">{o.label}</dt>
+                  <dd className="num text-right font-medium">{o.value}</dd>
+                </div>
+              ))}
+            </dl>
+          ) : null}
+        </article>
+      ))}
     </section>
   );
 }
@@ -266,7 +265,7 @@ export function ReportView({
 }) {
   return (
     <div className="flex flex-col gap-4">
-      <ReportSummary report={report} source={source} />
+      <ReportSummary report={report} source={source} system={system} />
       <CautionsList report={report} />
       <WarningsList report={report} />
       <div className="grid gap-4 xl:grid-cols-[minmax(0,1fr)_minmax(0,480px)]">

@@ -1,7 +1,11 @@
 import { findUnit, fromSi } from '@hoopline/calc';
 import { useId } from 'react';
 import type { UnitSystem } from '../../api/types';
-import { formatValue, percent, prettyUnit } from '../../lib/units';
+import {
+  formatPercent as percent,
+  formatSignificant,
+  printed as prettyUnit,
+} from '@hoopline/present';
 import { linearScale, niceCeil, niceTicks } from './chart-scale';
 import type { PlotSweep } from './sweep';
 
@@ -49,7 +53,7 @@ export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSys
   const yTicks = niceTicks(0, yTop, 5);
   const current = sweep.current;
   const min = sweep.minimumPassing;
-  const lenText = (m: number) => `${formatValue(toLen(m))} ${prettyUnit(lengthUnit)}`;
+  const lenText = (m: number) => `${formatSignificant(toLen(m))} ${prettyUnit(lengthUnit)}`;
 
   const summary =
     `Current thickness ${lenText(current.thickness)}` +
@@ -118,7 +122,7 @@ export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSys
               textAnchor="middle"
               className="fill-muted text-[10px]"
             >
-              {formatValue(t, 3)}
+              {formatSignificant(t, { significant: 3 })}
             </text>
           </g>
         ))}

@@ -1,61 +1,53 @@
-import { ScrollArea } from '../../components/scroll-area';
-import type { Report, Step } from '@hoopline/calc';
+import type { Report } from '@hoopline/calc';
+import type { PresentedStep } from '@hoopline/present';
 import type { UnitSystem } from '../../api/types';
-import { dimensionOfReportUnit, formatValue, toDisplay } from '../../lib/units';
+import { ScrollArea } from '../../components/scroll-area';
+import { usePresented } from './report-view';
 
-function StepRows({
-  steps,
-  start,
-  system,
-}: {
-  steps: readonly Step[];
-  start: number;
-  system: UnitSystem;
-}) {
+function StepRows({ steps }: { steps: readonly PresentedStep[] }) {
   return (
     <>
-      {steps.map((step, i) => {
-        const display =
-          step.value !== null && dimensionOfReportUnit(step.unit)
-            ? toDisplay(step.value, step.unit, system)
-            : null;
-        return (
-          <tr key={`${step.id}-${i}`} className="border-b border-line align-top last:border-b-0">
-            <td className="num px-2 py-1.5 text-right text-xs text-muted">{start + i}</td>
-            <th scope="row" className="px-2 py-1.5 text-left font-normal">
-              {step.label}
-            </th>
-            <td className="px-2 py-1.5 font-mono text-xs break-words">{step.expression}</td>
-            <td className="px-2 py-1.5 font-mono text-xs break-words">{step.substituted}</td>
-            <td className="num px-2 py-1.5 text-right font-mono text-xs whitespace-nowrap">
-              {step.value === null ? '–' : formatValue(step.value, 6)}
-            </td>
-            <td className="px-2 py-1.5 font-mono text-xs">
-              {step.value === null ? '' : step.unit === '1' ? '–' : step.unit}
-            </td>
-            <td className="num px-2 py-1.5 text-right text-xs whitespace-nowrap text-muted">
-              {display && display.unit !== step.unit ? display.text : ''}
-            </td>
-            <td className="px-2 py-1.5 text-xs text-muted">{step.source}</td>
-          </tr>
-        );
-      })}
+      {steps.map((step) => (
+        <tr key={step.number} className="border-b border-line align-top last:border-b-0">
+          <td className="num px-2 py-1.5 text-right text-xs text-muted">{step.number}</td>
+          <th scope="row" className="px-2 py-1.5 text-left font-normal">
+            {step.label}
+          </th>
+          <td className="px-2 py-1.5 font-mono text-xs break-words">{step.expression}</td>
+          <td className="px-2 py-1.5 font-mono text-xs break-words">{step.substituted}</td>
+          <td className="num px-2 py-1.5 text-right font-mono text-xs whitespace-nowrap">
+            {step.value}
+          </td>
+          <td className="px-2 py-1.5 font-mono text-xs">{step.unit}</td>
+          <td className="num px-2 py-1.5 text-right text-xs whitespace-nowrap text-muted">
+            {step.shownAs}
+          </td>
+          <td className="px-2 py-1.5 text-xs text-muted">{step.source}</td>
+        </tr>
+      ))}
     </>
+  );
+}
+
+function GroupRow({ title }: { title: string }) {
+  return (
+    <tr className="border-y border-line bg-sunken/50">
+      <th colSpan={8} scope="rowgroup" className="px-2 py-1 text-left text-xs font-semibold">
+        {title}
+      </th>
+    </tr>
   );
 }
 
 /**
  * The full trail the checker signs: every step with its formula, the values
  * put in, the result (SI, as the engine wrote it, and in display units) and
- * its source. Numbered continuously, so a comment can say "step 14".
+ * its source. Numbered continuously as the sheet numbers it (numberedSteps),
+ * so a comment can say "step 14" and mean the same line on paper.
  */
 export function TrailTable({ report, system }: { report: Report; system: UnitSystem }) {
-  const common = 1;
-  const starts = report.cases.reduce<number[]>((acc, _c, i) => {
-    const previous =
-      i === 0 ? common + report.steps.length : acc[i - 1]! + report.cases[i - 1]!.steps.length;
-    return [...acc, previous];
-  }, []);
+  const shown = usePresented(report, system);
+  const common = shown.steps.filter((s) => s.caseIndex === null);
   return (
     <ScrollArea label="Calculation trail">
       <table className="w-full min-w-[960px] border-collapse text-sm">
@@ -89,19 +81,13 @@ export function TrailTable({ report, system }: { report: Report; system: UnitSys
           </tr>
         </thead>
         <tbody>
-          <tr className="border-b border-line bg-sunken/50">
-            <th colSpan={8} scope="rowgroup" className="px-2 py-1 text-left text-xs font-semibold">
-              Common to every load case
-            </th>
-          </tr>
-          <StepRows steps={report.steps} start={common} system={system} />
-          {report.cases.map((c, i) => (
+          {common.length > 0 ? <GroupRow title="Common to every load case" /> : null}
+          <StepRows steps={common} />
+          {shown.cases.map((c, i) => (
             <CaseRows
-              key={`${c.loadCase.name}-${i}`}
-              name={c.loadCase.name}
-              steps={c.steps}
-              start={starts[i] ?? 0}
-              system={system}
+              key={`${c.name}-${i}`}
+              title={`Load case ${i + 1}: ${c.name}`}
+              steps={shown.steps.filter((s) => s.caseIndex === i)}
             />
           ))}
         </tbody>
@@ -110,25 +96,11 @@ export function TrailTable({ report, system }: { report: Report; system: UnitSys
   );
 }
 
-function CaseRows({
-  name,
-  steps,
-  start,
-  system,
-}: {
-  name: string;
-  steps: readonly Step[];
-  start: number;
-  system: UnitSystem;
-}) {
+function CaseRows({ title, steps }: { title: string; steps: readonly PresentedStep[] }) {
   return (
     <>
-      <tr className="border-y border-line bg-sunken/50">
-        <th colSpan={8} scope="rowgroup" className="px-2 py-1 text-left text-xs font-semibold">
-          Load case: {name}
-        </th>
-      </tr>
-      <StepRows steps={steps} start={start} system={system} />
+      <GroupRow title={title} />
+      <StepRows steps={steps} />
     </>
   );
 }

@@ -2,7 +2,7 @@ import { render, screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import type { RevisionDiff, RevisionSummary } from '../../api/types';
 import { DiffView, diffValue } from './diff-view';
-import { flattenInputs, labelForPath } from './flatten';
+import { inputLabel } from '@hoopline/present';
 
 const summary = (number: number, verdict: RevisionSummary['verdict']): RevisionSummary => ({
   id: `r${number}`,
@@ -34,9 +34,16 @@ const diff: RevisionDiff = {
 
 describe('DiffView', () => {
   it('shows each changed input before and after, side by side', () => {
-    render(<DiffView from={summary(1, 'fail')} to={summary(2, 'pass')} diff={diff} />);
+    render(
+      <DiffView
+        from={summary(1, 'fail')}
+        to={summary(2, 'pass')}
+        diff={diff}
+        kind="circular-plate"
+      />,
+    );
     const inputs = screen.getByRole('table', { name: /Changed inputs/ });
-    const row = within(inputs).getByRole('row', { name: /Thickness/ });
+    const row = within(inputs).getByRole('row', { name: /Plate thickness/ });
     const cells = within(row).getAllByRole('cell');
     expect(cells[0]).toHaveTextContent('before: 8 mm');
     expect(cells[1]).toHaveTextContent('after: 12 mm');
@@ -44,7 +51,14 @@ describe('DiffView', () => {
   });
 
   it('shows changed results with their labels and flags a changed verdict', () => {
-    render(<DiffView from={summary(1, 'fail')} to={summary(2, 'pass')} diff={diff} />);
+    render(
+      <DiffView
+        from={summary(1, 'fail')}
+        to={summary(2, 'pass')}
+        diff={diff}
+        kind="circular-plate"
+      />,
+    );
     const results = screen.getByRole('table', { name: /Changed results/ });
     expect(
       within(results).getByRole('row', { name: /Stress utilisation, full vacuum/ }),
@@ -61,6 +75,7 @@ describe('DiffView', () => {
         from={summary(1, 'pass')}
         to={summary(2, 'pass')}
         diff={{ ...diff, inputs: [], results: [], verdictChanged: false }}
+        kind="circular-plate"
       />,
     );
     expect(screen.getByText('No input changed.')).toBeInTheDocument();
@@ -71,8 +86,10 @@ describe('DiffView', () => {
 
 describe('input labels', () => {
   it('names load cases by number and fields in words', () => {
-    expect(labelForPath('loadCases.1.internal')).toBe('Load case 2 · inside');
-    expect(labelForPath('outline.sealDiameter')).toBe('Seal outline · seal diameter');
+    expect(inputLabel('flat-area-load', 'loadCases.1.internal')).toBe(
+      'Load case 2 · Pressure inside',
+    );
+    expect(inputLabel('flat-area-load', 'outline.sealDiameter')).toBe('Seal-line diameter');
     expect(diffValue({ a: 1 })).toBe('{"a":1}');
     expect(diffValue(0.123456789)).toBe('0.123457');
     expect(
@@ -94,10 +111,14 @@ describe('input labels', () => {
       ),
     ).toBe('1.568 ksi');
   });
-  it('flattens inputs to rows', () => {
-    expect(flattenInputs({ thickness: '12 mm', loadCases: [{ name: 'FV' }] })).toEqual([
-      { path: 'thickness', label: 'Thickness', value: '12 mm' },
-      { path: 'loadCases.0.name', label: 'Load case 1 · Name', value: 'FV' },
-    ]);
+  it('labels changed inputs in the method’s own words (not ids such as ringSpacingFor)', () => {
+    expect(inputLabel('circular-plate', 'thickness')).toBe('Plate thickness');
+    expect(inputLabel('cylindrical-shell', 'diameter')).toBe('Shell diameter');
+    expect(inputLabel('cylindrical-shell', 'ringSpacingFor')).toBe(
+      'Thinner wall to find a stiffening-ring spacing for',
+    );
+    expect(inputLabel('cylindrical-shell', 'loadCases.1.internal')).toBe(
+      'Load case 2 · Pressure inside',
+    );
   });
 });

@@ -2,10 +2,15 @@ import { ScrollArea } from '../../components/scroll-area';
 import type { Change, RevisionDiff, RevisionSummary } from '../../api/types';
 import { StatusBadge, VerdictBadge } from '../../components/badges';
 import { formatDateTime } from '../../lib/dates';
-import { dimensionOfReportUnit, formatValue, percent, toDisplay } from '../../lib/units';
+import {
+  dimensionOfReportUnit,
+  formatPercent as percent,
+  formatSignificant,
+  inputLabel,
+  show,
+} from '@hoopline/present';
 import { useUnitSystem } from '../../lib/unit-system';
 import type { UnitSystem } from '../../api/types';
-import { labelForPath } from './flatten';
 
 /**
  * A value in a diff cell: a utilisation as a percentage, a result whose label
@@ -21,15 +26,23 @@ export function diffValue(
   if (typeof value === 'number') {
     if (change && /(^|\.)utilisation$/.test(change.path)) return percent(value);
     const unit = /\(([^()]+)\)$/.exec(change?.label ?? '')?.[1];
-    if (unit && dimensionOfReportUnit(unit)) return toDisplay(value, unit, system).text;
-    return formatValue(value, 6);
+    if (unit && dimensionOfReportUnit(unit)) return show(value, unit, system);
+    return formatSignificant(value, { significant: 6 });
   }
   if (typeof value === 'string') return value;
   if (typeof value === 'boolean') return value ? 'yes' : 'no';
   return JSON.stringify(value);
 }
 
-function ChangeRows({ changes, empty }: { changes: readonly Change[]; empty: string }) {
+function ChangeRows({
+  changes,
+  empty,
+  kind,
+}: {
+  changes: readonly Change[];
+  empty: string;
+  kind: string;
+}) {
   const system = useUnitSystem();
   if (changes.length === 0) {
     return (
@@ -45,7 +58,7 @@ function ChangeRows({ changes, empty }: { changes: readonly Change[]; empty: str
       {changes.map((change) => (
         <tr key={change.path} className="border-b border-line last:border-b-0" data-changed="true">
           <th scope="row" className="border-l-4 border-warn px-3 py-1.5 text-left font-normal">
-            {change.label ?? labelForPath(change.path)}
+            {change.label ?? inputLabel(kind, change.path)}
             <span className="block font-mono text-xs text-muted">{change.path}</span>
           </th>
           <td className="num bg-fail-soft/60 px-3 py-1.5 font-mono text-xs">
@@ -72,10 +85,13 @@ export function DiffView({
   from,
   to,
   diff,
+  kind,
 }: {
   from: RevisionSummary;
   to: RevisionSummary;
   diff: RevisionDiff;
+  /** The component's kind, whose vocabulary labels the inputs. */
+  kind: string;
 }) {
   const header = (
     <thead>
@@ -152,7 +168,7 @@ export function DiffView({
           </caption>
           {header}
           <tbody>
-            <ChangeRows changes={diff.inputs} empty="No input changed." />
+            <ChangeRows changes={diff.inputs} empty="No input changed." kind={kind} />
           </tbody>
         </table>
       </ScrollArea>
@@ -164,7 +180,7 @@ export function DiffView({
           </caption>
           {header}
           <tbody>
-            <ChangeRows changes={diff.results} empty="No result changed." />
+            <ChangeRows changes={diff.results} empty="No result changed." kind={kind} />
           </tbody>
         </table>
       </ScrollArea>

@@ -10,11 +10,7 @@ import {
   WarningsList,
 } from '../results/report-view';
 import { TrailTable } from '../results/trail-table';
-import { findMaterial, type ComponentKind } from '@hoopline/calc';
-import type { QuantityKind } from '../../components/unit-input';
-import { quantityText } from '../editor/fields';
-import { KIND_FORMS } from '../editor/kind-forms';
-import { flattenInputs, formatInputValue } from './flatten';
+import { presentInputs, type UnitSystem } from '@hoopline/present';
 
 export function RevisionMeta({ revision }: { revision: Revision }) {
   return (
@@ -65,53 +61,35 @@ export function SignOffHistory({ revision }: { revision: Revision }) {
 }
 
 /**
- * The inputs as the designer entered them, in the order of the kind's form;
- * numbers stored in SI (the site, or inputs sent as numbers) with their unit.
+ * The inputs as the designer entered them, with each quantity in the
+ * reader's units: the rows of presentInputs, the ones the sheet prints.
  */
-export function InputsTable({ inputs }: { inputs: unknown }) {
-  const kind = (inputs as { kind?: ComponentKind } | null)?.kind;
-  const form = kind ? KIND_FORMS[kind] : undefined;
-  const order: string[] = ['kind', 'name'];
-  const kinds = new Map<string, QuantityKind>([
-    ['site.altitude', 'length'],
-    ['site.ambientPressure', 'pressure'],
-  ]);
-  for (const section of form?.sections ?? []) {
-    for (const field of section.fields) {
-      if (field.type === 'load-cases') order.push('loadCases');
-      else {
-        order.push(field.path);
-        if (field.type === 'quantity') kinds.set(field.path, field.kind);
-      }
-    }
-  }
-  const rank = (path: string) => {
-    const i = order.findIndex((p) => path === p || path.startsWith(`${p}.`));
-    return i < 0 ? order.length : i;
-  };
-  const rows = flattenInputs(inputs, '', (path, value) => {
-    const q =
-      kinds.get(path) ??
-      (/^loadCases\.\d+\.(internal|external)$/.test(path) ? 'load-pressure' : undefined);
-    if (q && typeof value === 'number') return quantityText(value, q);
-    // A built-in material by its name as well as its id.
-    const material =
-      path === 'material' && typeof value === 'string' ? findMaterial(value) : undefined;
-    return material ? `${material.name} (${value as string})` : formatInputValue(value);
-  })
-    .map((row, index) => ({ row, index }))
-    .sort((a, b) => rank(a.row.path) - rank(b.row.path) || a.index - b.index)
-    .map(({ row }) => row);
+export function InputsTable({ inputs, system }: { inputs: unknown; system: UnitSystem }) {
+  const rows = presentInputs(inputs, system);
   return (
     <table className="w-full text-sm">
       <caption className="sr-only">Inputs as entered</caption>
+      <thead>
+        <tr className="text-left text-xs text-muted">
+          <th scope="col" className="py-1 pr-3 font-medium">
+            Field
+          </th>
+          <th scope="col" className="py-1 pr-3 font-medium">
+            As entered
+          </th>
+          <th scope="col" className="py-1 font-medium">
+            {system === 'us' ? 'US customary' : 'SI'}
+          </th>
+        </tr>
+      </thead>
       <tbody>
         {rows.map((row) => (
-          <tr key={row.path} className="border-b border-line last:border-b-0">
+          <tr key={row.path} className="border-b border-line align-top last:border-b-0">
             <th scope="row" className="py-1 pr-3 text-left font-normal text-muted">
               {row.label}
             </th>
-            <td className="num py-1 font-mono text-xs">{row.value}</td>
+            <td className="num py-1 pr-3 font-mono text-xs">{row.asTyped}</td>
+            <td className="num py-1 font-mono text-xs">{row.inSystem}</td>
           </tr>
         ))}
       </tbody>
@@ -134,7 +112,7 @@ export function RevisionBody({ revision, aside }: { revision: Revision; aside?: 
             <SignOffHistory revision={revision} />
           </Panel>
           <Panel title="Inputs as entered" id="revision-inputs">
-            <InputsTable inputs={revision.inputs} />
+            <InputsTable inputs={revision.inputs} system={system} />
           </Panel>
         </div>
         <section aria-labelledby="results-title" className="flex min-w-0 flex-col gap-4">

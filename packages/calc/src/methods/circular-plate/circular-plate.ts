@@ -14,6 +14,7 @@ import {
   materialCautions,
   type Material,
 } from '../../materials/materials';
+import { circularPlateVocabulary } from './vocabulary';
 
 /**
  * Circular flat plate under uniform pressure over its whole area, edge simply
@@ -208,6 +209,7 @@ export const circularPlate = defineMethod({
   description:
     'Circular flat plate (door, cover, blind flange, window) under uniform pressure, edge clamped or simply supported: maximum stress and where, centre deflection, and the thickness needed for an allowable stress and a deflection limit (Roark, Table 11.2).',
   schema: circularPlateSchema,
+  vocabulary: circularPlateVocabulary,
   compute(input, context) {
     const material = resolveMaterial(input.material);
     const common = new Trail();

@@ -32,6 +32,7 @@ import {
   type ExternalPressureBasis,
   type Interaction,
 } from './shell-formulas';
+import { cylindricalShellVocabulary } from './vocabulary';
 
 /**
  * Cylindrical shell under a pressure difference, every load case screened:
@@ -826,6 +827,7 @@ export const cylindricalShell = defineMethod({
   description:
     'Cylindrical shell (vessel, chamber, drum) for every load case: inside higher, thin-wall and Lamé stresses and the ASME VIII-1 UG-27 thickness and MAWP; outside higher (vacuum), elastic buckling (Bresse, von Mises with its lobe number, Windenburg–Trilling), plastic collapse, their interaction with a knock-down and a design factor, the critical length and the stiffening-ring spacing for a target thickness. The length is the unsupported length between rings or heads; between dished heads add about 1/3 of each head depth (ASME UG-28, from memory).',
   schema: cylindricalShellSchema,
+  vocabulary: cylindricalShellVocabulary,
   compute(input, context) {
     const material = resolveMaterial(input.material);
     const common = new Trail();

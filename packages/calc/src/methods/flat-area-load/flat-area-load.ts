@@ -5,6 +5,7 @@ import { componentShape, defineMethod } from '../../core/method';
 import type { ResolvedLoadCase } from '../../core/report';
 import { Trail } from '../../core/trail';
 import { STANDARD_GRAVITY } from '../../units/units';
+import { flatAreaLoadVocabulary } from './vocabulary';
 
 /**
  * Differential-pressure load on a flat closure (door, cover, window) and how
@@ -183,6 +184,7 @@ export const flatAreaLoad = defineMethod({
   description:
     'Resultant force of a pressure difference on a flat closure over its seal-line area, the line load on the seal and frame, and the share each latch or bolt carries, with the direction of the load.',
   schema: flatAreaLoadSchema,
+  vocabulary: flatAreaLoadVocabulary,
   compute(input, context) {
     const common = new Trail();
     let area: number;

@@ -19,6 +19,7 @@ import {
   saturationPressureIf97,
   BUCK_MAX_TEMPERATURE,
 } from '../../physics/water-vapour';
+import { pumpDownVocabulary } from './vocabulary';
 
 /**
  * Rough-vacuum pump-down of a chamber at a constant effective pumping speed,
@@ -413,6 +414,7 @@ export const pumpDown = defineMethod({
   description:
     'Time for a pump to bring a chamber from its start pressure to a target in the rough (viscous) range, with the line conductance, a constant gas load and the pump’s base pressure setting the ultimate pressure; optionally the vapour pressure of liquid water in the chamber.',
   schema: pumpDownSchema,
+  vocabulary: pumpDownVocabulary,
   singleCase(input, ambient): ResolvedLoadCase {
     const start = startPressureOf(input, ambient.pressure);
     const differential = input.targetPressure - ambient.pressure;

@@ -27,6 +27,7 @@ import {
   interpolateCoefficient,
   type CoefficientTable,
 } from './plate-coefficients';
+import { rectangularPlateVocabulary } from './vocabulary';
 
 /**
  * Rectangular flat plate under uniform pressure over its whole area, all
@@ -241,6 +242,7 @@ export const rectangularPlate = defineMethod({
   description:
     'Rectangular flat plate or panel (door, cover, box wall between stiffeners) under uniform pressure, all edges simply supported or all clamped: maximum stress and where, centre deflection, edge reaction, and the thickness needed for an allowable stress and a deflection limit (Roark, Table 11.4).',
   schema: rectangularPlateSchema,
+  vocabulary: rectangularPlateVocabulary,
   compute(input, context) {
     const material = resolveMaterial(input.material);
     const clamped = input.edge === 'clamped';

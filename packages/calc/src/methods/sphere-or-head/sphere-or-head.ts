@@ -13,6 +13,7 @@ import {
   materialCautions,
   type Material,
 } from '../../materials/materials';
+import { sphereOrHeadVocabulary } from './vocabulary';
 
 /**
  * Spheres and dished heads (hemispherical, 2:1 ellipsoidal, torispherical)
@@ -780,6 +781,7 @@ export const sphereOrHead = defineMethod({
   description:
     'Sphere, hemispherical, 2:1 ellipsoidal or torispherical head under internal pressure (ASME VIII-1 UG-27/UG-32 code-form thickness and MAWP, membrane stress) and external pressure (equivalent sphere, Zoelly buckling with a knock-down, plastic interaction and a design factor; UG-28(d) elastic allowable as a cross-check).',
   schema: sphereOrHeadSchema,
+  vocabulary: sphereOrHeadVocabulary,
   compute(input, context) {
     const material = resolveMaterial(input.material);
     const common = new Trail();

@@ -5,6 +5,7 @@ import { componentShape, defineMethod } from '../../core/method';
 import type { ResolvedLoadCase } from '../../core/report';
 import { Trail } from '../../core/trail';
 import { TNT_ENERGY_PER_KG } from '../../units/units';
+import { storedEnergyVocabulary } from './vocabulary';
 
 /**
  * Energy stored in a gas-filled or evacuated vessel (Hoopline method notes §h): the
@@ -305,6 +306,7 @@ export const storedEnergy = defineMethod({
   description:
     'Energy a gas-filled vessel releases on failure (Brode, isentropic, isothermal upper bound) or the atmosphere does on an evacuated vessel that implodes, in joules and kilograms of TNT, with the hazard caution.',
   schema: storedEnergySchema,
+  vocabulary: storedEnergyVocabulary,
   compute(input, context) {
     const common = new Trail();
     const v = common.step({

@@ -1,6 +1,6 @@
 import { useId, type ReactNode } from 'react';
 import type { UnitSystem } from '../../../api/types';
-import { show } from '../../../lib/units';
+import { show } from '@hoopline/present';
 import { Dimension, DimensionDefs } from './dimension';
 import { drawnThickness, fitToBox, pointsOnCircle, pointsOnRectangle } from './geometry';
 

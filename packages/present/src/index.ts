@@ -1,0 +1,51 @@
+/**
+ * @hoopline/present: how a report is shown. Pure functions over the engine's
+ * reports; the web app and the PDF sheet print every number and word through
+ * them, so the screen and the signed sheet cannot disagree.
+ */
+
+export {
+  FIXED_MAX,
+  FIXED_MIN,
+  NOT_A_NUMBER,
+  THIN_SPACE,
+  formatSignificant,
+  roundingHalfUnit,
+} from './numbers';
+export type { NumberStyle } from './numbers';
+export {
+  UNIT_SYSTEMS,
+  dimensionOfReportUnit,
+  displayUnit,
+  displayUnitSymbol,
+  printed,
+  unitBySymbol,
+} from './display-units';
+export type { DisplayDimension, DisplayUnit, UnitSystem } from './display-units';
+export { show, showQuantity } from './quantity';
+export type { QuantityStyle, ShownQuantity } from './quantity';
+export { formatPercent } from './percent';
+export { numberedSteps } from './steps';
+export type { NumberedStep } from './steps';
+export {
+  DIRECTION_WORDS,
+  REVISION_STATUSES,
+  SEVERITY_WORDS,
+  STATUS_WORDS,
+  VERDICT_WORDS,
+  checkResultWord,
+  kindName,
+  statusWords,
+} from './words';
+export type { RevisionStatus } from './words';
+export { TRAIL_SIGNIFICANT, ambientText, checkFigures, presentReport, stepFigures } from './report';
+export type {
+  PresentedCase,
+  PresentedCheck,
+  PresentedGoverning,
+  PresentedReport,
+  PresentedStep,
+  PresentedWarning,
+} from './report';
+export { inputLabel, presentInputs } from './inputs';
+export type { PresentedInput } from './inputs';

@@ -1,0 +1,202 @@
+import type { Check, Report } from '@hoopline/calc';
+import { dimensionOfReportUnit, type UnitSystem } from './display-units';
+import { formatSignificant } from './numbers';
+import { formatPercent } from './percent';
+import { show, showQuantity } from './quantity';
+import { numberedSteps } from './steps';
+import { DIRECTION_WORDS, SEVERITY_WORDS, VERDICT_WORDS, checkResultWord, kindName } from './words';
+
+/**
+ * Every visible number and word of a report, as screen and sheet print it.
+ * The web app's report view and the PDF sheet both lay this out; neither
+ * formats a number of its own, so they cannot disagree.
+ */
+export interface PresentedReport {
+  readonly title: string;
+  readonly kindName: string;
+  readonly verdict: {
+    readonly code: Report['verdict'];
+    readonly word: string;
+    readonly sentence: string;
+  };
+  /** "Governing: <check> in load case <case> at 85.2 %", or the no-checks sentence. */
+  readonly governing: PresentedGoverning | null;
+  /** "101.3 kPa (standard atmosphere at 340 m)". */
+  readonly ambient: string;
+  readonly cases: readonly PresentedCase[];
+  readonly steps: readonly PresentedStep[];
+  readonly warnings: readonly PresentedWarning[];
+  readonly cautions: readonly {
+    readonly code: string;
+    readonly title: string;
+    readonly text: string;
+  }[];
+}
+
+export interface PresentedGoverning {
+  readonly loadCase: string;
+  readonly checkLabel: string;
+  readonly utilisation: string;
+}
+
+export interface PresentedCase {
+  readonly name: string;
+  readonly governing: boolean;
+  /** Absolute pressures inside and outside, and the magnitude of the difference with its side. */
+  readonly inside: string;
+  readonly outside: string;
+  readonly differential: string;
+  readonly direction: string;
+  /** "1.3" where a load factor applies, else null. */
+  readonly factor: string | null;
+  readonly description: string;
+  readonly checks: readonly PresentedCheck[];
+  readonly outputs: readonly {
+    readonly id: string;
+    readonly label: string;
+    readonly value: string;
+  }[];
+}
+
+export interface PresentedCheck {
+  readonly id: string;
+  readonly label: string;
+  readonly basis: string;
+  /** Demand and capacity in one unit (the capacity's). */
+  readonly demand: string;
+  readonly capacity: string;
+  readonly utilisation: string;
+  /** demand/capacity as a number, for a bar drawn to it. */
+  readonly utilisationRatio: number;
+  readonly pass: boolean;
+  readonly result: string;
+  readonly governing: boolean;
+}
+
+export interface PresentedStep {
+  readonly number: number;
+  readonly caseIndex: number | null;
+  readonly id: string;
+  readonly label: string;
+  readonly expression: string;
+  readonly substituted: string;
+  /** The value in SI as the engine computed it, six significant figures; '–' for a step without one. */
+  readonly value: string;
+  /** Its SI unit ('' for a ratio or a step without a value). */
+  readonly unit: string;
+  /** The value in the reader's display unit where that differs from SI ("101.3 kPa"), else ''. */
+  readonly shownAs: string;
+  readonly source: string;
+}
+
+export interface PresentedWarning {
+  readonly code: string;
+  readonly severity: string;
+  readonly severityCode: 'info' | 'caution' | 'outside-validity';
+  readonly loadCase: string | null;
+  readonly message: string;
+}
+
+/** Significant figures of the trail's values: as many as the trail text writes. */
+export const TRAIL_SIGNIFICANT = 6;
+
+/** Demand and capacity of a check, in one unit chosen by the capacity. */
+export function checkFigures(
+  check: Pick<Check, 'demand' | 'capacity' | 'unit'>,
+  system: UnitSystem,
+) {
+  const scale = Math.max(Math.abs(check.capacity), Math.abs(check.demand));
+  return {
+    demand: show(check.demand, check.unit, system, { scale }),
+    capacity: show(check.capacity, check.unit, system, { scale }),
+  };
+}
+
+/** A step's value: SI text, unit, and the display-unit text where it differs. */
+export function stepFigures(
+  step: { readonly value: number | null; readonly unit: string },
+  system: UnitSystem,
+): { value: string; unit: string; shownAs: string } {
+  if (step.value === null) return { value: '–', unit: '', shownAs: '' };
+  const unit = step.unit === '1' ? '' : step.unit;
+  const value = formatSignificant(step.value, { significant: TRAIL_SIGNIFICANT });
+  const dimension = dimensionOfReportUnit(step.unit);
+  if (!dimension || dimension === 'dimensionless') return { value, unit, shownAs: '' };
+  const shown = showQuantity(step.value, step.unit, system);
+  return { value, unit, shownAs: shown.unit === step.unit ? '' : shown.text };
+}
+
+export function ambientText(report: Pick<Report, 'ambient'>, system: UnitSystem): string {
+  const a = report.ambient;
+  const pressure = show(a.pressure, 'Pa', system);
+  if (a.basis === 'altitude' && a.altitude !== undefined) {
+    return `${pressure} (ISO 2533 standard atmosphere at ${show(a.altitude, 'm', system)})`;
+  }
+  return `${pressure} (${a.basis === 'given' ? 'given' : 'standard atmosphere at sea level'})`;
+}
+
+/** The report, every number and word as it is shown, in the reader's unit system. */
+export function presentReport(report: Report, system: UnitSystem): PresentedReport {
+  const g = report.governing;
+  const verdict = VERDICT_WORDS[report.verdict];
+  return {
+    title: report.title,
+    kindName: kindName(report.kind),
+    verdict: { code: report.verdict, word: verdict.word, sentence: verdict.sentence },
+    governing: g
+      ? {
+          loadCase: g.loadCase,
+          checkLabel: g.checkLabel,
+          utilisation: formatPercent(g.utilisation),
+        }
+      : null,
+    ambient: ambientText(report, system),
+    cases: report.cases.map((c, index) => {
+      const lc = c.loadCase;
+      return {
+        name: lc.name,
+        governing: g?.caseIndex === index,
+        inside: show(lc.internal, 'Pa', system),
+        outside: show(lc.external, 'Pa', system),
+        differential: show(Math.abs(lc.differential), 'Pa', system),
+        direction: DIRECTION_WORDS[lc.direction],
+        factor: lc.factor !== 1 ? formatSignificant(lc.factor) : null,
+        description: lc.description,
+        checks: c.checks.map((check) => ({
+          id: check.id,
+          label: check.label,
+          basis: check.basis,
+          ...checkFigures(check, system),
+          utilisation: formatPercent(check.utilisation),
+          utilisationRatio: check.utilisation,
+          pass: check.pass,
+          result: checkResultWord(check.pass),
+          governing: g?.caseIndex === index && g.checkId === check.id,
+        })),
+        outputs: c.outputs.map((o) => ({
+          id: o.id,
+          label: o.label,
+          value: show(o.value, o.unit, system),
+        })),
+      };
+    }),
+    steps: numberedSteps(report).map(({ number, caseIndex, step }) => ({
+      number,
+      caseIndex,
+      id: step.id,
+      label: step.label,
+      expression: step.expression,
+      substituted: step.substituted,
+      ...stepFigures(step, system),
+      source: step.source,
+    })),
+    warnings: report.warnings.map((w) => ({
+      code: w.code,
+      severity: SEVERITY_WORDS[w.severity],
+      severityCode: w.severity,
+      loadCase: w.loadCase ?? null,
+      message: w.message,
+    })),
+    cautions: report.cautions.map((c) => ({ code: c.code, title: c.title, text: c.text })),
+  };
+}
