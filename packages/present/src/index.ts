@@ -49,3 +49,8 @@ export type {
 } from './report';
 export { inputLabel, presentInputs } from './inputs';
 export type { PresentedInput } from './inputs';
+export { sketchOf } from './sketches/component-sketch';
+export { TEXT_SIZE, textWidth } from './sketches/scene';
+export type { Role as SketchRole, Shape as SketchShape, Sketch } from './sketches/scene';
+export { headProfile } from './sketches/geometry';
+export type { HeadShape } from './sketches/geometry';

@@ -14,16 +14,13 @@ export function kindName(kind: string): string {
 export const VERDICT_WORDS: Readonly<
   Record<Verdict, { readonly word: string; readonly sentence: string }>
 > = {
-  pass: { word: 'Passes', sentence: 'passes every check' },
-  fail: { word: 'Fails', sentence: 'fails a check' },
+  pass: { word: 'Passes', sentence: 'PASSES every check' },
+  fail: { word: 'Fails', sentence: 'FAILS a check' },
   'outside-validity': {
     word: 'Outside validity',
-    sentence: 'is outside the validity range of a method: not a basis for a decision',
+    sentence: 'OUTSIDE the validity range of a method: not a basis for a decision',
   },
-  'no-checks': {
-    word: 'No checks',
-    sentence: 'computes quantities only, with no pass/fail criterion',
-  },
+  'no-checks': { word: 'No checks', sentence: 'computed quantities only, no pass/fail criterion' },
 };
 
 /** A check's result in a word. */

@@ -4,11 +4,13 @@ import {
   kindName,
   presentInputs,
   presentReport,
+  sketchOf,
   type PresentedReport,
   type PresentedStep,
 } from '@hoopline/present';
 import { FONT_FAMILY, MONO_FAMILY } from './fonts';
 import { STAMP_TEXT, type SheetData } from './sheet-data';
+import { SketchPdf } from './sketch-pdf';
 
 /**
  * The stamped-for-review sheet: a title block of our own, the verdict, load
@@ -79,8 +81,6 @@ const styles = StyleSheet.create({
   },
   cautionTitle: { fontWeight: 600, marginBottom: 2 },
   verdict: {
-    flexDirection: 'row',
-    justifyContent: 'space-between',
     padding: 6,
     marginBottom: 10,
     borderWidth: 1,
@@ -196,8 +196,8 @@ function VerdictBanner({ shown }: { shown: PresentedReport }) {
     shown.verdict.code === 'fail' ? FAIL : shown.verdict.code === 'pass' ? ACCENT : '#b45309';
   return (
     <View style={[styles.verdict, { borderColor: colour }]}>
-      <Text style={{ fontWeight: 600, color: colour }}>
-        Screening result: {shown.verdict.word.toUpperCase()}: {shown.verdict.sentence}
+      <Text style={{ fontWeight: 600, color: colour, marginBottom: 2 }}>
+        Screening result: {shown.verdict.sentence}
       </Text>
       <Text>
         {shown.governing
@@ -268,6 +268,21 @@ function Inputs({ data }: { data: SheetData }) {
           </View>
         ))}
       </View>
+    </View>
+  );
+}
+
+function SketchSection({ data }: { data: SheetData }) {
+  const sketch = sketchOf(data.revision.report, data.project.unitSystem);
+  if (!sketch) return null;
+  return (
+    <View wrap={false}>
+      <Text style={styles.h3}>Sketch</Text>
+      <SketchPdf sketch={sketch} width={300} />
+      <Text style={styles.small}>
+        {sketch.title}
+        {sketch.note ? ` ${sketch.note}` : ''}
+      </Text>
     </View>
   );
 }
@@ -540,6 +555,7 @@ export function SheetDocument({ data, qrDataUrl }: { data: SheetData; qrDataUrl:
 
           <LoadCases shown={shown} />
           <Inputs data={data} />
+          <SketchSection data={data} />
           <ChecksTable shown={shown} />
           <Trail shown={shown} />
           <Warnings shown={shown} />

@@ -4,7 +4,12 @@ import type { UnitSystem } from '../../api/types';
 import { VerdictBadge } from '../../components/badges';
 import { ScreeningCaution } from '../../components/screening-caution';
 import { UtilisationBar } from '../../components/utilisation-bar';
-import { presentReport, type PresentedReport, type PresentedWarning } from '@hoopline/present';
+import {
+  presentReport,
+  sketchOf,
+  type PresentedReport,
+  type PresentedWarning,
+} from '@hoopline/present';
 import { BucklingModeShape } from './buckling-mode';
 import { ComponentSketch, lobeCount } from './sketches';
 import { sweepForPlot } from './sweep';
@@ -223,14 +228,18 @@ export function ReportPictures({
     [deferredInput, report],
   );
   const lobes = lobeCount(report);
+  // No heading over nothing: stored energy and pump-down have no sketch.
+  const hasSketch = useMemo(() => sketchOf(report, system) !== null, [report, system]);
   return (
     <div className="flex flex-col gap-4">
-      <section aria-labelledby="sketch-title">
-        <h3 id="sketch-title" className="mb-1 text-sm font-semibold">
-          Sketch
-        </h3>
-        <ComponentSketch report={report} system={system} />
-      </section>
+      {hasSketch ? (
+        <section aria-labelledby="sketch-title">
+          <h3 id="sketch-title" className="mb-1 text-sm font-semibold">
+            Sketch
+          </h3>
+          <ComponentSketch report={report} system={system} />
+        </section>
+      ) : null}
       {lobes !== null ? (
         <section aria-labelledby="mode-title">
           <h3 id="mode-title" className="mb-1 text-sm font-semibold">

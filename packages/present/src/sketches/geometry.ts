@@ -75,3 +75,54 @@ export function pointsOnRectangle(
     return { x, y: y + h - d };
   });
 }
+
+export type HeadShape = 'hemispherical' | 'ellipsoidal' | 'torispherical' | 'sphere';
+
+/**
+ * Profile of a head: the half-section outline, from the crown to the
+ * tangent line, drawn from the head's own radii.
+ */
+export function headProfile(
+  shape: HeadShape,
+  diameter: number,
+  crownRadius?: number,
+  knuckleRadius?: number,
+): { x: number; y: number }[] {
+  const R = diameter / 2;
+  const points: { x: number; y: number }[] = [];
+  const steps = 48;
+  if (shape === 'hemispherical' || shape === 'sphere') {
+    for (let i = 0; i <= steps; i++) {
+      const a = (Math.PI * i) / steps;
+      points.push({ x: -R * Math.cos(a), y: R * Math.sin(a) });
+    }
+  } else if (shape === 'ellipsoidal') {
+    const h = R / 2; // 2:1 head: depth D/4
+    for (let i = 0; i <= steps; i++) {
+      const a = (Math.PI * i) / steps;
+      points.push({ x: -R * Math.cos(a), y: h * Math.sin(a) });
+    }
+  } else {
+    const L = crownRadius ?? diameter;
+    const r = knuckleRadius ?? 0.06 * diameter;
+    // Knuckle centre at (R − r, 0); crown centre on the axis below, at −(L − r)·cos β… solved from tangency.
+    const cx = R - r;
+    const dist = L - r;
+    const cy = -Math.sqrt(Math.max(dist * dist - cx * cx, 0));
+    const beta = Math.atan2(-cy, cx); // angle where knuckle meets crown
+    const knuckle = (n: number, from: number, to: number) =>
+      Array.from({ length: n + 1 }, (_, i) => {
+        const a = from + ((to - from) * i) / n;
+        return { x: cx + r * Math.cos(a), y: r * Math.sin(a) };
+      });
+    const right = knuckle(12, 0, beta);
+    const crown = Array.from({ length: 25 }, (_, i) => {
+      const a = beta + ((Math.PI / 2 - beta) * i) / 24;
+      return { x: L * Math.cos(a), y: cy + L * Math.sin(a) };
+    });
+    const half = [...right, ...crown];
+    points.push(...half.map((p) => ({ x: -p.x, y: p.y })));
+    points.push(...[...half].reverse());
+  }
+  return points;
+}
