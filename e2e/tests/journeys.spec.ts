@@ -99,8 +99,8 @@ test('a designer creates a project and a door plate, sees results change live, s
   await page.goto(projectPath);
 
   await page.getByRole('link', { name: 'New component' }).click();
-  await page.getByLabel('Flat circular plate').click();
-  await expect(page.getByText('Kind: Flat circular plate')).toBeVisible();
+  await page.getByLabel('Circular flat plate').click();
+  await expect(page.getByText('Kind: Circular flat plate')).toBeVisible();
   await page.getByLabel('Component name').fill('Cabinet door plate');
   await page.getByLabel('Tag (optional)').fill('D-1');
 
