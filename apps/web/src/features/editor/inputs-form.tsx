@@ -4,7 +4,7 @@ import type { UnitSystem } from '../../api/types';
 import { TextAreaField } from '../../components/field';
 import type { EditorApi } from './editor-state';
 import { SpecField } from './fields';
-import { KIND_FORMS, type FieldSpec, type KindForm } from './kind-forms';
+import { KIND_FORMS, sectionFields, type FieldSpec, type KindForm } from './kind-forms';
 import { LoadCasesField } from './load-cases-field';
 import { MaterialField } from './material-field';
 import type { Raw } from './paths';
@@ -15,7 +15,7 @@ export function shownPaths(form: KindForm, raw: Raw): (path: string) => boolean 
   const prefixes: string[] = [];
   for (const section of form.sections) {
     if (section.when && !section.when(raw)) continue;
-    for (const field of section.fields) {
+    for (const field of sectionFields(form.kind, section)) {
       if (field.type === 'load-cases') prefixes.push('loadCases');
       else if (field.type === 'material') prefixes.push(field.path);
       else exact.add(field.path);
@@ -143,7 +143,7 @@ export function InputsForm({
           <Section
             key={section.title}
             title={section.title}
-            fields={section.fields}
+            fields={sectionFields(form.kind, section)}
             render={(field) => {
               if (field.type === 'load-cases')
                 return <LoadCasesField editor={editor} issues={byPath} system={system} />;

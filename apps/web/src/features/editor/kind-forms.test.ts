@@ -1,7 +1,7 @@
 import { screen } from '@hoopline/calc';
 import { describe, expect, it } from 'vitest';
 import { KIND_ORDER } from '../../lib/kinds';
-import { KIND_FORMS, engineHasKind } from './kind-forms';
+import { KIND_FORMS, engineHasKind, fieldSpec, sectionFields } from './kind-forms';
 import { getIn } from './paths';
 
 describe('kind forms', () => {
@@ -22,7 +22,7 @@ describe('kind forms', () => {
       const template = form.template('si');
       // Sections shown for the starting inputs (the rectangle of a closure is shown for a rectangle only).
       for (const section of form.sections.filter((s) => !s.when || s.when(template))) {
-        for (const field of section.fields) {
+        for (const field of sectionFields(kind, section)) {
           if (field.type === 'load-cases' || field.type === 'material') continue;
           // Setting a field to an obviously wrong type must give an issue at exactly that path.
           const [head, ...rest] = field.path.split('.');
@@ -44,4 +44,27 @@ describe('kind forms', () => {
       }
     });
   }
+
+  it('takes labels, kinds, options and hints from the engine, not from the layout', () => {
+    // Words from the cylinder's vocabulary (packages/calc/src/methods/cylindrical-shell/vocabulary.ts).
+    expect(fieldSpec('cylindrical-shell', 'ringSpacingFor')).toEqual({
+      type: 'quantity',
+      path: 'ringSpacingFor',
+      label: 'Thinner wall to find a stiffening-ring spacing for (optional)',
+      kind: 'length',
+      optional: true,
+    });
+    expect(fieldSpec('cylindrical-shell', 'ends')).toMatchObject({
+      type: 'select',
+      options: [
+        { value: 'closed', label: 'Closed (heads carry the pressure into the shell)' },
+        { value: 'open', label: 'Open (no axial pressure load)' },
+      ],
+    });
+    expect(fieldSpec('pump-down', 'targetPressure')).toMatchObject({
+      kind: 'load-pressure',
+      label: 'Target pressure',
+    });
+    expect(() => fieldSpec('circular-plate', 'noSuchField')).toThrow(/lacks/);
+  });
 });

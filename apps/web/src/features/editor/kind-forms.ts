@@ -1,14 +1,33 @@
-import { findMethod, type ComponentKind } from '@hoopline/calc';
+import {
+  describeFields,
+  fieldAt,
+  findMethod,
+  wordsFor,
+  type ComponentKind,
+  type FieldDescription,
+} from '@hoopline/calc';
 import type { UnitSystem } from '../../api/types';
 import type { QuantityKind } from '../../components/unit-input';
 import type { Raw } from './paths';
 
 /**
- * The editor's fields per component kind. The engine's schema is the rule
- * (it validates every keystroke); this only says which fields to show, in
- * what order, with which labels and starting values. A kind the engine knows
- * but that has no form here is edited as JSON (see component-editor.tsx).
+ * The editor's form per component kind: only its layout (sections, the order
+ * of fields, what a choice resets, a starting component). What each field
+ * is (a quantity of which dimension, a number, a choice and its options),
+ * its label, hint and whether it may be left out all come from the engine:
+ * the method's schema (describeFields) and its vocabulary. A kind the engine
+ * knows but that has no layout here is edited as JSON (see inputs-form.tsx).
  */
+export type FieldLayout =
+  | string
+  | {
+      readonly path: string;
+      /** Other fields to set when this choice changes (e.g. the outline's dimensions with its shape). */
+      readonly resets?: Readonly<Record<string, Raw>>;
+    }
+  | { readonly type: 'load-cases' };
+
+/** A field as the form draws it: resolved from the layout, the schema and the vocabulary. */
 export type FieldSpec =
   | {
       readonly type: 'quantity';
@@ -31,7 +50,6 @@ export type FieldSpec =
       readonly label: string;
       readonly options: readonly { readonly value: string; readonly label: string }[];
       readonly hint?: string;
-      /** Other fields to drop when this one changes (e.g. the outline's dimensions with its shape). */
       readonly resets?: Readonly<Record<string, Raw>>;
     }
   | { readonly type: 'material'; readonly path: string; readonly label: string }
@@ -39,7 +57,7 @@ export type FieldSpec =
 
 export interface FormSection {
   readonly title: string;
-  readonly fields: readonly FieldSpec[];
+  readonly fields: readonly FieldLayout[];
   /** Shown only when this returns true for the current inputs. */
   readonly when?: (raw: Raw) => boolean;
 }
@@ -51,74 +69,73 @@ export interface KindForm {
   readonly template: (system: UnitSystem) => Raw;
 }
 
+const LOAD_CASES = { type: 'load-cases' } as const;
+
+const quantityKind = (field: FieldDescription): QuantityKind =>
+  field.pressureKind === 'load-case'
+    ? 'load-pressure'
+    : field.pressureKind === 'differential'
+      ? 'differential'
+      : field.dimension!;
+
+/**
+ * The field a layout entry stands for in a kind's form. Throws for a path the
+ * engine's schema does not have (a test goes over every layout).
+ */
+export function fieldSpec(kind: ComponentKind, layout: FieldLayout): FieldSpec {
+  if (typeof layout !== 'string' && 'type' in layout) return LOAD_CASES;
+  const path = typeof layout === 'string' ? layout : layout.path;
+  const method = findMethod(kind);
+  const field = method ? fieldAt(describeFields(method.schema), path) : undefined;
+  if (!method || !field) throw new Error(`the ${kind} form names ${path}, which the engine lacks`);
+  const words = wordsFor(method.vocabulary, path);
+  const base = words?.label ?? path;
+  const label = field.optional ? `${base} (optional)` : base;
+  const hint = words?.hint !== undefined ? { hint: words.hint } : {};
+  if (path === 'material') return { type: 'material', path, label: base };
+  switch (field.type) {
+    case 'quantity':
+      return {
+        type: 'quantity',
+        path,
+        label,
+        kind: quantityKind(field),
+        ...hint,
+        optional: field.optional,
+      };
+    case 'choice':
+      return {
+        type: 'select',
+        path,
+        label,
+        options: (field.options ?? []).map((value) => ({
+          value,
+          label: words?.options?.[value] ?? value,
+        })),
+        ...hint,
+        ...(typeof layout !== 'string' && layout.resets ? { resets: layout.resets } : {}),
+      };
+    default:
+      return { type: 'number', path, label, ...hint, optional: field.optional };
+  }
+}
+
+/** A section's fields, resolved for drawing. */
+export function sectionFields(kind: ComponentKind, section: FormSection): FieldSpec[] {
+  return section.fields.map((layout) => fieldSpec(kind, layout));
+}
+
 const len = (si: string, us: string) => (system: UnitSystem) => (system === 'si' ? si : us);
 
-const optionalStrength: FieldSpec[] = [
-  {
-    type: 'quantity',
-    path: 'allowableStress',
-    label: 'Allowable stress (optional)',
-    kind: 'pressure',
-    optional: true,
-    hint: 'A code allowable, e.g. "138 MPa"; wins over the design factor.',
-  },
-  {
-    type: 'number',
-    path: 'designFactor',
-    label: 'Design factor (optional)',
-    optional: true,
-    hint: "On the material's strength; blank uses the material's own.",
-  },
-];
+const strength = ['material', 'allowableStress', 'designFactor'];
+const externalPressure = ['externalPressure.knockdown', 'externalPressure.designFactor'];
 
 const circularPlate: KindForm = {
   kind: 'circular-plate',
   sections: [
-    {
-      title: 'Geometry',
-      fields: [
-        {
-          type: 'quantity',
-          path: 'diameter',
-          label: 'Span diameter',
-          kind: 'length',
-          hint: 'Diameter of the support or seal circle.',
-        },
-        { type: 'quantity', path: 'thickness', label: 'Thickness', kind: 'length' },
-        {
-          type: 'select',
-          path: 'edge',
-          label: 'Edge',
-          options: [
-            { value: 'clamped', label: 'Clamped (welded in, rigid flange)' },
-            { value: 'simply-supported', label: 'Simply supported (on a seal, free to rotate)' },
-          ],
-        },
-        {
-          type: 'quantity',
-          path: 'corrosionAllowance',
-          label: 'Corrosion allowance (optional)',
-          kind: 'length',
-          optional: true,
-        },
-      ],
-    },
-    {
-      title: 'Material and limits',
-      fields: [
-        { type: 'material', path: 'material', label: 'Material' },
-        ...optionalStrength,
-        {
-          type: 'quantity',
-          path: 'deflectionLimit',
-          label: 'Deflection limit (optional)',
-          kind: 'length',
-          optional: true,
-          hint: 'Adds a centre-deflection check.',
-        },
-      ],
-    },
-    { title: 'Load cases', fields: [{ type: 'load-cases' }] },
+    { title: 'Geometry', fields: ['diameter', 'thickness', 'edge', 'corrosionAllowance'] },
+    { title: 'Material and limits', fields: [...strength, 'deflectionLimit'] },
+    { title: 'Load cases', fields: [LOAD_CASES] },
   ],
   template: (system) => ({
     kind: 'circular-plate',
@@ -138,70 +155,23 @@ const flatAreaLoad: KindForm = {
       title: 'Seal outline',
       fields: [
         {
-          type: 'select',
           path: 'outline.shape',
-          label: 'Shape of the seal line',
-          options: [
-            { value: 'circle', label: 'Circle' },
-            { value: 'rectangle', label: 'Rectangle' },
-          ],
-          resets: {
-            circle: { shape: 'circle' },
-            rectangle: { shape: 'rectangle' },
-          },
+          resets: { circle: { shape: 'circle' }, rectangle: { shape: 'rectangle' } },
         },
       ],
     },
     {
       title: 'Circle',
       when: (raw) => (raw['outline'] as Raw | undefined)?.['shape'] !== 'rectangle',
-      fields: [
-        {
-          type: 'quantity',
-          path: 'outline.sealDiameter',
-          label: 'Seal-line diameter',
-          kind: 'length',
-          hint: 'Mean diameter of the gasket or O-ring, not the visible opening.',
-        },
-      ],
+      fields: ['outline.sealDiameter'],
     },
     {
       title: 'Rectangle',
       when: (raw) => (raw['outline'] as Raw | undefined)?.['shape'] === 'rectangle',
-      fields: [
-        { type: 'quantity', path: 'outline.sealWidth', label: 'Seal-line width', kind: 'length' },
-        { type: 'quantity', path: 'outline.sealHeight', label: 'Seal-line height', kind: 'length' },
-      ],
+      fields: ['outline.sealWidth', 'outline.sealHeight'],
     },
-    {
-      title: 'Closure and fasteners',
-      fields: [
-        {
-          type: 'select',
-          path: 'seating',
-          label: 'Closure seated',
-          options: [
-            { value: 'outside', label: 'Outside the opening (a door on the face)' },
-            { value: 'inside', label: 'Inside the opening (a cover seated from within)' },
-          ],
-        },
-        {
-          type: 'number',
-          path: 'fastenerCount',
-          label: 'Number of latches or bolts (optional)',
-          optional: true,
-        },
-        {
-          type: 'quantity',
-          path: 'fastenerCapacity',
-          label: 'Working load of one fastener (optional)',
-          kind: 'force',
-          optional: true,
-          hint: 'Adds a fastener check, e.g. "2 kN" or "450 lbf".',
-        },
-      ],
-    },
-    { title: 'Load cases', fields: [{ type: 'load-cases' }] },
+    { title: 'Closure and fasteners', fields: ['seating', 'fastenerCount', 'fastenerCapacity'] },
+    { title: 'Load cases', fields: [LOAD_CASES] },
   ],
   template: (system) => ({
     kind: 'flat-area-load',
@@ -216,74 +186,12 @@ const flatAreaLoad: KindForm = {
   }),
 };
 
-const corrosion: FieldSpec = {
-  type: 'quantity',
-  path: 'corrosionAllowance',
-  label: 'Corrosion allowance (optional)',
-  kind: 'length',
-  optional: true,
-};
-
-const jointEfficiency: FieldSpec = {
-  type: 'number',
-  path: 'jointEfficiency',
-  label: 'Weld joint efficiency (optional)',
-  optional: true,
-  hint: '0.35–1; blank is 1 (seamless or fully radiographed).',
-};
-
-const externalPressureFields: FieldSpec[] = [
-  {
-    type: 'number',
-    path: 'externalPressure.knockdown',
-    label: 'Buckling knock-down factor (optional)',
-    optional: true,
-    hint: 'On the classical buckling pressure; blank uses the engine’s default.',
-  },
-  {
-    type: 'number',
-    path: 'externalPressure.designFactor',
-    label: 'Buckling design factor (optional)',
-    optional: true,
-  },
-];
-
 const rectangularPlate: KindForm = {
   kind: 'rectangular-plate',
   sections: [
-    {
-      title: 'Geometry',
-      fields: [
-        { type: 'quantity', path: 'width', label: 'Unsupported width', kind: 'length' },
-        { type: 'quantity', path: 'height', label: 'Unsupported height', kind: 'length' },
-        { type: 'quantity', path: 'thickness', label: 'Thickness', kind: 'length' },
-        {
-          type: 'select',
-          path: 'edge',
-          label: 'Edges',
-          options: [
-            { value: 'simply-supported', label: 'Simply supported on all four edges' },
-            { value: 'clamped', label: 'Clamped on all four edges' },
-          ],
-        },
-        corrosion,
-      ],
-    },
-    {
-      title: 'Material and limits',
-      fields: [
-        { type: 'material', path: 'material', label: 'Material' },
-        ...optionalStrength,
-        {
-          type: 'quantity',
-          path: 'deflectionLimit',
-          label: 'Deflection limit (optional)',
-          kind: 'length',
-          optional: true,
-        },
-      ],
-    },
-    { title: 'Load cases', fields: [{ type: 'load-cases' }] },
+    { title: 'Geometry', fields: ['width', 'height', 'thickness', 'edge', 'corrosionAllowance'] },
+    { title: 'Material and limits', fields: [...strength, 'deflectionLimit'] },
+    { title: 'Load cases', fields: [LOAD_CASES] },
   ],
   template: (system) => ({
     kind: 'rectangular-plate',
@@ -301,59 +209,11 @@ const cylindricalShell: KindForm = {
   sections: [
     {
       title: 'Geometry',
-      fields: [
-        { type: 'quantity', path: 'diameter', label: 'Diameter', kind: 'length' },
-        {
-          type: 'select',
-          path: 'diameterBasis',
-          label: 'Diameter measured',
-          options: [
-            { value: 'outside', label: 'Outside' },
-            { value: 'inside', label: 'Inside' },
-          ],
-        },
-        { type: 'quantity', path: 'thickness', label: 'Wall thickness', kind: 'length' },
-        {
-          type: 'quantity',
-          path: 'length',
-          label: 'Unsupported length',
-          kind: 'length',
-          hint: 'Between stiffening rings or heads (add 1/3 of each head’s depth).',
-        },
-        {
-          type: 'select',
-          path: 'ends',
-          label: 'Ends',
-          options: [
-            { value: 'closed', label: 'Closed (heads carry the pressure into the shell)' },
-            { value: 'open', label: 'Open (no axial pressure load)' },
-          ],
-        },
-        corrosion,
-      ],
+      fields: ['diameter', 'diameterBasis', 'thickness', 'length', 'ends', 'corrosionAllowance'],
     },
-    {
-      title: 'Material',
-      fields: [
-        { type: 'material', path: 'material', label: 'Material' },
-        ...optionalStrength,
-        jointEfficiency,
-      ],
-    },
-    {
-      title: 'External pressure',
-      fields: [
-        ...externalPressureFields,
-        {
-          type: 'quantity',
-          path: 'ringSpacingFor',
-          label: 'Find ring spacing for a thinner wall (optional)',
-          kind: 'length',
-          optional: true,
-        },
-      ],
-    },
-    { title: 'Load cases', fields: [{ type: 'load-cases' }] },
+    { title: 'Material', fields: [...strength, 'jointEfficiency'] },
+    { title: 'External pressure', fields: [...externalPressure, 'ringSpacingFor'] },
+    { title: 'Load cases', fields: [LOAD_CASES] },
   ],
   template: (system) => ({
     kind: 'cylindrical-shell',
@@ -375,64 +235,16 @@ const sphereOrHead: KindForm = {
   sections: [
     {
       title: 'Geometry',
-      fields: [
-        {
-          type: 'select',
-          path: 'shape',
-          label: 'Shape',
-          options: [
-            { value: 'ellipsoidal-2-1', label: '2:1 ellipsoidal head' },
-            { value: 'torispherical', label: 'Torispherical head' },
-            { value: 'hemispherical', label: 'Hemispherical head' },
-            { value: 'sphere', label: 'Sphere' },
-          ],
-        },
-        { type: 'quantity', path: 'diameter', label: 'Diameter', kind: 'length' },
-        {
-          type: 'select',
-          path: 'diameterBasis',
-          label: 'Diameter measured',
-          options: [
-            { value: 'outside', label: 'Outside' },
-            { value: 'inside', label: 'Inside' },
-          ],
-        },
-        { type: 'quantity', path: 'thickness', label: 'Thickness', kind: 'length' },
-        corrosion,
-      ],
+      fields: ['shape', 'diameter', 'diameterBasis', 'thickness', 'corrosionAllowance'],
     },
     {
       title: 'Torispherical radii',
       when: (raw) => raw['shape'] === 'torispherical',
-      fields: [
-        {
-          type: 'quantity',
-          path: 'crownRadius',
-          label: 'Crown radius (optional)',
-          kind: 'length',
-          optional: true,
-          hint: 'Blank: the outside diameter.',
-        },
-        {
-          type: 'quantity',
-          path: 'knuckleRadius',
-          label: 'Knuckle radius (optional)',
-          kind: 'length',
-          optional: true,
-          hint: 'Blank: 6 % of the crown radius.',
-        },
-      ],
+      fields: ['crownRadius', 'knuckleRadius'],
     },
-    {
-      title: 'Material',
-      fields: [
-        { type: 'material', path: 'material', label: 'Material' },
-        ...optionalStrength,
-        jointEfficiency,
-      ],
-    },
-    { title: 'External pressure', fields: externalPressureFields },
-    { title: 'Load cases', fields: [{ type: 'load-cases' }] },
+    { title: 'Material', fields: [...strength, 'jointEfficiency'] },
+    { title: 'External pressure', fields: externalPressure },
+    { title: 'Load cases', fields: [LOAD_CASES] },
   ],
   template: (system) => ({
     kind: 'sphere-or-head',
@@ -451,47 +263,8 @@ const sphereOrHead: KindForm = {
 const storedEnergy: KindForm = {
   kind: 'stored-energy',
   sections: [
-    {
-      title: 'Vessel and gas',
-      fields: [
-        {
-          type: 'quantity',
-          path: 'volume',
-          label: 'Gas volume',
-          kind: 'volume',
-          hint: 'e.g. "50 L", "1.2 m3", "2 ft3".',
-        },
-        {
-          type: 'select',
-          path: 'gas',
-          label: 'Gas',
-          options: [
-            { value: 'air', label: 'Air' },
-            { value: 'nitrogen', label: 'Nitrogen' },
-            { value: 'oxygen', label: 'Oxygen' },
-            { value: 'helium', label: 'Helium' },
-            { value: 'argon', label: 'Argon' },
-            { value: 'carbon-dioxide', label: 'Carbon dioxide' },
-          ],
-        },
-        {
-          type: 'number',
-          path: 'heatCapacityRatio',
-          label: 'Heat capacity ratio γ (optional)',
-          optional: true,
-          hint: 'Blank uses the gas’s own value.',
-        },
-        {
-          type: 'quantity',
-          path: 'energyLimit',
-          label: 'Energy limit (optional)',
-          kind: 'energy',
-          optional: true,
-          hint: 'Adds a check, e.g. "100 kJ".',
-        },
-      ],
-    },
-    { title: 'Load cases', fields: [{ type: 'load-cases' }] },
+    { title: 'Vessel and gas', fields: ['volume', 'gas', 'heatCapacityRatio', 'energyLimit'] },
+    { title: 'Load cases', fields: [LOAD_CASES] },
   ],
   template: (system) => ({
     kind: 'stored-energy',
@@ -507,75 +280,16 @@ const storedEnergy: KindForm = {
 const pumpDown: KindForm = {
   kind: 'pump-down',
   sections: [
-    {
-      title: 'Chamber and pump',
-      fields: [
-        { type: 'quantity', path: 'volume', label: 'Chamber volume', kind: 'volume' },
-        {
-          type: 'quantity',
-          path: 'pumpingSpeed',
-          label: 'Pumping speed',
-          kind: 'volumeFlow',
-          hint: 'e.g. "10 L/s", "4 cfm", "20 m3/h".',
-        },
-        {
-          type: 'quantity',
-          path: 'conductance',
-          label: 'Line conductance (optional)',
-          kind: 'volumeFlow',
-          optional: true,
-        },
-      ],
-    },
+    { title: 'Chamber and pump', fields: ['volume', 'pumpingSpeed', 'conductance'] },
     {
       title: 'Pressures and time',
       fields: [
-        {
-          type: 'quantity',
-          path: 'startPressure',
-          label: 'Start pressure (optional)',
-          kind: 'load-pressure',
-          optional: true,
-          hint: 'Absolute; blank is the site’s ambient.',
-        },
-        {
-          type: 'quantity',
-          path: 'targetPressure',
-          label: 'Target pressure',
-          kind: 'load-pressure',
-          hint: 'Absolute, e.g. "10 torr" or "1 mbar(a)".',
-        },
-        {
-          type: 'quantity',
-          path: 'basePressure',
-          label: 'Pump base pressure (optional)',
-          kind: 'load-pressure',
-          optional: true,
-        },
-        {
-          type: 'quantity',
-          path: 'gasLoad',
-          label: 'Gas load: leaks and outgassing (optional)',
-          kind: 'throughput',
-          optional: true,
-          hint: 'e.g. "1e-3 mbar·L/s".',
-        },
-        {
-          type: 'quantity',
-          path: 'targetTime',
-          label: 'Time limit (optional)',
-          kind: 'time',
-          optional: true,
-          hint: 'Adds a check, e.g. "15 min".',
-        },
-        {
-          type: 'quantity',
-          path: 'waterTemperature',
-          label: 'Liquid water temperature (optional)',
-          kind: 'temperature',
-          optional: true,
-          hint: 'If the chamber holds water, e.g. "20 degC".',
-        },
+        'startPressure',
+        'targetPressure',
+        'basePressure',
+        'gasLoad',
+        'targetTime',
+        'waterTemperature',
       ],
     },
   ],

@@ -43,7 +43,7 @@ describe('DiffView', () => {
       />,
     );
     const inputs = screen.getByRole('table', { name: /Changed inputs/ });
-    const row = within(inputs).getByRole('row', { name: /Plate thickness/ });
+    const row = within(inputs).getByRole('row', { name: /Thickness/ });
     const cells = within(row).getAllByRole('cell');
     expect(cells[0]).toHaveTextContent('before: 8 mm');
     expect(cells[1]).toHaveTextContent('after: 12 mm');
@@ -112,7 +112,7 @@ describe('input labels', () => {
     ).toBe('1.568 ksi');
   });
   it('labels changed inputs in the method’s own words (not ids such as ringSpacingFor)', () => {
-    expect(inputLabel('circular-plate', 'thickness')).toBe('Plate thickness');
+    expect(inputLabel('circular-plate', 'thickness')).toBe('Thickness');
     expect(inputLabel('cylindrical-shell', 'diameter')).toBe('Shell diameter');
     expect(inputLabel('cylindrical-shell', 'ringSpacingFor')).toBe(
       'Thinner wall to find a stiffening-ring spacing for',

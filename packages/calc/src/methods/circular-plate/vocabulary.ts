@@ -7,7 +7,7 @@ export const circularPlateVocabulary: Vocabulary = {
     label: 'Span diameter (support or seal circle)',
     hint: 'Diameter of the support or seal circle.',
   },
-  thickness: { label: 'Plate thickness' },
+  thickness: { label: 'Thickness' },
   edge: {
     label: 'Edge support',
     options: {

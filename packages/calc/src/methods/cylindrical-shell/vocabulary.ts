@@ -3,7 +3,10 @@ import { MATERIAL_VOCABULARY } from '../../materials/material-vocabulary';
 
 /** Words for the external-pressure factors a cylinder and a head share. */
 export const EXTERNAL_PRESSURE_VOCABULARY: Vocabulary = {
-  'externalPressure.knockdown': { label: 'Buckling knock-down factor' },
+  'externalPressure.knockdown': {
+    label: 'Buckling knock-down factor',
+    hint: 'On the classical buckling pressure; blank uses the engine’s default.',
+  },
   'externalPressure.designFactor': { label: 'Design factor on buckling and collapse' },
   'externalPressure.interaction': {
     label: 'Elastic–plastic interaction',
@@ -31,6 +34,9 @@ export const cylindricalShellVocabulary: Vocabulary = {
       open: 'Open (no axial pressure load)',
     },
   },
-  jointEfficiency: { label: 'Weld joint efficiency' },
+  jointEfficiency: {
+    label: 'Weld joint efficiency',
+    hint: '0.35–1; blank is 1 (seamless or fully radiographed).',
+  },
   ringSpacingFor: { label: 'Thinner wall to find a stiffening-ring spacing for' },
 };

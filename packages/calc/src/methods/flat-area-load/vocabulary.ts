@@ -5,7 +5,10 @@ export const flatAreaLoadVocabulary: Vocabulary = {
     label: 'Shape of the seal line',
     options: { circle: 'Circle', rectangle: 'Rectangle' },
   },
-  'outline.sealDiameter': { label: 'Seal-line diameter' },
+  'outline.sealDiameter': {
+    label: 'Seal-line diameter',
+    hint: 'Mean diameter of the gasket or O-ring, not the visible opening.',
+  },
   'outline.sealWidth': { label: 'Seal-line width' },
   'outline.sealHeight': { label: 'Seal-line height' },
   seating: {
@@ -16,5 +19,8 @@ export const flatAreaLoadVocabulary: Vocabulary = {
     },
   },
   fastenerCount: { label: 'Number of latches or bolts' },
-  fastenerCapacity: { label: 'Working load of one fastener' },
+  fastenerCapacity: {
+    label: 'Working load of one fastener',
+    hint: 'Adds a fastener check, e.g. "2 kN" or "450 lbf".',
+  },
 };

@@ -5,7 +5,7 @@ export const rectangularPlateVocabulary: Vocabulary = {
   ...MATERIAL_VOCABULARY,
   width: { label: 'Unsupported width' },
   height: { label: 'Unsupported height' },
-  thickness: { label: 'Plate thickness' },
+  thickness: { label: 'Thickness' },
   edge: {
     label: 'Edge support',
     options: {

@@ -20,7 +20,10 @@ export const sphereOrHeadVocabulary: Vocabulary = {
     options: { outside: 'On the outside', inside: 'On the inside' },
   },
   thickness: { label: 'Wall thickness' },
-  crownRadius: { label: 'Crown radius' },
-  knuckleRadius: { label: 'Knuckle radius' },
-  jointEfficiency: { label: 'Weld joint efficiency' },
+  crownRadius: { label: 'Crown radius', hint: 'Blank: the outside diameter.' },
+  knuckleRadius: { label: 'Knuckle radius', hint: 'Blank: 6 % of the crown radius.' },
+  jointEfficiency: {
+    label: 'Weld joint efficiency',
+    hint: '0.35–1; blank is 1 (seamless or fully radiographed).',
+  },
 };

@@ -1,7 +1,7 @@
 import type { Vocabulary } from '../../core/vocabulary';
 
 export const storedEnergyVocabulary: Vocabulary = {
-  volume: { label: 'Gas volume' },
+  volume: { label: 'Gas volume', hint: 'e.g. "50 L", "1.2 m3", "2 ft3".' },
   gas: {
     label: 'Gas',
     options: {
@@ -13,6 +13,9 @@ export const storedEnergyVocabulary: Vocabulary = {
       'carbon-dioxide': 'Carbon dioxide',
     },
   },
-  heatCapacityRatio: { label: 'Heat capacity ratio γ = cp/cv' },
-  energyLimit: { label: 'Energy limit' },
+  heatCapacityRatio: {
+    label: 'Heat capacity ratio γ = cp/cv',
+    hint: 'Blank uses the gas’s own value.',
+  },
+  energyLimit: { label: 'Energy limit', hint: 'Adds a check, e.g. "100 kJ".' },
 };
