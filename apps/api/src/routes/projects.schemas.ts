@@ -1,10 +1,12 @@
 import { z } from 'zod';
-import { customMaterialSchema, siteSchema } from '@hoopline/calc';
+import { customMaterialSchema, designBasisSchema, siteSchema } from '@hoopline/calc';
 import { paginationShape } from '../http/pagination';
 import { role, text, unitSystem, uuid, version } from './common.schemas';
 
 /** The project site is the calc's own site input (altitude or ambient pressure, with units). */
 const site = siteSchema;
+/** The project's design basis is the calc's own: allowable-stress basis and barometer. */
+const designBasis = designBasisSchema;
 
 export const listProjectsQuery = z
   .object({
@@ -25,6 +27,7 @@ export const createProjectBody = z
     name: text(1, 200),
     client: text(0, 200).optional(),
     site: site.optional(),
+    designBasis: designBasis.optional(),
     unitSystem,
     notes: text(0, 5000).optional(),
   })
@@ -36,6 +39,7 @@ export const updateProjectBody = z
     name: text(1, 200).optional(),
     client: text(0, 200).optional(),
     site: site.nullable().optional(),
+    designBasis: designBasis.optional(),
     unitSystem: unitSystem.optional(),
     notes: text(0, 5000).optional(),
     version,

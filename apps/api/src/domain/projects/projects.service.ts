@@ -1,6 +1,11 @@
 import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
-import { STANDARD_ATMOSPHERE, ambientPressureAtAltitude } from '@hoopline/calc';
+import {
+  STANDARD_ATMOSPHERE,
+  ambientPressureAtAltitude,
+  type AllowableBasis,
+  type Barometer,
+} from '@hoopline/calc';
 import {
   CustomMaterialEntity,
   ProjectEntity,
@@ -25,14 +30,27 @@ import { requireProjectStanding } from './project-access';
 
 export type SiteValue = { altitude?: number | undefined; ambientPressure?: number | undefined };
 
+/** The project's design basis: every key always set (the engine's defaults unless chosen). */
+export interface DesignBasisValue {
+  readonly allowableStress: AllowableBasis;
+  readonly barometer: Barometer;
+}
+
+/** A design basis as a create or update body gives it: either key may be left out. */
+export type DesignBasisInput = {
+  allowableStress?: AllowableBasis | undefined;
+  barometer?: Barometer | undefined;
+};
+
 export interface ProjectView {
   readonly id: string;
   readonly number: string;
   readonly name: string;
   readonly client: string;
   readonly site: SiteValue;
-  /** Pa, absolute: from the altitude (standard atmosphere), as given, or sea level. */
+  /** Pa, absolute: from the altitude (standard atmosphere), as given, or sea level (before the high-barometer margin). */
   readonly ambientPressure: number;
+  readonly designBasis: DesignBasisValue;
   readonly unitSystem: UnitSystem;
   readonly notes: string;
   readonly version: number;
@@ -59,6 +77,7 @@ export interface ProjectInput {
   readonly name: string;
   readonly client?: string | undefined;
   readonly site?: SiteValue | undefined;
+  readonly designBasis?: DesignBasisInput | undefined;
   readonly unitSystem: UnitSystem;
   readonly notes?: string | undefined;
 }
@@ -68,6 +87,8 @@ export interface ProjectPatch {
   readonly name?: string | undefined;
   readonly client?: string | undefined;
   readonly site?: SiteValue | null | undefined;
+  /** The keys given change; a key left out keeps its value. */
+  readonly designBasis?: DesignBasisInput | undefined;
   readonly unitSystem?: UnitSystem | undefined;
   readonly notes?: string | undefined;
   readonly version: number;
@@ -77,6 +98,10 @@ export function projectSite(p: ProjectEntity): SiteValue {
   if (p.siteAltitude !== null) return { altitude: p.siteAltitude };
   if (p.siteAmbientPressure !== null) return { ambientPressure: p.siteAmbientPressure };
   return {};
+}
+
+export function projectDesignBasis(p: ProjectEntity): DesignBasisValue {
+  return { allowableStress: p.allowableBasis, barometer: p.designBarometer };
 }
 
 export function projectView(p: ProjectEntity, myRole: Role | null): ProjectView {
@@ -89,6 +114,7 @@ export function projectView(p: ProjectEntity, myRole: Role | null): ProjectView 
     ambientPressure:
       p.siteAmbientPressure ??
       (p.siteAltitude !== null ? ambientPressureAtAltitude(p.siteAltitude) : STANDARD_ATMOSPHERE),
+    designBasis: projectDesignBasis(p),
     unitSystem: p.unitSystem,
     notes: p.notes,
     version: p.version,
@@ -161,6 +187,8 @@ export class ProjectsService {
           client: input.client ?? '',
           siteAltitude: input.site?.altitude ?? null,
           siteAmbientPressure: input.site?.ambientPressure ?? null,
+          allowableBasis: input.designBasis?.allowableStress ?? 'asme-viii-1',
+          designBarometer: input.designBasis?.barometer ?? 'standard',
           unitSystem: input.unitSystem,
           notes: input.notes ?? '',
           version: 1,
@@ -221,6 +249,10 @@ export class ProjectsService {
           changes.siteAltitude = patch.site?.altitude ?? null;
           changes.siteAmbientPressure = patch.site?.ambientPressure ?? null;
         }
+        if (patch.designBasis?.allowableStress !== undefined)
+          changes.allowableBasis = patch.designBasis.allowableStress;
+        if (patch.designBasis?.barometer !== undefined)
+          changes.designBarometer = patch.designBasis.barometer;
         await manager.update(ProjectEntity, { id: projectId }, changes);
         const after = await manager.findOneByOrFail(ProjectEntity, { id: projectId });
         await recordAudit(manager, {
@@ -421,6 +453,7 @@ function projectSummary(p: ProjectEntity) {
     name: p.name,
     client: p.client,
     site: projectSite(p),
+    designBasis: projectDesignBasis(p),
     unitSystem: p.unitSystem,
     version: p.version,
   };
