@@ -28,6 +28,12 @@ export interface Me {
 
 export type Site = { readonly altitude?: number } | { readonly ambientPressure?: number };
 
+/** The project's design basis (API.md): the engine's `designBasis`, every key set. */
+export interface DesignBasis {
+  readonly allowableStress: 'asme-viii-1' | 'en-13445-3';
+  readonly barometer: 'standard' | 'high';
+}
+
 export interface Project {
   readonly id: string;
   readonly number: string;
@@ -35,6 +41,7 @@ export interface Project {
   readonly client: string;
   readonly site: Site | null;
   readonly ambientPressure: number;
+  readonly designBasis: DesignBasis;
   readonly unitSystem: UnitSystem;
   readonly notes: string;
   readonly version: number;

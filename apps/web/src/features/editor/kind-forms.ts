@@ -67,7 +67,7 @@ const optionalStrength: FieldSpec[] = [
     path: 'designFactor',
     label: 'Design factor (optional)',
     optional: true,
-    hint: "On the material's strength; blank uses the material's own.",
+    hint: "On the material's strength; blank: the project's code basis for metals, the material's own factor otherwise.",
   },
 ];
 
