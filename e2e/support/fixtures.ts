@@ -25,6 +25,16 @@ export async function screenshot(page: Page, name: string): Promise<void> {
 
 /** axe-core on the page as it stands: no serious or critical violation (WCAG 2.x A and AA rules). */
 export async function expectAccessible(page: Page, screen: string): Promise<void> {
+  // Check the settled page: a colour transition still running (after a theme switch, say) would
+  // be read half-way, with a contrast no one sees for long. Infinite animations are not waited on.
+  await page.evaluate(() =>
+    Promise.all(
+      document
+        .getAnimations()
+        .filter((a) => a instanceof CSSTransition)
+        .map((a) => a.finished.catch(() => undefined)),
+    ),
+  );
   const results = await new AxeBuilder({ page })
     .withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa'])
     .analyze();

@@ -190,6 +190,8 @@ test('a designer creates a project and a door plate, sees results change live, s
   );
   const thumbnail = table.getByRole('img', { name: `Preview of ${photo.name}` });
   await expect(thumbnail).toBeVisible();
+  // The thumbnail loads lazily (loading="lazy"): only once it is near the viewport, as a person scrolls to it.
+  await thumbnail.scrollIntoViewIfNeeded();
   await expect
     .poll(() => thumbnail.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth))
     .toBe(32);

@@ -79,16 +79,26 @@ export type { FieldMeta } from './core/fields';
 // Inputs shared by every component
 export { loadCaseSchema, loadCasesSchema, siteSchema } from './core/load-cases';
 export type { LoadCaseInput, SiteInput } from './core/load-cases';
+export {
+  ALLOWABLE_BASES,
+  BAROMETERS,
+  HIGH_BAROMETER_PRESSURE,
+  HIGH_BAROMETER_RATIO,
+  designBasisSchema,
+} from './core/design-basis';
+export type { AllowableBasis, Barometer, DesignBasisInput } from './core/design-basis';
 export type { MethodDefinition, SweepParameter } from './core/method';
 
 // Materials
 export {
   MATERIALS,
+  codeAllowableStress,
   customMaterialSchema,
   findMaterial,
+  isCodeMaterial,
   materialSchema,
 } from './materials/materials';
-export type { Material, MaterialInput, StrengthBasis } from './materials/materials';
+export type { Material, MaterialInput, StrengthBasis, ValueBasis } from './materials/materials';
 
 // Methods and their input schemas
 export { flatAreaLoad, flatAreaLoadSchema } from './methods/flat-area-load/flat-area-load';
@@ -111,6 +121,7 @@ export {
   DEFAULT_KNOCKDOWN,
   classicalSphereBucklingPressure,
   sphereOrHead,
+  torisphericalHeadVolume,
   sphereOrHeadSchema,
   zoellyCoefficient,
 } from './methods/sphere-or-head/sphere-or-head';

@@ -1,6 +1,7 @@
 import type { z } from 'zod';
 import { assembleReport } from './core/assemble';
 import { CalcInputError, issuesFromZod, type InputIssue } from './core/errors';
+import { resolveDesignBasis } from './core/design-basis';
 import { resolveAmbient, resolveLoadCases } from './core/load-cases';
 import type { MethodContext, MethodDefinition } from './core/method';
 import type { ComponentKind, Report } from './core/report';
@@ -45,19 +46,27 @@ export function parseComponent(raw: unknown): ParsedComponent {
   if (!parsed.success) throw new CalcInputError(issuesFromZod(parsed.error));
   const data = parsed.data as {
     site?: Parameters<typeof resolveAmbient>[0];
+    designBasis?: Parameters<typeof resolveDesignBasis>[0];
     loadCases?: unknown[];
   };
-  const ambient = resolveAmbient(data.site);
+  const designBasis = resolveDesignBasis(data.designBasis);
+  const ambient = resolveAmbient(data.site, designBasis);
   if (method.singleCase) {
     return {
       method,
       input: parsed.data,
-      context: { ambient, loadCases: [method.singleCase(parsed.data, ambient)] },
+      context: {
+        ambient,
+        designBasis,
+        warnings: [],
+        loadCases: [method.singleCase(parsed.data, ambient)],
+      },
     };
   }
-  const { cases, issues } = resolveLoadCases(
+  const { cases, issues, warnings } = resolveLoadCases(
     (data.loadCases ?? []) as Parameters<typeof resolveLoadCases>[0],
-    ambient.pressure,
+    ambient,
+    designBasis,
   );
   if (issues.length > 0) {
     throw new CalcInputError(
@@ -67,7 +76,11 @@ export function parseComponent(raw: unknown): ParsedComponent {
       })),
     );
   }
-  return { method, input: parsed.data, context: { ambient, loadCases: cases } };
+  return {
+    method,
+    input: parsed.data,
+    context: { ambient, designBasis, warnings, loadCases: cases },
+  };
 }
 
 /** Computes the report of a parsed component. */

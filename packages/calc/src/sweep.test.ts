@@ -159,4 +159,39 @@ describe('sweepThickness validity flags', () => {
       );
     }
   });
+
+  it('says when the minimum passing thickness lies outside the method’s validity, by the report’s own rule', () => {
+    // A thin plate with a high allowable stress passes in the large-deflection range (y > t/2).
+    const input = {
+      kind: 'circular-plate',
+      diameter: '600 mm',
+      thickness: '6 mm',
+      edge: 'simply-supported',
+      material: 'aluminium-6061-t6',
+      allowableStress: '400 MPa',
+      loadCases: [{ name: 'Full vacuum', internal: 'full vacuum' }],
+    };
+    const result = sweepThickness(input, { from: 0.001, to: 0.03, points: 30 });
+    const minimum = result.minimumPassing;
+    expect(minimum.value).not.toBeNull();
+    expect(minimum.outsideValidity).toBe(true);
+    expect(minimum.note).toContain('large-deflection');
+    expect(minimum.note).toContain('no basis for a decision');
+    expect(screen({ ...input, thickness: minimum.value! }).verdict).toBe('outside-validity');
+    // Within the method's validity it says nothing of the kind.
+    const valid = sweepThickness({
+      ...input,
+      material: 'stainless-304',
+      allowableStress: undefined,
+    });
+    expect(valid.minimumPassing.outsideValidity).toBe(false);
+    expect(
+      screen({
+        ...input,
+        allowableStress: undefined,
+        material: 'stainless-304',
+        thickness: valid.minimumPassing.value!,
+      }).verdict,
+    ).toBe('pass');
+  });
 });

@@ -1,6 +1,7 @@
 import { CalcInputError, type InputIssue } from './core/errors';
 import { formatNumber, withoutTrailText } from './core/format';
 import type { MethodDefinition, MethodResult, SweepParameter } from './core/method';
+import { outsideValidityWarnings } from './core/validity';
 import { parseComponent, type ParsedComponent } from './screen';
 import { QuantityParseError, parseQuantity } from './units/parse';
 
@@ -50,10 +51,17 @@ export interface SweepResult {
   /**
    * The thinnest value whose governing utilisation is at most 1, found within
    * the bracketing points by a safeguarded root search (utilisation assumed to
-   * fall as the value rises), or null when the range
-   * does not contain it; `note` says which.
+   * fall as the value rises), or null when the range does not contain it;
+   * `note` says which. `outsideValidity` is true when a method is used
+   * outside its validity range at that value (the report there would say
+   * so, by the same rule): the value is then no basis for a decision, and
+   * `note` names the warnings.
    */
-  readonly minimumPassing: { readonly value: number | null; readonly note: string };
+  readonly minimumPassing: {
+    readonly value: number | null;
+    readonly note: string;
+    readonly outsideValidity: boolean;
+  };
 }
 
 /** Points of a sweep when the caller gives none. */
@@ -159,6 +167,18 @@ export function sweepThickness(rawInput: unknown, options: SweepOptions = {}): S
     withoutTrailText(() =>
       method.compute(sweep.set(component.input, value) as never, component.context),
     );
+  const found = (at: { value: number | null; note: string }): SweepResult['minimumPassing'] => {
+    if (at.value === null) return { ...at, outsideValidity: false };
+    // With its text this time: the note quotes the warnings.
+    const result = method.compute(sweep.set(component.input, at.value) as never, component.context);
+    const outside = outsideValidityWarnings(component.context, result);
+    if (outside.length === 0) return { ...at, outsideValidity: false };
+    return {
+      value: at.value,
+      note: `${at.note}; outside the method's validity there (${outside.map((w) => w.code).join(', ')}: ${outside[0]!.message}): no basis for a decision`,
+      outsideValidity: true,
+    };
+  };
 
   const values: number[] = [];
   for (let i = 0; i < points; i++) {
@@ -174,8 +194,12 @@ export function sweepThickness(rawInput: unknown, options: SweepOptions = {}): S
     current,
     points: sweptPoints,
     minimumPassing: last!.cases.some((trail) => trail.checks.length > 0)
-      ? minimumPassing(sweptPoints, from, to, (v) => governingOf(evaluate(v)))
-      : { value: null, note: 'not found: the method has no checks at these inputs' },
+      ? found(minimumPassing(sweptPoints, from, to, (v) => governingOf(evaluate(v))))
+      : {
+          value: null,
+          note: 'not found: the method has no checks at these inputs',
+          outsideValidity: false,
+        },
   };
 }
 
@@ -253,9 +277,7 @@ function point(component: ParsedComponent, value: number, result: MethodResult):
       outputs,
     };
   });
-  const outsideValidity =
-    result.warnings.some((w) => w.severity === 'outside-validity') ||
-    result.cases.some((trail) => trail.warnings.some((w) => w.severity === 'outside-validity'));
+  const outsideValidity = outsideValidityWarnings(component.context, result).length > 0;
   return { value, utilisation, pass, outsideValidity, cases };
 }
 
@@ -264,7 +286,7 @@ function minimumPassing(
   from: number,
   to: number,
   governing: (value: number) => { utilisation: number },
-): SweepResult['minimumPassing'] {
+): { value: number | null; note: string } {
   const first = points[0]!;
   const last = points[points.length - 1]!;
   let monotonic = true;

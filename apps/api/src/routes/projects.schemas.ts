@@ -1,5 +1,10 @@
 import { z } from 'zod';
-import { customMaterialSchema, siteSchema, type SiteInput } from '@hoopline/calc';
+import {
+  customMaterialSchema,
+  designBasisSchema,
+  siteSchema,
+  type SiteInput,
+} from '@hoopline/calc';
 import { paginationShape } from '../http/pagination';
 import { role, text, unitSystem, uuid, version } from './common.schemas';
 
@@ -17,6 +22,8 @@ const site = z
       ctx.addIssue({ code: 'custom', message: issue.message, path: issue.path });
   })
   .transform((raw) => raw as SiteInput);
+/** The project's design basis is the calc's own: allowable-stress basis and barometer. */
+const designBasis = designBasisSchema;
 
 export const listProjectsQuery = z
   .object({
@@ -37,6 +44,7 @@ export const createProjectBody = z
     name: text(1, 200),
     client: text(0, 200).optional(),
     site: site.optional(),
+    designBasis: designBasis.optional(),
     unitSystem,
     notes: text(0, 5000).optional(),
   })
@@ -48,6 +56,7 @@ export const updateProjectBody = z
     name: text(1, 200).optional(),
     client: text(0, 200).optional(),
     site: site.nullable().optional(),
+    designBasis: designBasis.optional(),
     unitSystem: unitSystem.optional(),
     notes: text(0, 5000).optional(),
     version,

@@ -8,6 +8,7 @@ import {
 import { apiFetch, json, query, type Page } from './client';
 import type {
   CustomMaterialItem,
+  DesignBasis,
   Member,
   Project,
   SiteAsTyped,
@@ -30,6 +31,7 @@ export interface ProjectInput {
   readonly client?: string;
   /** null clears the site (sea level); on create it is left out. */
   readonly site?: SiteAsTyped | null;
+  readonly designBasis?: DesignBasis;
   readonly unitSystem: UnitSystem;
   readonly notes?: string;
 }

@@ -32,6 +32,12 @@ export type Site = { readonly altitude?: number } | { readonly ambientPressure?:
 export type SiteAsTyped =
   { readonly altitude?: string | number } | { readonly ambientPressure?: string | number };
 
+/** The project's design basis (API.md): the engine's `designBasis`, every key set. */
+export interface DesignBasis {
+  readonly allowableStress: 'asme-viii-1' | 'en-13445-3';
+  readonly barometer: 'standard' | 'high';
+}
+
 export interface Project {
   readonly id: string;
   readonly number: string;
@@ -40,6 +46,7 @@ export interface Project {
   readonly site: Site | null;
   readonly siteAsTyped: SiteAsTyped;
   readonly ambientPressure: number;
+  readonly designBasis: DesignBasis;
   readonly unitSystem: UnitSystem;
   readonly notes: string;
   readonly version: number;

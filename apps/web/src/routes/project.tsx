@@ -88,8 +88,10 @@ export function ProjectRoute() {
         subtitle={
           <>
             {p.client ? `${p.client} · ` : ''}Ambient {show(p.ambientPressure, 'Pa', system)} (
-            {siteText(p.site, system)}) · {p.unitSystem === 'si' ? 'SI' : 'US customary'} · my role:{' '}
-            <RoleBadge role={p.myRole} />
+            {siteText(p.site, system)}
+            {p.designBasis?.barometer === 'high' ? ', designed for a high barometer' : ''}) ·{' '}
+            {p.designBasis?.allowableStress === 'en-13445-3' ? 'EN 13445-3' : 'ASME VIII-1'} basis ·{' '}
+            {p.unitSystem === 'si' ? 'SI' : 'US customary'} · my role: <RoleBadge role={p.myRole} />
           </>
         }
         actions={

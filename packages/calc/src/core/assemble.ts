@@ -1,12 +1,16 @@
 import { ENGINE_NAME, ENGINE_VERSION } from '../version';
 import { caution, type CautionCode } from './cautions';
+import { ambientStep } from './load-cases';
 import type { MethodContext, MethodDefinition, MethodResult } from './method';
 import type { CaseReport, Governing, Report, ValidityWarning, Verdict } from './report';
+import { outsideValidityWarnings } from './validity';
 
 /**
  * Turns what a method computed into the report: engine stamp, one case report
  * per load case with its governing check, the governing case overall, the
- * verdict, and the cautions (screening-only always first).
+ * verdict, and the cautions (screening-only always first, then the
+ * room-temperature caution, which every report carries too). The ambient
+ * pressure is the first common step of every report.
  */
 export function assembleReport(
   method: MethodDefinition,
@@ -46,14 +50,14 @@ export function assembleReport(
     }
   });
 
-  const warnings: ValidityWarning[] = [...result.warnings];
+  const warnings: ValidityWarning[] = [...context.warnings, ...result.warnings];
   result.cases.forEach((trail, index) => {
     for (const w of trail.warnings) warnings.push({ ...w, loadCase: cases[index]!.loadCase.name });
   });
 
   const anyCheck = cases.some((c) => c.checks.length > 0);
   const anyFail = cases.some((c) => c.checks.some((k) => !k.pass));
-  const outside = warnings.some((w) => w.severity === 'outside-validity');
+  const outside = outsideValidityWarnings(context, result).length > 0;
   const verdict: Verdict = anyFail
     ? 'fail'
     : outside
@@ -62,7 +66,7 @@ export function assembleReport(
         ? 'pass'
         : 'no-checks';
 
-  const codes: CautionCode[] = ['screening-only'];
+  const codes: CautionCode[] = ['screening-only', 'room-temperature'];
   for (const code of result.cautions) if (!codes.includes(code)) codes.push(code);
 
   const report: Report = {
@@ -74,8 +78,18 @@ export function assembleReport(
       pressure: context.ambient.pressure,
       basis: context.ambient.basis,
       ...(context.ambient.altitude !== undefined ? { altitude: context.ambient.altitude } : {}),
+      ...(context.ambient.barometer !== undefined
+        ? {
+            barometer: context.ambient.barometer,
+            standardPressure: context.ambient.standardPressure!,
+          }
+        : {}),
     },
-    steps: result.steps,
+    designBasis: {
+      allowableStress: context.designBasis.allowableStress,
+      barometer: context.designBasis.barometer,
+    },
+    steps: [ambientStep(context.ambient), ...result.steps],
     cases,
     governing,
     verdict,
@@ -113,6 +127,8 @@ function stepsHaveNonFinite(steps: Report['steps']): boolean {
 function reportHasNonFinite(report: Report): boolean {
   if (bad(report.ambient.pressure)) return true;
   if (report.ambient.altitude !== undefined && bad(report.ambient.altitude)) return true;
+  if (report.ambient.standardPressure !== undefined && bad(report.ambient.standardPressure))
+    return true;
   if (report.governing && bad(report.governing.utilisation)) return true;
   if (stepsHaveNonFinite(report.steps)) return true;
   for (const c of report.cases) {

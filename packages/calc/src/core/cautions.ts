@@ -2,7 +2,7 @@ import type { Caution } from './report';
 
 /**
  * The cautions Hoopline attaches to results (PRODUCT.md, "Cautions that must
- * appear"). `screening-only` is on every report.
+ * appear"). `screening-only` and `room-temperature` are on every report.
  */
 export const CAUTIONS = {
   'screening-only': {
@@ -13,6 +13,15 @@ export const CAUTIONS = {
       'Final design, fabrication and testing must follow the applicable code (for example ASME BPVC Section VIII, ' +
       'EN 13445, the Pressure Equipment Directive) and local regulations, and be approved by a qualified engineer ' +
       '(licensed where the law requires it).',
+  },
+  'room-temperature': {
+    code: 'room-temperature',
+    title: 'Properties at room temperature',
+    text:
+      'Every material property, allowable stress and gas property here is taken at room temperature (about ' +
+      '20 °C). Strength, elastic modulus and allowable stress fall as the temperature rises (polymers steeply, ' +
+      'acrylic and polycarbonate well below 100 °C), and some materials turn brittle in the cold. Screen again ' +
+      'with the properties at the design temperature, or the code’s allowable stress at that temperature.',
   },
   'brittle-material': {
     code: 'brittle-material',
@@ -28,7 +37,9 @@ export const CAUTIONS = {
     text:
       'Polymers creep: the long-term allowable stress is far below the short-term strength, and falls with ' +
       'temperature. Cast acrylic under continuous load is usually held to about 10 MPa (1500 psi) at 23 °C or ' +
-      'less to avoid crazing (common practice, from memory).',
+      'less to avoid crazing (common practice, from memory). Under sustained load the effective (creep) modulus ' +
+      'falls too, and with it the buckling pressure and the stiffness of a window: use the maker’s long-term ' +
+      'modulus for the time and temperature of service.',
   },
   'external-pressure-imperfection': {
     code: 'external-pressure-imperfection',
@@ -46,6 +57,15 @@ export const CAUTIONS = {
       'A vessel under pressure stores energy that a failure releases at once. A pressure test with gas is far ' +
       'more dangerous than with water; test hydrostatically where possible, keep people clear and use ' +
       'barricades. An evacuated vessel can implode and throw fragments, especially glass and acrylic.',
+  },
+  implosion: {
+    code: 'implosion',
+    title: 'Implosion hazard',
+    text:
+      'An evacuated vessel stores energy: if its wall gives way the atmosphere does the work Δp·V on it at ' +
+      'once (about 100 kJ for one cubic metre at full vacuum), and a glass or acrylic wall bursts inward ' +
+      'and then throws fragments out. Keep people clear or behind a shield, guard brittle walls against ' +
+      'impact and scratches, and let air in slowly.',
   },
   'small-deflection': {
     code: 'small-deflection',

@@ -9,8 +9,9 @@ import {
   stress,
   type PressureSpec,
 } from './fields';
-import { formatNumber } from './format';
-import type { PressureDirection, Report, ResolvedLoadCase } from './report';
+import { HIGH_BAROMETER_PRESSURE, type DesignBasis } from './design-basis';
+import { formatNumber, withUnit } from './format';
+import type { PressureDirection, Report, ResolvedLoadCase, Step, ValidityWarning } from './report';
 
 /**
  * The site: altitude (standard atmosphere) or a given ambient pressure. With
@@ -30,22 +31,107 @@ export const siteSchema = z
 export type SiteInput = z.input<typeof siteSchema>;
 
 export interface Ambient {
+  /** The ambient pressure every "ambient" or gauge value is taken against, Pa (absolute). */
   readonly pressure: number;
+  /**
+   * Where it comes from. A high-barometer design ambient is reported as
+   * 'given' (the project gave it) with `barometer: 'high'` and the standard
+   * value it was raised from.
+   */
   readonly basis: Report['ambient']['basis'];
   readonly altitude?: number;
+  readonly barometer?: 'high';
+  /** The standard-atmosphere value before the high-barometer margin, Pa. */
+  readonly standardPressure?: number;
 }
 
-export function resolveAmbient(site: z.output<typeof siteSchema> | undefined): Ambient {
+/**
+ * The ambient pressure: given for the site, else the ISO 2533 standard
+ * atmosphere at the site's altitude (sea level without one), raised by the
+ * high-barometer margin when the design basis asks for it. A given ambient
+ * pressure is taken as the design value as it stands.
+ */
+export function resolveAmbient(
+  site: z.output<typeof siteSchema> | undefined,
+  designBasis?: DesignBasis,
+): Ambient {
   if (site?.ambientPressure !== undefined)
     return { pressure: site.ambientPressure, basis: 'given' };
-  if (site?.altitude !== undefined) {
+  const standard: Ambient =
+    site?.altitude !== undefined
+      ? {
+          pressure: ambientPressureAtAltitude(site.altitude),
+          basis: 'altitude',
+          altitude: site.altitude,
+        }
+      : { pressure: STANDARD_ATMOSPHERE, basis: 'default' };
+  if (designBasis?.barometer !== 'high') return standard;
+  return {
+    // Multiplied first, then divided: exactly 105 000 Pa at sea level.
+    pressure: (standard.pressure * HIGH_BAROMETER_PRESSURE) / STANDARD_ATMOSPHERE,
+    basis: 'given',
+    ...(standard.altitude !== undefined ? { altitude: standard.altitude } : {}),
+    barometer: 'high',
+    standardPressure: standard.pressure,
+  };
+}
+
+const SOURCE_ISA =
+  'ISO 2533 standard atmosphere (= US Standard Atmosphere 1976 below 32 km; Hoopline method notes §a.3)';
+
+/**
+ * The trail step of the ambient pressure, first in every report: the default
+ * is said out loud, with how far the real barometer strays from it.
+ */
+export function ambientStep(ambient: Ambient): Step {
+  const label = 'Ambient pressure (outside, and the zero of every gauge value)';
+  if (ambient.barometer === 'high') {
+    const standard = ambient.standardPressure ?? STANDARD_ATMOSPHERE;
+    const where =
+      ambient.altitude !== undefined
+        ? `p_ISA(${withUnit(ambient.altitude, 'm')}) = ${withUnit(standard, 'Pa')}`
+        : `${withUnit(standard, 'Pa')} at sea level`;
     return {
-      pressure: ambientPressureAtAltitude(site.altitude),
-      basis: 'altitude',
-      altitude: site.altitude,
+      id: 'ambient-pressure',
+      label: `${label}, designed for a high barometer`,
+      expression: 'p_amb = p_ISA·105/101.325',
+      substituted: `p_amb = ${withUnit(standard, 'Pa')}·105/101.325 (standard: ${where})`,
+      value: ambient.pressure,
+      unit: 'Pa',
+      source: `high-barometer design basis, the project's choice: the standard value raised by 3.6 %, to 105 kPa at sea level, within the ±3–5 % the barometer varies about it (Hoopline method notes §a.2, §a.3 caution; the 105 kPa is common practice, no source); standard value: ${SOURCE_ISA}`,
     };
   }
-  return { pressure: STANDARD_ATMOSPHERE, basis: 'default' };
+  if (ambient.basis === 'given') {
+    return {
+      id: 'ambient-pressure',
+      label,
+      expression: 'p_amb = given',
+      substituted: `p_amb = ${withUnit(ambient.pressure, 'Pa')}`,
+      value: ambient.pressure,
+      unit: 'Pa',
+      source: 'entered for the site (taken as the design ambient as it stands)',
+    };
+  }
+  if (ambient.basis === 'altitude') {
+    return {
+      id: 'ambient-pressure',
+      label,
+      expression: 'p_amb = p_ISA(h)',
+      substituted: `p_amb = p_ISA(${withUnit(ambient.altitude ?? 0, 'm')})`,
+      value: ambient.pressure,
+      unit: 'Pa',
+      source: `${SOURCE_ISA}, at the site's altitude (geometric); the real barometer varies about ±3–5 % about it (§a.3 caution): the project may design for a high barometer`,
+    };
+  }
+  return {
+    id: 'ambient-pressure',
+    label,
+    expression: 'p_amb = p_0',
+    substituted: `p_amb = ${withUnit(ambient.pressure, 'Pa')}`,
+    value: ambient.pressure,
+    unit: 'Pa',
+    source: `default: ${SOURCE_ISA} at sea level, p_0 = 101325 Pa; the real barometer varies about ±3–5 % about it (§a.3 caution): the project may design for a high barometer (105 kPa at sea level)`,
+  };
 }
 
 /**
@@ -147,34 +233,55 @@ export interface LoadCaseIssue {
   readonly message: string;
 }
 
+/** How a side's absolute pressure moves with the ambient: 1 for "ambient" or a gauge value, 0 for an absolute one. */
+function ambientShare(spec: PressureSpec | undefined): number {
+  return !spec || spec.kind === 'ambient' || spec.reference === 'gauge' ? 1 : 0;
+}
+
 /**
  * Turns parsed load cases into absolute pressures and a differential, given
- * the ambient pressure. Returns issues for gauge values below perfect vacuum.
+ * the ambient pressure. Returns issues for gauge values below perfect vacuum,
+ * and warnings where the ambient chosen is not the worst for a case (the
+ * default standard atmosphere, or the high barometer), since the barometer
+ * moves the difference of a case given with one side absolute.
  */
 export function resolveLoadCases(
   cases: readonly ParsedLoadCase[],
-  ambient: number,
-): { cases: ResolvedLoadCase[]; issues: LoadCaseIssue[] } {
+  ambient: Ambient | number,
+  designBasis?: DesignBasis,
+): { cases: ResolvedLoadCase[]; issues: LoadCaseIssue[]; warnings: ValidityWarning[] } {
+  const ambientPressure = typeof ambient === 'number' ? ambient : ambient.pressure;
   const issues: LoadCaseIssue[] = [];
+  // Cases whose |difference| grows (rises) or shrinks (falls) as the barometer rises.
+  const rises: string[] = [];
+  const falls: string[] = [];
   const resolved = cases.map((c, index): ResolvedLoadCase => {
     const loadFactor = c.factor ?? 1;
     if (c.differential !== undefined) {
       const magnitude = c.differential * loadFactor;
       const external = c.direction === 'external-over';
+      // The two sides shown are consistent with the difference given: the
+      // outside stays at ambient unless the difference exceeds it, and then
+      // the inside is at perfect vacuum and the outside above ambient.
+      const outside = external ? Math.max(ambientPressure, c.differential) : ambientPressure;
+      const inside = external ? outside - c.differential : ambientPressure + c.differential;
       return {
         name: c.name,
-        internal: external ? Math.max(ambient - c.differential, 0) : ambient + c.differential,
-        external: ambient,
+        internal: inside,
+        external: outside,
         differential: external ? -magnitude : magnitude,
         direction: magnitude === 0 ? 'balanced' : external ? 'external-over' : 'internal-over',
         factor: loadFactor,
         description:
           `differential ${formatNumber(c.differential)} Pa, ${external ? 'outside higher' : 'inside higher'}` +
+          (external && c.differential > ambientPressure
+            ? ` (more than the ambient ${formatNumber(ambientPressure)} Pa: shown as inside 0 Pa(a), outside ${formatNumber(outside)} Pa(a))`
+            : '') +
           (loadFactor !== 1 ? `, × load factor ${formatNumber(loadFactor)}` : ''),
       };
     }
-    const internal = absoluteOf(c.internal, ambient);
-    const externalPressure = absoluteOf(c.external, ambient);
+    const internal = absoluteOf(c.internal, ambientPressure);
+    const externalPressure = absoluteOf(c.external, ambientPressure);
     if (internal < 0)
       issues.push({ index, field: 'internal', message: 'is below perfect vacuum at this site' });
     if (externalPressure < 0)
@@ -182,6 +289,10 @@ export function resolveLoadCases(
     const differential = (internal - externalPressure) * loadFactor;
     const direction: PressureDirection =
       differential > 0 ? 'internal-over' : differential < 0 ? 'external-over' : 'balanced';
+    const sensitivity = ambientShare(c.internal) - ambientShare(c.external);
+    const growth = Math.sign(differential) * sensitivity;
+    if (growth > 0) rises.push(c.name);
+    if (growth < 0) falls.push(c.name);
     return {
       name: c.name,
       internal,
@@ -194,5 +305,31 @@ export function resolveLoadCases(
         (loadFactor !== 1 ? `, × load factor ${formatNumber(loadFactor)}` : ''),
     };
   });
-  return { cases: resolved, issues };
+  const warnings: ValidityWarning[] = [];
+  const list = (names: readonly string[]) => names.map((n) => `"${n}"`).join(', ');
+  if (typeof ambient !== 'number') {
+    const high = ambient.barometer === 'high';
+    if (!high && ambient.basis !== 'given' && rises.length > 0 && !designBasis?.barometerGiven) {
+      warnings.push({
+        code: 'ambient-default',
+        severity: 'caution',
+        message: `the ambient is the standard atmosphere (${formatNumber(ambient.pressure)} Pa) by default, the least conservative choice for ${list(rises)}: with one side absolute, the pressure difference rises with the barometer, which varies some 3–5 % above the standard value (Hoopline method notes §a.3). Design for a high barometer (the project's design basis, 105 kPa at sea level) or give the site's highest ambient pressure`,
+      });
+    }
+    if (high && falls.length > 0) {
+      warnings.push({
+        code: 'high-barometer-lowers',
+        severity: 'caution',
+        message: `the high-barometer ambient (${formatNumber(ambient.pressure)} Pa) makes the pressure difference of ${list(falls)} smaller than at the standard atmosphere (one side absolute, the other against ambient): screen ${falls.length === 1 ? 'it' : 'them'} at a low barometer too`,
+      });
+    }
+    if (designBasis?.barometer === 'high' && ambient.basis === 'given' && !high) {
+      warnings.push({
+        code: 'high-barometer-given-ambient',
+        severity: 'info',
+        message: `the site's ambient pressure is given (${formatNumber(ambient.pressure)} Pa): it is taken as the design ambient as it stands, without the high-barometer margin`,
+      });
+    }
+  }
+  return { cases: resolved, issues, warnings };
 }

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import type { CautionCode } from './cautions';
+import { designBasisSchema, type DesignBasis } from './design-basis';
 import { loadCasesSchema, siteSchema, type Ambient } from './load-cases';
 import type { ComponentKind, ResolvedLoadCase, Step, ValidityWarning } from './report';
 import type { Trail } from './trail';
@@ -8,6 +9,10 @@ import type { Vocabulary } from './vocabulary';
 /** What a method's compute function is given besides its parsed input. */
 export interface MethodContext {
   readonly ambient: Ambient;
+  /** The allowable-stress basis and the barometer, defaults filled in. */
+  readonly designBasis: DesignBasis;
+  /** Warnings about the load cases as a whole (the ambient chosen), added to the report's. */
+  readonly warnings: readonly ValidityWarning[];
   /** The component's load cases, resolved to absolute pressures (empty for methods without). */
   readonly loadCases: readonly ResolvedLoadCase[];
 }
@@ -75,7 +80,8 @@ const nameField = z.string().trim().max(120, 'must be at most 120 characters').o
 
 /**
  * The shape every component input has: its kind, an optional name, the site
- * (for ambient pressure) and its load cases, plus the method's own fields.
+ * (for ambient pressure), the design basis (allowable-stress basis, barometer)
+ * and its load cases, plus the method's own fields.
  */
 export function componentShape<Kind extends ComponentKind, Shape extends z.ZodRawShape>(
   kind: Kind,
@@ -85,6 +91,7 @@ export function componentShape<Kind extends ComponentKind, Shape extends z.ZodRa
     kind: z.literal(kind),
     name: nameField,
     site: siteSchema.optional(),
+    designBasis: designBasisSchema.optional(),
     loadCases: loadCasesSchema,
     ...shape,
   };
@@ -99,6 +106,7 @@ export function componentShapeWithoutLoadCases<
     kind: z.literal(kind),
     name: nameField,
     site: siteSchema.optional(),
+    designBasis: designBasisSchema.optional(),
     ...shape,
   };
 }

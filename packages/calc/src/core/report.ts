@@ -121,8 +121,17 @@ export interface Report {
   readonly inputs: Readonly<Record<string, unknown>>;
   readonly ambient: {
     readonly pressure: number;
+    /** 'given' also for a high-barometer design ambient, which then carries `barometer` and `standardPressure`. */
     readonly basis: 'default' | 'altitude' | 'given';
     readonly altitude?: number;
+    readonly barometer?: 'high';
+    /** The standard-atmosphere value the high barometer was raised from, Pa. */
+    readonly standardPressure?: number;
+  };
+  /** The design basis taken: the allowable-stress basis and the barometer (defaults or the project's choice). */
+  readonly designBasis: {
+    readonly allowableStress: 'asme-viii-1' | 'en-13445-3';
+    readonly barometer: 'standard' | 'high';
   };
   /** Steps common to every load case (geometry, material, rigidity…). */
   readonly steps: readonly Step[];

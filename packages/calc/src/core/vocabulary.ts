@@ -38,6 +38,17 @@ export const COMMON_VOCABULARY: Vocabulary = {
     },
   },
   'loadCases.*.factor': { label: 'Load factor' },
+  'designBasis.allowableStress': {
+    label: 'Allowable-stress basis',
+    options: {
+      'asme-viii-1': 'ASME VIII-1: min(tensile/3.5, 2/3·yield)',
+      'en-13445-3': 'EN 13445-3: min(Rp0.2/1.5, Rm/2.4)',
+    },
+  },
+  'designBasis.barometer': {
+    label: 'Barometer designed for',
+    options: { standard: 'Standard atmosphere', high: 'High barometer (105 kPa at sea level)' },
+  },
 };
 
 /** The words of one field of a method: its own, then the shared ones. */

@@ -10,7 +10,7 @@ export const MATERIAL_VOCABULARY: Vocabulary = {
   'material.name': { label: 'Custom material' },
   'material.elasticModulus': { label: 'Elastic modulus E' },
   'material.poissonRatio': { label: 'Poisson’s ratio ν' },
-  'material.strength': { label: 'Strength the design factor divides' },
+  'material.strength': { label: 'Strength (yield, tensile or design value, as its basis says)' },
   'material.strengthBasis': {
     label: 'Strength basis',
     options: {
@@ -22,6 +22,8 @@ export const MATERIAL_VOCABULARY: Vocabulary = {
   'material.ultimateStrength': { label: 'Ultimate tensile strength' },
   'material.density': { label: 'Density' },
   'material.brittle': { label: 'Brittle material' },
+  'material.polymer': { label: 'Polymer (creeps under sustained load)' },
+  'material.longTermModulus': { label: 'Long-term (creep) modulus' },
   'material.designFactor': { label: 'Material design factor' },
   allowableStress: {
     label: 'Allowable stress (given)',
@@ -29,7 +31,7 @@ export const MATERIAL_VOCABULARY: Vocabulary = {
   },
   designFactor: {
     label: 'Design factor on the material strength',
-    hint: "Blank uses the material's own.",
+    hint: "On the material's strength; blank: the project's code basis for metals, the material's own factor otherwise.",
   },
   corrosionAllowance: { label: 'Corrosion allowance' },
 };

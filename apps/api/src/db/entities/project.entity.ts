@@ -1,3 +1,4 @@
+import type { AllowableBasis, Barometer } from '@hoopline/calc';
 import { Column, Entity, PrimaryColumn } from 'typeorm';
 import type { JsonObject } from './json';
 import type { UnitSystem } from './user.entity';
@@ -22,6 +23,12 @@ export class ProjectEntity {
   /** The site as typed ({ altitude: "5280 ft" }); null for projects from before it was kept. */
   @Column('jsonb', { name: 'site_as_typed', nullable: true })
   siteAsTyped: SiteAsTyped | null;
+  /** Basis of the allowable stress of every component (the calc's designBasis.allowableStress). */
+  @Column('text', { name: 'allowable_basis', default: 'asme-viii-1' })
+  allowableBasis: AllowableBasis;
+  /** Barometer every component is designed for (the calc's designBasis.barometer). */
+  @Column('text', { name: 'design_barometer', default: 'standard' })
+  designBarometer: Barometer;
   @Column('text', { name: 'unit_system' }) unitSystem: UnitSystem;
   @Column('text') notes: string;
   @Column('integer') version: number;

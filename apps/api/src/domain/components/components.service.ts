@@ -7,7 +7,7 @@ import { pageOf, type Page, type PageRequest } from '../../http/pagination';
 import { canDesign, seesOnlyIssued, type Actor, type Decision } from '../../policy/policy';
 import { recordAudit } from '../audit/audit.service';
 import { requireProjectStanding } from '../projects/project-access';
-import { projectSite, staleVersion } from '../projects/projects.service';
+import { projectDesignBasis, projectSite, staleVersion } from '../projects/projects.service';
 import { computeContent, contentHash, verdictOf } from '../revisions/revision-content';
 import {
   revisionView,
@@ -129,7 +129,11 @@ export class ComponentsService {
     return this.dataSource.transaction(async (manager) => {
       const standing = await requireProjectStanding(manager, actor, projectId);
       enforce(canDesign(standing));
-      const content = computeContent(input.inputs, projectSite(standing.project));
+      const content = computeContent(
+        input.inputs,
+        projectSite(standing.project),
+        projectDesignBasis(standing.project),
+      );
       const now = new Date();
       const component: ComponentEntity = Object.assign(new ComponentEntity(), {
         id: randomUUID(),

@@ -5,6 +5,8 @@ import {
   ambientPressureAtAltitude,
   siteSchema,
   type SiteInput,
+  type AllowableBasis,
+  type Barometer,
 } from '@hoopline/calc';
 import {
   CustomMaterialEntity,
@@ -34,6 +36,18 @@ export type SiteValue = { altitude?: number | undefined; ambientPressure?: numbe
 /** A site as a client sends it: text with units ("5280 ft") or SI numbers; checked by the calc's siteSchema. */
 export type SiteGiven = SiteInput;
 
+/** The project's design basis: every key always set (the engine's defaults unless chosen). */
+export interface DesignBasisValue {
+  readonly allowableStress: AllowableBasis;
+  readonly barometer: Barometer;
+}
+
+/** A design basis as a create or update body gives it: either key may be left out. */
+export type DesignBasisInput = {
+  allowableStress?: AllowableBasis | undefined;
+  barometer?: Barometer | undefined;
+};
+
 export interface ProjectView {
   readonly id: string;
   readonly number: string;
@@ -43,8 +57,9 @@ export interface ProjectView {
   readonly site: SiteValue;
   /** The site as it was typed ("5280 ft"); SI numbers for a project from before typed sites were kept. */
   readonly siteAsTyped: SiteAsTyped;
-  /** Pa, absolute: from the altitude (standard atmosphere), as given, or sea level. */
+  /** Pa, absolute: from the altitude (standard atmosphere), as given, or sea level (before the high-barometer margin). */
   readonly ambientPressure: number;
+  readonly designBasis: DesignBasisValue;
   readonly unitSystem: UnitSystem;
   readonly notes: string;
   readonly version: number;
@@ -71,6 +86,7 @@ export interface ProjectInput {
   readonly name: string;
   readonly client?: string | undefined;
   readonly site?: SiteGiven | undefined;
+  readonly designBasis?: DesignBasisInput | undefined;
   readonly unitSystem: UnitSystem;
   readonly notes?: string | undefined;
 }
@@ -80,6 +96,8 @@ export interface ProjectPatch {
   readonly name?: string | undefined;
   readonly client?: string | undefined;
   readonly site?: SiteGiven | null | undefined;
+  /** The keys given change; a key left out keeps its value. */
+  readonly designBasis?: DesignBasisInput | undefined;
   readonly unitSystem?: UnitSystem | undefined;
   readonly notes?: string | undefined;
   readonly version: number;
@@ -117,6 +135,10 @@ function siteColumns(
   };
 }
 
+export function projectDesignBasis(p: ProjectEntity): DesignBasisValue {
+  return { allowableStress: p.allowableBasis, barometer: p.designBarometer };
+}
+
 export function projectView(p: ProjectEntity, myRole: Role | null): ProjectView {
   return {
     id: p.id,
@@ -128,6 +150,7 @@ export function projectView(p: ProjectEntity, myRole: Role | null): ProjectView 
     ambientPressure:
       p.siteAmbientPressure ??
       (p.siteAltitude !== null ? ambientPressureAtAltitude(p.siteAltitude) : STANDARD_ATMOSPHERE),
+    designBasis: projectDesignBasis(p),
     unitSystem: p.unitSystem,
     notes: p.notes,
     version: p.version,
@@ -199,6 +222,8 @@ export class ProjectsService {
           name: input.name,
           client: input.client ?? '',
           ...siteColumns(input.site),
+          allowableBasis: input.designBasis?.allowableStress ?? 'asme-viii-1',
+          designBarometer: input.designBasis?.barometer ?? 'standard',
           unitSystem: input.unitSystem,
           notes: input.notes ?? '',
           version: 1,
@@ -256,6 +281,10 @@ export class ProjectsService {
         if (patch.unitSystem !== undefined) changes.unitSystem = patch.unitSystem;
         if (patch.notes !== undefined) changes.notes = patch.notes;
         if (patch.site !== undefined) Object.assign(changes, siteColumns(patch.site));
+        if (patch.designBasis?.allowableStress !== undefined)
+          changes.allowableBasis = patch.designBasis.allowableStress;
+        if (patch.designBasis?.barometer !== undefined)
+          changes.designBarometer = patch.designBasis.barometer;
         await manager.update(ProjectEntity, { id: projectId }, changes);
         const after = await manager.findOneByOrFail(ProjectEntity, { id: projectId });
         await recordAudit(manager, {
@@ -456,6 +485,7 @@ function projectSummary(p: ProjectEntity) {
     name: p.name,
     client: p.client,
     site: projectSite(p),
+    designBasis: projectDesignBasis(p),
     unitSystem: p.unitSystem,
     version: p.version,
   };

@@ -10,6 +10,7 @@ import {
 import { toJson, type JsonObject } from '../../db/entities/json';
 import { AppError, validationFailed } from '../../http/errors';
 import type { SiteAsTyped } from '../../db/entities/project.entity';
+import type { DesignBasisValue } from '../projects/projects.service';
 
 /** What a revision holds and its hash covers. */
 export interface RevisionContent {
@@ -56,11 +57,17 @@ export function inputIssues(error: CalcInputError, prefix = 'inputs') {
 
 /**
  * Recomputes on the server from the inputs alone (a client's numbers are
- * never taken): fills the site from the project when the inputs carry none,
- * parses with the calc (its issues become 400s under `inputs.`), computes the
+ * never taken): fills the site and the design basis from the project when
+ * the inputs carry none (the basis only where the project's differs from the
+ * engine's defaults, so a default project's inputs stay as typed), parses
+ * with the calc (its issues become 400s under `inputs.`), computes the
  * report and stamps the engine version.
  */
-export function computeContent(rawInputs: unknown, projectSite: SiteAsTyped): RevisionContent {
+export function computeContent(
+  rawInputs: unknown,
+  projectSite: SiteAsTyped,
+  projectBasis?: DesignBasisValue,
+): RevisionContent {
   if (rawInputs === null || typeof rawInputs !== 'object' || Array.isArray(rawInputs)) {
     throw validationFailed([
       { path: 'inputs', message: 'must be a component object with a "kind"' },
@@ -69,6 +76,13 @@ export function computeContent(rawInputs: unknown, projectSite: SiteAsTyped): Re
   const inputs: Record<string, unknown> = { ...(rawInputs as Record<string, unknown>) };
   if (inputs['site'] === undefined && Object.keys(projectSite).length > 0) {
     inputs['site'] = { ...projectSite };
+  }
+  if (inputs['designBasis'] === undefined && projectBasis) {
+    const chosen: Record<string, string> = {};
+    if (projectBasis.allowableStress !== 'asme-viii-1')
+      chosen['allowableStress'] = projectBasis.allowableStress;
+    if (projectBasis.barometer !== 'standard') chosen['barometer'] = projectBasis.barometer;
+    if (Object.keys(chosen).length > 0) inputs['designBasis'] = chosen;
   }
   let report: Report;
   try {

@@ -31,7 +31,7 @@ import {
   type RevisionContext,
 } from '../components/component-access';
 import type { Notifier } from '../notifications/notifier';
-import { projectSite, staleVersion } from '../projects/projects.service';
+import { projectDesignBasis, projectSite, staleVersion } from '../projects/projects.service';
 import { Where, containsPattern, isoRequired, paged, rows, run } from '../sql';
 import { diffInputs, diffResults, type Change } from './diff';
 import { computeContent, contentHash } from './revision-content';
@@ -148,7 +148,11 @@ export class RevisionsService {
           `revision ${latest.number} is with a checker: withdraw it before saving a new one`,
         );
       }
-      const content = computeContent(input.inputs, projectSite(standing.project));
+      const content = computeContent(
+        input.inputs,
+        projectSite(standing.project),
+        projectDesignBasis(standing.project),
+      );
       if (content.inputs['kind'] !== component.kind) {
         throw validationFailed([
           { path: 'inputs.kind', message: `must stay "${component.kind}" for this component` },

@@ -1,4 +1,4 @@
-import { customMaterialSchema, findMaterial, MATERIALS } from '@hoopline/calc';
+import { customMaterialSchema, findMaterial, isCodeMaterial, MATERIALS } from '@hoopline/calc';
 import { useState } from 'react';
 import { useAddProjectMaterial, useProjectMaterials } from '../../api/projects';
 import type { UnitSystem } from '../../api/types';
@@ -119,8 +119,12 @@ export function MaterialField({
             : builtIn.strengthBasis === 'tensile'
               ? 'tensile'
               : 'design'}{' '}
-          {show(builtIn.strength, 'Pa', system)} · design factor {builtIn.designFactor}
+          {show(builtIn.strength, 'Pa', system)}
+          {isCodeMaterial(builtIn) && builtIn.ultimateStrength !== null
+            ? ` · tensile ${show(builtIn.ultimateStrength, 'Pa', system)} (specified minimums; allowable on the project's code basis)`
+            : ` (${builtIn.valueBasis.strength}) · design factor ${builtIn.designFactor}`}
           {builtIn.brittle ? ' · brittle' : ''}
+          {builtIn.polymer ? ' · polymer' : ''}
         </p>
       ) : null}
       {custom ? (
@@ -175,6 +179,15 @@ export function MaterialField({
             <option value="tensile">Short-term tensile strength</option>
             <option value="design-value">Maker's design value</option>
           </SelectField>
+          <UnitInput
+            id={fieldId(`${path}.ultimateStrength`)}
+            label="Tensile strength (optional)"
+            kind="pressure"
+            system={system}
+            value={quantityText(custom['ultimateStrength'], 'pressure')}
+            onValueChange={(text) => editor.set(`${path}.ultimateStrength`, text)}
+            error={errorFor(`${path}.ultimateStrength`)}
+          />
           <TextField
             id={fieldId(`${path}.designFactor`)}
             label="Design factor (optional)"
@@ -184,7 +197,7 @@ export function MaterialField({
             onChange={(event) => editor.setNumber(`${path}.designFactor`, event.target.value)}
             error={errorFor(`${path}.designFactor`)}
           />
-          <div className="self-end pb-1.5">
+          <div className="flex flex-col gap-1 self-end pb-1.5">
             <CheckboxField
               label="Brittle (glass, acrylic, polycarbonate)"
               checked={custom['brittle'] === true}
@@ -192,7 +205,26 @@ export function MaterialField({
                 editor.set(`${path}.brittle`, event.target.checked ? true : undefined)
               }
             />
+            <CheckboxField
+              label="Polymer (creeps under sustained load)"
+              checked={custom['polymer'] === true}
+              onChange={(event) => {
+                editor.set(`${path}.polymer`, event.target.checked ? true : undefined);
+                if (!event.target.checked) editor.set(`${path}.longTermModulus`, undefined);
+              }}
+            />
           </div>
+          {custom['polymer'] === true ? (
+            <UnitInput
+              id={fieldId(`${path}.longTermModulus`)}
+              label="Long-term modulus (optional)"
+              kind="pressure"
+              system={system}
+              value={quantityText(custom['longTermModulus'], 'pressure')}
+              onValueChange={(text) => editor.set(`${path}.longTermModulus`, text)}
+              error={errorFor(`${path}.longTermModulus`)}
+            />
+          ) : null}
           {canSaveToProject && customIssues.size === 0 ? (
             <div className="flex items-center gap-2 sm:col-span-2">
               <Button

@@ -26,11 +26,11 @@ function governingText(raw: Record<string, unknown>): string {
   return percent(engine(raw).governing!.utilisation);
 }
 
-function renderWorkbench(onSave = vi.fn(async () => undefined)) {
+function renderWorkbench(onSave = vi.fn(async () => undefined), onProject: Project = project) {
   fakeApi({ 'GET /projects/p1/materials': { body: { items: [] } } });
   renderApp(
     <Workbench
-      project={project}
+      project={onProject}
       kind="circular-plate"
       initialInputs={template}
       saveLabel="Save as revision 1"
@@ -97,6 +97,39 @@ describe('Workbench', () => {
     const [inputs] = onSave.mock.calls[0] as unknown as [Record<string, unknown>];
     expect(inputs).toEqual(template);
     expect(inputs).not.toHaveProperty('report');
+  });
+
+  it('computes with the project’s design basis, and saves it with the inputs as the server would', async () => {
+    const steel = { ...template, material: 'carbon-steel' };
+    const onSave = vi.fn(async () => undefined);
+    fakeApi({ 'GET /projects/p1/materials': { body: { items: [] } } });
+    renderApp(
+      <Workbench
+        project={
+          {
+            ...project,
+            designBasis: { allowableStress: 'en-13445-3', barometer: 'high' },
+          } as unknown as Project
+        }
+        kind="circular-plate"
+        initialInputs={steel}
+        saveLabel="Save as revision 1"
+        canSaveMaterials
+        onSave={onSave}
+      />,
+    );
+    const expected = {
+      ...steel,
+      designBasis: { allowableStress: 'en-13445-3', barometer: 'high' },
+    };
+    // The live result is the engine's on the EN 13445-3 basis with a high barometer, not the default's.
+    const summary = await screen.findByText(/^Governing:/);
+    expect(summary.closest('p')!).toHaveTextContent(governingText(expected));
+    expect(governingText(expected)).not.toBe(governingText(steel));
+    await userEvent.click(screen.getByRole('button', { name: 'Save as revision 1' }));
+    await vi.waitFor(() => expect(onSave).toHaveBeenCalledTimes(1));
+    const [inputs] = onSave.mock.calls[0] as unknown as [Record<string, unknown>];
+    expect(inputs).toEqual(expected);
   });
 
   it('maps the server’s 400 fields (inputs.<path>) onto the fields', async () => {

@@ -35,11 +35,28 @@ export function siteInput(project: Project): Raw | undefined {
   return undefined;
 }
 
-/** The inputs with the project's site put in, so the server recomputes with the same ambient. */
+/**
+ * The project's design basis as an engine `designBasis` input: only the keys
+ * that differ from the engine's defaults, as the server writes it, or nothing.
+ */
+export function designBasisInput(project: Project): Raw | undefined {
+  const basis = project.designBasis;
+  const chosen: Raw = {};
+  if (basis?.allowableStress && basis.allowableStress !== 'asme-viii-1')
+    chosen['allowableStress'] = basis.allowableStress;
+  if (basis?.barometer && basis.barometer !== 'standard') chosen['barometer'] = basis.barometer;
+  return Object.keys(chosen).length > 0 ? chosen : undefined;
+}
+
+/**
+ * The inputs with the project's site and design basis put in, so the live
+ * report and the server's use the same ambient and allowable-stress basis.
+ */
 export function withSite(raw: Raw, project: Project): Raw {
   const site = siteInput(project);
-  const { site: _old, ...rest } = raw;
-  return site ? { ...rest, site } : rest;
+  const designBasis = designBasisInput(project);
+  const { site: _old, designBasis: _oldBasis, ...rest } = raw;
+  return { ...rest, ...(site ? { site } : {}), ...(designBasis ? { designBasis } : {}) };
 }
 
 export interface SaveMeta {

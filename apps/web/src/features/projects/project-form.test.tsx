@@ -42,6 +42,47 @@ describe('ProjectForm', () => {
     expect(input).toMatchObject({ number: 'HL-7', name: 'Drying cabinet', unitSystem: 'si' });
   });
 
+  it('sends the design basis: ASME VIII-1 and the standard barometer unless chosen', async () => {
+    const onSubmit = vi.fn(async () => undefined);
+    renderApp(
+      <ProjectForm
+        initialValues={projectFormValues(undefined, 'si')}
+        submitLabel="Create"
+        onSubmit={onSubmit}
+      />,
+    );
+    await userEvent.type(await screen.findByLabelText(/Project number/), 'HL-8');
+    await userEvent.type(screen.getByLabelText(/Project name/), 'Receiver');
+    expect(screen.getByLabelText('Allowable stress of metals')).toHaveValue('asme-viii-1');
+    expect(screen.getByLabelText('Ambient for design')).toHaveValue('standard');
+    await userEvent.selectOptions(
+      screen.getByLabelText('Allowable stress of metals'),
+      'en-13445-3',
+    );
+    await userEvent.selectOptions(screen.getByLabelText('Ambient for design'), 'high');
+    await userEvent.click(screen.getByRole('button', { name: 'Create' }));
+    await vi.waitFor(() => expect(onSubmit).toHaveBeenCalledTimes(1));
+    const input = (onSubmit.mock.calls[0] as unknown as [ReturnType<typeof projectInput>])[0];
+    expect(input.designBasis).toEqual({ allowableStress: 'en-13445-3', barometer: 'high' });
+  });
+
+  it('shows a project’s saved design basis', async () => {
+    renderApp(
+      <ProjectForm
+        initialValues={projectFormValues(
+          {
+            designBasis: { allowableStress: 'en-13445-3', barometer: 'high' },
+          } as unknown as Parameters<typeof projectFormValues>[0],
+          'si',
+        )}
+        submitLabel="Save"
+        onSubmit={vi.fn()}
+      />,
+    );
+    expect(await screen.findByLabelText('Allowable stress of metals')).toHaveValue('en-13445-3');
+    expect(screen.getByLabelText('Ambient for design')).toHaveValue('high');
+  });
+
   it('refuses an altitude without a unit, or outside the standard atmosphere', async () => {
     renderApp(
       <ProjectForm

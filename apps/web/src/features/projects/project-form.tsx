@@ -3,7 +3,7 @@ import { Form, Formik, useFormikContext } from 'formik';
 import { useState } from 'react';
 import * as yup from 'yup';
 import type { ProjectInput } from '../../api/projects';
-import type { Project, SiteAsTyped, UnitSystem } from '../../api/types';
+import type { DesignBasis, Project, SiteAsTyped, UnitSystem } from '../../api/types';
 import { Button } from '../../components/button';
 import {
   FormError,
@@ -22,6 +22,8 @@ export interface ProjectFormValues {
   siteBasis: SiteBasis;
   altitude: string;
   ambientPressure: string;
+  allowableBasis: DesignBasis['allowableStress'];
+  barometer: DesignBasis['barometer'];
   unitSystem: UnitSystem;
   notes: string;
 }
@@ -86,6 +88,8 @@ export const projectSchema = yup.object({
           }
         }),
   }),
+  allowableBasis: yup.string().oneOf(['asme-viii-1', 'en-13445-3']).required(),
+  barometer: yup.string().oneOf(['standard', 'high']).required(),
   unitSystem: yup.string().oneOf(['si', 'us']).required(),
   notes: yup.string().max(4000, 'Use at most 4000 characters'),
 });
@@ -113,6 +117,8 @@ export function projectFormValues(
           : 'standard',
     altitude: typed(site.altitude, 'm'),
     ambientPressure: typed(site.ambientPressure, 'Pa'),
+    allowableBasis: project?.designBasis?.allowableStress ?? 'asme-viii-1',
+    barometer: project?.designBasis?.barometer ?? 'standard',
     unitSystem: project?.unitSystem ?? defaultSystem,
     notes: project?.notes ?? '',
   };
@@ -132,6 +138,7 @@ export function projectInput(values: ProjectFormValues): ProjectInput {
     name: values.name.trim(),
     client: values.client.trim(),
     site,
+    designBasis: { allowableStress: values.allowableBasis, barometer: values.barometer },
     unitSystem: values.unitSystem,
     notes: values.notes,
   };
@@ -146,6 +153,8 @@ const FIELDS = [
   'unitSystem',
   'notes',
   'siteBasis',
+  'allowableBasis',
+  'barometer',
 ];
 
 function SiteFields() {
@@ -179,6 +188,33 @@ function SiteFields() {
   );
 }
 
+/** The project's design basis: the allowable-stress basis and the barometer of every component. */
+function DesignBasisFields() {
+  return (
+    <fieldset className="grid gap-3 rounded border border-line p-3 sm:grid-cols-2">
+      <legend className="px-1 text-xs font-medium">
+        Design basis (for every component of the project)
+      </legend>
+      <FormikSelectField
+        name="allowableBasis"
+        label="Allowable stress of metals"
+        hint="From the specified minimum yield and tensile strengths; non-metals keep their design factor."
+      >
+        <option value="asme-viii-1">ASME VIII-1: lower of tensile/3.5 and 2/3 of yield</option>
+        <option value="en-13445-3">EN 13445-3: lower of yield/1.5 and tensile/2.4</option>
+      </FormikSelectField>
+      <FormikSelectField
+        name="barometer"
+        label="Ambient for design"
+        hint="The barometer varies some 3–5 % about the standard atmosphere."
+      >
+        <option value="standard">Standard atmosphere of the site</option>
+        <option value="high">High barometer (105 kPa at sea level, +3.6 %)</option>
+      </FormikSelectField>
+    </fieldset>
+  );
+}
+
 export function ProjectForm({
   initialValues,
   submitLabel,
@@ -201,7 +237,12 @@ export function ProjectForm({
           await onSubmit(projectInput(values));
         } catch (error) {
           const mapped = serverFieldErrors(error, FIELDS, {
-            aliases: { 'site.altitude': 'altitude', 'site.ambientPressure': 'ambientPressure' },
+            aliases: {
+              'site.altitude': 'altitude',
+              'site.ambientPressure': 'ambientPressure',
+              'designBasis.allowableStress': 'allowableBasis',
+              'designBasis.barometer': 'barometer',
+            },
           });
           helpers.setErrors(mapped.fields);
           setFormError(mapped.message);
@@ -217,6 +258,7 @@ export function ProjectForm({
           </div>
           <FormikTextField name="client" label="Client" />
           <SiteFields />
+          <DesignBasisFields />
           <FormikSelectField
             name="unitSystem"
             label="Unit system"

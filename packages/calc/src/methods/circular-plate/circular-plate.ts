@@ -2,14 +2,16 @@ import { z } from 'zod';
 import { length } from '../../core/fields';
 import { formatNumber, withUnit } from '../../core/format';
 import { componentShape, defineMethod } from '../../core/method';
-import type { ResolvedLoadCase } from '../../core/report';
+import type { ResolvedLoadCase, ValidityWarning } from '../../core/report';
 import { Trail } from '../../core/trail';
 import { plateLimits } from '../plate-limits';
+import { hazardCautions } from '../vessel-hazards';
 import type { CautionCode } from '../../core/cautions';
 import {
   allowableOverrides,
   allowableStress,
   materialSchema,
+  materialSteps,
   resolveMaterial,
   materialCautions,
   type Material,
@@ -232,6 +234,7 @@ export const circularPlate = defineMethod({
       unit: 'm',
       source: 'corrosion or machining allowance taken off (common practice, no source)',
     });
+    materialSteps(common, material);
     const E = material.elasticModulus;
     const nu = material.poissonRatio;
     const D = common.step({
@@ -243,15 +246,14 @@ export const circularPlate = defineMethod({
       unit: 'N·m',
       source: SOURCE_D,
     });
-    const S = allowableStress(common, material, input);
+    const warnings: ValidityWarning[] = [];
+    const S = allowableStress(common, material, input, {
+      designBasis: context.designBasis,
+      warnings,
+    });
     const shared: Common = { a, t, nu, E, D, S, material };
     const cases = context.loadCases.map((lc) => caseTrail(input, shared, lc));
 
-    const warnings: Array<{
-      code: string;
-      severity: 'caution' | 'outside-validity';
-      message: string;
-    }> = [];
     if (t / (2 * a) > 0.1) {
       warnings.push({
         code: 'thick-plate',
@@ -269,6 +271,7 @@ export const circularPlate = defineMethod({
     }
     const cautions: CautionCode[] = ['small-deflection', 'edge-condition'];
     cautions.push(...materialCautions(material));
+    cautions.push(...hazardCautions(material, context.loadCases, null));
 
     return {
       title: `Circular flat plate, ${input.edge === 'clamped' ? 'clamped' : 'simply supported'} edge, ${material.name}`,

@@ -5,7 +5,6 @@ import type { Report } from '../../core/report';
 import { screen } from '../../screen';
 import { toSi } from '../../units/units';
 import { EXTERNAL_PRESSURE_DEFAULTS, cylindricalShell } from './cylindrical-shell';
-import { collapsePressure } from './shell-formulas';
 
 // ---------------------------------------------------------------- helpers
 
@@ -171,9 +170,12 @@ describe('internal pressure through screen()', () => {
     const report = screen({ ...base, corrosionAllowance: '2 mm' });
     expect(stepValue(report, 'inside-radius')).toBeCloseTo(0.502, 12);
     expect(stepValue(report, 'outside-diameter')).toBeCloseTo(1.016, 12);
+    // The required thickness carries the allowance on top of the UG-27 thickness (UG-25 practice).
     const tc = stepValue(report, 'ug27-thickness-circumferential', 0);
-    expect(tc).toBeCloseTo((1e6 * 0.502) / (138e6 * 0.85 - 0.6e6), 12);
     expect(output(report, 'required-thickness')).toBeCloseTo(tc + 0.002, 12);
+    // The corroded radius needs more wall than the new one would (round trip in the next test).
+    const uncorroded = screen({ ...base, thickness: 0.006 });
+    expect(tc).toBeGreaterThan(stepValue(uncorroded, 'ug27-thickness-circumferential', 0));
   });
 
   it('round trips: screening at the required thickness, or at the allowable pressure, gives utilisation 1', () => {
@@ -246,7 +248,7 @@ describe('external pressure through screen()', () => {
     ).toBeLessThan(1e-6);
   });
 
-  it('defaults: κ = 1, γ = 3, Rankine, stated in the trail (plastic_and_interaction_D1m_t5mm_L1m)', () => {
+  it('defaults: κ = 1, n_b = 3, Rankine, stated in the trail (plastic_and_interaction_D1m_t5mm_L1m)', () => {
     expect(EXTERNAL_PRESSURE_DEFAULTS).toEqual({
       knockdown: 1,
       designFactor: 3,
@@ -263,7 +265,11 @@ describe('external pressure through screen()', () => {
     expect(
       relativeError(output(report, 'allowable-pressure'), c.expected.rankine_Pa! / 3),
     ).toBeLessThan(1e-6);
-    expect(stepOf(report, 'knockdown').source).toMatch(/^default 1: .*UG-28.*from memory/);
+    expect(stepOf(report, 'knockdown').source).toMatch(
+      /^default 1, the least conservative value: .*UG-28.*from memory/,
+    );
+    // κ = 1 is the least conservative knock-down there is: said as a caution too.
+    expect(report.warnings.find((w) => w.code === 'knockdown-default')?.severity).toBe('caution');
     expect(stepOf(report, 'external-design-factor').source).toMatch(
       /^default 3: .*UG-28.*from memory/,
     );
@@ -277,10 +283,12 @@ describe('external pressure through screen()', () => {
   it('takes the EN 13445-3 basis and the API STD 2RD interaction when asked', () => {
     const c = checkValue('plastic_and_interaction_D1m_t5mm_L1m');
     const en = screen({ ...drum, externalPressure: { knockdown: 0.5, designFactor: 1.5 } });
-    expect(output(en, 'allowable-pressure')).toBeCloseTo(
-      collapsePressure(0.5 * c.expected.elastic_von_mises_Pa!, 2.5e6, 'rankine') / 1.5,
-      0,
-    );
+    // EN 13445-3 clause 8 (curve from memory, Hoopline method notes §f.5): P_m/P_y = 0.937/2.5 is
+    // below 1, where the lower-bound curve is P_r = 0.5·P_m, and P_r/1.5 is the allowable. The
+    // Rankine route with κ = 0.5 stays below that, and not far below (within 20 %).
+    const enCurve = (0.5 * c.expected.elastic_von_mises_Pa!) / 1.5;
+    expect(output(en, 'allowable-pressure')).toBeLessThan(enCurve);
+    expect(output(en, 'allowable-pressure')).toBeGreaterThan(0.8 * enCurve);
     expect(stepOf(en, 'knockdown').source).toBe('entered by the user');
     const api = screen({ ...drum, externalPressure: { interaction: 'api-2rd' } });
     expect(
@@ -409,6 +417,150 @@ describe('external pressure through screen()', () => {
   });
 });
 
+// ---------------------------------------------------------------- allowable basis, design factors, hazards (issue 10)
+
+describe('allowable basis and design factors', () => {
+  it('UG-27 MAWP of a carbon-steel shell, ID 1000 mm, 8 mm: about 22 bar on the ASME II-D allowable (ug27_cylinder_mawp_sa516_70; S from memory)', () => {
+    const c = checkValue('ug27_cylinder_mawp_sa516_70');
+    const shell = {
+      kind: 'cylindrical-shell',
+      diameter: '1000 mm',
+      diameterBasis: 'inside',
+      thickness: '8 mm',
+      length: '2 m',
+      material: 'carbon-steel',
+      jointEfficiency: 1,
+      loadCases: [{ name: 'Design', internal: '10 bar(g)' }],
+    } as const;
+    const report = screen(shell);
+    const mawp = output(report, 'mawp');
+    expect(relativeError(mawp, c.expected.mawp_circumferential_Pa!)).toBeLessThan(c.tolerance_rel);
+    // yield/1.5 gave about 27.5 bar (issue 10): the code basis is a fifth lower.
+    expect(mawp).toBeLessThan(0.81 * 2.75e6);
+    expect(stepOf(report, 'allowable-stress').label).toContain('the tensile term governs');
+    // The EN 13445-3 basis is the yield term here, 173.3 MPa (en13445_nominal_design_stress).
+    const en = screen({ ...shell, designBasis: { allowableStress: 'en-13445-3' } });
+    expect(
+      relativeError(
+        stepValue(en, 'allowable-stress'),
+        checkValue('en13445_nominal_design_stress').expected['carbon-steel_Pa']!,
+      ),
+    ).toBeLessThan(1e-9);
+  });
+
+  it('a brittle polymer tube takes its own design factor on collapse: acrylic OD 150 × 4 × 400 mm fails at full vacuum (issue 10)', () => {
+    const tube = {
+      kind: 'cylindrical-shell',
+      diameter: '150 mm',
+      thickness: '4 mm',
+      length: '400 mm',
+      material: 'cast-acrylic',
+      loadCases: [vacuum],
+    } as const;
+    const report = screen(tube);
+    expect(stepValue(report, 'external-design-factor')).toBe(10);
+    expect(stepOf(report, 'external-design-factor').source).toContain('n_s = 10');
+    expect(report.verdict).toBe('fail');
+    // With n_b = 3 (the old default, entered) it passed at 0.84 on this E (0.76 on the 3.1 GPa
+    // E used before); the material's factor raises the utilisation by 10/3, and a caution says
+    // that the entered factor is below the material's.
+    const three = screen({ ...tube, externalPressure: { designFactor: 3 } });
+    expect(three.governing!.utilisation).toBeLessThan(1);
+    expect(report.governing!.utilisation / three.governing!.utilisation).toBeCloseTo(10 / 3, 9);
+    expect(
+      three.warnings.find((w) => w.code === 'collapse-factor-below-strength-factor')?.severity,
+    ).toBe('caution');
+    // The component's design factor reaches the collapse factor too, when larger than 3.
+    const twelve = screen({ ...tube, designFactor: 12 });
+    expect(stepValue(twelve, 'external-design-factor')).toBe(12);
+    // A steel shell keeps UG-28's 3 unless a larger factor is entered.
+    expect(stepValue(screen(drum), 'external-design-factor')).toBe(3);
+    expect(stepValue(screen({ ...drum, designFactor: 4 }), 'external-design-factor')).toBe(4);
+    expect(stepValue(screen({ ...drum, designFactor: 2 }), 'external-design-factor')).toBe(3);
+  });
+
+  it('polymer buckling uses the long-term modulus where one is given, and says so where not', () => {
+    const polymer = {
+      name: 'Test polymer',
+      elasticModulus: '3 GPa',
+      poissonRatio: 0.37,
+      strength: '70 MPa',
+      polymer: true,
+    };
+    const shortTerm = screen({ ...drum, diameter: 0.2, thickness: 0.006, material: polymer });
+    expect(shortTerm.warnings.find((w) => w.code === 'polymer-short-term-modulus')?.severity).toBe(
+      'caution',
+    );
+    expect(stepOf(shortTerm, 'buckling-modulus').label).toContain('no long-term modulus known');
+    const longTerm = screen({
+      ...drum,
+      diameter: 0.2,
+      thickness: 0.006,
+      material: { ...polymer, longTermModulus: '1 GPa' },
+    });
+    expect(stepValue(longTerm, 'buckling-modulus')).toBe(1e9);
+    expect(longTerm.warnings.map((w) => w.code)).not.toContain('polymer-short-term-modulus');
+    // von Mises is linear in E: a third of the modulus, a third of the buckling pressure.
+    expect(
+      output(longTerm, 'elastic-buckling-pressure') /
+        output(shortTerm, 'elastic-buckling-pressure'),
+    ).toBeCloseTo(1 / 3, 12);
+    expect(longTerm.cautions.map((c) => c.code)).toContain('polymer-creep');
+  });
+
+  it('defaults said out loud: the joint efficiency and the knock-down are cautions where left at 1', () => {
+    const internal = screen({ ...drum, loadCases: [{ name: '2 bar', internal: '2 bar(g)' }] });
+    expect(internal.warnings.find((w) => w.code === 'joint-efficiency-default')?.severity).toBe(
+      'caution',
+    );
+    expect(stepOf(internal, 'joint-efficiency').source).toMatch(
+      /^default 1, the least conservative/,
+    );
+    const given = screen({
+      ...drum,
+      jointEfficiency: 0.85,
+      loadCases: [{ name: '2 bar', internal: '2 bar(g)' }],
+    });
+    expect(given.warnings.map((w) => w.code)).not.toContain('joint-efficiency-default');
+    const knocked = screen({ ...drum, externalPressure: { knockdown: 0.8 } });
+    expect(knocked.warnings.map((w) => w.code)).not.toContain('knockdown-default');
+  });
+
+  it('one symbol per meaning: n_b the factor on collapse, κ the knock-down, E_j the joint efficiency, n the lobes', () => {
+    const report = screen({
+      ...drum,
+      loadCases: [vacuum, { name: '2 bar', internal: '2 bar(g)' }],
+    });
+    expect(stepOf(report, 'external-design-factor').expression).toBe('n_b');
+    expect(stepOf(report, 'knockdown').expression).toBe('κ');
+    expect(stepOf(report, 'joint-efficiency').expression).toBe('E_j');
+    expect(stepOf(report, 'allowable-membrane-stress').expression).toBe('S·E_j');
+    // γ appears only as the ratio of specific heats of the gas in the stored-energy step.
+    const withGamma = [...report.steps, ...report.cases.flatMap((c) => c.steps)].filter((s) =>
+      s.expression.includes('γ'),
+    );
+    expect(withGamma.map((s) => s.id)).toEqual(['stored-energy-brode']);
+    expect(withGamma[0]!.expression).toContain('γ = cp/cv');
+  });
+
+  it('hazards: an implosion caution for a brittle shell or a large evacuated volume; the stored energy above 100 kJ (UC Berkeley EHS)', () => {
+    // D = 1 m, L = 1 m: V = 0.78 m³, W = 79 kJ at full vacuum: below the threshold.
+    expect(screen(drum).cautions.map((c) => c.code)).not.toContain('implosion');
+    // 1 m³ at full vacuum is about 100 kJ (common practice, no source): 2 m long is past it.
+    const long = screen({ ...drum, length: 2 });
+    expect(long.cautions.map((c) => c.code)).toContain('implosion');
+    expect(long.warnings.find((w) => w.code === 'implosion-energy')?.severity).toBe('caution');
+    const acrylic = screen({ ...drum, diameter: 0.2, thickness: 0.006, material: 'cast-acrylic' });
+    expect(acrylic.cautions.map((c) => c.code)).toContain('implosion');
+    // 10 bar(g) in 0.78 m³ of gas: far above 100 kJ.
+    const pressurised = screen({ ...drum, loadCases: [{ name: '10 bar', internal: '10 bar(g)' }] });
+    expect(pressurised.warnings.find((w) => w.code === 'stored-energy-high')?.severity).toBe(
+      'caution',
+    );
+    expect(pressurised.cautions.map((c) => c.code)).toContain('stored-energy');
+  });
+});
+
 // ---------------------------------------------------------------- both directions, input, determinism
 
 describe('load cases, input and report', () => {
@@ -432,6 +584,7 @@ describe('load cases, input and report', () => {
     expect(report.governing!.loadCase).toBe('Full vacuum');
     expect(report.cautions.map((c) => c.code)).toEqual([
       'screening-only',
+      'room-temperature',
       'external-pressure-imperfection',
       'stored-energy',
     ]);

@@ -5,14 +5,20 @@ import { formatNumber, withUnit } from '../../core/format';
 import { componentShape, defineMethod } from '../../core/method';
 import type { ResolvedLoadCase, ValidityWarning } from '../../core/report';
 import { Trail } from '../../core/trail';
+import type { DesignBasis } from '../../core/design-basis';
 import {
+  UG28_COLLAPSE_FACTOR,
   allowableOverrides,
   allowableStress,
+  bucklingModulus,
+  collapseDesignFactor,
   materialSchema,
+  materialSteps,
   resolveMaterial,
   materialCautions,
   type Material,
 } from '../../materials/materials';
+import { hazardCautions, vesselEnergySteps } from '../vessel-hazards';
 import {
   bressePressure,
   collapsePressure,
@@ -53,12 +59,15 @@ import { cylindricalShellVocabulary } from './vocabulary';
  */
 export const EXTERNAL_PRESSURE_DEFAULTS = {
   knockdown: 1,
-  designFactor: 3,
+  designFactor: UG28_COLLAPSE_FACTOR,
   interaction: 'rankine' as Interaction,
 } as const;
 
-/** NASA SP-8007 correlation factor for lateral pressure, recalled as 0.90 (from memory; a cross-check only). */
-const NASA_GAMMA = 0.9;
+/** NASA SP-8007 correlation factor for lateral pressure (its γ), recalled as 0.90 (from memory; a cross-check only). */
+const NASA_CORRELATION = 0.9;
+
+const SOURCE_DEFAULT_COLLAPSE_FACTOR =
+  'default 3: the factor the ASME VIII-1 UG-28 charts imply on the predicted collapse pressure, P_a = 2·A·E/(3·D_o/t) elastic and 4·B/(3·D_o/t) plastic (from memory, derived; Hoopline method notes §f.6)';
 
 const SOURCE_GEOMETRY = 'geometry';
 const SOURCE_THIN =
@@ -68,11 +77,11 @@ const SOURCE_LAME =
 const SOURCE_UG27 =
   'ASME BPVC VIII-1 UG-27(c)(1) and (c)(2), as reproduced in a mechanical-engineering handbook table (1983 ed.; Hoopline method notes §e)';
 const SOURCE_BRESSE =
-  'Bresse/Bryan long cylinder, n = 2: Roark Table 35 case 19a (Hoopline method notes §f.1), D mean diameter';
+  'Bresse/Bryan long cylinder, n = 2: Roark Table 35 case 19a (Hoopline method notes §f.1), on the mean diameter D_m';
 const SOURCE_VON_MISES =
-  'von Mises, lateral plus end pressure, simply supported ends, as PD 5500 §3.6.2 and EN 13445-3 §8.5.2 use it (from memory; Hoopline method notes §f.2); minimised over integer n >= 2, R mean radius';
+  'von Mises, lateral plus end pressure, simply supported ends, as PD 5500 §3.6.2 and EN 13445-3 §8.5.2 use it (from memory; Hoopline method notes §f.2); minimised over integer n >= 2, on the mean radius r';
 const SOURCE_WT =
-  'Windenburg & Trilling (1934), Trans. ASME APM-56-20, approximate formula (from memory; Hoopline method notes §f.3), D mean diameter; cross-check only';
+  'Windenburg & Trilling (1934), Trans. ASME APM-56-20, approximate formula (from memory; Hoopline method notes §f.3), on the mean diameter D_m; cross-check only';
 
 /** Input of a cylindrical shell: geometry, material, joint efficiency, external-pressure factors, load cases. */
 export const cylindricalShellSchema = z
@@ -180,15 +189,36 @@ function geometryFor(input: Parsed, nominalThickness: number): Geometry {
   };
 }
 
-function externalBasis(input: Parsed, material: Material): ExternalPressureBasis {
+/**
+ * The external-pressure basis: the modulus for buckling (a polymer's
+ * long-term one where known), the strength for plastic collapse, the
+ * knock-down, the design factor n_b (the larger of UG-28's 3 and the
+ * material's own factor, unless entered) and the interaction.
+ */
+function externalBasis(
+  input: Parsed,
+  material: Material,
+  bucklingE: number,
+  warnings: ValidityWarning[],
+): { basis: ExternalPressureBasis; designFactorSource: string } {
   const given = input.externalPressure;
+  const factor = collapseDesignFactor(
+    material,
+    input,
+    given?.designFactor,
+    SOURCE_DEFAULT_COLLAPSE_FACTOR,
+    warnings,
+  );
   return {
-    E: material.elasticModulus,
-    nu: material.poissonRatio,
-    yieldStress: material.strength,
-    knockdown: given?.knockdown ?? EXTERNAL_PRESSURE_DEFAULTS.knockdown,
-    designFactor: given?.designFactor ?? EXTERNAL_PRESSURE_DEFAULTS.designFactor,
-    interaction: given?.interaction ?? EXTERNAL_PRESSURE_DEFAULTS.interaction,
+    basis: {
+      E: bucklingE,
+      nu: material.poissonRatio,
+      yieldStress: material.strength,
+      knockdown: given?.knockdown ?? EXTERNAL_PRESSURE_DEFAULTS.knockdown,
+      designFactor: factor.value,
+      interaction: given?.interaction ?? EXTERNAL_PRESSURE_DEFAULTS.interaction,
+    },
+    designFactorSource: factor.source,
   };
 }
 
@@ -196,6 +226,7 @@ function externalBasis(input: Parsed, material: Material): ExternalPressureBasis
 interface InternalCapacity {
   readonly S: number;
   readonly jointEfficiency: number;
+  /** S·E_j, the allowable membrane stress with the joint efficiency. */
   readonly SE: number;
   readonly mawpCircumferential: number;
   readonly mawpLongitudinal: number | null;
@@ -273,16 +304,16 @@ function internalCaseTrail(
   const hoopInner = trail.step({
     id: 'lame-hoop-inner',
     label: 'Hoop stress at the bore, thick wall (Lamé), the largest',
-    expression: 'σ_θ,i = p·(b² + a²)/(b² − a²)',
+    expression: 'σ_θ,i = p·(R_o² + R²)/(R_o² − R²)',
     substituted: `σ_θ,i = ${pText}·((${withUnit(Ro, 'm')})² + (${RText})²)/((${withUnit(Ro, 'm')})² − (${RText})²)`,
     value: lame.hoopInner,
     unit: 'Pa',
-    source: `${SOURCE_LAME}; a inside radius, b outside radius, outside pressure taken as 0 (a pressure on every surface adds −p_outside to each stress and does not change their differences)`,
+    source: `${SOURCE_LAME}; R inside radius (corroded), R_o outside radius; outside pressure taken as 0 (a pressure on every surface adds −p_outside to each stress and does not change their differences)`,
   });
   trail.step({
     id: 'lame-hoop-outer',
     label: 'Hoop stress at the outer surface (Lamé)',
-    expression: 'σ_θ,o = 2·p·a²/(b² − a²)',
+    expression: 'σ_θ,o = 2·p·R²/(R_o² − R²)',
     substituted: `σ_θ,o = 2·${pText}·(${RText})²/((${withUnit(Ro, 'm')})² − (${RText})²)`,
     value: lame.hoopOuter,
     unit: 'Pa',
@@ -302,7 +333,7 @@ function internalCaseTrail(
       ? {
           id: 'lame-axial',
           label: 'Axial stress, closed ends (Lamé)',
-          expression: 'σ_z = p·a²/(b² − a²)',
+          expression: 'σ_z = p·R²/(R_o² − R²)',
           substituted: `σ_z = ${pText}·(${RText})²/((${withUnit(Ro, 'm')})² − (${RText})²)`,
           value: lame.axialClosed,
           unit: 'Pa',
@@ -325,10 +356,10 @@ function internalCaseTrail(
   trail.step({
     id: 'ug27-thickness-circumferential',
     label: 'Required thickness, circumferential stress (longitudinal joints)',
-    expression: 't_c = P·R/(S·E − 0.6·P)',
+    expression: 't_c = p·R/(S·E_j − 0.6·p)',
     substituted:
       tCircumferential === null
-        ? `S·E − 0.6·P = ${formatNumber(SE - 0.6 * p)} Pa <= 0: no thickness satisfies this formula`
+        ? `S·E_j − 0.6·p = ${formatNumber(SE - 0.6 * p)} Pa <= 0: no thickness satisfies this formula`
         : `t_c = ${pText}·${RText}/(${seText} − 0.6·${pText})`,
     value: tCircumferential,
     unit: 'm',
@@ -337,7 +368,7 @@ function internalCaseTrail(
   const tLongitudinal = trail.step({
     id: 'ug27-thickness-longitudinal',
     label: 'Required thickness, longitudinal stress (circumferential joints)',
-    expression: 't_l = P·R/(2·S·E + 0.4·P)',
+    expression: 't_l = p·R/(2·S·E_j + 0.4·p)',
     substituted: `t_l = ${pText}·${RText}/(2·${seText} + 0.4·${pText})`,
     value: ug27LongitudinalThickness(p, R, S, Ej),
     unit: 'm',
@@ -372,7 +403,7 @@ function internalCaseTrail(
     trail.warn(
       'ug27-no-solution',
       'outside-validity',
-      `the pressure (${formatNumber(p)} Pa) is at least S·E/0.6 = ${formatNumber(SE / 0.6)} Pa: the UG-27 thickness formula has no solution; only the Lamé check is made`,
+      `the pressure (${formatNumber(p)} Pa) is at least S·E_j/0.6 = ${formatNumber(SE / 0.6)} Pa: the UG-27 thickness formula has no solution; only the Lamé check is made`,
     );
   }
   trail.check({
@@ -382,7 +413,7 @@ function internalCaseTrail(
     capacity: SE,
     unit: 'Pa',
     basis:
-      'σ_θ,i <= S·E: the hoop stress acts across the longitudinal seams, so the joint efficiency applies as in UG-27',
+      'σ_θ,i <= S·E_j: the hoop stress acts across the longitudinal seams, so the joint efficiency applies as in UG-27',
   });
 
   trail.output('hoop-stress-thin', 'Hoop stress (thin wall)', hoopThin, 'Pa');
@@ -397,13 +428,13 @@ function internalCaseTrail(
   // Each check reaches 1 at its own pressure (UG-27: the MAWP); the smallest is the allowable.
   trail.output('allowable-pressure', 'Allowable pressure difference', capacity.allowable, 'Pa');
 
-  // UG-27 applicability (from memory, Hoopline method notes §e): circumferential P <= 0.385·S·E; the
-  // longitudinal limit 1.25·S·E is the looser one, so the first warning covers both.
+  // UG-27 applicability (from memory, Hoopline method notes §e): circumferential p <= 0.385·S·E_j; the
+  // longitudinal limit 1.25·S·E_j is the looser one, so the first warning covers both.
   if (p > 0.385 * SE) {
     trail.warn(
       'ug27-pressure-limit',
       'outside-validity',
-      `P = ${formatNumber(p)} Pa exceeds 0.385·S·E = ${formatNumber(0.385 * SE)} Pa: the UG-27 circumferential formula does not apply (from memory); the thick-wall rules of VIII-1 Appendix 1-2 do`,
+      `p = ${formatNumber(p)} Pa exceeds 0.385·S·E_j = ${formatNumber(0.385 * SE)} Pa: the UG-27 circumferential formula does not apply (from memory); the thick-wall rules of VIII-1 Appendix 1-2 do`,
     );
   }
   return trail;
@@ -418,7 +449,7 @@ function externalCaseTrail(summary: ExternalSummary, loadCase: ResolvedLoadCase)
     demand: p,
     capacity: summary.allowable,
     unit: 'Pa',
-    basis: 'p <= p_allow = p_c/γ (collapse pressure over the design factor)',
+    basis: 'p <= p_allow = p_c/n_b (collapse pressure over the design factor)',
   });
   trail.output(
     'elastic-buckling-pressure',
@@ -448,30 +479,43 @@ function balancedCaseTrail(loadCase: ResolvedLoadCase): Trail {
   return trail;
 }
 
+/** The caution that the joint efficiency was left at its least conservative default. */
+export function jointEfficiencyDefault(): ValidityWarning {
+  return {
+    code: 'joint-efficiency-default',
+    severity: 'caution',
+    message:
+      'the weld joint efficiency defaults to 1, the least conservative value (seamless, or butt welds fully radiographed); with spot radiography it is 0.85 and without radiography 0.70 (ASME VIII-1 Table UW-12, from memory): enter the joint efficiency of the seams',
+  };
+}
+
 function internalCapacity(
   common: Trail,
+  warnings: ValidityWarning[],
   input: Parsed,
   material: Material,
   g: Geometry,
+  designBasis: DesignBasis,
 ): InternalCapacity {
-  const S = allowableStress(common, material, input);
+  const S = allowableStress(common, material, input, { designBasis, warnings });
   const jointEfficiency = common.step({
     id: 'joint-efficiency',
     label: 'Weld joint efficiency',
-    expression: 'E',
-    substituted: `E = ${formatNumber(input.jointEfficiency ?? 1)}`,
+    expression: 'E_j',
+    substituted: `E_j = ${formatNumber(input.jointEfficiency ?? 1)}`,
     value: input.jointEfficiency ?? 1,
     unit: '1',
     source:
       input.jointEfficiency !== undefined
         ? 'entered by the user'
-        : 'default 1: seamless shell or fully radiographed butt welds; spot radiography gives 0.85, none 0.70 (ASME VIII-1 Table UW-12, from memory)',
+        : 'default 1, the least conservative value: seamless shell or fully radiographed butt welds; spot radiography gives 0.85, none 0.70 (ASME VIII-1 Table UW-12, from memory)',
   });
+  if (input.jointEfficiency === undefined) warnings.push(jointEfficiencyDefault());
   const SE = common.step({
     id: 'allowable-membrane-stress',
     label: 'Allowable membrane stress with the joint efficiency',
-    expression: 'S·E',
-    substituted: `S·E = ${withUnit(S, 'Pa')}·${formatNumber(jointEfficiency)}`,
+    expression: 'S·E_j',
+    substituted: `S·E_j = ${withUnit(S, 'Pa')}·${formatNumber(jointEfficiency)}`,
     value: S * jointEfficiency,
     unit: 'Pa',
     source: SOURCE_UG27,
@@ -481,7 +525,7 @@ function internalCapacity(
   const mawpCircumferential = common.step({
     id: 'mawp-circumferential',
     label: 'MAWP, circumferential stress (longitudinal joints)',
-    expression: 'P_c = S·E·t/(R + 0.6·t)',
+    expression: 'P_c = S·E_j·t/(R + 0.6·t)',
     substituted: `P_c = ${seText}·${withUnit(t, 'm')}/(${withUnit(R, 'm')} + 0.6·${withUnit(t, 'm')})`,
     value: ug27CircumferentialMawp(t, R, S, jointEfficiency),
     unit: 'Pa',
@@ -491,7 +535,7 @@ function internalCapacity(
   const mawpLongitudinal = common.step({
     id: 'mawp-longitudinal',
     label: 'MAWP, longitudinal stress (circumferential joints)',
-    expression: 'P_l = 2·S·E·t/(R − 0.4·t)',
+    expression: 'P_l = 2·S·E_j·t/(R − 0.4·t)',
     substituted:
       longitudinal === null
         ? 'R − 0.4·t <= 0: formula does not apply'
@@ -502,8 +546,8 @@ function internalCapacity(
   });
   const lameLimit = common.step({
     id: 'lame-limit-pressure',
-    label: 'Pressure at which the Lamé bore hoop stress reaches S·E',
-    expression: 'P_L = S·E·(b² − a²)/(b² + a²)',
+    label: 'Pressure at which the Lamé bore hoop stress reaches S·E_j',
+    expression: 'P_L = S·E_j·(R_o² − R²)/(R_o² + R²)',
     substituted: `P_L = ${withUnit(SE, 'Pa')}·((${withUnit(Ro, 'm')})² − (${withUnit(R, 'm')})²)/((${withUnit(Ro, 'm')})² + (${withUnit(R, 'm')})²)`,
     value: lamePressureForHoop(SE, R, Ro),
     unit: 'Pa',
@@ -541,8 +585,9 @@ function externalSummary(
   input: Parsed,
   material: Material,
   g: Geometry,
+  external: { basis: ExternalPressureBasis; designFactorSource: string },
 ): ExternalSummary {
-  const basis = externalBasis(input, material);
+  const { basis } = external;
   const { E, nu } = basis;
   const t = g.thickness;
   const r = g.meanRadius;
@@ -554,23 +599,17 @@ function externalSummary(
   const rTxt = withUnit(r, 'm');
   const LTxt = withUnit(L, 'm');
   const nuTxt = formatNumber(nu);
+  const strengthSymbol =
+    material.strengthBasis === 'yield'
+      ? 'S_Y'
+      : material.strengthBasis === 'tensile'
+        ? 'S_T'
+        : 'S_d';
 
-  const yieldStress = common.step({
-    id: 'yield-stress',
-    label:
-      material.strengthBasis === 'yield'
-        ? 'Yield stress for plastic collapse'
-        : 'Strength used in place of a yield stress for plastic collapse',
-    expression: 'σ_y',
-    substituted: `σ_y = ${withUnit(basis.yieldStress, 'Pa')}`,
-    value: basis.yieldStress,
-    unit: 'Pa',
-    source: `${material.name}: ${material.sources.strength}`,
-  });
   common.step({
     id: 'bresse',
     label: 'Elastic buckling pressure of a long cylinder (Bresse)',
-    expression: 'p_B = 2·E/(1 − ν²)·(t/D)³',
+    expression: 'p_B = 2·E/(1 − ν²)·(t/D_m)³',
     substituted: `p_B = 2·${ETxt}/(1 − ${nuTxt}²)·(${tTxt}/${DTxt})³`,
     value: bressePressure(E, nu, t, D),
     unit: 'Pa',
@@ -582,7 +621,7 @@ function externalSummary(
     id: 'von-mises',
     label: `Elastic buckling pressure, von Mises, minimum at n = ${vonMises.lobes} lobes`,
     expression:
-      'p_m = E·t·ε/R, ε = [1/(n²/Z² + 1)² + t²/(12·R²·(1 − ν²))·(n² − 1 + Z²)²]/(n² − 1 + Z²/2), Z = π·R/L, min over n >= 2',
+      'p_m = E·t·ε/r, ε = [1/(n²/Z² + 1)² + t²/(12·r²·(1 − ν²))·(n² − 1 + Z²)²]/(n² − 1 + Z²/2), Z = π·r/L, min over n >= 2',
     substituted: `p_m = ${ETxt}·${tTxt}·ε/${rTxt}, Z = π·${rTxt}/${LTxt} = ${formatNumber(Z)}, n = ${vonMises.lobes}`,
     value: vonMises.pressure,
     unit: 'Pa',
@@ -605,10 +644,10 @@ function externalSummary(
   common.step({
     id: 'windenburg-trilling',
     label: 'Elastic buckling pressure, Windenburg–Trilling (cross-check)',
-    expression: 'p_WT = 2.42·E·(t/D)^2.5/((1 − ν²)^0.75·(L/D − 0.45·(t/D)^0.5))',
+    expression: 'p_WT = 2.42·E·(t/D_m)^2.5/((1 − ν²)^0.75·(L/D_m − 0.45·(t/D_m)^0.5))',
     substituted:
       wt === null
-        ? `L/D − 0.45·(t/D)^0.5 = ${formatNumber(L / D - 0.45 * Math.sqrt(t / D))} <= 0: the formula does not apply`
+        ? `L/D_m − 0.45·(t/D_m)^0.5 = ${formatNumber(L / D - 0.45 * Math.sqrt(t / D))} <= 0: the formula does not apply`
         : `p_WT = 2.42·${ETxt}·(${tTxt}/${DTxt})^2.5/((1 − ${nuTxt}²)^0.75·(${LTxt}/${DTxt} − 0.45·(${tTxt}/${DTxt})^0.5))`,
     value: wt,
     unit: 'Pa',
@@ -629,13 +668,13 @@ function externalSummary(
     warnings.push({
       code: 'windenburg-trilling-range',
       severity: 'info',
-      message: `the Windenburg–Trilling cross-check holds from about L/D = 0.5 up to the critical length (${formatNumber(Lc)} m); here L/D = ${formatNumber(L / D)}. The check uses von Mises, which holds for any length`,
+      message: `the Windenburg–Trilling cross-check holds from about L/D_m = 0.5 up to the critical length (${formatNumber(Lc)} m); here L/D_m = ${formatNumber(L / D)}. The check uses von Mises, which holds for any length`,
     });
   }
   common.step({
     id: 'critical-length',
     label: 'Critical length (Windenburg–Trilling equals Bresse)',
-    expression: 'L_c = D·(1.21·(1 − ν²)^0.25·sqrt(D/t) + 0.45·sqrt(t/D))',
+    expression: 'L_c = D_m·(1.21·(1 − ν²)^0.25·sqrt(D_m/t) + 0.45·sqrt(t/D_m))',
     substituted: `L_c = ${DTxt}·(1.21·(1 − ${nuTxt}²)^0.25·sqrt(${DTxt}/${tTxt}) + 0.45·sqrt(${tTxt}/${DTxt}))`,
     value: Lc,
     unit: 'm',
@@ -645,32 +684,34 @@ function externalSummary(
   common.step({
     id: 'long-tube-length',
     label: 'Length beyond which the length effect has vanished (Roark)',
-    expression: 'L_long = 4.90·R·sqrt(R/t)',
+    expression: 'L_long = 4.90·r·sqrt(r/t)',
     substituted: `L_long = 4.90·${rTxt}·sqrt(${rTxt}/${tTxt})`,
     value: roarkLongTubeLength(t, r),
     unit: 'm',
     source:
-      'Roark Table 35 case 19a validity, L > 4.90·R·sqrt(R/t) (Hoopline method notes §f.1, §f.4)',
+      'Roark Table 35 case 19a validity, L > 4.90·r·sqrt(r/t), r mean radius (Hoopline method notes §f.1, §f.4)',
   });
   common.step({
     id: 'nasa-sp8007',
-    label: 'Moderately long cylinder, NASA SP-8007 (cross-check, γ = 0.90)',
-    expression: 'p_N = 0.855·γ·E/(1 − ν²)^0.75·(R/L)·(t/R)^2.5',
-    substituted: `p_N = 0.855·${formatNumber(NASA_GAMMA)}·${ETxt}/(1 − ${nuTxt}²)^0.75·(${rTxt}/${LTxt})·(${tTxt}/${rTxt})^2.5`,
-    value: nasaModeratelyLongPressure(E, nu, t, r, L, NASA_GAMMA),
+    label: 'Moderately long cylinder, NASA SP-8007 (cross-check, correlation factor κ_N = 0.90)',
+    expression: 'p_N = 0.855·κ_N·E/(1 − ν²)^0.75·(r/L)·(t/r)^2.5',
+    substituted: `p_N = 0.855·${formatNumber(NASA_CORRELATION)}·${ETxt}/(1 − ${nuTxt}²)^0.75·(${rTxt}/${LTxt})·(${tTxt}/${rTxt})^2.5`,
+    value: nasaModeratelyLongPressure(E, nu, t, r, L, NASA_CORRELATION),
     unit: 'Pa',
     source:
-      'NASA SP-8007 (1968), lateral pressure, moderately long cylinders; formula and γ = 0.90 from memory (Hoopline method notes §f.6); the same form as Windenburg–Trilling without the 0.45 term; cross-check only',
+      'NASA SP-8007 (1968), lateral pressure, moderately long cylinders; formula and its correlation factor (γ there) 0.90 from memory (Hoopline method notes §f.6); the same form as Windenburg–Trilling without the 0.45 term; cross-check only',
   });
   const plastic = common.step({
     id: 'plastic-pressure',
-    label: 'Plastic collapse pressure (membrane yield)',
-    expression: 'p_y = σ_y·t/R',
-    substituted: `p_y = ${withUnit(yieldStress, 'Pa')}·${tTxt}/${rTxt}`,
-    value: plasticPressure(yieldStress, t, r),
+    label:
+      material.strengthBasis === 'yield'
+        ? 'Plastic collapse pressure (membrane yield)'
+        : 'Plastic collapse pressure, on the material strength in place of a yield strength',
+    expression: `p_y = ${strengthSymbol}·t/r`,
+    substituted: `p_y = ${withUnit(basis.yieldStress, 'Pa')}·${tTxt}/${rTxt}`,
+    value: plasticPressure(basis.yieldStress, t, r),
     unit: 'Pa',
-    source:
-      'p_y = σ_y·t/R, R mean radius (Hoopline method notes §f.5; EN 13445-3 P_y, from memory)',
+    source: `p_y = S_Y·t/r, r mean radius (Hoopline method notes §f.5; EN 13445-3 P_y, from memory); ${strengthSymbol}: ${material.name}, above`,
   });
   const userKnockdown = input.externalPressure?.knockdown !== undefined;
   const knockdown = common.step({
@@ -682,8 +723,16 @@ function externalSummary(
     unit: '1',
     source: userKnockdown
       ? 'entered by the user'
-      : 'default 1: the imperfection allowance is carried by the design factor 3 below, as in the ASME VIII-1 UG-28 charts (from memory, derived; Hoopline method notes §f.6). For the EN 13445-3 basis enter κ = 0.5 with a design factor of 1.5 (from memory; Hoopline method notes §f.5)',
+      : 'default 1, the least conservative value: the imperfection allowance is carried by the design factor n_b = 3 below, as in the ASME VIII-1 UG-28 charts (from memory, derived; Hoopline method notes §f.6). For the EN 13445-3 basis enter κ = 0.5 with a design factor of 1.5 (from memory; Hoopline method notes §f.5)',
   });
+  if (!userKnockdown) {
+    warnings.push({
+      code: 'knockdown-default',
+      severity: 'caution',
+      message:
+        'the knock-down κ on the elastic buckling pressure defaults to 1, the least conservative value: the imperfection allowance rests on the design factor alone (3 by default, the factor UG-28 implies, from memory). For a shell with more out-of-roundness than the code allows, or to follow EN 13445-3, enter κ below 1 (0.5 with n_b = 1.5 for EN 13445-3, from memory)',
+    });
+  }
   const elastic = common.step({
     id: 'elastic-pressure',
     label: 'Knocked-down elastic buckling pressure',
@@ -710,22 +759,19 @@ function externalSummary(
       ? `Rankine, 1/p_c = 1/p_e + 1/p_y (from memory; Hoopline method notes §f.5)${userInteraction ? '' : '; default, the more conservative of the two offered'}`
       : 'API STD 2RD form, as seen implemented in public code (Hoopline method notes §f.5); less conservative than Rankine',
   });
-  const userFactor = input.externalPressure?.designFactor !== undefined;
   const designFactor = common.step({
     id: 'external-design-factor',
     label: 'Design factor on the collapse pressure',
-    expression: 'γ',
-    substituted: `γ = ${formatNumber(basis.designFactor)}`,
+    expression: 'n_b',
+    substituted: `n_b = ${formatNumber(basis.designFactor)}`,
     value: basis.designFactor,
     unit: '1',
-    source: userFactor
-      ? 'entered by the user'
-      : 'default 3: the factor the ASME VIII-1 UG-28 charts imply on the predicted collapse pressure, P_a = 2·A·E/(3·D_o/t) elastic and 4·B/(3·D_o/t) plastic (from memory, derived; Hoopline method notes §f.6)',
+    source: external.designFactorSource,
   });
   const allowable = common.step({
     id: 'external-allowable-pressure',
     label: 'Allowable external pressure difference',
-    expression: 'p_allow = p_c/γ',
+    expression: 'p_allow = p_c/n_b',
     substituted: `p_allow = ${withUnit(collapse, 'Pa')}/${formatNumber(designFactor)}`,
     value: collapse / designFactor,
     unit: 'Pa',
@@ -752,7 +798,7 @@ function ringSpacingSteps(
   common: Trail,
   warnings: ValidityWarning[],
   input: Parsed,
-  material: Material,
+  basis: ExternalPressureBasis | null,
   target: number,
   externalCases: readonly ResolvedLoadCase[],
 ): void {
@@ -770,8 +816,8 @@ function ringSpacingSteps(
   const expression =
     'largest L with p_allow(t_r, L) >= max |p| of the outside-higher cases, by bisection in L';
   const source =
-    'the external-pressure chain above (von Mises, knock-down, interaction, design factor) solved for L; rings do not help internal pressure, and the rings themselves must be sized (e.g. ASME VIII-1 UG-29, from memory)';
-  if (externalCases.length === 0) {
+    'the external-pressure chain above (von Mises, knock-down, interaction, design factor n_b) solved for L; rings do not help internal pressure, and the rings themselves must be sized (e.g. ASME VIII-1 UG-29, from memory)';
+  if (externalCases.length === 0 || basis === null) {
     common.step({
       id: 'ring-spacing',
       label,
@@ -785,7 +831,7 @@ function ringSpacingSteps(
   }
   let pressure = 0;
   for (const lc of externalCases) pressure = Math.max(pressure, -lc.differential);
-  const found = ringSpacingFor(externalBasis(input, material), g.thickness, g.meanRadius, pressure);
+  const found = ringSpacingFor(basis, g.thickness, g.meanRadius, pressure);
   const pText = withUnit(pressure, 'Pa');
   if (found.kind === 'spacing') {
     common.step({
@@ -806,7 +852,7 @@ function ringSpacingSteps(
     substituted:
       found.kind === 'not-needed'
         ? `max |p| = ${pText} <= p_allow of an unstiffened long shell = ${withUnit(found.allowable, 'Pa')}: no rings are needed`
-        : `max |p| = ${pText} >= p_y/γ = ${withUnit(found.allowable, 'Pa')}: no ring spacing works, the wall yields first`,
+        : `max |p| = ${pText} >= p_y/n_b = ${withUnit(found.allowable, 'Pa')}: no ring spacing works, the wall yields first`,
     value: null,
     unit: 'm',
     source,
@@ -815,7 +861,7 @@ function ringSpacingSteps(
     warnings.push({
       code: 'ring-spacing-impossible',
       severity: 'caution',
-      message: `no ring spacing lets a ${formatNumber(target * 1000)} mm wall carry ${formatNumber(pressure)} Pa: even with rings close together the allowable tends to p_y/γ = ${formatNumber(found.allowable)} Pa`,
+      message: `no ring spacing lets a ${formatNumber(target * 1000)} mm wall carry ${formatNumber(pressure)} Pa: even with rings close together the allowable tends to p_y/n_b = ${formatNumber(found.allowable)} Pa`,
     });
   }
 }
@@ -838,7 +884,7 @@ export const cylindricalShell = defineMethod({
     common.step({
       id: 'outside-diameter',
       label: 'Outside diameter',
-      expression: outside ? 'D_o = D (given as outside diameter)' : 'D_o = D_i + 2·t_nominal',
+      expression: outside ? 'D_o = given' : 'D_o = D_i + 2·t_nominal',
       substituted: outside
         ? `D_o = ${withUnit(input.diameter, 'm')}`
         : `D_o = ${withUnit(input.diameter, 'm')} + 2·${withUnit(input.thickness, 'm')}`,
@@ -885,24 +931,47 @@ export const cylindricalShell = defineMethod({
       source:
         'input; for a shell between dished heads add about 1/3 of each head depth (ASME VIII-1 UG-28, from memory)',
     });
-    common.step({
-      id: 'elastic-modulus',
-      label: 'Young’s modulus and Poisson’s ratio',
-      expression: 'E, ν',
-      substituted: `E = ${withUnit(material.elasticModulus, 'Pa')}, ν = ${formatNumber(material.poissonRatio)}`,
-      value: material.elasticModulus,
-      unit: 'Pa',
-      source: `${material.name}: ${material.sources.elasticModulus}; ν: ${material.sources.poissonRatio}`,
-    });
+    materialSteps(common, material);
 
     const internalCases = context.loadCases.filter((lc) => lc.direction === 'internal-over');
     const externalCases = context.loadCases.filter((lc) => lc.direction === 'external-over');
-    const internal = internalCases.length > 0 ? internalCapacity(common, input, material, g) : null;
-    const external =
-      externalCases.length > 0 ? externalSummary(common, warnings, input, material, g) : null;
+    const internal =
+      internalCases.length > 0
+        ? internalCapacity(common, warnings, input, material, g, context.designBasis)
+        : null;
+    const externalBasisUsed =
+      externalCases.length > 0
+        ? externalBasis(input, material, bucklingModulus(common, material, warnings), warnings)
+        : null;
+    const external = externalBasisUsed
+      ? externalSummary(common, warnings, input, material, g, externalBasisUsed)
+      : null;
     if (input.ringSpacingFor !== undefined) {
-      ringSpacingSteps(common, warnings, input, material, input.ringSpacingFor, externalCases);
+      ringSpacingSteps(
+        common,
+        warnings,
+        input,
+        externalBasisUsed?.basis ?? null,
+        input.ringSpacingFor,
+        externalCases,
+      );
     }
+    const hazards =
+      internal || external
+        ? vesselEnergySteps(
+            common,
+            warnings,
+            {
+              value: Math.PI * g.insideRadius ** 2 * input.length,
+              label: 'Gas volume inside the screened length (at least the vessel’s)',
+              expression: 'V = π·R²·L',
+              substituted: `V = π·(${withUnit(g.insideRadius, 'm')})²·${withUnit(input.length, 'm')}`,
+              source:
+                'geometry of the cylinder between its rings or heads; the whole vessel holds at least this',
+            },
+            context.loadCases,
+          )
+        : null;
 
     const cases = context.loadCases.map((lc) => {
       if (lc.direction === 'internal-over' && internal)
@@ -948,7 +1017,7 @@ export const cylindricalShell = defineMethod({
       warnings.push({
         code: 'no-yield-stress',
         severity: 'caution',
-        message: `${material.name} has no yield stress: its ${material.strengthBasis === 'tensile' ? 'tensile strength' : 'design strength'} stands in for σ_y in the plastic collapse pressure, which is then only nominal; brittle and polymer shells fail by buckling or fracture, and polymers creep (lower long-term E)`,
+        message: `${material.name} has no yield strength: its ${material.strengthBasis === 'tensile' ? 'tensile strength' : 'design strength'} stands in for S_Y in the plastic collapse pressure, which is then only nominal; brittle and polymer shells fail by buckling or fracture`,
       });
     }
     if (external && input.ends === 'open') {
@@ -962,10 +1031,10 @@ export const cylindricalShell = defineMethod({
 
     const cautions: CautionCode[] = [];
     if (external) cautions.push('external-pressure-imperfection');
-    if (internal) cautions.push('stored-energy');
+    cautions.push(...hazardCautions(material, context.loadCases, hazards));
     cautions.push(...materialCautions(material));
 
-    const basis = externalBasis(input, material);
+    const basis = externalBasisUsed?.basis ?? null;
     return {
       title: `Cylindrical shell, ${input.ends} ends, ${material.name}`,
       inputs: {
@@ -982,9 +1051,18 @@ export const cylindricalShell = defineMethod({
           ? { corrosionAllowance: input.corrosionAllowance }
           : {}),
         externalPressure: {
-          knockdown: basis.knockdown,
-          designFactor: basis.designFactor,
-          interaction: basis.interaction,
+          knockdown:
+            basis?.knockdown ??
+            input.externalPressure?.knockdown ??
+            EXTERNAL_PRESSURE_DEFAULTS.knockdown,
+          designFactor:
+            basis?.designFactor ??
+            input.externalPressure?.designFactor ??
+            EXTERNAL_PRESSURE_DEFAULTS.designFactor,
+          interaction:
+            basis?.interaction ??
+            input.externalPressure?.interaction ??
+            EXTERNAL_PRESSURE_DEFAULTS.interaction,
         },
         ...(input.ringSpacingFor !== undefined ? { ringSpacingFor: input.ringSpacingFor } : {}),
       },

@@ -428,7 +428,8 @@ describe('rectangular plate through screen()', () => {
     expect(report.cautions.map((c) => c.code)).toEqual(
       expect.arrayContaining(['brittle-material', 'polymer-creep', 'small-deflection']),
     );
-    expect(output(report, 'strength-ratio')).toBeCloseTo(72e6 / output(report, 'max-stress'), 9);
+    // Cast acrylic's typical short-term tensile strength, low end of 69–75 MPa (US Plastic, designerdata.nl).
+    expect(output(report, 'strength-ratio')).toBeCloseTo(69e6 / output(report, 'max-stress'), 9);
   });
 
   it('square plate: the centre stress scales exactly as (1 + ν)/(1 + 0.3), a long plate less (derived)', () => {

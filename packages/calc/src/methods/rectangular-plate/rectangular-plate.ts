@@ -6,10 +6,12 @@ import { componentShape, defineMethod } from '../../core/method';
 import type { ResolvedLoadCase, ValidityWarning } from '../../core/report';
 import { Trail } from '../../core/trail';
 import { plateLimits } from '../plate-limits';
+import { hazardCautions } from '../vessel-hazards';
 import {
   allowableOverrides,
   allowableStress,
   materialSchema,
+  materialSteps,
   resolveMaterial,
   materialCautions,
   type Material,
@@ -248,26 +250,21 @@ export const rectangularPlate = defineMethod({
     });
     const E = material.elasticModulus;
     const nu = material.poissonRatio;
-    common.step({
-      id: 'elastic-modulus',
-      label: 'Young’s modulus',
-      expression: 'E',
-      substituted: `E = ${withUnit(E, 'Pa')}, ν = ${formatNumber(nu)}`,
-      value: E,
-      unit: 'Pa',
-      source: `${material.name}: ${material.sources.elasticModulus}; ν: ${material.sources.poissonRatio}`,
-    });
+    materialSteps(common, material);
 
     const { beta, betaCentre, alpha, gamma } = plateCoefficientSteps(common, {
       clamped,
       aspectRatio,
       poissonRatio: nu,
     });
-    const S = allowableStress(common, material, input);
+    const warnings: ValidityWarning[] = [];
+    const S = allowableStress(common, material, input, {
+      designBasis: context.designBasis,
+      warnings,
+    });
     const shared: Common = { b, t, E, S, clamped, beta, betaCentre, alpha, gamma, material };
     const cases = context.loadCases.map((lc) => caseTrail(input, shared, lc));
 
-    const warnings: ValidityWarning[] = [];
     if (t / b > 0.1) {
       warnings.push({
         code: 'thick-plate',
@@ -293,6 +290,7 @@ export const rectangularPlate = defineMethod({
     }
     const cautions: CautionCode[] = ['small-deflection', 'edge-condition'];
     cautions.push(...materialCautions(material));
+    cautions.push(...hazardCautions(material, context.loadCases, null));
 
     return {
       title: `Rectangular flat plate, ${clamped ? 'clamped' : 'simply supported'} edges, ${material.name}`,

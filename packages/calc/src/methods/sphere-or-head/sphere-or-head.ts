@@ -8,11 +8,16 @@ import { Trail } from '../../core/trail';
 import {
   allowableOverrides,
   allowableStress,
+  bucklingModulus,
+  collapseDesignFactor,
   materialSchema,
+  materialSteps,
   resolveMaterial,
   materialCautions,
   type Material,
 } from '../../materials/materials';
+import { jointEfficiencyDefault } from '../cylindrical-shell/cylindrical-shell';
+import { hazardCautions, vesselEnergySteps } from '../vessel-hazards';
 import { sphereOrHeadVocabulary } from './vocabulary';
 
 /**
@@ -42,7 +47,7 @@ const SOURCE_APPENDIX_1_4 =
 const SOURCE_ZOELLY =
   'Zoelly (1915) / van der Neut, classical buckling of a complete sphere: Huston & Josephs, Practical Stress Analysis in Engineering Design, ch. 31, eq. 31.1';
 const SOURCE_UG28D =
-  'ASME BPVC VIII-1 UG-28(d) for spheres and heads: A = 0.125/(R_o/t), B = A·E/2 in the elastic range, P_a = B/(R_o/t) (from memory; elastic form derived, Hoopline method notes §g)';
+  'ASME BPVC VIII-1 UG-28(d) for spheres and heads: A = 0.125/(R_o/t), B from the material chart (A·E/2 in the elastic range), P_a = B/(R_o/t) (from memory; elastic form derived, Hoopline method notes §g)';
 const SOURCE_MEMBRANE =
   'membrane stress of a thin sphere σ = p·R/(2t), mean radius (from memory, standard)';
 
@@ -111,8 +116,8 @@ export const sphereOrHeadSchema = z
       knuckleRadius: length({ positive: true, max: 20 }).optional(),
       material: materialSchema,
       ...allowableOverrides,
-      /** Weld joint efficiency E_j, 0.35–1; default 1 (seamless or fully radiographed). */
-      jointEfficiency: factor(0.35, 1, 'joint efficiency').default(1),
+      /** Weld joint efficiency E_j, 0.35–1; default 1 (seamless or fully radiographed), said as a caution. */
+      jointEfficiency: factor(0.35, 1, 'joint efficiency').optional(),
       /** Thickness lost to corrosion, on the inside; the inside dimensions grow by it. */
       corrosionAllowance: length({ nonNegative: true }).optional(),
       externalPressure: externalPressureOptions.optional(),
@@ -190,6 +195,74 @@ function diameters(
   return basis === 'outside'
     ? { outside: diameter, inside: diameter - 2 * thickness }
     : { outside: diameter + 2 * thickness, inside: diameter };
+}
+
+/**
+ * Inside volume of a torispherical head, m³: a spherical crown of radius L
+ * on a toroidal knuckle of radius r, meeting a cylinder of inside diameter
+ * D, as a solid of revolution from the tangent line to the crown (exact
+ * geometry, integrated in closed form).
+ */
+export function torisphericalHeadVolume(D: number, L: number, r: number): number {
+  const a = D / 2 - r; // radius of the knuckle's centre circle
+  const sinPhi = a / (L - r);
+  const cosPhi = Math.sqrt(1 - sinPhi * sinPhi);
+  const zj = r * cosPhi; // height of the knuckle–crown junction above the tangent line
+  // Knuckle: ρ(z) = a + sqrt(r² − z²) for 0 <= z <= zj.
+  const knuckle =
+    Math.PI *
+    ((a * a + r * r) * zj -
+      (zj * zj * zj) / 3 +
+      2 * a * ((zj / 2) * Math.sqrt(r * r - zj * zj) + ((r * r) / 2) * Math.asin(zj / r)));
+  // Crown: ρ² = L² − u², u from L·cos φ to L (u measured from the crown's centre).
+  const u1 = L * cosPhi;
+  const crown = Math.PI * (L * L * (L - u1) - (L * L * L - u1 * u1 * u1) / 3);
+  return knuckle + crown;
+}
+
+/** The enclosed volume of the sphere, or of the head alone (its vessel holds more), on corroded inside dimensions. */
+function enclosedVolume(
+  shape: HeadShape,
+  formula: InternalFormula,
+  insideDiameter: number,
+  knuckleRadius: number | null,
+  allowance: number,
+) {
+  const source = 'geometry on the corroded inside dimensions';
+  switch (formula.kind) {
+    case 'sphere': {
+      const R = formula.radius;
+      const whole = shape === 'sphere';
+      return {
+        value: ((whole ? 4 : 2) / 3) * Math.PI * R ** 3,
+        label: whole
+          ? 'Gas volume inside the sphere'
+          : 'Gas volume inside the head alone (the vessel holds more)',
+        expression: whole ? 'V = 4/3·π·R³' : 'V = 2/3·π·R³',
+        substituted: `V = ${whole ? 4 : 2}/3·π·(${withUnit(R, 'm')})³`,
+        source,
+      };
+    }
+    case 'ellipsoidal':
+      return {
+        value: (Math.PI * formula.diameter ** 3) / 24,
+        label: 'Gas volume inside the head alone (the vessel holds more)',
+        expression: 'V = π·D³/24 (half an ellipsoid of depth D/4)',
+        substituted: `V = π·(${withUnit(formula.diameter, 'm')})³/24`,
+        source,
+      };
+    case 'torispherical-standard':
+    case 'torispherical-general': {
+      const r = (knuckleRadius ?? 0) + allowance;
+      return {
+        value: torisphericalHeadVolume(insideDiameter, formula.crownRadius, r),
+        label: 'Gas volume inside the head alone (the vessel holds more)',
+        expression: 'V = integral of π·ρ(z)² dz over knuckle and crown',
+        substituted: `D = ${withUnit(insideDiameter, 'm')}, L = ${withUnit(formula.crownRadius, 'm')}, r = ${withUnit(r, 'm')}`,
+        source: `${source}: crown of radius L on a knuckle of radius r, solid of revolution integrated in closed form`,
+      };
+    }
+  }
 }
 
 /** Zoelly coefficient 2/sqrt(3·(1 − ν²)) in p_cl = coefficient·E·(t/R)²; 1.2105 at ν = 0.3. */
@@ -340,10 +413,13 @@ function describeMawp(
 }
 
 interface ExternalCapacity {
-  /** Allowable external pressure difference from the buckling route, Pa. */
+  /** Allowable external pressure difference: the screening value capped by UG-28(d), Pa. */
   readonly allowable: number;
   readonly classical: number;
   readonly collapse: number;
+  /** Collapse pressure over the design factor, before the UG-28(d) cap, Pa. */
+  readonly screening: number;
+  readonly designFactor: number;
   readonly ug28Allowable: number;
 }
 
@@ -499,7 +575,8 @@ function externalCase(input: Parsed, c: Common, loadCase: ResolvedLoadCase): Tra
     demand: p,
     capacity: ext.allowable,
     unit: 'Pa',
-    basis: 'P <= p_allow = p_c/n_b (knocked-down Zoelly with plastic interaction)',
+    basis:
+      'P <= p_allow = min(p_c/n_b, P_a) (knocked-down Zoelly with plastic interaction, capped by UG-28(d))',
   });
   let limit = ext.allowable;
   if (input.shape === 'ellipsoidal-2-1' || input.shape === 'torispherical') {
@@ -513,16 +590,32 @@ function externalCase(input: Parsed, c: Common, loadCase: ResolvedLoadCase): Tra
       source:
         'ASME BPVC VIII-1 UG-33(a)(1): ellipsoidal and torispherical heads also pass the internal rule at 1.67 × the external pressure (from memory); the code may take E_j = 1 here, the joint efficiency entered is kept (conservative)',
     });
-    limit = Math.min(
-      limit,
-      thicknessCheck(trail, c, pInternal, {
-        id: 'ug33-internal-rule',
-        label: 'Head thickness by the internal rule at 1.67 × the external pressure',
-        stepId: 'ug33-required-thickness',
-        stepLabel: 'Required thickness by the internal rule at P_i',
-        scale: UG33_INTERNAL_FACTOR,
-      }),
-    );
+    thicknessCheck(trail, c, pInternal, {
+      id: 'ug33-internal-rule',
+      label: 'Head thickness by the internal rule at 1.67 × the external pressure',
+      stepId: 'ug33-required-thickness',
+      stepLabel: 'Required thickness by the internal rule at P_i',
+      scale: UG33_INTERNAL_FACTOR,
+    });
+    const ug33 = trail.step({
+      id: 'ug33-allowable-pressure',
+      label: 'External pressure the internal rule allows (UG-33(a)(1))',
+      expression: `P_33 = MAWP/${UG33_INTERNAL_FACTOR}`,
+      substituted: `P_33 = ${withUnit(c.mawp, 'Pa')}/${UG33_INTERNAL_FACTOR}`,
+      value: c.mawp / UG33_INTERNAL_FACTOR,
+      unit: 'Pa',
+      source:
+        'the MAWP of the common steps, the internal rule at 1.67 × the external pressure solved for it',
+    });
+    limit = trail.step({
+      id: 'allowable-pressure',
+      label: 'Allowable external pressure difference (the lower of buckling and the internal rule)',
+      expression: 'min(p_allow, P_33)',
+      substituted: `min(${withUnit(ext.allowable, 'Pa')}, ${withUnit(ug33, 'Pa')})`,
+      value: Math.min(ext.allowable, ug33),
+      unit: 'Pa',
+      source: 'the pressure at which the first check of this case reaches 1',
+    });
   }
   trail.output('pressure-difference', 'Pressure difference', p, 'Pa');
   trail.output(
@@ -544,8 +637,14 @@ function externalCase(input: Parsed, c: Common, loadCase: ResolvedLoadCase): Tra
     'Pa',
   );
   trail.output(
-    'ug28-elastic-allowable',
-    'UG-28(d) elastic allowable (cross-check)',
+    'screening-external-pressure',
+    'Screening external pressure (before the UG-28(d) cap)',
+    ext.screening,
+    'Pa',
+  );
+  trail.output(
+    'ug28-allowable',
+    'UG-28(d) allowable (cross-check and cap)',
     ext.ug28Allowable,
     'Pa',
   );
@@ -563,7 +662,7 @@ function externalCapacity(
   t: number,
 ): ExternalCapacity {
   const options = input.externalPressure ?? {};
-  const E = material.elasticModulus;
+  const E = bucklingModulus(common, material, warnings);
   const nu = material.poissonRatio;
   const { outsideDiameter: dOut, nominalThickness } = geometry;
   let radius: number;
@@ -636,11 +735,11 @@ function externalCapacity(
   const knockdown = common.step({
     id: 'knockdown',
     label: 'Knock-down factor for imperfections',
-    expression: 'γ',
+    expression: 'κ',
     substituted:
       options.knockdown !== undefined
-        ? `γ = ${formatNumber(options.knockdown)} (given)`
-        : `γ = ${DEFAULT_KNOCKDOWN} (default)`,
+        ? `κ = ${formatNumber(options.knockdown)} (given)`
+        : `κ = ${DEFAULT_KNOCKDOWN} (default)`,
     value: options.knockdown ?? DEFAULT_KNOCKDOWN,
     unit: '1',
     source:
@@ -658,29 +757,30 @@ function externalCapacity(
   const elastic = common.step({
     id: 'knocked-down-buckling-pressure',
     label: 'Knocked-down elastic buckling pressure',
-    expression: 'p_e = γ·p_cl',
+    expression: 'p_e = κ·p_cl',
     substituted: `p_e = ${formatNumber(knockdown)}·${withUnit(classical, 'Pa')}`,
     value: knockdown * classical,
     unit: 'Pa',
     source: 'empirical knock-down on the classical pressure (Hoopline method notes §g)',
   });
   const yieldBasis = material.strengthBasis === 'yield';
+  const symbol = yieldBasis ? 'S_Y' : material.strengthBasis === 'tensile' ? 'S_T' : 'S_d';
   const plastic = common.step({
     id: 'plastic-collapse-pressure',
     label: yieldBasis
       ? 'Plastic collapse pressure (membrane yield)'
-      : 'Plastic collapse pressure, on the material strength in place of a yield stress',
-    expression: 'p_y = 2·σ_y·t/R_o',
+      : 'Plastic collapse pressure, on the material strength in place of a yield strength',
+    expression: `p_y = 2·${symbol}·t/R_o`,
     substituted: `p_y = 2·${withUnit(material.strength, 'Pa')}·${withUnit(t, 'm')}/${withUnit(radius, 'm')}`,
     value: (2 * material.strength * t) / radius,
     unit: 'Pa',
-    source: `membrane yield of a sphere, σ = p·R/(2t) at σ_y (from memory, standard); ${material.name}: ${material.sources.strength}`,
+    source: `membrane yield of a sphere, σ = p·R/(2t) at the yield strength (from memory, standard); ${symbol}: ${material.name}, above`,
   });
   if (!yieldBasis) {
     warnings.push({
       code: 'collapse-strength-basis',
       severity: 'caution',
-      message: `${material.name} has no yield stress here: its ${material.strengthBasis === 'tensile' ? 'short-term tensile' : 'design'} strength stands in for σ_y in the plastic collapse pressure`,
+      message: `${material.name} has no yield strength here: its ${material.strengthBasis === 'tensile' ? 'short-term tensile' : 'design'} strength stands in for S_Y in the plastic collapse pressure`,
     });
   }
   const interaction = options.interaction ?? 'rankine';
@@ -707,72 +807,97 @@ function externalCapacity(
             'API STD 2RD collapse interaction (confirmed as implemented in public code; Hoopline method notes §f.5), chosen by the user',
         },
   );
+  const factor = collapseDesignFactor(
+    material,
+    input,
+    options.designFactor,
+    'default 3, the factor ASME VIII-1 UG-28 implies on predicted collapse (Hoopline method notes §f.6, derived); with κ = 0.14 it lands within 10 % below the UG-28(d) elastic allowable',
+    warnings,
+  );
   const designFactor = common.step({
     id: 'buckling-design-factor',
     label: 'Design factor on the collapse pressure',
     expression: 'n_b',
     substituted:
       options.designFactor !== undefined
-        ? `n_b = ${formatNumber(options.designFactor)} (given)`
-        : `n_b = ${DEFAULT_BUCKLING_DESIGN_FACTOR} (default)`,
-    value: options.designFactor ?? DEFAULT_BUCKLING_DESIGN_FACTOR,
+        ? `n_b = ${formatNumber(factor.value)} (given)`
+        : factor.fromMaterial
+          ? `n_b = max(3, n_s) = ${formatNumber(factor.value)}`
+          : `n_b = ${formatNumber(factor.value)} (default)`,
+    value: factor.value,
     unit: '1',
-    source:
-      options.designFactor !== undefined
-        ? 'entered by the user'
-        : 'default 3, the factor ASME VIII-1 UG-28 implies on predicted collapse (Hoopline method notes §f.6, derived); with γ = 0.14 it lands within 10 % below the UG-28(d) elastic allowable',
+    source: factor.source,
   });
-  const allowable = common.step({
-    id: 'allowable-external-pressure',
-    label: 'Allowable external pressure',
-    expression: 'p_allow = p_c/n_b',
-    substituted: `p_allow = ${withUnit(collapse, 'Pa')}/${formatNumber(designFactor)}`,
+  const screening = common.step({
+    id: 'screening-external-pressure',
+    label: 'External pressure by the screening route (collapse over the design factor)',
+    expression: 'p_s = p_c/n_b',
+    substituted: `p_s = ${withUnit(collapse, 'Pa')}/${formatNumber(designFactor)}`,
     value: collapse / designFactor,
     unit: 'Pa',
     source: 'design factor on the collapse pressure (Hoopline method notes §g)',
   });
   const factorA = common.step({
     id: 'ug28-factor-a',
-    label: 'UG-28(d) factor A (cross-check)',
+    label: 'UG-28(d) factor A',
     expression: 'A = 0.125/(R_o/t)',
     substituted: `A = 0.125/${formatNumber(ratio)}`,
     value: 0.125 / ratio,
     unit: '1',
     source: SOURCE_UG28D,
   });
+  const elasticB = (factorA * E) / 2;
+  const capB = material.strength / 2;
+  const capped = elasticB > capB;
   const factorB = common.step({
     id: 'ug28-factor-b',
-    label: 'UG-28(d) factor B, elastic range (cross-check)',
-    expression: 'B = A·E/2',
-    substituted: `B = ${formatNumber(factorA)}·${withUnit(E, 'Pa')}/2`,
-    value: (factorA * E) / 2,
+    label: capped
+      ? 'UG-28(d) factor B, capped at half the yield strength (plastic range)'
+      : 'UG-28(d) factor B, elastic range',
+    expression: `B = min(A·E/2, ${symbol}/2)`,
+    substituted: `B = min(${formatNumber(factorA)}·${withUnit(E, 'Pa')}/2, ${withUnit(material.strength, 'Pa')}/2)`,
+    value: Math.min(elasticB, capB),
     unit: 'Pa',
-    source: SOURCE_UG28D,
+    source: `${SOURCE_UG28D}; B from an elastic–perfectly plastic stress–strain basis: B is half the stress at strain A, E·A below yield and ${symbol} above it, so never above half the yield strength (the code's material charts, from memory, are lower still near the knee)`,
   });
   const ug28Allowable = common.step({
-    id: 'ug28-elastic-allowable',
-    label: 'UG-28(d) elastic allowable external pressure (cross-check)',
-    expression: 'P_a = B/(R_o/t) = 0.0625·E/(R_o/t)²',
+    id: 'ug28-allowable',
+    label: 'UG-28(d) allowable external pressure (cross-check, caps the allowable)',
+    expression: 'P_a = B/(R_o/t)',
     substituted: `P_a = ${withUnit(factorB, 'Pa')}/${formatNumber(ratio)}`,
     value: factorB / ratio,
     unit: 'Pa',
     source: SOURCE_UG28D,
   });
-  if (yieldBasis && factorB > material.strength / 2) {
+  const allowable = common.step({
+    id: 'allowable-external-pressure',
+    label: 'Allowable external pressure (the lower of the screening value and UG-28(d))',
+    expression: 'p_allow = min(p_s, P_a)',
+    substituted: `p_allow = min(${withUnit(screening, 'Pa')}, ${withUnit(ug28Allowable, 'Pa')})`,
+    value: Math.min(screening, ug28Allowable),
+    unit: 'Pa',
+    source:
+      'the screening value capped the way UG-28(d) caps a sphere’s allowable in the plastic range (Hoopline method notes §g)',
+  });
+  if (capped) {
     warnings.push({
-      code: 'ug28-inelastic',
-      severity: 'info',
-      message: `B = A·E/2 = ${formatNumber(factorB)} Pa exceeds half the yield stress: the material chart gives a lower B than the elastic line, so the UG-28(d) cross-check overstates`,
-    });
-  }
-  if (allowable > ug28Allowable) {
-    warnings.push({
-      code: 'above-ug28-allowable',
+      code: 'ug28-plastic-range',
       severity: 'caution',
-      message: `the allowable external pressure ${formatNumber(allowable)} Pa is above the UG-28(d) elastic allowable ${formatNumber(ug28Allowable)} Pa: the knock-down and design factor chosen are less conservative than the code`,
+      message: `A·E/2 = ${formatNumber(elasticB)} Pa exceeds half the ${yieldBasis ? 'yield' : 'material'} strength: the head is in the plastic range, B is capped at ${formatNumber(capB)} Pa; the code's material chart gives a lower B near the knee of the stress–strain curve, so read B from it for a final value`,
     });
   }
-  return { allowable, classical, collapse, ug28Allowable };
+  if (ug28Allowable < screening) {
+    warnings.push({
+      code: 'ug28-below-screening',
+      severity: 'caution',
+      message: `the UG-28(d) cross-check ${formatNumber(ug28Allowable)} Pa is lower than the screening value ${formatNumber(screening)} Pa${
+        capped
+          ? ' (plastic range)'
+          : ': the knock-down and design factor chosen are less conservative than the code'
+      }; the allowable is capped at the UG-28(d) value`,
+    });
+  }
+  return { allowable, classical, collapse, ug28Allowable, screening, designFactor };
 }
 
 export const sphereOrHead = defineMethod({
@@ -956,25 +1081,34 @@ export const sphereOrHead = defineMethod({
       }
     }
 
-    const S = allowableStress(common, material, input);
+    materialSteps(common, material);
+    const S = allowableStress(common, material, input, {
+      designBasis: context.designBasis,
+      warnings,
+    });
+    const jointEfficiency = input.jointEfficiency ?? 1;
     const E = common.step({
       id: 'joint-efficiency',
       label: 'Weld joint efficiency',
       expression: 'E_j',
-      substituted: `E_j = ${formatNumber(input.jointEfficiency)}`,
-      value: input.jointEfficiency,
+      substituted: `E_j = ${formatNumber(jointEfficiency)}`,
+      value: jointEfficiency,
       unit: '1',
       source:
-        input.jointEfficiency === 1
-          ? 'default or given 1: seamless or fully radiographed joints (UW-12, from memory)'
+        input.jointEfficiency === undefined
+          ? 'default 1, the least conservative value: seamless or fully radiographed joints; spot radiography gives 0.85, none 0.70 (ASME VIII-1 Table UW-12, from memory)'
           : 'entered by the user (UW-12 table, from memory)',
     });
+    if (input.jointEfficiency === undefined) warnings.push(jointEfficiencyDefault());
     const se = S * E;
 
     const hasInternal = context.loadCases.some((lc) => lc.direction !== 'external-over');
     const hasExternal = context.loadCases.some((lc) => lc.direction === 'external-over');
+    const isDishedHead = input.shape === 'ellipsoidal-2-1' || input.shape === 'torispherical';
     let mawp = maximumAllowablePressure(formula, t, se);
-    if (hasInternal) {
+    // The MAWP is a visible step wherever it feeds an allowable: an inside-higher
+    // case, or the UG-33(a)(1) internal rule of a dished head under external pressure.
+    if (hasInternal || (hasExternal && isDishedHead)) {
       const text = describeMawp(formula, t, se);
       mawp = common.step({
         id: 'mawp',
@@ -1026,8 +1160,18 @@ export const sphereOrHead = defineMethod({
       lc.direction === 'external-over' ? externalCase(input, shared, lc) : internalCase(shared, lc),
     );
 
+    const volume = enclosedVolume(
+      input.shape,
+      formula,
+      dIn + 2 * allowance,
+      knuckleRadius,
+      allowance,
+    );
+    const hazards = vesselEnergySteps(common, warnings, volume, context.loadCases);
+
     const cautions: CautionCode[] = [];
     if (hasExternal) cautions.push('external-pressure-imperfection');
+    cautions.push(...hazardCautions(material, context.loadCases, hazards));
     cautions.push(...materialCautions(material));
 
     return {
@@ -1042,13 +1186,16 @@ export const sphereOrHead = defineMethod({
         material,
         ...(input.allowableStress !== undefined ? { allowableStress: input.allowableStress } : {}),
         ...(input.designFactor !== undefined ? { designFactor: input.designFactor } : {}),
-        jointEfficiency: input.jointEfficiency,
+        jointEfficiency,
         ...(input.corrosionAllowance !== undefined
           ? { corrosionAllowance: input.corrosionAllowance }
           : {}),
         externalPressure: {
           knockdown: input.externalPressure?.knockdown ?? DEFAULT_KNOCKDOWN,
-          designFactor: input.externalPressure?.designFactor ?? DEFAULT_BUCKLING_DESIGN_FACTOR,
+          designFactor:
+            external?.designFactor ??
+            input.externalPressure?.designFactor ??
+            DEFAULT_BUCKLING_DESIGN_FACTOR,
           interaction: input.externalPressure?.interaction ?? 'rankine',
         },
       },

@@ -353,7 +353,12 @@ export const storedEnergy = defineMethod({
             },
           ]
         : [],
-      cautions: ['stored-energy'],
+      // Implosion: the atmosphere's work on an evacuated volume above the threshold.
+      cautions: context.loadCases.some(
+        (lc) => lc.direction === 'external-over' && -lc.differential * v > HIGHLY_HAZARDOUS_ENERGY,
+      )
+        ? ['stored-energy', 'implosion']
+        : ['stored-energy'],
     };
   },
   examples: [
