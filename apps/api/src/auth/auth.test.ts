@@ -225,7 +225,7 @@ describe('auth: CSRF (double submit)', () => {
   });
 
   it('refuses a cookie-authenticated write without the header, or with a wrong one (403 csrf_failed)', async () => {
-    const user = await makeUser(t);
+    const user = await makeUser(t, { mayCreateProjects: true });
     const s = await signIn(t, user);
     const before = await count(t, 'projects');
     const missing = await s.agent

@@ -82,7 +82,7 @@ describe('database fault: PostgreSQL stopped under a write loop, then started', 
   it('answers 503 database_unavailable with Retry-After meanwhile, recovers by itself, loses no acknowledged write', async () => {
     // TypeORM logs every failed query to console.error while the server is down: expected here.
     const logged = vi.spyOn(console, 'error').mockImplementation(() => undefined);
-    const designer = await makeUser(t, { name: 'Loop designer' });
+    const designer = await makeUser(t, { name: 'Loop designer', mayCreateProjects: true });
     const sessions: Session[] = await Promise.all([1, 2, 3, 4].map(() => signIn(t, designer)));
     const started = Date.now();
     const outcomes: Outcome[] = [];
