@@ -1,5 +1,6 @@
 import jwt from 'jsonwebtoken';
 import request from 'supertest';
+import { backgroundSettled } from '../domain/background-work';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { anonymous, count, makeUser, signIn, type TestUser } from '../../test/fixtures';
 import { startTestApp, type TestApp } from '../../test/test-app';
@@ -361,6 +362,7 @@ describe('auth: invitations and password reset', () => {
       .post('/api/auth/password-reset/request')
       .send({ email: user.email })
       .expect(202);
+    await backgroundSettled(); // the requested reset is written after the 202
     const a = await signIn(t, admin);
     const issued = await a.post(`/api/users/${user.id}/password-reset`).expect(201);
     const token = issued.body.token as string;

@@ -5,6 +5,7 @@ import { pino } from 'pino';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startFakeSmtpServer, type FakeSmtpServer } from '../mail/fake-smtp-server';
 import { MailWorker } from '../mail/mail-worker';
+import { backgroundSettled } from '../domain/background-work';
 import { anonymous, makeComponent, makeWorld, signIn, type World } from '../../test/fixtures';
 import { readMailbox } from '../../test/mailbox';
 import { startTestApp, type TestApp } from '../../test/test-app';
@@ -82,6 +83,7 @@ describe('mail fault: the SMTP server down while mails are queued, then back', (
     await anonymous(t)
       .post('/api/auth/password-reset/request', { email: w.fabricator.email })
       .expect(202);
+    await backgroundSettled();
 
     await sleep(DOWN_MS - (Date.now() - downAt));
     const [waiting] = await t.dataSource.query(
