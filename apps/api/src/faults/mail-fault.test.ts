@@ -94,7 +94,6 @@ describe('mail fault: the SMTP server down while mails are queued, then back', (
 
     smtp = await startFakeSmtpServer({ port, folder });
     const backAt = Date.now();
-    let delivered = 0;
     for (let waited = 0; waited < 30_000; waited += 50) {
       const [row] = await t.dataSource.query(
         `select count(*)::int as n from mail_outbox where sent_at is null and failed_at is null`,
@@ -109,7 +108,7 @@ describe('mail fault: the SMTP server down while mails are queued, then back', (
       `select id from mail_outbox where created_at >= $1`,
       [new Date(downAt)],
     );
-    delivered = mails.length;
+    const delivered = mails.length;
     const byId = new Map<string, number>();
     for (const m of mails) byId.set(m.outboxId, (byId.get(m.outboxId) ?? 0) + 1);
     console.info(
