@@ -37,6 +37,18 @@ export const errorMiddleware: ErrorRequestHandler = (error: unknown, req, res, n
     });
     return;
   }
+  // A path segment that is not valid percent-encoded UTF-8 ("%ED%A0%80", a
+  // lone surrogate): the router cannot decode the parameter (issue 13.1 fuzz).
+  if (error instanceof URIError && (error as { status?: number }).status === 400) {
+    res.status(400).json({
+      error: {
+        code: 'validation_failed',
+        message: 'the address is not valid percent-encoded UTF-8',
+        fields: [{ path: 'path', message: 'is not valid percent-encoded UTF-8' }],
+      },
+    });
+    return;
+  }
   const parserError = error as BodyParserError;
   if (parserError && typeof parserError === 'object' && parserError.expose && parserError.status) {
     const code =
