@@ -66,7 +66,34 @@ export async function signOut(page: Page): Promise<void> {
   await expect(page.getByRole('heading', { name: 'Sign in' })).toBeVisible();
 }
 
+/**
+ * Every page of every journey runs under the API's Content-Security-Policy:
+ * a `securitypolicyviolation` event in the page, or a console message of a
+ * refused resource, fails the test (issue 13.7: the app works under its CSP).
+ */
 export const test = base.extend<object, { cast: Cast }>({
+  page: async ({ page }, use, testInfo) => {
+    const violations: string[] = [];
+    await page.exposeBinding('__hooplineCspViolation', (_source, text: string) => {
+      violations.push(text);
+    });
+    await page.addInitScript(() => {
+      document.addEventListener('securitypolicyviolation', (e) => {
+        const report = (window as unknown as { __hooplineCspViolation?: (t: string) => void })
+          .__hooplineCspViolation;
+        report?.(
+          `${e.violatedDirective} blocked ${e.blockedURI || '(inline)'} at ${e.sourceFile}:${e.lineNumber}`,
+        );
+      });
+    });
+    page.on('console', (message) => {
+      const text = message.text();
+      if (/Content Security Policy|Refused to (load|execute|apply|connect|frame)/i.test(text))
+        violations.push(`console: ${text}`);
+    });
+    await use(page);
+    expect(violations, `CSP violations in "${testInfo.title}"`).toEqual([]);
+  },
   cast: [
     // Playwright reads the fixture signature: a worker fixture with no dependencies takes `{}`.
     // eslint-disable-next-line no-empty-pattern
@@ -75,7 +102,7 @@ export const test = base.extend<object, { cast: Cast }>({
       const admin = await Api.signIn(baseURL, SEEDED_ADMIN.email, SEEDED_ADMIN.password);
       const cast: Cast = {
         admin,
-        designer: await createPerson(admin, 'Designer'),
+        designer: await createPerson(admin, 'Designer', { mayCreateProjects: true }),
         checker: await createPerson(admin, 'Checker'),
         fabricator: await createPerson(admin, 'Fabricator'),
       };

@@ -68,8 +68,16 @@ export class Api {
 
 let counter = 0;
 
-/** Invites and signs up a new person; returns their credentials and id. */
-export async function createPerson(admin: Api, label: string): Promise<Person> {
+/**
+ * Invites and signs up a new person; returns their credentials and id. With
+ * `mayCreateProjects` the admin then names them as someone who starts
+ * projects (the installation's default lets only named people).
+ */
+export async function createPerson(
+  admin: Api,
+  label: string,
+  options: { mayCreateProjects?: boolean } = {},
+): Promise<Person> {
   counter += 1;
   const stamp = `${Date.now().toString(36)}${counter}`;
   const email = `${label.toLowerCase().replace(/\W+/g, '-')}-${stamp}@journeys.example`;
@@ -93,5 +101,7 @@ export async function createPerson(admin: Api, label: string): Promise<Person> {
     );
   const me = (await accepted.json()) as { user: { id: string } };
   await context.dispose();
+  if (options.mayCreateProjects)
+    await admin.send('PATCH', `/users/${me.user.id}`, { mayCreateProjects: true });
   return { id: me.user.id, name, email, password };
 }

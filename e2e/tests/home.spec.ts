@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, test } from '../support/fixtures';
 
 test('a signed-out visitor lands on sign-in, with the product name and a live health indicator', async ({
   page,

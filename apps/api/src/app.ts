@@ -75,8 +75,15 @@ export function createApp({
           return req;
         },
       },
+      // 503: the database is away for a moment (logged once as a warning by the error handler).
       customLogLevel: (_req, res, error) =>
-        error || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info',
+        res.statusCode === 503
+          ? 'warn'
+          : error || res.statusCode >= 500
+            ? 'error'
+            : res.statusCode >= 400
+              ? 'warn'
+              : 'info',
     }),
   );
   app.use(express.json({ limit: '1mb' }));

@@ -3,6 +3,7 @@ import { createApp } from './app';
 import { ConfigError, loadConfig } from './config/config';
 import { createDataSource } from './db/data-source';
 import { MailWorker } from './mail/mail-worker';
+import { startUploadSweeper } from './storage/upload-sweeper';
 
 async function main() {
   let config;
@@ -29,6 +30,7 @@ async function main() {
       `Hoopline API listening on http://${config.host}:${config.port}`,
     );
   });
+  const uploadSweeper = startUploadSweeper(config.storage, dataSource, logger);
   const smtp = config.mail.smtp;
   const mailWorker = smtp ? new MailWorker(dataSource, { ...config.mail, smtp }, logger) : null;
   if (mailWorker && smtp) {
@@ -42,7 +44,7 @@ async function main() {
   const shutdown = (signal: string) => {
     logger.info({ signal }, 'shutting down');
     server.close(() => {
-      void (mailWorker?.stop() ?? Promise.resolve())
+      void Promise.all([mailWorker?.stop(), uploadSweeper.stop()])
         .then(() => dataSource.destroy())
         .finally(() => process.exit(0));
     });

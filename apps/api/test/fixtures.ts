@@ -16,7 +16,14 @@ export interface TestUser extends Actor {
 /** A user written straight to the database (argon2 at the test cost). */
 export async function makeUser(
   t: TestApp,
-  options: { name?: string; email?: string; isAdmin?: boolean; password?: string } = {},
+  options: {
+    name?: string;
+    email?: string;
+    isAdmin?: boolean;
+    password?: string;
+    /** Named by an administrator as someone who may start projects. */
+    mayCreateProjects?: boolean;
+  } = {},
 ): Promise<TestUser> {
   const id = randomUUID();
   const name = options.name ?? `User ${id.slice(0, 6)}`;
@@ -31,6 +38,7 @@ export async function makeUser(
     isAdmin: options.isAdmin ?? false,
     active: true,
     unitSystem: 'si',
+    mayCreateProjects: options.mayCreateProjects ?? false,
     authEpoch: 0,
     createdAt: now,
     updatedAt: now,
@@ -168,7 +176,7 @@ export async function makeWorld(
 ): Promise<World> {
   const [admin, designer, checker, checker2, fabricator, outsider] = await Promise.all([
     makeUser(t, { name: 'Admin', isAdmin: true }),
-    makeUser(t, { name: 'Designer' }),
+    makeUser(t, { name: 'Designer', mayCreateProjects: true }),
     makeUser(t, { name: 'Checker' }),
     makeUser(t, { name: 'Checker Two' }),
     makeUser(t, { name: 'Fabricator' }),

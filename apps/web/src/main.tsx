@@ -1,3 +1,5 @@
+// First: before any module makes a zod schema (see the file).
+import './lib/zod-jitless';
 import { QueryClientProvider } from '@tanstack/react-query';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';

@@ -1,5 +1,6 @@
 import jwt from 'jsonwebtoken';
 import request from 'supertest';
+import { backgroundSettled } from '../domain/background-work';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { anonymous, count, makeUser, signIn, type TestUser } from '../../test/fixtures';
 import { startTestApp, type TestApp } from '../../test/test-app';
@@ -225,7 +226,7 @@ describe('auth: CSRF (double submit)', () => {
   });
 
   it('refuses a cookie-authenticated write without the header, or with a wrong one (403 csrf_failed)', async () => {
-    const user = await makeUser(t);
+    const user = await makeUser(t, { mayCreateProjects: true });
     const s = await signIn(t, user);
     const before = await count(t, 'projects');
     const missing = await s.agent
@@ -361,6 +362,7 @@ describe('auth: invitations and password reset', () => {
       .post('/api/auth/password-reset/request')
       .send({ email: user.email })
       .expect(202);
+    await backgroundSettled(); // the requested reset is written after the 202
     const a = await signIn(t, admin);
     const issued = await a.post(`/api/users/${user.id}/password-reset`).expect(201);
     const token = issued.body.token as string;

@@ -81,6 +81,20 @@ const environmentSchema = z.object({
     .min(1024)
     .max(1024 * 1024 * 1024)
     .default(20 * 1024 * 1024),
+  /** How often the upload sweep removes leftovers of interrupted uploads, seconds (it also runs at start-up). */
+  HOOPLINE_UPLOAD_SWEEP_INTERVAL: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .max(7 * 86_400)
+    .default(3600),
+  /** A half-written file or unreferenced blob younger than this many seconds is left alone. */
+  HOOPLINE_UPLOAD_SWEEP_GRACE: z.coerce
+    .number()
+    .int()
+    .min(0)
+    .max(30 * 86_400)
+    .default(3600),
   HOOPLINE_S3_ENDPOINT: z.url().optional(),
   HOOPLINE_S3_REGION: z.string().min(1).default('us-east-1'),
   HOOPLINE_S3_BUCKET: z.string().min(3).optional(),
@@ -119,6 +133,9 @@ export interface MailConfig {
 
 export type StorageConfig = {
   readonly maxUploadBytes: number;
+  /** The upload sweep (storage/upload-sweeper.ts), milliseconds. */
+  readonly sweepIntervalMs: number;
+  readonly sweepGraceMs: number;
 } & (
   | { readonly driver: 'local'; readonly folder: string }
   | {
@@ -256,6 +273,8 @@ export function loadConfig(environment: NodeJS.ProcessEnv = process.env): Config
         ? {
             driver: 's3',
             maxUploadBytes: e.HOOPLINE_UPLOAD_MAX_BYTES,
+            sweepIntervalMs: e.HOOPLINE_UPLOAD_SWEEP_INTERVAL * 1000,
+            sweepGraceMs: e.HOOPLINE_UPLOAD_SWEEP_GRACE * 1000,
             endpoint: e.HOOPLINE_S3_ENDPOINT,
             region: e.HOOPLINE_S3_REGION,
             bucket: e.HOOPLINE_S3_BUCKET!,
@@ -266,6 +285,8 @@ export function loadConfig(environment: NodeJS.ProcessEnv = process.env): Config
         : {
             driver: 'local',
             maxUploadBytes: e.HOOPLINE_UPLOAD_MAX_BYTES,
+            sweepIntervalMs: e.HOOPLINE_UPLOAD_SWEEP_INTERVAL * 1000,
+            sweepGraceMs: e.HOOPLINE_UPLOAD_SWEEP_GRACE * 1000,
             folder: path.resolve(e.HOOPLINE_UPLOAD_DIR ?? DEFAULT_UPLOAD_DIR),
           },
   };

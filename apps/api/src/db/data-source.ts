@@ -18,8 +18,15 @@ export function createDataSource(databaseUrl: string, overrides: Partial<DataSou
     synchronize: false,
     migrationsRun: false,
     logging: ['error'],
-    extra: { max: 10, application_name: 'hoopline-api' },
     ...overrides,
+    extra: {
+      max: 10,
+      application_name: 'hoopline-api',
+      // A database that does not answer must not hang a request: after this
+      // long the pool gives up, and the client gets a 503 (database_unavailable).
+      connectionTimeoutMillis: 5000,
+      ...(overrides.extra as Record<string, unknown> | undefined),
+    },
   } as DataSourceOptions);
 }
 

@@ -10,6 +10,7 @@ import { OutboxNotifier } from '../mail/outbox-notifier';
 import type { Notifier } from './notifications/notifier';
 import { ProjectsService } from './projects/projects.service';
 import { RevisionsService } from './revisions/revisions.service';
+import { SettingsService } from './settings/settings.service';
 import { SheetsService } from './sheets/sheets.service';
 import { UsersService } from './users/users.service';
 
@@ -24,6 +25,7 @@ export interface Services {
   readonly audit: AuditService;
   readonly attachments: AttachmentsService;
   readonly sheets: SheetsService;
+  readonly settings: SettingsService;
 }
 
 export function createServices(
@@ -45,5 +47,6 @@ export function createServices(
     audit: new AuditService(dataSource),
     attachments,
     sheets: new SheetsService(dataSource, attachments, config.publicUrl),
+    settings: new SettingsService(dataSource),
   };
 }

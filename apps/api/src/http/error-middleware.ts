@@ -1,4 +1,5 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { DATABASE_RETRY_AFTER_SECONDS, isDatabaseUnavailable } from './database-unavailable';
 import { AppError } from './errors';
 
 /** Unknown /api routes: 404 in the JSON error format. */
@@ -16,7 +17,8 @@ interface BodyParserError {
 
 /**
  * The one error handler. Domain errors keep their status and code; errors the
- * body parser raises for what a client sent become 4xx; anything else is a
+ * body parser raises for what a client sent become 4xx; a database that cannot
+ * be reached is a 503 with Retry-After (database_unavailable); anything else is a
  * 500 with a generic message (the detail goes to the log, never to the user).
  */
 export const errorMiddleware: ErrorRequestHandler = (error: unknown, req, res, next) => {
@@ -31,6 +33,18 @@ export const errorMiddleware: ErrorRequestHandler = (error: unknown, req, res, n
         message: error.message,
         ...(error.fields ? { fields: error.fields } : {}),
         ...(error.details ?? {}),
+      },
+    });
+    return;
+  }
+  // A path segment that is not valid percent-encoded UTF-8 ("%ED%A0%80", a
+  // lone surrogate): the router cannot decode the parameter (issue 13.1 fuzz).
+  if (error instanceof URIError && (error as { status?: number }).status === 400) {
+    res.status(400).json({
+      error: {
+        code: 'validation_failed',
+        message: 'the address is not valid percent-encoded UTF-8',
+        fields: [{ path: 'path', message: 'is not valid percent-encoded UTF-8' }],
       },
     });
     return;
@@ -50,6 +64,22 @@ export const errorMiddleware: ErrorRequestHandler = (error: unknown, req, res, n
           ? 'the request body is too large'
           : 'the request could not be read';
     res.status(parserError.status).json({ error: { code, message } });
+    return;
+  }
+  if (isDatabaseUnavailable(error)) {
+    // Nothing was written (a transaction commits whole or not at all): the
+    // client may send the same request again once the database is back.
+    req.log?.warn({ err: error }, 'database unavailable');
+    res
+      .status(503)
+      .set('retry-after', String(DATABASE_RETRY_AFTER_SECONDS))
+      .json({
+        error: {
+          code: 'database_unavailable',
+          message: 'the database is unavailable for a moment: try again shortly',
+          retryAfterSeconds: DATABASE_RETRY_AFTER_SECONDS,
+        },
+      });
     return;
   }
   req.log?.error({ err: error }, 'unhandled error');

@@ -24,6 +24,21 @@ const PERMANENT_FAILURE_ATTEMPTS = 5;
 const MAX_BACKOFF_MS = 15 * 60 * 1000;
 /** How long a claimed batch stays ours; a worker that dies releases its claim when this ends. */
 const CLAIM_SECONDS = 120;
+/** nodemailer's codes for "the server could not be reached or went away" (no SMTP reply at all). */
+const UNREACHABLE = new Set([
+  'ECONNECTION',
+  'ETIMEDOUT',
+  'ESOCKET',
+  'EDNS',
+  'ECONNREFUSED',
+  'ECONNRESET',
+  'EPIPE',
+]);
+
+function unreachable(error: unknown): boolean {
+  const e = error as { code?: string; responseCode?: number };
+  return e.responseCode === undefined && e.code !== undefined && UNREACHABLE.has(e.code);
+}
 
 /**
  * Sends what the outbox holds. Rows are claimed with FOR UPDATE SKIP LOCKED
@@ -37,6 +52,14 @@ export class MailWorker {
   private timer: NodeJS.Timeout | null = null;
   private running: Promise<unknown> = Promise.resolve();
   private stopped = false;
+  /**
+   * Set when a send found the server unreachable. Until a probe (connect and
+   * EHLO, no mail) gets through, drains send nothing, so mail waiting out an
+   * outage does not pile up attempts; once it gets through, every waiting mail
+   * is due at once rather than at the end of its backoff (which had grown to
+   * minutes in a long outage).
+   */
+  private unreachableSince: Date | null = null;
 
   constructor(
     private readonly dataSource: DataSource,
@@ -79,6 +102,23 @@ export class MailWorker {
 
   /** Sends every due mail once; for the poll loop and for tests. */
   async drain(): Promise<DrainResult> {
+    if (this.unreachableSince) {
+      const back = await this.transport.verify().then(
+        () => true,
+        () => false,
+      );
+      if (!back) return { sent: 0, retrying: 0, failed: 0 };
+      const { affected } = await run(
+        this.dataSource.manager,
+        `update mail_outbox set next_attempt_at = now()
+          where sent_at is null and failed_at is null and next_attempt_at > now()`,
+      );
+      this.logger.info(
+        { down: this.unreachableSince.toISOString(), waiting: affected },
+        'mail worker: the SMTP server answers again; sending what waited',
+      );
+      this.unreachableSince = null;
+    }
     let sent = 0;
     let retrying = 0;
     let failed = 0;
@@ -130,6 +170,7 @@ export class MailWorker {
       const permanent = code !== undefined && code >= 500 && attempts >= PERMANENT_FAILURE_ATTEMPTS;
       const delay = Math.min(this.config.retryBaseMs * 2 ** (attempts - 1), MAX_BACKOFF_MS);
       const message = error instanceof Error ? error.message : String(error);
+      if (unreachable(error)) this.unreachableSince ??= new Date();
       await run(
         this.dataSource.manager,
         `update mail_outbox set attempts = $2, last_error = $3, locked_until = null,

@@ -8,6 +8,7 @@ import { anonymous, makeComponent, makeWorld, signIn, type World } from '../../t
 import { startTestApp, type TestApp } from '../../test/test-app';
 import { startFakeSmtpServer, type FakeSmtpServer } from './fake-smtp-server';
 import { MailWorker } from './mail-worker';
+import { backgroundSettled } from '../domain/background-work';
 
 const silent = pino({ level: 'silent' });
 const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
@@ -88,6 +89,7 @@ describe('mail through the transactional outbox to a local fake SMTP server', ()
     await anonymous(t)
       .post('/api/auth/password-reset/request', { email: 'nobody@lab.example' })
       .expect(202);
+    await backgroundSettled(); // the reset is written after the 202
     await worker.drain();
     const mails = await since(before);
     expect(mails.map((m) => m.to)).toEqual([[w.outsider.email]]);
@@ -174,6 +176,7 @@ describe('mail through the transactional outbox to a local fake SMTP server', ()
         .post('/api/auth/password-reset/request', { email: w.fabricator.email })
         .expect(202);
     }
+    await backgroundSettled();
     const other = newWorker();
     const [a, b] = await Promise.all([worker.drain(), other.drain()]);
     await other.stop();

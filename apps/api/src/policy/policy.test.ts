@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import {
   canCreateProject,
+  canLookUpPerson,
+  canManageSettings,
   canDesign,
   canEditProject,
   canManageMaterials,
@@ -123,8 +125,30 @@ describe('policy: signed-in non-member', () => {
     expect(canSeeComponent(s, issued)).toBe(false);
     expect(canSeeRevision(s, byOther('countersigned'))).toBe(false);
   });
-  it('may start a project of their own, and manages no people', () => {
-    expect(allowed(canCreateProject(me))).toBe(true);
+  it('manages no people and no settings', () => {
     expect(code(canManagePeople(me))).toBe('not_an_admin');
+    expect(code(canManageSettings(me))).toBe('not_an_admin');
+  });
+});
+
+describe('policy: who starts projects and who looks people up (issue 17.1)', () => {
+  it('with the setting "everyone", anyone signed in starts a project', () => {
+    expect(allowed(canCreateProject(me, 'everyone', false))).toBe(true);
+  });
+  it('with "named", only administrators and the people they named', () => {
+    expect(code(canCreateProject(me, 'named', false))).toBe('not_a_project_starter');
+    expect(allowed(canCreateProject(me, 'named', true))).toBe(true);
+    expect(allowed(canCreateProject(admin, 'named', false))).toBe(true);
+  });
+  it('only administrators change the setting', () => {
+    expect(allowed(canManageSettings(admin))).toBe(true);
+    expect(code(canManageSettings(me))).toBe('not_an_admin');
+  });
+  it('looking people up: administrators and those who lead a project (may add its members), nobody else', () => {
+    expect(allowed(canLookUpPerson(admin, false))).toBe(true);
+    expect(allowed(canLookUpPerson(me, true))).toBe(true);
+    expect(code(canLookUpPerson(me, false))).toBe('not_a_designer');
+    // Leading a project is what lets one add members to it.
+    expect(allowed(canManageMembers(as('designer')))).toBe(true);
   });
 });

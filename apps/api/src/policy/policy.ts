@@ -40,13 +40,24 @@ export function canManagePeople(actor: Actor): Decision {
 
 /**
  * Finding one person by their exact e-mail address, to add them to a
- * project: admins, and anyone who designs a project (designers manage
- * members). An exact address only, so nobody can list who has an account.
+ * project: admins, and those who may add members to a project they already
+ * lead (a designer of it: canManageMembers). An exact address only, so nobody
+ * can list who has an account; and since starting a project is itself limited
+ * (canCreateProject), an account alone does not make one a designer. The
+ * refusal is the same whether the address is known or not.
  */
-export function canLookUpPerson(actor: Actor, designsAProject: boolean): Decision {
-  return actor.isAdmin || designsAProject
+export function canLookUpPerson(actor: Actor, leadsAProject: boolean): Decision {
+  return actor.isAdmin || leadsAProject
     ? allow
     : deny('not_a_designer', 'only administrators and project designers look people up');
+}
+
+/** The installation's setting: who may start projects. */
+export type ProjectCreation = 'everyone' | 'named';
+
+/** Changing installation settings (who may start projects): administrators. */
+export function canManageSettings(actor: Actor): Decision {
+  return actor.isAdmin ? allow : deny('not_an_admin', 'only an administrator changes the settings');
 }
 
 // ── Projects ────────────────────────────────────────────────────────────────
@@ -56,9 +67,22 @@ export function canSeeProject(s: ProjectStanding): boolean {
   return s.actor.isAdmin || s.role !== null;
 }
 
-/** Any signed-in person may start a project; they become its first designer. */
-export function canCreateProject(_actor: Actor): Decision {
-  return allow;
+/**
+ * Starting a project (and so becoming its first designer): administrators
+ * always; everyone else when the setting is 'everyone', or when an
+ * administrator has named them.
+ */
+export function canCreateProject(
+  actor: Actor,
+  setting: ProjectCreation,
+  namedStarter: boolean,
+): Decision {
+  return actor.isAdmin || setting === 'everyone' || namedStarter
+    ? allow
+    : deny(
+        'not_a_project_starter',
+        'an administrator decides who starts projects: ask one to name you, or to add you to a project',
+      );
 }
 
 export function canEditProject(s: ProjectStanding): Decision {

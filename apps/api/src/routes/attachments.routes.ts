@@ -1,17 +1,15 @@
 import { Router, type RequestHandler } from 'express';
 import multer from 'multer';
 import { actorOf } from '../auth/authenticate';
+import { contentDisposition } from '../http/content-disposition';
 import { AppError, validationFailed } from '../http/errors';
 import { valid, validate } from '../http/validate';
 import { contentQuery, uploadFields } from './attachments.schemas';
 import { emptyBody, idParams } from './common.schemas';
 import type { RouteDeps } from './route-deps';
 
-/** RFC 6266 filename parameters: an ASCII fallback and the UTF-8 original. */
-export function contentDisposition(kind: 'attachment' | 'inline', name: string): string {
-  const ascii = name.replace(/[^\x20-\x7e]/g, '_').replace(/["\\]/g, '_');
-  return `${kind}; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(name)}`;
-}
+// routes/sheets.routes.ts takes the header from here too.
+export { contentDisposition };
 
 /** One file part named `file`, held in memory up to the size limit; multer's errors become ours. */
 function singleFile(maxBytes: number): RequestHandler {

@@ -417,6 +417,26 @@ describe('bad input on every route: 400 with the fields, nothing written, never 
     await s.get(`${P()}/components?page=1&page=2`).expect(400);
   });
 
+  it('a path parameter that is not valid UTF-8 (found by the fuzzer) is a 400, not a 500', async () => {
+    const before = await snapshot(t);
+    for (const path of [
+      '/api/projects/%ED%A0%80',
+      `/api/revisions/${'%ED%A0%80'}/submit`,
+      '/api/auth/invitations/xy%ED%A0%80',
+      '/api/attachments/%C0%AF/content',
+    ]) {
+      const res = path.endsWith('/submit')
+        ? await sessions.designer.post(path)
+        : await sessions.designer.get(path);
+      expect(res.status, path).toBe(400);
+      expect(res.body.error).toMatchObject({
+        code: 'validation_failed',
+        fields: [{ path: 'path', message: 'is not valid percent-encoded UTF-8' }],
+      });
+    }
+    expect(await snapshot(t)).toEqual(before);
+  });
+
   it('unknown routes answer a JSON 404, for every method', async () => {
     for (const s of [sessions.designer, sessions.anonymous]) {
       for (const method of ['get', 'post', 'put', 'patch', 'delete'] as const) {

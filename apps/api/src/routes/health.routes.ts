@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import type { DataSource } from 'typeorm';
 import { ENGINE_VERSION } from '@hoopline/calc';
+import { DATABASE_RETRY_AFTER_SECONDS } from '../http/database-unavailable';
 
 /** GET /api/health: is the API up and can it reach its database? */
 export function healthRoutes(dataSource: DataSource): Router {
@@ -8,20 +9,20 @@ export function healthRoutes(dataSource: DataSource): Router {
   router.get('/health', async (_req, res) => {
     const started = process.hrtime.bigint();
     let reachable = false;
-    let detail: string | undefined;
     try {
       await dataSource.query('select 1');
       reachable = true;
-    } catch (error) {
-      detail = error instanceof Error ? error.message : String(error);
+    } catch {
+      // The driver's message may name the server: it stays out of the answer.
     }
     const latencyMs = Number(process.hrtime.bigint() - started) / 1e6;
+    if (!reachable) res.set('retry-after', String(DATABASE_RETRY_AFTER_SECONDS));
     res.status(reachable ? 200 : 503).json({
       status: reachable ? 'ok' : 'degraded',
       database: {
         reachable,
         latencyMs: Math.round(latencyMs * 10) / 10,
-        ...(detail ? { detail: 'database unreachable' } : {}),
+        ...(reachable ? {} : { detail: 'database unavailable' }),
       },
       engine: { version: ENGINE_VERSION },
       time: new Date().toISOString(),

@@ -27,8 +27,23 @@ describe('GET /api/health (real PostgreSQL)', () => {
     const other = await startTestApp();
     await other.dataSource.destroy();
     const res = await request(other.app).get('/api/health').expect(503);
-    expect(res.body.database.reachable).toBe(false);
+    expect(res.body.database).toMatchObject({ reachable: false, detail: 'database unavailable' });
+    expect(Number(res.headers['retry-after'])).toBeGreaterThan(0);
     expect(JSON.stringify(res.body)).not.toMatch(/password|hoopline:hoopline/);
+    await other.dataSource.initialize();
+    await other.close();
+  });
+
+  it('answers a route that needs the database with 503 database_unavailable and Retry-After, not a 500', async () => {
+    const other = await startTestApp();
+    await other.dataSource.destroy();
+    const res = await request(other.app)
+      .post('/api/auth/sign-in')
+      .send({ email: 'someone@lab.example', password: 'whatever it is' });
+    expect(res.status).toBe(503);
+    expect(res.body.error).toMatchObject({ code: 'database_unavailable', retryAfterSeconds: 5 });
+    expect(res.headers['retry-after']).toBe('5');
+    expect(JSON.stringify(res.body)).not.toMatch(/stack|pool|at /);
     await other.dataSource.initialize();
     await other.close();
   });

@@ -196,6 +196,12 @@ describe('role × route matrix (every route, every persona)', () => {
       call: async (s) =>
         s.get(`/api/users/lookup?email=${encodeURIComponent((await freshUser()).email)}`),
     },
+    { route: 'GET /api/settings', expect: adminOnly(200), call: (s) => s.get('/api/settings') },
+    {
+      route: 'PATCH /api/settings',
+      expect: adminOnly(200),
+      call: (s) => s.patch('/api/settings', { projectCreation: 'named' }),
+    },
     {
       route: 'PATCH /api/users/:id',
       expect: adminOnly(200),
@@ -231,7 +237,9 @@ describe('role × route matrix (every route, every persona)', () => {
     { route: 'GET /api/projects', expect: signedIn(200), call: (s) => s.get('/api/projects') },
     {
       route: 'POST /api/projects',
-      expect: signedIn(201),
+      // The installation's default ('named'): admins and the people an admin named (this
+      // designer); a checker, a fabricator or an outsider with an account starts none.
+      expect: { ...all(403), admin: 201, designer: 201, 'signed-out': 401 },
       call: (s) =>
         s.post('/api/projects', {
           number: `N-${randomUUID().slice(0, 8)}`,

@@ -36,6 +36,58 @@ describe('GET /api/users/lookup (find one person to add to a project)', () => {
     }
   });
 
+  it('answers a person who may not look people up the same for a known and an unknown address', async () => {
+    for (const who of [w.checker, w.fabricator, w.outsider]) {
+      const s = await signIn(t, who);
+      const known = await s.get(`/api/users/lookup?email=${encodeURIComponent(w.designer.email)}`);
+      const unknown = await s.get('/api/users/lookup?email=nobody.at.all%40lab.example');
+      expect(known.status).toBe(403);
+      expect({ status: unknown.status, body: unknown.body }).toEqual({
+        status: known.status,
+        body: known.body,
+      });
+    }
+  });
+
+  it('an account alone no longer makes one a designer: with "named", an outsider cannot start a project to look people up', async () => {
+    const outsider = await signIn(t, w.outsider);
+    const start = await outsider.post('/api/projects', {
+      number: 'OUT-1',
+      name: 'Probe',
+      unitSystem: 'si',
+    });
+    expect(start.status).toBe(403);
+    expect(start.body.error.code).toBe('not_a_project_starter');
+    await outsider.get(`/api/users/lookup?email=${encodeURIComponent(w.admin.email)}`).expect(403);
+    // The administrator opens project starting to everyone: then the outsider may.
+    const admin = await signIn(t, w.admin);
+    await admin.patch('/api/settings', { projectCreation: 'everyone' }).expect(200);
+    await outsider
+      .post('/api/projects', { number: 'OUT-2', name: 'Own', unitSystem: 'si' })
+      .expect(201);
+    await outsider.get(`/api/users/lookup?email=${encodeURIComponent(w.admin.email)}`).expect(200);
+    // And back to named people; the admin names someone on the People page (PATCH /users/:id).
+    await admin.patch('/api/settings', { projectCreation: 'named' }).expect(200);
+    const fabricator = await signIn(t, w.fabricator);
+    await fabricator
+      .post('/api/projects', { number: 'FAB-1', name: 'x', unitSystem: 'si' })
+      .expect(403);
+    const named = await admin.patch(`/api/users/${w.fabricator.id}`, { mayCreateProjects: true });
+    expect(named.body.mayCreateProjects).toBe(true);
+    const me = await fabricator.get('/api/me').expect(200);
+    expect(me.body.canCreateProjects).toBe(true);
+    await fabricator
+      .post('/api/projects', { number: 'FAB-2', name: 'x', unitSystem: 'si' })
+      .expect(201);
+    const events = await t.dataSource.query(
+      `select summary from audit_events where action = 'settings.updated' order by created_at`,
+    );
+    expect(events.map((e: { summary: { after: unknown } }) => e.summary.after)).toEqual([
+      { projectCreation: 'everyone' },
+      { projectCreation: 'named' },
+    ]);
+  });
+
   it('refuses a checker or fabricator who designs nothing (403), and a malformed address (400)', async () => {
     const checker = await signIn(t, w.checker);
     const refused = await checker.get(

@@ -4,9 +4,15 @@ import { paginationQuery } from '../http/pagination';
 import { valid, validate } from '../http/validate';
 import { emptyBody, idParams } from './common.schemas';
 import type { RouteDeps } from './route-deps';
-import { inviteBody, listUsersQuery, lookupQuery, updateUserBody } from './users.schemas';
+import {
+  inviteBody,
+  listUsersQuery,
+  lookupQuery,
+  updateSettingsBody,
+  updateUserBody,
+} from './users.schemas';
 
-/** /users and /invitations: the administrator's management of people. */
+/** /users, /invitations and /settings: the administrator's management of people. */
 export function usersRoutes({ services, signedIn }: RouteDeps): Router {
   const router = Router();
 
@@ -52,6 +58,16 @@ export function usersRoutes({ services, signedIn }: RouteDeps): Router {
     const { params } = valid(req, revoke);
     await services.users.revokeInvitation(actorOf(req), params.id);
     res.status(204).end();
+  });
+
+  router.get('/settings', signedIn, async (req, res) => {
+    res.json(await services.settings.get(actorOf(req)));
+  });
+
+  const settings = validate({ body: updateSettingsBody });
+  router.patch('/settings', signedIn, settings, async (req, res) => {
+    const { body } = valid(req, settings);
+    res.json(await services.settings.update(actorOf(req), body));
   });
 
   return router;

@@ -9,6 +9,7 @@ export const updateUserBody = z
     name: text(1, 120).optional(),
     isAdmin: z.boolean({ error: 'must be true or false' }).optional(),
     active: z.boolean({ error: 'must be true or false' }).optional(),
+    mayCreateProjects: z.boolean({ error: 'must be true or false' }).optional(),
   })
   .strict();
 
@@ -21,3 +22,11 @@ export const inviteBody = z
   .strict();
 
 export const lookupQuery = z.object({ email }).strict();
+
+export const updateSettingsBody = z
+  .object({
+    projectCreation: z
+      .enum(['everyone', 'named'], { error: 'must be "everyone" or "named"' })
+      .optional(),
+  })
+  .strict();

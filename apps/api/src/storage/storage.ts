@@ -11,6 +11,20 @@ export interface BlobStorage {
   has(sha256: string): Promise<boolean>;
   /** A short description for logs and health ("local disk at …", "S3 bucket …"). */
   readonly description: string;
+  /**
+   * Maintenance (upload-sweeper.ts), where the driver has it: removes
+   * half-written files, lists blobs, deletes one blob unless it was stored
+   * again after `unchangedSince`. A bucket writes objects whole, so S3 needs
+   * no partial sweep.
+   */
+  sweepPartials?(olderThanMs: number): Promise<number>;
+  listBlobs?(): Promise<StoredBlob[]>;
+  delete?(sha256: string, unchangedSince: Date): Promise<boolean>;
+}
+
+export interface StoredBlob {
+  readonly sha256: string;
+  readonly modifiedAt: Date;
 }
 
 const HASH = /^[0-9a-f]{64}$/;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkFileName, sniffFileType } from './file-checks';
+import { checkFileName, displayName, sniffFileType } from './file-checks';
 
 // Signatures: PDF 1.7 (ISO 32000-1 §7.5.2 header "%PDF-"), PNG (ISO/IEC 15948 §5.2
 // signature), JPEG/JFIF (ITU-T T.81 SOI marker FF D8 + APP0 "JFIF"), DXF (AutoCAD
@@ -78,11 +78,36 @@ describe('checkFileName', () => {
     ['..', /"\.\."/],
     ['.bashrc', /dot/],
     ['door\u0000.pdf', /control/],
+    ['door\r\n.pdf', /control/],
+    ['door\u0085.pdf', /control/],
+    ['invoice\u202efdp.exe', /control/],
+    ['a\u200bb.pdf', /control/],
+    ['%2e%2e%2fx.pdf', /path|"\.\."/],
+    ['%252e%252e%252fx.pdf', /path|"\.\."/],
+    ['..%5cboot.pdf', /"\.\."/],
+    ['x%00.pdf', /control/],
     ['', /needs a name/],
     ['x'.repeat(121), /120/],
   ])('refuses %j', (name, reason) => {
     const result = checkFileName(name);
     expect(result.ok).toBe(false);
     if (!result.ok) expect(result.reason).toMatch(reason);
+  });
+});
+
+describe('displayName: the stored name, its extension from the sniffed type', () => {
+  it.each([
+    ['x.pdf.js', 'application/pdf', 'x.pdf.pdf'],
+    ['door.pdf', 'image/png', 'door.png'],
+    ['photo.JPEG', 'image/jpeg', 'photo.JPEG'.slice(0, 5) + '.jpeg'],
+    ['report', 'application/pdf', 'report.pdf'],
+    ['report rev 1.2', 'application/pdf', 'report rev 1.2.pdf'],
+    ['setup.exe', 'application/pdf', 'setup.pdf'],
+    ['CON.pdf', 'application/pdf', '_.pdf'],
+    ['weld map_ _final_.dxf', 'image/vnd.dxf', 'weld map_ _final_.dxf'],
+    ['100%.pdf', 'application/pdf', '100_.pdf'],
+    ['σ-check photo.jpg', 'image/jpeg', 'σ-check photo.jpg'],
+  ] as const)('%j holding %s is stored as %j', (name, type, stored) => {
+    expect(displayName(name, type)).toBe(stored);
   });
 });

@@ -1,6 +1,13 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiFetch, json, query, type Page } from './client';
-import type { AuditEvent, Invitation, InvitationCreated, PasswordResetIssued, User } from './types';
+import type {
+  AuditEvent,
+  Invitation,
+  InvitationCreated,
+  PasswordResetIssued,
+  Settings,
+  User,
+} from './types';
 
 export function useUsers(params: { q?: string; page?: number; pageSize?: number }) {
   return useQuery({
@@ -21,8 +28,21 @@ export function useUpdateUser() {
       name?: string;
       isAdmin?: boolean;
       active?: boolean;
+      mayCreateProjects?: boolean;
     }) => apiFetch<User>(`/users/${id}`, json('PATCH', body)),
     onSuccess: () => client.invalidateQueries({ queryKey: ['users'] }),
+  });
+}
+
+export function useSettings() {
+  return useQuery({ queryKey: ['settings'], queryFn: () => apiFetch<Settings>('/settings') });
+}
+
+export function useUpdateSettings() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (body: Partial<Settings>) => apiFetch<Settings>('/settings', json('PATCH', body)),
+    onSuccess: (settings) => client.setQueryData(['settings'], settings),
   });
 }
 

@@ -12,6 +12,8 @@ export interface User {
   readonly isAdmin: boolean;
   readonly active: boolean;
   readonly unitSystem: UnitSystem;
+  /** Named by an administrator as someone who may start projects. */
+  readonly mayCreateProjects: boolean;
   readonly createdAt: string;
 }
 
@@ -24,6 +26,13 @@ export interface Membership {
 export interface Me {
   readonly user: User;
   readonly memberships: readonly Membership[];
+  /** Whether this person may start a project now (GET /api/settings decides who may). */
+  readonly canCreateProjects: boolean;
+}
+
+/** Installation settings (admins): who may start projects. */
+export interface Settings {
+  readonly projectCreation: 'everyone' | 'named';
 }
 
 /** A site in SI (m, Pa). */

@@ -3,6 +3,8 @@ import {
   useInvitations,
   useIssuePasswordReset,
   useRevokeInvitation,
+  useSettings,
+  useUpdateSettings,
   useUpdateUser,
   useUsers,
 } from '../api/admin';
@@ -30,6 +32,9 @@ export function PeopleRoute() {
   const updateUser = useUpdateUser();
   const revoke = useRevokeInvitation();
   const reset = useIssuePasswordReset();
+  const settings = useSettings();
+  const updateSettings = useUpdateSettings();
+  const named = settings.data?.projectCreation === 'named';
   const [notice, setNotice] = useState<Delivery | null>(null);
   const [error, setError] = useState<string | null>(null);
 
@@ -70,6 +75,26 @@ export function PeopleRoute() {
           onChange={(event) =>
             updateUser.mutate(
               { id: u.id, active: event.target.checked },
+              { onError: (e) => setError(messageFor(e)) },
+            )
+          }
+        />
+      ),
+    },
+    {
+      key: 'starts',
+      header: 'Starts projects',
+      render: (u) => (
+        <input
+          type="checkbox"
+          className="h-4 w-4 accent-accent"
+          aria-label={`${u.name} may start projects`}
+          // Administrators always may; with "everyone" nobody needs naming.
+          checked={u.isAdmin || !named || u.mayCreateProjects}
+          disabled={u.isAdmin || !named}
+          onChange={(event) =>
+            updateUser.mutate(
+              { id: u.id, mayCreateProjects: event.target.checked },
               { onError: (e) => setError(messageFor(e)) },
             )
           }
@@ -142,6 +167,39 @@ export function PeopleRoute() {
       <div className="flex flex-col gap-4">
         <FormError message={error} />
         {notice ? <DeliveryNotice delivery={notice} onDismiss={() => setNotice(null)} /> : null}
+        <Panel title="Who may start projects" id="project-starters">
+          <fieldset className="flex flex-col gap-1 text-sm">
+            <legend className="mb-1 max-w-prose">
+              Whoever starts a project becomes its designer, and designers find people by their
+              e-mail address to add them. Keep this to named people so that an account alone does
+              not tell who else has one.
+            </legend>
+            {(
+              [
+                ['named', 'Administrators and the people ticked under "Starts projects"'],
+                ['everyone', 'Everyone with an account'],
+              ] as const
+            ).map(([value, label]) => (
+              <label key={value} className="flex items-center gap-2">
+                <input
+                  type="radio"
+                  name="project-creation"
+                  className="accent-accent"
+                  value={value}
+                  checked={settings.data?.projectCreation === value}
+                  disabled={!settings.data || updateSettings.isPending}
+                  onChange={() =>
+                    updateSettings.mutate(
+                      { projectCreation: value },
+                      { onError: (e) => setError(messageFor(e)) },
+                    )
+                  }
+                />
+                {label}
+              </label>
+            ))}
+          </fieldset>
+        </Panel>
         <Panel title="Invite someone" id="invite">
           <InviteForm
             onInvited={(delivery) => {

@@ -8,6 +8,20 @@ export function NewProjectRoute() {
   const me = useMe();
   const create = useCreateProject();
   const navigate = useNavigate();
+  if (!me.canCreateProjects) {
+    return (
+      <>
+        <PageHeader
+          title="New project"
+          crumbs={[{ label: 'Projects', to: '/projects' }, { label: 'New project' }]}
+        />
+        <p className="max-w-prose text-sm">
+          An administrator decides who starts projects here. Ask one to name you on the People page,
+          or to add you to a project that exists.
+        </p>
+      </>
+    );
+  }
   return (
     <>
       <PageHeader

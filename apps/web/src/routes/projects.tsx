@@ -1,6 +1,7 @@
 import { useSearchParams, Link } from 'react-router-dom';
 import { useState } from 'react';
 import { useProjects, type ProjectListParams } from '../api/projects';
+import { useMe } from '../api/session';
 import type { Project } from '../api/types';
 import { RoleBadge } from '../components/badges';
 import { ButtonLink } from '../components/button';
@@ -17,6 +18,7 @@ const SORTS = ['number', 'name', 'client', 'updatedAt'] as const;
 const PAGE_SIZE = 25;
 
 export function ProjectsRoute() {
+  const me = useMe();
   const [params, setParams] = useSearchParams();
   const system = useUnitSystem();
   const sortParam = params.get('sort');
@@ -100,9 +102,12 @@ export function ProjectsRoute() {
         title="Projects"
         subtitle="Every project you are a member of."
         actions={
-          <ButtonLink to="/projects/new" variant="primary">
-            New project
-          </ButtonLink>
+          // Who starts projects is an administrator's setting (People page).
+          me.canCreateProjects ? (
+            <ButtonLink to="/projects/new" variant="primary">
+              New project
+            </ButtonLink>
+          ) : undefined
         }
       />
       <SearchForm

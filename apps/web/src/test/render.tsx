@@ -14,9 +14,11 @@ export const ME: Me = {
     isAdmin: false,
     active: true,
     unitSystem: 'si',
+    mayCreateProjects: true,
     createdAt: '2026-01-01T00:00:00Z',
   },
   memberships: [{ projectId: 'p1', projectNumber: 'HL-1', role: 'designer' }],
+  canCreateProjects: true,
 };
 
 /** Renders inside a router and a fresh query client, with the signed-in user in the cache. */

@@ -12,6 +12,8 @@ export class UserEntity {
   @Column('boolean', { name: 'is_admin' }) isAdmin: boolean;
   @Column('boolean') active: boolean;
   @Column('text', { name: 'unit_system' }) unitSystem: UnitSystem;
+  /** Named by an administrator as someone who may start projects (when the setting is 'named'). */
+  @Column('boolean', { name: 'may_create_projects', default: false }) mayCreateProjects: boolean;
   /** Bumped to invalidate every access token already issued (password reset, deactivation). */
   @Column('integer', { name: 'auth_epoch' }) authEpoch: number;
   @Column('timestamptz', { name: 'created_at' }) createdAt: Date;

@@ -4,6 +4,7 @@ import { ProjectsAndRevisions1764700001000 } from './1764700001000-projects-and-
 import { MailAndAttachments1764800000000 } from './1764800000000-mail-and-attachments';
 import { AttachmentRemoval1764800001000 } from './1764800001000-attachment-removal';
 import { SiteAsTyped1765000000000 } from './1765000000000-site-as-typed';
+import { ProjectStarters1765200000000 } from './1765200000000-project-starters';
 import { ProjectDesignBasis1765300000000 } from './1765300000000-project-design-basis';
 
 /** Every migration class, oldest first. Add new ones at the end. */
@@ -14,5 +15,6 @@ export const migrations = [
   MailAndAttachments1764800000000,
   AttachmentRemoval1764800001000,
   SiteAsTyped1765000000000,
+  ProjectStarters1765200000000,
   ProjectDesignBasis1765300000000,
 ];

@@ -4,7 +4,13 @@ import { AttachmentEntity } from '../../db/entities/attachment.entity';
 import { AppError, forbidden, notFound, validationFailed } from '../../http/errors';
 import { canDesign, type Actor, type Decision } from '../../policy/policy';
 import type { BlobStorage } from '../../storage/storage';
-import { ALLOWED_TYPES, checkFileName, sniffFileType } from '../../uploads/file-checks';
+import {
+  ALLOWED_TYPES,
+  checkFileName,
+  displayName,
+  sniffFileType,
+} from '../../uploads/file-checks';
+import { findActiveContent } from '../../uploads/pdf-active-content';
 import { recordAudit } from '../audit/audit.service';
 import { requireComponent } from '../components/component-access';
 import { isoRequired } from '../sql';
@@ -107,12 +113,21 @@ export class AttachmentsService {
     enforce(canDesign(standing));
     const name = checkFileName(file.originalName);
     if (!name.ok) throw validationFailed([{ path: 'file', message: name.reason }]);
+    if (file.bytes.length === 0) throw validationFailed([{ path: 'file', message: 'is empty' }]);
     const sniffed = await sniffFileType(file.bytes);
     if (!sniffed.ok) {
       throw new AppError(415, 'unsupported_file_type', sniffed.reason, [
         { path: 'file', message: sniffed.reason },
       ]);
     }
+    if (sniffed.type === 'application/pdf') {
+      const active = await findActiveContent(file.bytes);
+      if (active.found) {
+        const reason = `the PDF carries active content (${active.what}); attach a plain PDF (print it to PDF again)`;
+        throw new AppError(422, 'pdf_active_content', reason, [{ path: 'file', message: reason }]);
+      }
+    }
+    const storedName = displayName(name.name, sniffed.type);
     const sha256 = createHash('sha256').update(file.bytes).digest('hex');
     // The blob first: a row never points at bytes that are not there. A row
     // that then fails to commit leaves an unreferenced blob, which is harmless.
@@ -123,7 +138,7 @@ export class AttachmentsService {
         id: randomUUID(),
         componentId,
         projectId: component.projectId,
-        name: name.name,
+        name: storedName,
         sha256,
         size: file.bytes.length,
         contentType: sniffed.type,
@@ -142,6 +157,7 @@ export class AttachmentsService {
         after: {
           componentId,
           name: entity.name,
+          ...(entity.name !== file.originalName ? { givenName: file.originalName } : {}),
           sha256,
           size: entity.size,
           contentType: entity.contentType,

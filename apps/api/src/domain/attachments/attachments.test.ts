@@ -95,7 +95,7 @@ describe('attachments (local disk storage)', () => {
     expect((got.body as Buffer).equals(bytes)).toBe(true);
     expect(got.headers['content-type']).toBe(type);
     expect(got.headers['x-content-type-options']).toBe('nosniff');
-    expect(got.headers['content-disposition']).toMatch(/^attachment; filename="/);
+    expect(got.headers['content-disposition']).toMatch(/^attachment; filename=/);
   });
 
   it('serves images inline for thumbnails, and everything else as a download', async () => {

@@ -12,6 +12,7 @@ import { UserEntity } from '../../db/entities/user.entity';
 import { AppError, badRequest, conflict, notFound, unauthorized } from '../../http/errors';
 import type { Actor } from '../../policy/policy';
 import { recordAudit } from '../audit/audit.service';
+import { runInBackground } from '../background-work';
 import type { Notifier } from '../notifications/notifier';
 import { rows, run } from '../sql';
 import { meView, type MeView } from '../users/user-views';
@@ -186,13 +187,27 @@ export class AuthService {
     });
   }
 
-  /** Always succeeds from the caller's view (202), so it does not tell who has an account. */
+  /**
+   * Always succeeds from the caller's view (202), so it does not tell who has
+   * an account, neither by its answer nor by its time: the request does the
+   * same work for every address (one `select 1`, so that a request is not
+   * accepted while the database is away: 503), and the lookup and the writing
+   * of the reset happen after the answer, in `issueRequestedReset` (the
+   * asynchronous handling OWASP's Forgot Password Cheat Sheet recommends).
+   * A process that dies in between loses the request; the person asks again.
+   */
   async requestPasswordReset(email: string): Promise<void> {
-    const user = await this.dataSource
-      .getRepository(UserEntity)
-      .findOneBy({ email: normaliseEmail(email) });
-    if (!user || !user.active) return;
+    await this.dataSource.query('select 1');
+    runInBackground('password reset request not carried out', () =>
+      this.issueRequestedReset(email),
+    );
+  }
+
+  /** After the 202: a reset and its mail for an active account, nothing for any other address. */
+  async issueRequestedReset(email: string): Promise<void> {
     await this.dataSource.transaction(async (manager) => {
+      const user = await manager.findOneBy(UserEntity, { email: normaliseEmail(email) });
+      if (!user || !user.active) return;
       const { token, expiresAt } = await this.createPasswordReset(manager, user, null);
       await this.notifier.passwordResetRequested(manager, {
         email: user.email,

@@ -19,7 +19,6 @@ import { toJson, type JsonObject } from '../../db/entities/json';
 import { conflict, forbidden, notFound } from '../../http/errors';
 import { pageOf, type Page, type PageRequest } from '../../http/pagination';
 import {
-  canCreateProject,
   canEditProject,
   canManageMaterials,
   canManageMembers,
@@ -28,6 +27,7 @@ import {
   type Role,
 } from '../../policy/policy';
 import { recordAudit } from '../audit/audit.service';
+import { projectCreationDecision } from '../settings/settings.service';
 import { Where, containsPattern, iso, isoRequired, paged, rows } from '../sql';
 import { requireProjectStanding } from './project-access';
 
@@ -212,7 +212,7 @@ export class ProjectsService {
   }
 
   async create(actor: Actor, input: ProjectInput): Promise<ProjectView> {
-    enforce(canCreateProject(actor));
+    enforce(await projectCreationDecision(this.dataSource.manager, actor));
     try {
       return await this.dataSource.transaction(async (manager) => {
         const now = new Date();

@@ -136,6 +136,7 @@ describe('revisions: workflow, four-eyes, concurrency, integrity (real PostgreSQ
 
   it('four-eyes: the author cannot countersign or return, even once made a checker', async () => {
     // A second project: the checker of the first designs here and authors revision 1.
+    await t.services.users.update(w.admin, w.checker.id, { mayCreateProjects: true });
     const other = await t.services.projects.create(w.checker, {
       number: 'FOUR-EYES-1',
       name: 'Checker designs here',

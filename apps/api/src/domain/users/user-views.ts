@@ -1,6 +1,7 @@
 import type { EntityManager } from 'typeorm';
 import type { UserEntity } from '../../db/entities/user.entity';
 import type { Role } from '../../policy/policy';
+import { projectCreationDecision } from '../settings/settings.service';
 import { rows } from '../sql';
 
 export interface UserView {
@@ -10,12 +11,16 @@ export interface UserView {
   readonly isAdmin: boolean;
   readonly active: boolean;
   readonly unitSystem: 'si' | 'us';
+  /** Named by an administrator as someone who may start projects. */
+  readonly mayCreateProjects: boolean;
   readonly createdAt: string;
 }
 
 export interface MeView {
   readonly user: UserView;
   readonly memberships: readonly { projectId: string; projectNumber: string; role: Role }[];
+  /** Whether this person may start a project now (the setting, their name on the list, or admin). */
+  readonly canCreateProjects: boolean;
 }
 
 export function userView(u: UserEntity): UserView {
@@ -26,6 +31,7 @@ export function userView(u: UserEntity): UserView {
     isAdmin: u.isAdmin,
     active: u.active,
     unitSystem: u.unitSystem,
+    mayCreateProjects: u.mayCreateProjects,
     createdAt: new Date(u.createdAt).toISOString(),
   };
 }
@@ -38,6 +44,7 @@ export async function meView(manager: EntityManager, user: UserEntity): Promise<
       where m.user_id = $1 order by p.number`,
     [user.id],
   );
+  const decision = await projectCreationDecision(manager, user);
   return {
     user: userView(user),
     memberships: memberships.map((m) => ({
@@ -45,5 +52,6 @@ export async function meView(manager: EntityManager, user: UserEntity): Promise<
       projectNumber: m.number,
       role: m.role,
     })),
+    canCreateProjects: decision.allowed,
   };
 }

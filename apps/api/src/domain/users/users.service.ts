@@ -75,11 +75,12 @@ export class UsersService {
   /** One active person by exact e-mail address (to add them to a project); 404 otherwise. */
   async lookUp(actor: Actor, email: string): Promise<{ id: string; name: string; email: string }> {
     const manager = this.dataSource.manager;
-    const [designs] = await manager.query(
+    // Those who may add members to a project they lead: its designers (canManageMembers).
+    const [leads] = await manager.query(
       `select exists (select 1 from project_members where user_id = $1 and role = 'designer') as yes`,
       [actor.id],
     );
-    const decision = canLookUpPerson(actor, Boolean(designs?.yes));
+    const decision = canLookUpPerson(actor, Boolean(leads?.yes));
     if (!decision.allowed) throw forbidden(decision.code, decision.reason);
     const user = await manager.findOneBy(UserEntity, {
       email: normaliseEmail(email),
@@ -130,6 +131,7 @@ export class UsersService {
       name?: string | undefined;
       isAdmin?: boolean | undefined;
       active?: boolean | undefined;
+      mayCreateProjects?: boolean | undefined;
     },
   ): Promise<UserView> {
     requireAdmin(actor);
@@ -149,6 +151,8 @@ export class UsersService {
       if (patch.name !== undefined) changes.name = patch.name;
       if (patch.isAdmin !== undefined) changes.isAdmin = patch.isAdmin;
       if (patch.active !== undefined) changes.active = patch.active;
+      if (patch.mayCreateProjects !== undefined)
+        changes.mayCreateProjects = patch.mayCreateProjects;
       await manager.update(UserEntity, { id: userId }, changes);
       if (patch.active === false && before.active) {
         await this.authService.endAllSessions(manager, userId, 'deactivated');
@@ -159,8 +163,18 @@ export class UsersService {
         action: 'user.updated',
         entityType: 'user',
         entityId: userId,
-        before: { name: before.name, isAdmin: before.isAdmin, active: before.active },
-        after: { name: after.name, isAdmin: after.isAdmin, active: after.active },
+        before: {
+          name: before.name,
+          isAdmin: before.isAdmin,
+          active: before.active,
+          mayCreateProjects: before.mayCreateProjects,
+        },
+        after: {
+          name: after.name,
+          isAdmin: after.isAdmin,
+          active: after.active,
+          mayCreateProjects: after.mayCreateProjects,
+        },
       });
       return userView(after);
     });
