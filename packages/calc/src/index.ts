@@ -160,6 +160,7 @@ export {
   screenMany,
 } from './screen';
 export type { ParsedComponent, ScreenOutcome } from './screen';
+export type { EngineMethod } from './methods';
 
 // Thickness sweeps
 export { SWEEP_DEFAULT_POINTS, SWEEP_MAX_POINTS, sweepThickness } from './sweep';

@@ -5,12 +5,12 @@ import { resolveDesignBasis } from './core/design-basis';
 import { resolveAmbient, resolveLoadCases } from './core/load-cases';
 import type { MethodContext, MethodDefinition } from './core/method';
 import type { ComponentKind, Report } from './core/report';
-import { METHODS } from './methods';
+import { METHODS, type EngineMethod } from './methods';
 
 export { METHODS };
 
 /** The method for a component kind, or undefined. */
-export function findMethod(kind: string): MethodDefinition | undefined {
+export function findMethod(kind: string): EngineMethod | undefined {
   return METHODS.find((m) => m.kind === kind);
 }
 
@@ -18,7 +18,7 @@ export const COMPONENT_KINDS: readonly ComponentKind[] = METHODS.map((m) => m.ki
 
 /** A component input, checked and normalised, ready to compute (and to sweep). */
 export interface ParsedComponent {
-  readonly method: MethodDefinition;
+  readonly method: EngineMethod;
   readonly input: unknown;
   readonly context: MethodContext;
 }

@@ -1,20 +1,12 @@
+import { COMPONENT_KINDS, type ComponentKind } from '@hoopline/calc';
 import { z } from 'zod';
 import { paginationShape } from '../http/pagination';
 import { calcInputs, text, version } from './common.schemas';
 
-/** Every kind the engine names (some may not have a method yet: the list then finds none). */
-const kind = z.enum(
-  [
-    'flat-area-load',
-    'circular-plate',
-    'rectangular-plate',
-    'cylindrical-shell',
-    'sphere-or-head',
-    'stored-energy',
-    'pump-down',
-  ],
-  { error: 'is not a component kind' },
-);
+/** Every kind the engine screens: its list of methods, not a copy of it. */
+const kind = z.enum(COMPONENT_KINDS as [ComponentKind, ...ComponentKind[]], {
+  error: 'is not a component kind',
+});
 
 export const listComponentsQuery = z
   .object({ ...paginationShape, q: text(0, 200).optional(), kind: kind.optional() })

@@ -8,7 +8,7 @@ import { ErrorView } from '../components/error-view';
 import { PageHeader } from '../components/page';
 import { TableSkeleton } from '../components/skeleton';
 import { formatDateTime } from '../lib/dates';
-import { kindLabel } from '../lib/kinds';
+import { kindName } from '@hoopline/present';
 
 export function CheckQueueRoute() {
   const [page, setPage] = useState(1);
@@ -29,7 +29,7 @@ export function CheckQueueRoute() {
         </Link>
       ),
     },
-    { key: 'kind', header: 'Kind', render: (r) => kindLabel(r.component.kind) },
+    { key: 'kind', header: 'Kind', render: (r) => kindName(r.component.kind) },
     {
       key: 'project',
       header: 'Project',

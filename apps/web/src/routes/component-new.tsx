@@ -11,7 +11,7 @@ import { PageSkeleton } from '../components/skeleton';
 import { KindPicker } from '../features/editor/kind-picker';
 import { templateFor } from '../features/editor/kind-forms';
 import { Workbench } from '../features/editor/workbench';
-import { KIND_LABEL } from '../lib/kinds';
+import { kindName } from '@hoopline/present';
 
 export function NewComponentRoute() {
   const { projectId = '' } = useParams();
@@ -33,7 +33,7 @@ export function NewComponentRoute() {
       <PageHeader
         title="New component"
         crumbs={projectCrumbs(p, { label: 'New component' })}
-        subtitle={kind ? KIND_LABEL[kind] : 'Pick a kind; results appear as you type.'}
+        subtitle={kind ? kindName(kind) : 'Pick a kind; results appear as you type.'}
       />
       <div className="mb-4">
         <KindPicker value={kind} onChange={setKind} />

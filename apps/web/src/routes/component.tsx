@@ -14,7 +14,7 @@ import { WorkflowActions } from '../features/revisions/workflow-actions';
 import { AttachmentSummary } from '../features/attachments/attachment-list';
 import { AttachmentsPanel } from '../features/attachments/attachments-panel';
 import { SheetDownload, sheetKind } from '../features/sheets/sheet-download';
-import { kindLabel } from '../lib/kinds';
+import { kindName } from '@hoopline/present';
 import type { Raw } from '../features/editor/paths';
 
 function saveBlockedReason(project: Project, revision: Revision | undefined): string | null {
@@ -96,7 +96,7 @@ export function ComponentRoute() {
         }
         subtitle={
           <span className="flex flex-wrap items-center gap-2">
-            {kindLabel(c.kind)}
+            {kindName(c.kind)}
             {r ? (
               <>
                 <span aria-hidden="true">·</span>

@@ -9,7 +9,7 @@ import { PageHeader } from '../components/page';
 import { TableSkeleton } from '../components/skeleton';
 import { formatDateTime, verifyCodeOf } from '../lib/dates';
 import { SheetDownload } from '../features/sheets/sheet-download';
-import { kindLabel } from '../lib/kinds';
+import { kindName } from '@hoopline/present';
 import { SearchForm } from '../components/search-form';
 
 /**
@@ -43,7 +43,7 @@ export function IssuedRoute() {
         </Link>
       ),
     },
-    { key: 'kind', header: 'Kind', render: (i) => kindLabel(i.component.kind) },
+    { key: 'kind', header: 'Kind', render: (i) => kindName(i.component.kind) },
     { key: 'revision', header: 'Revision', numeric: true, render: (i) => i.revision.number },
     {
       key: 'verdict',

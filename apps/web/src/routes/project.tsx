@@ -10,7 +10,7 @@ import { ErrorView } from '../components/error-view';
 import { PageHeader } from '../components/page';
 import { PageSkeleton, TableSkeleton } from '../components/skeleton';
 import { formatDateTime } from '../lib/dates';
-import { kindLabel } from '../lib/kinds';
+import { kindName } from '@hoopline/present';
 import { show } from '@hoopline/present';
 import { useUnitSystem } from '../lib/unit-system';
 import { useMe } from '../api/session';
@@ -47,7 +47,7 @@ export function ProjectRoute() {
       ),
     },
     { key: 'tag', header: 'Tag', render: (c) => c.tag || <span className="text-muted">–</span> },
-    { key: 'kind', header: 'Kind', render: (c) => kindLabel(c.kind) },
+    { key: 'kind', header: 'Kind', render: (c) => kindName(c.kind) },
     {
       key: 'latest',
       header: 'Latest revision',

@@ -12,7 +12,7 @@ import { RevisionBody } from '../features/revisions/revision-body';
 import { WorkflowActions } from '../features/revisions/workflow-actions';
 import { AttachmentSummary } from '../features/attachments/attachment-list';
 import { SheetDownload, sheetKind } from '../features/sheets/sheet-download';
-import { kindLabel } from '../lib/kinds';
+import { kindName } from '@hoopline/present';
 
 /** One revision, read-only; the check and sign-off panel while it awaits check (the review page). */
 export function RevisionRoute() {
@@ -41,7 +41,7 @@ export function RevisionRoute() {
             <VerdictBadge verdict={r.verdict} />
           </span>
         }
-        subtitle={`${kindLabel(c.kind)} · by ${r.author.name}${latest ? '' : ' · not the latest revision'}`}
+        subtitle={`${kindName(c.kind)} · by ${r.author.name}${latest ? '' : ' · not the latest revision'}`}
         actions={
           <>
             {latest ? <WorkflowActions project={p} revision={r} /> : null}

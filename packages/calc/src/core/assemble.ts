@@ -2,7 +2,15 @@ import { ENGINE_NAME, ENGINE_VERSION } from '../version';
 import { caution, type CautionCode } from './cautions';
 import { ambientStep } from './load-cases';
 import type { MethodContext, MethodDefinition, MethodResult } from './method';
-import type { CaseReport, Governing, Report, ValidityWarning, Verdict } from './report';
+import type { z } from 'zod';
+import type {
+  CaseReport,
+  ComponentKind,
+  Governing,
+  Report,
+  ValidityWarning,
+  Verdict,
+} from './report';
 import { outsideValidityWarnings } from './validity';
 
 /**
@@ -13,7 +21,7 @@ import { outsideValidityWarnings } from './validity';
  * pressure is the first common step of every report.
  */
 export function assembleReport(
-  method: MethodDefinition,
+  method: Pick<MethodDefinition<z.ZodType, ComponentKind>, 'kind'>,
   context: MethodContext,
   result: MethodResult,
 ): Report {

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import type { CautionCode } from './cautions';
 import { designBasisSchema, type DesignBasis } from './design-basis';
 import { loadCasesSchema, siteSchema, type Ambient } from './load-cases';
-import type { ComponentKind, ResolvedLoadCase, Step, ValidityWarning } from './report';
+import type { ResolvedLoadCase, Step, ValidityWarning } from './report';
 import type { Trail } from './trail';
 import type { Vocabulary } from './vocabulary';
 
@@ -44,10 +44,16 @@ export interface SweepParameter<Parsed> {
   upperBound?(input: Parsed): number;
 }
 
-export interface MethodDefinition<Schema extends z.ZodType = z.ZodType> {
-  readonly kind: ComponentKind;
+export interface MethodDefinition<
+  Schema extends z.ZodType = z.ZodType,
+  Kind extends string = string,
+> {
+  /** The component kind it screens; the list of kinds is the list of methods (ComponentKind). */
+  readonly kind: Kind;
   /** Short name for menus, e.g. "Circular flat plate". */
   readonly name: string;
+  /** One line on what it is for, for the kind picker ("Door, cover, blind flange or window: …"). */
+  readonly summary: string;
   /** One sentence on what the method screens and by which theory. */
   readonly description: string;
   /** Input schema: the component's fields, `kind`, `site` and `loadCases` included. */
@@ -70,9 +76,9 @@ export interface MethodDefinition<Schema extends z.ZodType = z.ZodType> {
 }
 
 /** Keeps a method's types tied together where it is defined. */
-export function defineMethod<Schema extends z.ZodType>(
-  method: MethodDefinition<Schema>,
-): MethodDefinition<Schema> {
+export function defineMethod<Schema extends z.ZodType, const Kind extends string>(
+  method: MethodDefinition<Schema, Kind>,
+): MethodDefinition<Schema, Kind> {
   return method;
 }
 
@@ -83,7 +89,7 @@ const nameField = z.string().trim().max(120, 'must be at most 120 characters').o
  * (for ambient pressure), the design basis (allowable-stress basis, barometer)
  * and its load cases, plus the method's own fields.
  */
-export function componentShape<Kind extends ComponentKind, Shape extends z.ZodRawShape>(
+export function componentShape<const Kind extends string, Shape extends z.ZodRawShape>(
   kind: Kind,
   shape: Shape,
 ) {
@@ -99,7 +105,7 @@ export function componentShape<Kind extends ComponentKind, Shape extends z.ZodRa
 
 /** As componentShape, for methods without load cases (pump-down). */
 export function componentShapeWithoutLoadCases<
-  Kind extends ComponentKind,
+  const Kind extends string,
   Shape extends z.ZodRawShape,
 >(kind: Kind, shape: Shape) {
   return {

@@ -3,15 +3,9 @@
  * input and engine version. All values are SI (Pa, m, N, J, s, K…).
  */
 
-/** What a component is; one method per kind. */
-export type ComponentKind =
-  | 'flat-area-load'
-  | 'circular-plate'
-  | 'rectangular-plate'
-  | 'cylindrical-shell'
-  | 'sphere-or-head'
-  | 'stored-energy'
-  | 'pump-down';
+import type { ComponentKind } from '../methods';
+
+export type { ComponentKind };
 
 /** One line of the trail a checker reads: formula, numbers in it, result, source. */
 export interface Step {

@@ -1,3 +1,4 @@
+import type { z } from 'zod';
 import type { MethodDefinition } from '../core/method';
 import { circularPlate } from './circular-plate/circular-plate';
 import { cylindricalShell } from './cylindrical-shell/cylindrical-shell';
@@ -8,15 +9,24 @@ import { sphereOrHead } from './sphere-or-head/sphere-or-head';
 import { storedEnergy } from './stored-energy/stored-energy';
 
 /**
- * Every screening method, one per component kind. Adding a method is adding
- * its folder and one line here (no registration by import side effects).
+ * Every screening method, one per component kind, in the order menus list
+ * them. Adding a method is adding its folder and one line here (no
+ * registration by import side effects); the kinds are derived from this list.
  */
-export const METHODS: readonly MethodDefinition[] = [
-  flatAreaLoad as unknown as MethodDefinition,
-  circularPlate as unknown as MethodDefinition,
-  rectangularPlate as unknown as MethodDefinition,
-  cylindricalShell as unknown as MethodDefinition,
-  sphereOrHead as unknown as MethodDefinition,
-  storedEnergy as unknown as MethodDefinition,
-  pumpDown as unknown as MethodDefinition,
-];
+const ALL = [
+  circularPlate,
+  rectangularPlate,
+  cylindricalShell,
+  sphereOrHead,
+  flatAreaLoad,
+  storedEnergy,
+  pumpDown,
+] as const;
+
+/** What a component is; one method per kind. */
+export type ComponentKind = (typeof ALL)[number]['kind'];
+
+/** A method of this engine, its input type erased (the list's element type). */
+export type EngineMethod = MethodDefinition<z.ZodType, ComponentKind>;
+
+export const METHODS: readonly EngineMethod[] = ALL as unknown as readonly EngineMethod[];

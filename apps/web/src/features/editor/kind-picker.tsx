@@ -1,7 +1,8 @@
 import { findMethod, type ComponentKind } from '@hoopline/calc';
 import { useState } from 'react';
 import { Button } from '../../components/button';
-import { KIND_BLURB, KIND_LABEL, KIND_ORDER } from '../../lib/kinds';
+import { KIND_BLURB, KIND_ORDER } from '../../lib/kinds';
+import { kindName } from '@hoopline/present';
 import { engineHasKind } from './kind-forms';
 
 /**
@@ -21,7 +22,7 @@ export function KindPicker({
     return (
       <div className="flex flex-wrap items-center gap-3 rounded-md border border-line bg-panel px-3 py-2">
         <span className="text-sm">
-          Kind: <strong>{KIND_LABEL[value]}</strong>
+          Kind: <strong>{kindName(value)}</strong>
         </span>
         <span className="hidden text-xs text-muted md:inline">{KIND_BLURB[value]}</span>
         <Button size="sm" variant="ghost" onClick={() => setOpen(true)}>
@@ -63,7 +64,7 @@ export function KindPicker({
                 aria-describedby={`${id}-description`}
               />
               <span>
-                <span className="block text-sm font-medium">{KIND_LABEL[kind]}</span>
+                <span className="block text-sm font-medium">{kindName(kind)}</span>
                 <span id={`${id}-description`} className="block text-xs text-muted">
                   {available ? KIND_BLURB[kind] : 'Not in this engine version yet.'}
                 </span>

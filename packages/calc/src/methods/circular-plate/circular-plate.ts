@@ -208,6 +208,7 @@ function caseTrail(input: Parsed, c: Common, loadCase: ResolvedLoadCase): Trail 
 export const circularPlate = defineMethod({
   kind: 'circular-plate',
   name: 'Circular flat plate',
+  summary: 'Door, cover, blind flange or window: stress, deflection, required thickness.',
   description:
     'Circular flat plate (door, cover, blind flange, window) under uniform pressure, edge clamped or simply supported: maximum stress and where, centre deflection, and the thickness needed for an allowable stress and a deflection limit (Roark, Table 11.2).',
   schema: circularPlateSchema,

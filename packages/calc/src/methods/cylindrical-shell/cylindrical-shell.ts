@@ -870,6 +870,7 @@ function ringSpacingSteps(
 export const cylindricalShell = defineMethod({
   kind: 'cylindrical-shell',
   name: 'Cylindrical shell',
+  summary: 'Chamber or drum: internal pressure, buckling under vacuum, ring spacing.',
   description:
     'Cylindrical shell (vessel, chamber, drum) for every load case: inside higher, thin-wall and Lamé stresses and the ASME VIII-1 UG-27 thickness and MAWP; outside higher (vacuum), elastic buckling (Bresse, von Mises with its lobe number, Windenburg–Trilling), plastic collapse, their interaction with a knock-down and a design factor, the critical length and the stiffening-ring spacing for a target thickness. The length is the unsupported length between rings or heads; between dished heads add about 1/3 of each head depth (ASME UG-28, from memory).',
   schema: cylindricalShellSchema,

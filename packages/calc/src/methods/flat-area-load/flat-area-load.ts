@@ -181,6 +181,7 @@ function caseTrail(
 export const flatAreaLoad = defineMethod({
   kind: 'flat-area-load',
   name: 'Flat-area load and fasteners',
+  summary: 'Force of the pressure on a closure, load per latch or bolt, its direction.',
   description:
     'Resultant force of a pressure difference on a flat closure over its seal-line area, the line load on the seal and frame, and the share each latch or bolt carries, with the direction of the load.',
   schema: flatAreaLoadSchema,

@@ -411,6 +411,7 @@ function caseTrail(input: Parsed, ambient: number, speed: number, tau: number): 
 export const pumpDown = defineMethod({
   kind: 'pump-down',
   name: 'Rough-vacuum pump-down',
+  summary: 'Time to pump a chamber down, and the pressure a leak lets it reach.',
   description:
     'Time for a pump to bring a chamber from its start pressure to a target in the rough (viscous) range, with the line conductance, a constant gas load and the pump’s base pressure setting the ultimate pressure; optionally the vapour pressure of liquid water in the chamber.',
   schema: pumpDownSchema,

@@ -203,6 +203,7 @@ function caseTrail(input: Parsed, c: Common, loadCase: ResolvedLoadCase): Trail 
 export const rectangularPlate = defineMethod({
   kind: 'rectangular-plate',
   name: 'Rectangular flat plate',
+  summary: 'Rectangular door or panel between stiffeners: stress, deflection, edge load.',
   description:
     'Rectangular flat plate or panel (door, cover, box wall between stiffeners) under uniform pressure, all edges simply supported or all clamped: maximum stress and where, centre deflection, edge reaction, and the thickness needed for an allowable stress and a deflection limit (Roark, Table 11.4).',
   schema: rectangularPlateSchema,

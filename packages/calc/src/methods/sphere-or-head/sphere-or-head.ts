@@ -903,6 +903,7 @@ function externalCapacity(
 export const sphereOrHead = defineMethod({
   kind: 'sphere-or-head',
   name: 'Sphere or dished head',
+  summary: 'Hemispherical, 2:1 ellipsoidal or torispherical head, or a sphere.',
   description:
     'Sphere, hemispherical, 2:1 ellipsoidal or torispherical head under internal pressure (ASME VIII-1 UG-27/UG-32 code-form thickness and MAWP, membrane stress) and external pressure (equivalent sphere, Zoelly buckling with a knock-down, plastic interaction and a design factor; UG-28(d) elastic allowable as a cross-check).',
   schema: sphereOrHeadSchema,

@@ -303,6 +303,7 @@ function caseTrail(input: Parsed, gamma: number, v: number, loadCase: ResolvedLo
 export const storedEnergy = defineMethod({
   kind: 'stored-energy',
   name: 'Stored energy',
+  summary: 'Energy released if a vessel bursts or implodes, with its TNT equivalent.',
   description:
     'Energy a gas-filled vessel releases on failure (Brode, isentropic, isothermal upper bound) or the atmosphere does on an evacuated vessel that implodes, in joules and kilograms of TNT, with the hazard caution.',
   schema: storedEnergySchema,
