@@ -77,7 +77,13 @@ describe('Workbench', () => {
     expect(
       screen.getByText(/Not current: these results are for the last inputs/),
     ).toBeInTheDocument();
+    // No old verdict under the red banner: the badge is gone until the inputs read again.
+    expect(screen.queryByText(/^(Passes|Fails|Outside validity|No checks)$/)).toBeNull();
+    expect(screen.getByText('No verdict: inputs not readable')).toBeInTheDocument();
     expect(screen.getByRole('button', { name: 'Save as revision 1' })).toBeDisabled();
+    await userEvent.clear(thickness);
+    await userEvent.type(thickness, '12 mm');
+    expect(screen.getByText(/^(Passes|Fails|Outside validity|No checks)$/)).toBeInTheDocument();
   });
 
   it('names the bad load-case field', async () => {

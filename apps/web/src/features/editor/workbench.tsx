@@ -237,7 +237,12 @@ export function Workbench({
                 </p>
               ) : null}
               <div className={stale ? 'opacity-55' : ''} aria-live="polite" aria-atomic="false">
-                <ReportSummary report={report} source={sourceLabel} />
+                <ReportSummary
+                  report={report}
+                  source={sourceLabel}
+                  system={system}
+                  stale={stale}
+                />
               </div>
               <CautionsList report={report} />
               <div className={`flex flex-col gap-4 ${stale ? 'opacity-55' : ''}`}>

@@ -35,17 +35,26 @@ export function ReportSummary({
   report,
   source,
   system = 'si',
+  stale = false,
 }: {
   report: Report;
   source?: ReactNode;
   system?: UnitSystem;
+  /** The inputs changed and cannot be read: the verdict shown would be an old one, so it is not shown. */
+  stale?: boolean;
 }) {
   const shown = usePresented(report, system);
   const g = shown.governing;
   return (
     <div className="flex flex-col gap-1.5">
       <div className="flex flex-wrap items-center gap-2">
-        <VerdictBadge verdict={report.verdict} size="lg" />
+        {stale ? (
+          <span className="inline-flex items-center rounded-full border border-line-strong px-3 py-0.5 text-sm font-medium text-muted">
+            No verdict: inputs not readable
+          </span>
+        ) : (
+          <VerdictBadge verdict={report.verdict} size="lg" />
+        )}
         <span className="text-sm font-medium">{shown.title}</span>
       </div>
       <p className="text-sm">
