@@ -167,5 +167,5 @@ export { SWEEP_DEFAULT_POINTS, SWEEP_MAX_POINTS, sweepThickness } from './sweep'
 export type { SweepCase, SweepOptions, SweepPoint, SweepResult } from './sweep';
 
 // Batch screening from CSV
-export { CHECKS_CSV_COLUMNS, checksToCsv, csvField, readCsvCases } from './batch/csv';
+export { CHECKS_CSV_COLUMNS, casesToCsv, checksToCsv, csvField, readCsvCases } from './batch/csv';
 export type { CsvCase } from './batch/csv';

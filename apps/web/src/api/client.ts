@@ -185,10 +185,15 @@ export function fileNameFromDisposition(header: string | null): string | null {
 
 /** Hands a downloaded file to the browser to save, under the given name. */
 export function saveFile(file: DownloadedFile, fallbackName: string): void {
-  const url = URL.createObjectURL(file.blob);
+  saveBlob(file.blob, file.fileName ?? fallbackName);
+}
+
+/** Hands bytes made in the browser (an exported case) to it to save as a file. */
+export function saveBlob(blob: Blob, fileName: string): void {
+  const url = URL.createObjectURL(blob);
   const link = document.createElement('a');
   link.href = url;
-  link.download = file.fileName ?? fallbackName;
+  link.download = fileName;
   link.rel = 'noopener';
   document.body.append(link);
   link.click();

@@ -1,7 +1,7 @@
 import { parse } from 'csv-parse/browser/esm/sync';
 import { describe, expect, it } from 'vitest';
-import { CalcInputError, screen } from '../index';
-import { checksToCsv, csvField, readCsvCases } from './csv';
+import { CalcInputError, METHODS, screen } from '../index';
+import { casesToCsv, checksToCsv, csvField, readCsvCases } from './csv';
 
 function issues(fn: () => unknown): string[] {
   try {
@@ -152,5 +152,24 @@ describe('checksToCsv', () => {
     expect(csvField(' edge')).toBe('" edge"');
     expect(csvField(0.1)).toBe('0.1');
     expect(csvField(false)).toBe('false');
+  });
+});
+
+describe('casesToCsv', () => {
+  it('writes every method example so that readCsvCases reads it back unchanged', () => {
+    const inputs = METHODS.flatMap((m) =>
+      m.examples.map((e) => e.input as Record<string, unknown>),
+    );
+    const text = casesToCsv(inputs);
+    expect(text.split('\r\n')[0]!.startsWith('kind,')).toBe(true);
+    const back = readCsvCases(text).map((c) => c.input);
+    expect(back).toEqual(inputs);
+    // And the cases screen as the originals do.
+    back.forEach((input, i) => expect(screen(input).verdict).toBe(screen(inputs[i]).verdict));
+  });
+
+  it('quotes what RFC 4180 needs quoted', () => {
+    const text = casesToCsv([{ kind: 'circular-plate', name: 'Door, "main"' }]);
+    expect(text).toBe('kind,name\r\ncircular-plate,"Door, ""main"""\r\n');
   });
 });

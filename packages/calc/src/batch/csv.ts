@@ -202,6 +202,48 @@ export function csvField(value: string | number | boolean): string {
   return text;
 }
 
+function leafPaths(value: unknown, prefix: string, out: Map<string, unknown>): void {
+  if (Array.isArray(value)) {
+    value.forEach((item, index) => leafPaths(item, `${prefix}.${index}`, out));
+    return;
+  }
+  if (isContainer(value)) {
+    for (const [key, item] of Object.entries(value))
+      leafPaths(item, prefix ? `${prefix}.${key}` : key, out);
+    return;
+  }
+  if (value !== undefined && value !== null) out.set(prefix, value);
+}
+
+/**
+ * Component inputs as the CSV table `readCsvCases` reads (and the CLI takes):
+ * one row per component, a column per dotted field path, `kind` first, in the
+ * order the fields first appear; a component without a field leaves its cell
+ * empty. RFC 4180, CRLF line ends. Reading the table back gives the inputs.
+ */
+export function casesToCsv(cases: readonly Record<string, unknown>[]): string {
+  const rows = cases.map((c) => {
+    const leaves = new Map<string, unknown>();
+    leafPaths(c, '', leaves);
+    return leaves;
+  });
+  const columns: string[] = ['kind'];
+  for (const row of rows)
+    for (const path of row.keys()) if (!columns.includes(path)) columns.push(path);
+  const lines = [columns.map(csvField).join(',')];
+  for (const row of rows) {
+    lines.push(
+      columns
+        .map((column) => {
+          const value = row.get(column);
+          return value === undefined ? '' : csvField(value as string | number | boolean);
+        })
+        .join(','),
+    );
+  }
+  return `${lines.join('\r\n')}\r\n`;
+}
+
 /** Column names of `checksToCsv`. */
 export const CHECKS_CSV_COLUMNS = [
   'component',

@@ -17,6 +17,7 @@ import {
 } from '../results/report-view';
 import { TrailTable } from '../results/trail-table';
 import { useEditorState } from './editor-state';
+import { CaseFile } from './case-file';
 import { InputsForm } from './inputs-form';
 import { evaluate, serverInputIssues } from './live-report';
 import { sameInputs, type Raw } from './paths';
@@ -182,6 +183,7 @@ export function Workbench({
               projectId={project.id}
               canSaveMaterials={canSaveMaterials}
             />
+            <CaseFile kind={kind} inputs={inputs} onImport={editor.replace} />
             <div className="flex flex-col gap-2 border-t border-line pt-3">
               <TextField
                 label="Revision note (optional)"
@@ -237,12 +239,7 @@ export function Workbench({
                 </p>
               ) : null}
               <div className={stale ? 'opacity-55' : ''} aria-live="polite" aria-atomic="false">
-                <ReportSummary
-                  report={report}
-                  source={sourceLabel}
-                  system={system}
-                  stale={stale}
-                />
+                <ReportSummary report={report} source={sourceLabel} system={system} stale={stale} />
               </div>
               <CautionsList report={report} />
               <div className={`flex flex-col gap-4 ${stale ? 'opacity-55' : ''}`}>
