@@ -26,7 +26,9 @@ export function readCaseFile(text: string, fileName: string): Raw {
       rows = readCsvCases(text);
     } catch (error) {
       if (error instanceof CalcInputError)
-        throw new Error(error.issues.map((i) => `${i.path}: ${i.message}`).join('; '));
+        throw new Error(error.issues.map((i) => `${i.path}: ${i.message}`).join('; '), {
+          cause: error,
+        });
       throw error;
     }
     if (rows.length === 0) throw new Error('the table has a header but no component row');
@@ -38,7 +40,9 @@ export function readCaseFile(text: string, fileName: string): Raw {
   try {
     parsed = JSON.parse(text) as unknown;
   } catch (error) {
-    throw new Error(`not valid JSON: ${error instanceof Error ? error.message : 'syntax error'}`);
+    throw new Error(`not valid JSON: ${error instanceof Error ? error.message : 'syntax error'}`, {
+      cause: error,
+    });
   }
   if (Array.isArray(parsed)) {
     if (parsed.length !== 1)
