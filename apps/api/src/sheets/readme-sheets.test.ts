@@ -54,7 +54,8 @@ describe('README example sheets: every number on the sheet is the report’s val
   const projects: Record<UnitSystem, string> = { si: '', us: '' };
 
   beforeAll(async () => {
-    t = await startTestApp();
+    // A deployment's own address: the sheet's verify link and QR code must use it.
+    t = await startTestApp({ HOOPLINE_PUBLIC_URL: 'http://screening.example.test' });
     w = await makeWorld(t);
     fabricator = await signIn(t, w.fabricator);
     projects.si = w.projectId;
@@ -93,6 +94,7 @@ describe('README example sheets: every number on the sheet is the report’s val
     const res = await fabricator.download(`/api/revisions/${created.revision.id}/sheet.pdf`);
     expect(res.status).toBe(200);
     const text = pdfText(res.body as Buffer, `example-${i}-${system}`);
+    expect(text).toContain(`http://screening.example.test/verify/${created.revision.verifyCode}`);
     const report = created.revision.report as unknown as Report;
     const shown = presentReport(report, system);
     const problems: string[] = [];

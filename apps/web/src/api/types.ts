@@ -212,6 +212,19 @@ export type VerifyResult =
       readonly componentName: string;
       readonly revisionNumber: number;
       readonly countersignedAt: string;
+      readonly contentHash: string;
+      readonly kind: string;
+      /** m (SI), where the kind has a thickness. */
+      readonly thickness: number | null;
+      readonly material: string | null;
+      readonly verdict: Verdict;
+      readonly governing: {
+        readonly loadCase: string;
+        readonly checkLabel: string;
+        readonly utilisation: number;
+      } | null;
+      readonly preparedBy: string;
+      readonly countersignedBy: string;
     };
 
 /** GET /users/lookup?email= (admins and designers): one person by their exact address. */

@@ -32,6 +32,18 @@ const matched = {
   componentName: 'VDC-3 door plate',
   revisionNumber: 2,
   countersignedAt: '2026-03-02T09:30:00Z',
+  contentHash: 'abcdef0123456789'.repeat(4),
+  kind: 'circular-plate',
+  thickness: 0.012,
+  material: 'Stainless steel 304 (annealed)',
+  verdict: 'pass',
+  governing: {
+    loadCase: 'Operating: full vacuum',
+    checkLabel: 'Maximum stress against the allowable stress',
+    utilisation: 0.9996,
+  },
+  preparedBy: 'Dana Okafor',
+  countersignedBy: 'Ravi Lindqvist',
 };
 
 describe('the public verify page', () => {
@@ -49,6 +61,18 @@ describe('the public verify page', () => {
     expect(answer).toHaveTextContent('VDC-3 door plate');
     expect(answer).toHaveTextContent(/Revision\s*2/);
     expect(answer).toHaveTextContent('latest countersigned revision');
+    // What the sheet prints, to compare the paper with: thickness in both systems (12 mm = 0.4724 in),
+    // the governing check never rounded up to 100 %, who prepared and who countersigned it.
+    expect(answer).toHaveTextContent('Circular flat plate');
+    expect(answer).toHaveTextContent('12 mm (0.4724 in)');
+    expect(answer).toHaveTextContent('Stainless steel 304 (annealed)');
+    expect(answer).toHaveTextContent('PASSES every check');
+    expect(answer).toHaveTextContent(
+      /Maximum stress against the allowable stress, load case Operating: full vacuum, at\s*99\.9 %/,
+    );
+    expect(answer).toHaveTextContent('Dana Okafor');
+    expect(answer).toHaveTextContent('Ravi Lindqvist');
+    expect(answer).toHaveTextContent(matched.contentHash);
     expect(screen.getByRole('complementary', { name: 'Screening caution' })).toBeInTheDocument();
     // No app navigation for a visitor: only the way to sign in.
     expect(screen.queryByRole('navigation')).toBeNull();

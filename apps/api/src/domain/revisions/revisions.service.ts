@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
-import { ENGINE_VERSION, computeReport, parseComponent } from '@hoopline/calc';
+import { ENGINE_VERSION, computeReport, parseComponent, type Report } from '@hoopline/calc';
 import { ComponentEntity } from '../../db/entities/component.entity';
 import { toJson } from '../../db/entities/json';
 import {
@@ -73,6 +73,11 @@ export interface IssuedItem {
   readonly revision: RevisionSummary;
 }
 
+/**
+ * The public answer for a verify code. Beyond "it matches", what the sheet
+ * itself prints, so its holder can compare the paper line by line: a sheet
+ * with altered numbers but a copied code is caught.
+ */
 export type VerifyResult =
   | { readonly match: false }
   | {
@@ -82,6 +87,20 @@ export type VerifyResult =
       readonly componentName: string;
       readonly revisionNumber: number;
       readonly countersignedAt: string;
+      readonly contentHash: string;
+      readonly kind: string;
+      /** The wall or plate thickness screened, m (SI), where the kind has one. */
+      readonly thickness: number | null;
+      readonly material: string | null;
+      readonly verdict: string;
+      readonly governing: {
+        readonly loadCase: string;
+        readonly checkLabel: string;
+        readonly utilisation: number;
+      } | null;
+      /** Who prepared it and who countersigned it, as the sheet names them. */
+      readonly preparedBy: string;
+      readonly countersignedBy: string;
     };
 
 function storedHashOf(revision: RevisionEntity): string {
@@ -505,12 +524,26 @@ export class RevisionsService {
     // The same hash on several revisions (identical inputs screened twice) names the latest.
     if (new Set(candidates.map((r) => r.contentHash)).size !== 1) return { match: false };
     const revision = candidates[0]!;
-    const [names] = await rows<{ number: string; name: string }>(
+    const [names] = await rows<{
+      number: string;
+      name: string;
+      kind: string;
+      author: string;
+      checker: string | null;
+    }>(
       manager,
-      `select p.number, c.name from components c join projects p on p.id = c.project_id where c.id = $1`,
-      [revision.componentId],
+      `select p.number, c.name, c.kind, a.name as author,
+              (select u.name from sign_offs s join users u on u.id = s.checker_id
+                where s.revision_id = $2 and s.decision = 'countersigned'
+                order by s.created_at desc limit 1) as checker
+         from components c join projects p on p.id = c.project_id, users a
+        where c.id = $1 and a.id = $3`,
+      [revision.componentId, revision.id, revision.authorId],
     );
     if (!names || !revision.decidedAt) return { match: false };
+    const report = revision.report as unknown as Report;
+    const inputs = report.inputs as { thickness?: unknown; material?: { name?: unknown } };
+    const g = report.governing;
     return {
       match: true,
       status: revision.supersededAt ? 'superseded' : 'current',
@@ -518,6 +551,16 @@ export class RevisionsService {
       componentName: names.name,
       revisionNumber: revision.number,
       countersignedAt: isoRequired(revision.decidedAt),
+      contentHash: revision.contentHash,
+      kind: names.kind,
+      thickness: typeof inputs.thickness === 'number' ? inputs.thickness : null,
+      material: typeof inputs.material?.name === 'string' ? inputs.material.name : null,
+      verdict: report.verdict,
+      governing: g
+        ? { loadCase: g.loadCase, checkLabel: g.checkLabel, utilisation: g.utilisation }
+        : null,
+      preparedBy: names.author,
+      countersignedBy: names.checker ?? '',
     };
   }
 

@@ -327,16 +327,42 @@ describe('the stamped-for-review sheet (rendered through the API, read back with
       componentName: 'Verify me',
       revisionNumber: 1,
     });
+    // What the sheet prints, so its holder can compare the paper with it, and nothing else.
     expect(Object.keys(now.body).sort()).toEqual(
       [
         'componentName',
+        'contentHash',
         'countersignedAt',
+        'countersignedBy',
+        'governing',
+        'kind',
         'match',
+        'material',
+        'preparedBy',
         'projectNumber',
         'revisionNumber',
         'status',
+        'thickness',
+        'verdict',
       ].sort(),
     );
+    const report = first.revision.report as unknown as {
+      verdict: string;
+      governing: { checkLabel: string; utilisation: number };
+    };
+    expect(now.body).toMatchObject({
+      contentHash: first.revision.contentHash,
+      kind: 'circular-plate',
+      thickness: 0.01, // "10 mm" as typed
+      material: 'Carbon steel plate (SA-516 Gr 70)',
+      verdict: report.verdict,
+      governing: {
+        checkLabel: report.governing.checkLabel,
+        utilisation: report.governing.utilisation,
+      },
+      preparedBy: w.designer.name,
+      countersignedBy: w.checker.name,
+    });
 
     const second = await t.services.revisions.create(w.designer, first.component.id, {
       inputs: { ...CASES[1]!.inputs, thickness: '11 mm' },

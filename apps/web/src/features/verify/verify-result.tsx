@@ -1,4 +1,5 @@
 import type { VerifyResult } from '../../api/types';
+import { VERDICT_WORDS, formatPercent, kindName, show } from '@hoopline/present';
 import { formatDateTime } from '../../lib/dates';
 
 /**
@@ -63,6 +64,46 @@ export function VerifyAnswer({ result, code }: { result: VerifyResult; code: str
           <time dateTime={result.countersignedAt}>{formatDateTime(result.countersignedAt)}</time>
           <span className="text-muted"> (your time zone)</span>
         </dd>
+      </dl>
+      <h3 className="mt-4 text-sm font-semibold">Compare your sheet with these</h3>
+      <p className="text-xs text-muted">
+        A copied code on an altered sheet still matches: check that the sheet in your hands prints
+        the same.
+      </p>
+      <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
+        <dt className="text-muted">Kind</dt>
+        <dd>{kindName(result.kind)}</dd>
+        {result.thickness !== null ? (
+          <>
+            <dt className="text-muted">Thickness</dt>
+            <dd className="num">
+              {show(result.thickness, 'm', 'si')} ({show(result.thickness, 'm', 'us')})
+            </dd>
+          </>
+        ) : null}
+        {result.material ? (
+          <>
+            <dt className="text-muted">Material</dt>
+            <dd>{result.material}</dd>
+          </>
+        ) : null}
+        <dt className="text-muted">Screening result</dt>
+        <dd>{VERDICT_WORDS[result.verdict].sentence}</dd>
+        {result.governing ? (
+          <>
+            <dt className="text-muted">Governing check</dt>
+            <dd>
+              {result.governing.checkLabel}, load case {result.governing.loadCase}, at{' '}
+              <span className="num font-medium">{formatPercent(result.governing.utilisation)}</span>
+            </dd>
+          </>
+        ) : null}
+        <dt className="text-muted">Prepared by</dt>
+        <dd>{result.preparedBy}</dd>
+        <dt className="text-muted">Countersigned by</dt>
+        <dd>{result.countersignedBy}</dd>
+        <dt className="text-muted">Content hash</dt>
+        <dd className="font-mono text-xs break-all">{result.contentHash}</dd>
       </dl>
     </section>
   );
