@@ -3,7 +3,6 @@ import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
-import { pinoHttp } from 'pino-http';
 import type { Logger } from 'pino';
 import type { DataSource } from 'typeorm';
 import type { Config } from './config/config';
@@ -14,6 +13,7 @@ import { createStorage } from './storage/create-storage';
 import type { BlobStorage } from './storage/storage';
 import { createServices } from './domain/services';
 import { apiNotFound, errorMiddleware } from './http/error-middleware';
+import { requestLog } from './http/request-log';
 import { authRoutes } from './routes/auth.routes';
 import { componentsRoutes } from './routes/components.routes';
 import { healthRoutes } from './routes/health.routes';
@@ -64,33 +64,21 @@ export function createApp({
       },
     }),
   );
-  app.use(
-    pinoHttp({
-      logger,
-      redact: ['req.headers.cookie', 'req.headers.authorization', 'res.headers["set-cookie"]'],
-      serializers: {
-        // Invitation tokens travel in the path of GET /auth/invitations/:token: keep them out of the log.
-        req: (req: { url?: string }) => {
-          if (req.url) req.url = req.url.replace(/(\/auth\/invitations\/)[^/?#]+/, '$1[token]');
-          return req;
-        },
-      },
-      customLogLevel: (_req, res, error) =>
-        error || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info',
-    }),
-  );
+  app.use(requestLog(logger));
   app.use(express.json({ limit: '1mb' }));
   app.use(cookieParser());
 
+  const services = createServices(
+    dataSource,
+    config,
+    storage ?? createStorage(config.storage),
+    notifier,
+  );
   const deps: RouteDeps = {
     config,
-    services: createServices(
-      dataSource,
-      config,
-      storage ?? createStorage(config.storage),
-      notifier,
-    ),
-    signedIn: signInRequired(dataSource, config.auth),
+    services,
+    dataSource,
+    signedIn: signInRequired(dataSource, services.tokens),
   };
   const api = express.Router();
   api.use(csrfProtection);

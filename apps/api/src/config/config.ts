@@ -22,13 +22,17 @@ const environmentSchema = z.object({
   HOOPLINE_PUBLIC_URL: z.url().optional(),
   /** Signs access tokens (HS256). Required in production; development and test use DEV_JWT_SECRET. */
   HOOPLINE_JWT_SECRET: z.string().min(32, 'must be at least 32 characters').optional(),
-  /** Access-token (JWT) lifetime, seconds. */
+  /**
+   * Access-token (JWT) lifetime, seconds. Short: the session check on every
+   * request ends a signed-out session at once, and this bounds what a copied
+   * token is worth while its session lives.
+   */
   HOOPLINE_ACCESS_TOKEN_TTL: z.coerce
     .number()
     .int()
     .min(1)
     .max(86_400)
-    .default(15 * 60),
+    .default(5 * 60),
   /** Refresh-token lifetime, seconds. */
   HOOPLINE_REFRESH_TOKEN_TTL: z.coerce
     .number()

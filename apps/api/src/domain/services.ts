@@ -1,5 +1,6 @@
 import type { DataSource } from 'typeorm';
 import { Passwords } from '../auth/passwords';
+import { accessTokens, type AccessTokens } from '../auth/tokens';
 import type { Config } from '../config/config';
 import type { BlobStorage } from '../storage/storage';
 import { AttachmentsService } from './attachments/attachments.service';
@@ -16,6 +17,8 @@ import { UsersService } from './users/users.service';
 /** The services the routes call; each is given only what it uses. */
 export interface Services {
   readonly passwords: Passwords;
+  /** Signs and checks access tokens (one key object per process). */
+  readonly tokens: AccessTokens;
   readonly auth: AuthService;
   readonly users: UsersService;
   readonly projects: ProjectsService;
@@ -33,10 +36,12 @@ export function createServices(
   notifier: Notifier = new OutboxNotifier(config.publicUrl),
 ): Services {
   const passwords = new Passwords(config.auth.argon2);
-  const auth = new AuthService(dataSource, config.auth, passwords, notifier);
+  const tokens = accessTokens(config.auth.jwtSecret, config.auth.accessTokenTtl);
+  const auth = new AuthService(dataSource, config.auth, passwords, notifier, tokens);
   const attachments = new AttachmentsService(dataSource, storage);
   return {
     passwords,
+    tokens,
     auth,
     users: new UsersService(dataSource, config.auth, auth, notifier, config.mail.smtp !== null),
     projects: new ProjectsService(dataSource),

@@ -3,6 +3,7 @@ import { Accounts1764700000000 } from './1764700000000-accounts';
 import { ProjectsAndRevisions1764700001000 } from './1764700001000-projects-and-revisions';
 import { MailAndAttachments1764800000000 } from './1764800000000-mail-and-attachments';
 import { AttachmentRemoval1764800001000 } from './1764800001000-attachment-removal';
+import { SharedSessionsAndLimits1765100000000 } from './1765100000000-shared-sessions-and-limits';
 
 /** Every migration class, oldest first. Add new ones at the end. */
 export const migrations = [
@@ -11,4 +12,5 @@ export const migrations = [
   ProjectsAndRevisions1764700001000,
   MailAndAttachments1764800000000,
   AttachmentRemoval1764800001000,
+  SharedSessionsAndLimits1765100000000,
 ];
