@@ -11,6 +11,7 @@ import { csrfProtection } from './auth/csrf';
 import type { Notifier } from './domain/notifications/notifier';
 import { createStorage } from './storage/create-storage';
 import type { BlobStorage } from './storage/storage';
+import type { SheetRenderer } from './sheets/sheet-renderer';
 import { createServices } from './domain/services';
 import { apiNotFound, errorMiddleware } from './http/error-middleware';
 import { requestLog } from './http/request-log';
@@ -34,6 +35,8 @@ export interface AppDependencies {
   readonly notifier?: Notifier;
   /** Where uploads live; by default the configured driver. */
   readonly storage?: BlobStorage;
+  /** Renders sheets off the event loop; by default a pool of HOOPLINE_SHEET_THREADS threads. */
+  readonly sheetRenderer?: SheetRenderer;
 }
 
 /** Builds the Express app; no listening, no side effects beyond the object. */
@@ -43,6 +46,7 @@ export function createApp({
   logger,
   notifier,
   storage,
+  sheetRenderer,
 }: AppDependencies): Express {
   const app = express();
   app.disable('x-powered-by');
@@ -73,6 +77,7 @@ export function createApp({
     config,
     storage ?? createStorage(config.storage),
     notifier,
+    sheetRenderer,
   );
   const deps: RouteDeps = {
     config,

@@ -3,6 +3,7 @@ import { Passwords } from '../auth/passwords';
 import { accessTokens, type AccessTokens } from '../auth/tokens';
 import type { Config } from '../config/config';
 import type { BlobStorage } from '../storage/storage';
+import { workerSheetRenderer, type SheetRenderer } from '../sheets/sheet-renderer';
 import { AttachmentsService } from './attachments/attachments.service';
 import { AuditService } from './audit/audit.service';
 import { AuthService } from './auth/auth.service';
@@ -27,6 +28,8 @@ export interface Services {
   readonly audit: AuditService;
   readonly attachments: AttachmentsService;
   readonly sheets: SheetsService;
+  /** The worker threads that render sheets (close it when done). */
+  readonly sheetRenderer: SheetRenderer;
 }
 
 export function createServices(
@@ -34,6 +37,7 @@ export function createServices(
   config: Config,
   storage: BlobStorage,
   notifier: Notifier = new OutboxNotifier(config.publicUrl),
+  sheetRenderer: SheetRenderer = workerSheetRenderer(config.sheets.renderThreads),
 ): Services {
   const passwords = new Passwords(config.auth.argon2);
   const tokens = accessTokens(config.auth.jwtSecret, config.auth.accessTokenTtl);
@@ -49,6 +53,13 @@ export function createServices(
     revisions: new RevisionsService(dataSource, notifier),
     audit: new AuditService(dataSource),
     attachments,
-    sheets: new SheetsService(dataSource, attachments, config.publicUrl),
+    sheets: new SheetsService(
+      dataSource,
+      attachments,
+      config.publicUrl,
+      sheetRenderer,
+      config.sheets.cacheBytes,
+    ),
+    sheetRenderer,
   };
 }

@@ -4,6 +4,7 @@ import { ProjectsAndRevisions1764700001000 } from './1764700001000-projects-and-
 import { MailAndAttachments1764800000000 } from './1764800000000-mail-and-attachments';
 import { AttachmentRemoval1764800001000 } from './1764800001000-attachment-removal';
 import { SharedSessionsAndLimits1765100000000 } from './1765100000000-shared-sessions-and-limits';
+import { SheetRenders1765100001000 } from './1765100001000-sheet-renders';
 
 /** Every migration class, oldest first. Add new ones at the end. */
 export const migrations = [
@@ -13,4 +14,5 @@ export const migrations = [
   MailAndAttachments1764800000000,
   AttachmentRemoval1764800001000,
   SharedSessionsAndLimits1765100000000,
+  SheetRenders1765100001000,
 ];
