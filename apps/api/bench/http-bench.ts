@@ -296,27 +296,31 @@ async function partScreen(data: BenchData) {
   }
 }
 
+// The raw SQL side: the same statement the API sends for the page and its
+// total (components.service.ts, revisions.service.ts), run straight on a pg
+// pool, without HTTP, the session check or the access check.
+const summary = (r: string, a: string, p: string) =>
+  `${r}.id as ${p}_id, ${r}.number as ${p}_number, ${r}.status as ${p}_status,
+   ${r}.verdict as ${p}_verdict, ${r}.content_hash as ${p}_hash, ${r}.author_id as ${p}_author_id,
+   ${a}.name as ${p}_author_name, ${r}.created_at as ${p}_created_at,
+   ${r}.submitted_at as ${p}_submitted_at, ${r}.decided_at as ${p}_decided_at,
+   ${r}.superseded_at as ${p}_superseded_at`;
+
 const COMPONENT_PAGE_SQL = `
-  select c.id, c.project_id, c.name, c.kind, c.tag, c.version, c.created_at, c.updated_at,
-         l.id as l_id, l.number as l_number, l.status as l_status, l.verdict as l_verdict,
-         l.content_hash as l_hash, l.author_id as l_author_id, la.name as l_author_name,
-         l.created_at as l_created_at, l.submitted_at as l_submitted_at,
-         l.decided_at as l_decided_at, l.superseded_at as l_superseded_at,
-         i.id as i_id, i.number as i_number, i.status as i_status, i.verdict as i_verdict,
-         i.content_hash as i_hash, i.author_id as i_author_id, ia.name as i_author_name,
-         i.created_at as i_created_at, i.submitted_at as i_submitted_at,
-         i.decided_at as i_decided_at, i.superseded_at as i_superseded_at,
-         count(*) over () as total
-    from components c
-    left join revisions l on l.id = c.latest_revision_id left join users la on la.id = l.author_id
-    left join revisions i on i.id = c.issued_revision_id left join users ia on ia.id = i.author_id
-   where c.project_id = $1
-   order by lower(c.name), c.id limit 25 offset 0`;
+  with page as (
+    select c.*, count(*) over () as total__ from components c where c.project_id = $1
+     order by lower(c.name), c.id limit 25 offset 0)
+  select page.id, page.project_id, page.name, page.kind, page.tag, page.version,
+         page.created_at, page.updated_at, page.total__,
+         ${summary('l', 'la', 'l')}, ${summary('i', 'ia', 'i')}
+    from page
+    left join revisions l on l.id = page.latest_revision_id left join users la on la.id = l.author_id
+    left join revisions i on i.id = page.issued_revision_id left join users ia on ia.id = i.author_id
+   order by lower(page.name), page.id`;
 
 const REVISION_PAGE_SQL = `
-  select r.id, r.number, r.status, r.verdict, r.content_hash, r.author_id, a.name as author_name,
-         r.created_at, r.submitted_at, r.decided_at, r.superseded_at,
-         (select count(*) from revisions t where t.component_id = $1) as total
+  select ${summary('r', 'a', 'r')},
+         (select max(t.number) from revisions t where t.component_id = $1) as total__
     from revisions r join users a on a.id = r.author_id
    where r.component_id = $1
    order by r.number desc limit 25 offset 0`;

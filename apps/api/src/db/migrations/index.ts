@@ -5,6 +5,7 @@ import { MailAndAttachments1764800000000 } from './1764800000000-mail-and-attach
 import { AttachmentRemoval1764800001000 } from './1764800001000-attachment-removal';
 import { SharedSessionsAndLimits1765100000000 } from './1765100000000-shared-sessions-and-limits';
 import { SheetRenders1765100001000 } from './1765100001000-sheet-renders';
+import { ListIndexes1765100002000 } from './1765100002000-list-indexes';
 
 /** Every migration class, oldest first. Add new ones at the end. */
 export const migrations = [
@@ -15,4 +16,5 @@ export const migrations = [
   AttachmentRemoval1764800001000,
   SharedSessionsAndLimits1765100000000,
   SheetRenders1765100001000,
+  ListIndexes1765100002000,
 ];
