@@ -18,12 +18,11 @@ describe('revision and component lists', () => {
 
   it('a revision list pages a long history with its total; a fabricator sees the countersigned only', async () => {
     const c = await makeComponent(t, w, 'countersigned');
-    let version = c.version + 0;
     const [component] = await t.dataSource.query<{ version: number }[]>(
       'select version from components where id = $1',
       [c.componentId],
     );
-    version = component!.version;
+    let version = component!.version;
     for (let i = 0; i < 6; i += 1) {
       const next = await t.services.revisions.create(w.designer, c.componentId, {
         inputs: plateInputs(`${13 + i} mm`),
