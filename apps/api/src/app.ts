@@ -12,6 +12,7 @@ import type { Notifier } from './domain/notifications/notifier';
 import { createStorage } from './storage/create-storage';
 import type { BlobStorage } from './storage/storage';
 import type { SheetRenderer } from './sheets/sheet-renderer';
+import type { SessionCache } from './auth/session-cache';
 import { createServices } from './domain/services';
 import { apiNotFound, errorMiddleware } from './http/error-middleware';
 import { requestLog } from './http/request-log';
@@ -37,6 +38,8 @@ export interface AppDependencies {
   readonly storage?: BlobStorage;
   /** Renders sheets off the event loop; by default a pool of HOOPLINE_SHEET_THREADS threads. */
   readonly sheetRenderer?: SheetRenderer;
+  /** Keeps session checks in memory, invalidated by the database; without it every request reads them. */
+  readonly sessionCache?: SessionCache;
 }
 
 /** Builds the Express app; no listening, no side effects beyond the object. */
@@ -47,6 +50,7 @@ export function createApp({
   notifier,
   storage,
   sheetRenderer,
+  sessionCache,
 }: AppDependencies): Express {
   const app = express();
   app.disable('x-powered-by');
@@ -83,7 +87,7 @@ export function createApp({
     config,
     services,
     dataSource,
-    signedIn: signInRequired(dataSource, services.tokens),
+    signedIn: signInRequired(dataSource, services.tokens, sessionCache),
   };
   const api = express.Router();
   api.use(csrfProtection);

@@ -4,6 +4,8 @@ import { createApp } from './app';
 import { ConfigError, loadConfig, type Config } from './config/config';
 import { createDataSource } from './db/data-source';
 import { MailWorker } from './mail/mail-worker';
+import { SessionCache } from './auth/session-cache';
+import { pgPool } from './db/pg-pool';
 import { workerSheetRenderer } from './sheets/sheet-renderer';
 
 function configOrExit(): Config {
@@ -80,7 +82,9 @@ async function runServer(config: Config) {
     logger.warn('the database has pending migrations: run `pnpm --filter @hoopline/api migrate`');
   }
   const sheetRenderer = workerSheetRenderer(config.sheets.renderThreads);
-  const app = createApp({ config, dataSource, logger, sheetRenderer });
+  const sessionCache = new SessionCache(pgPool(dataSource).options, logger);
+  sessionCache.start();
+  const app = createApp({ config, dataSource, logger, sheetRenderer, sessionCache });
   const server = app.listen(config.port, config.host, () => {
     if (worker === undefined) {
       logger.info(
@@ -108,6 +112,7 @@ async function runServer(config: Config) {
     server.close(() => {
       void (mailWorker?.stop() ?? Promise.resolve())
         .then(() => sheetRenderer.close())
+        .then(() => sessionCache.stop())
         .then(() => dataSource.destroy())
         .finally(() => {
           logger.flush();

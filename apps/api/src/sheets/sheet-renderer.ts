@@ -38,6 +38,9 @@ export function workerSheetRenderer(threads: number): SheetRenderer {
       minThreads: 0,
       maxThreads: Math.max(1, Math.min(threads, availableParallelism())),
       idleTimeout: 60_000,
+      // Below the event loop's priority (Linux nice +10): on a busy machine
+      // the requests go first and a sheet takes longer, not the other way.
+      niceIncrement: 10,
       // A burst of downloads waits its turn; past this many waiting, 503.
       maxQueue: MAX_QUEUE,
     }));

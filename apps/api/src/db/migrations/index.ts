@@ -6,6 +6,7 @@ import { AttachmentRemoval1764800001000 } from './1764800001000-attachment-remov
 import { SharedSessionsAndLimits1765100000000 } from './1765100000000-shared-sessions-and-limits';
 import { SheetRenders1765100001000 } from './1765100001000-sheet-renders';
 import { ListIndexes1765100002000 } from './1765100002000-list-indexes';
+import { SessionNotifications1765100003000 } from './1765100003000-session-notifications';
 
 /** Every migration class, oldest first. Add new ones at the end. */
 export const migrations = [
@@ -17,4 +18,5 @@ export const migrations = [
   SharedSessionsAndLimits1765100000000,
   SheetRenders1765100001000,
   ListIndexes1765100002000,
+  SessionNotifications1765100003000,
 ];
