@@ -385,7 +385,7 @@ async function partSheets(data: BenchData) {
     await downloadOne();
     await load({ ...screenRequest(api, headers), seconds: 2 });
     const turns: { alone: Load; withSheets: Load; sheets: number; sheetMedianMs: number }[] = [];
-    for (let i = 0; i < 2; i += 1) {
+    for (let i = 0; i < 3; i += 1) {
       const alone = await load(screenRequest(api, headers));
       let stop = false;
       const sheetTimes: number[] = [];
