@@ -31,6 +31,7 @@ step "unit: present" pnpm --filter @hoopline/present test
 step "unit: web" pnpm --filter @hoopline/web test
 step "integration: api" pnpm --filter @hoopline/api test
 step "build: web" pnpm --filter @hoopline/web build
+step "budget: sign-in script" pnpm --filter @hoopline/web check:bundle
 step "browser: e2e" pnpm --filter @hoopline/e2e test
 bash scripts/mail-fake.sh stop test >/dev/null 2>&1 || true
 

@@ -3,7 +3,6 @@ import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
-import { pinoHttp } from 'pino-http';
 import type { Logger } from 'pino';
 import type { DataSource } from 'typeorm';
 import type { Config } from './config/config';
@@ -12,8 +11,11 @@ import { csrfProtection } from './auth/csrf';
 import type { Notifier } from './domain/notifications/notifier';
 import { createStorage } from './storage/create-storage';
 import type { BlobStorage } from './storage/storage';
+import type { SheetRenderer } from './sheets/sheet-renderer';
+import type { SessionCache } from './auth/session-cache';
 import { createServices } from './domain/services';
 import { apiNotFound, errorMiddleware } from './http/error-middleware';
+import { requestLog } from './http/request-log';
 import { authRoutes } from './routes/auth.routes';
 import { componentsRoutes } from './routes/components.routes';
 import { healthRoutes } from './routes/health.routes';
@@ -34,6 +36,10 @@ export interface AppDependencies {
   readonly notifier?: Notifier;
   /** Where uploads live; by default the configured driver. */
   readonly storage?: BlobStorage;
+  /** Renders sheets off the event loop; by default a pool of HOOPLINE_SHEET_THREADS threads. */
+  readonly sheetRenderer?: SheetRenderer;
+  /** Keeps session checks in memory, invalidated by the database; without it every request reads them. */
+  readonly sessionCache?: SessionCache;
 }
 
 /** Builds the Express app; no listening, no side effects beyond the object. */
@@ -43,6 +49,8 @@ export function createApp({
   logger,
   notifier,
   storage,
+  sheetRenderer,
+  sessionCache,
 }: AppDependencies): Express {
   const app = express();
   app.disable('x-powered-by');
@@ -64,40 +72,22 @@ export function createApp({
       },
     }),
   );
-  app.use(
-    pinoHttp({
-      logger,
-      redact: ['req.headers.cookie', 'req.headers.authorization', 'res.headers["set-cookie"]'],
-      serializers: {
-        // Invitation tokens travel in the path of GET /auth/invitations/:token: keep them out of the log.
-        req: (req: { url?: string }) => {
-          if (req.url) req.url = req.url.replace(/(\/auth\/invitations\/)[^/?#]+/, '$1[token]');
-          return req;
-        },
-      },
-      // 503: the database is away for a moment (logged once as a warning by the error handler).
-      customLogLevel: (_req, res, error) =>
-        res.statusCode === 503
-          ? 'warn'
-          : error || res.statusCode >= 500
-            ? 'error'
-            : res.statusCode >= 400
-              ? 'warn'
-              : 'info',
-    }),
-  );
+  app.use(requestLog(logger));
   app.use(express.json({ limit: '1mb' }));
   app.use(cookieParser());
 
+  const services = createServices(
+    dataSource,
+    config,
+    storage ?? createStorage(config.storage),
+    notifier,
+    sheetRenderer,
+  );
   const deps: RouteDeps = {
     config,
-    services: createServices(
-      dataSource,
-      config,
-      storage ?? createStorage(config.storage),
-      notifier,
-    ),
-    signedIn: signInRequired(dataSource, config.auth),
+    services,
+    dataSource,
+    signedIn: signInRequired(dataSource, services.tokens, sessionCache),
   };
   const api = express.Router();
   api.use(csrfProtection);

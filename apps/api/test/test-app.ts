@@ -11,6 +11,7 @@ import { createDataSource } from '../src/db/data-source';
 import { createServices, type Services } from '../src/domain/services';
 import { createStorage } from '../src/storage/create-storage';
 import type { BlobStorage } from '../src/storage/storage';
+import { workerSheetRenderer, type SheetRenderer } from '../src/sheets/sheet-renderer';
 import { createTestDatabase } from './database';
 
 export interface TestApp {
@@ -22,6 +23,8 @@ export interface TestApp {
   /** The same services the routes use, for arranging data without HTTP. */
   readonly services: Services;
   readonly storage: BlobStorage;
+  /** The app's sheet-rendering worker threads (what they have rendered: stats()). */
+  readonly sheetRenderer: SheetRenderer;
   /** The folder local-disk uploads of this app go to (a temporary one unless HOOPLINE_UPLOAD_DIR is given). */
   readonly uploadDir: string;
   readonly close: () => Promise<void>;
@@ -44,7 +47,8 @@ export async function startTestApp(environment: Record<string, string> = {}): Pr
   const dataSource = createDataSource(config.databaseUrl, { extra: { max: 25 } });
   await dataSource.initialize();
   const logger = pino({ level: 'silent' });
-  const app = createApp({ config, dataSource, logger, storage });
+  const sheetRenderer = workerSheetRenderer(config.sheets.renderThreads);
+  const app = createApp({ config, dataSource, logger, storage, sheetRenderer });
   const server = await new Promise<Server>((resolve) => {
     const s = app.listen(0, '127.0.0.1', () => resolve(s));
   });
@@ -53,11 +57,13 @@ export async function startTestApp(environment: Record<string, string> = {}): Pr
     server,
     config,
     dataSource,
-    services: createServices(dataSource, config, storage),
+    services: createServices(dataSource, config, storage, undefined, sheetRenderer),
+    sheetRenderer,
     storage,
     uploadDir: config.storage.driver === 'local' ? config.storage.folder : '',
     close: async () => {
       await new Promise<void>((resolve) => server.close(() => resolve()));
+      await sheetRenderer.close();
       if (dataSource.isInitialized) await dataSource.destroy();
       await database.drop();
       if (temporaryUploads) await rm(temporaryUploads, { recursive: true, force: true });

@@ -49,12 +49,12 @@ describe('auth: sign-in, refresh, sign-out (real PostgreSQL)', () => {
     }[];
     expect(rows.map((r) => r.token_hash)).not.toContain(valueOf(refresh));
     expect(rows.every((r) => /^[0-9a-f]{64}$/.test(r.token_hash))).toBe(true);
-    // The access token is an HS256 JWT that expires in 15 minutes.
+    // The access token is an HS256 JWT that expires in 5 minutes.
     const decoded = jwt.decode(valueOf(access), { complete: true });
     expect(decoded?.header.alg).toBe('HS256');
     const payload = decoded?.payload as { exp: number; iat: number; sub: string };
     expect(payload.sub).toBe(user.id);
-    expect(payload.exp - payload.iat).toBe(15 * 60);
+    expect(payload.exp - payload.iat).toBe(5 * 60);
   });
 
   it('refuses a wrong password and an unknown address alike (401 invalid_credentials)', async () => {

@@ -13,6 +13,12 @@ const environmentSchema = z.object({
   DATABASE_URL: z
     .string({ error: 'DATABASE_URL is required (scripts/pg.sh url prints the local one)' })
     .regex(/^postgres(ql)?:\/\//, 'must be a postgres:// URL'),
+  /** API processes the start command runs (Node's cluster module); 1 runs no cluster. */
+  HOOPLINE_WORKERS: z.coerce.number().int().min(1).max(64).default(1),
+  /** Threads per API process that render PDF sheets, off the event loop. */
+  HOOPLINE_SHEET_THREADS: z.coerce.number().int().min(1).max(16).default(1),
+  /** Rendered sheets kept in PostgreSQL (table sheet_renders), megabytes; 0 keeps none. */
+  HOOPLINE_SHEET_CACHE_MB: z.coerce.number().int().min(0).max(100_000).default(256),
   HOOPLINE_LOG_LEVEL: z
     .enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent'])
     .default('info'),
@@ -22,13 +28,17 @@ const environmentSchema = z.object({
   HOOPLINE_PUBLIC_URL: z.url().optional(),
   /** Signs access tokens (HS256). Required in production; development and test use DEV_JWT_SECRET. */
   HOOPLINE_JWT_SECRET: z.string().min(32, 'must be at least 32 characters').optional(),
-  /** Access-token (JWT) lifetime, seconds. */
+  /**
+   * Access-token (JWT) lifetime, seconds. Short: the session check on every
+   * request ends a signed-out session at once, and this bounds what a copied
+   * token is worth while its session lives.
+   */
   HOOPLINE_ACCESS_TOKEN_TTL: z.coerce
     .number()
     .int()
     .min(1)
     .max(86_400)
-    .default(15 * 60),
+    .default(5 * 60),
   /** Refresh-token lifetime, seconds. */
   HOOPLINE_REFRESH_TOKEN_TTL: z.coerce
     .number()
@@ -111,11 +121,21 @@ export interface Config {
   readonly port: number;
   readonly databaseUrl: string;
   readonly logLevel: Environment['HOOPLINE_LOG_LEVEL'];
+  /** API processes (cluster workers) to run. */
+  readonly workers: number;
+  readonly sheets: SheetsConfig;
   readonly webDist: string | undefined;
   readonly publicUrl: string;
   readonly auth: AuthConfig;
   readonly mail: MailConfig;
   readonly storage: StorageConfig;
+}
+
+export interface SheetsConfig {
+  /** Worker threads per process that render sheets. */
+  readonly renderThreads: number;
+  /** Upper bound of the rendered-sheet cache, bytes (0: no cache). */
+  readonly cacheBytes: number;
 }
 
 export interface MailConfig {
@@ -229,6 +249,11 @@ export function loadConfig(environment: NodeJS.ProcessEnv = process.env): Config
     port: e.HOOPLINE_PORT,
     databaseUrl: e.DATABASE_URL,
     logLevel: e.HOOPLINE_LOG_LEVEL,
+    workers: e.HOOPLINE_WORKERS,
+    sheets: {
+      renderThreads: e.HOOPLINE_SHEET_THREADS,
+      cacheBytes: e.HOOPLINE_SHEET_CACHE_MB * 1024 * 1024,
+    },
     webDist: e.HOOPLINE_WEB_DIST,
     publicUrl,
     auth: {

@@ -1,7 +1,9 @@
 import type { DataSource } from 'typeorm';
 import { Passwords } from '../auth/passwords';
+import { accessTokens, type AccessTokens } from '../auth/tokens';
 import type { Config } from '../config/config';
 import type { BlobStorage } from '../storage/storage';
+import { workerSheetRenderer, type SheetRenderer } from '../sheets/sheet-renderer';
 import { AttachmentsService } from './attachments/attachments.service';
 import { AuditService } from './audit/audit.service';
 import { AuthService } from './auth/auth.service';
@@ -17,6 +19,8 @@ import { UsersService } from './users/users.service';
 /** The services the routes call; each is given only what it uses. */
 export interface Services {
   readonly passwords: Passwords;
+  /** Signs and checks access tokens (one key object per process). */
+  readonly tokens: AccessTokens;
   readonly auth: AuthService;
   readonly users: UsersService;
   readonly projects: ProjectsService;
@@ -26,6 +30,8 @@ export interface Services {
   readonly attachments: AttachmentsService;
   readonly sheets: SheetsService;
   readonly settings: SettingsService;
+  /** The worker threads that render sheets (close it when done). */
+  readonly sheetRenderer: SheetRenderer;
 }
 
 export function createServices(
@@ -33,12 +39,15 @@ export function createServices(
   config: Config,
   storage: BlobStorage,
   notifier: Notifier = new OutboxNotifier(config.publicUrl),
+  sheetRenderer: SheetRenderer = workerSheetRenderer(config.sheets.renderThreads),
 ): Services {
   const passwords = new Passwords(config.auth.argon2);
-  const auth = new AuthService(dataSource, config.auth, passwords, notifier);
+  const tokens = accessTokens(config.auth.jwtSecret, config.auth.accessTokenTtl);
+  const auth = new AuthService(dataSource, config.auth, passwords, notifier, tokens);
   const attachments = new AttachmentsService(dataSource, storage);
   return {
     passwords,
+    tokens,
     auth,
     users: new UsersService(dataSource, config.auth, auth, notifier, config.mail.smtp !== null),
     projects: new ProjectsService(dataSource),
@@ -46,7 +55,14 @@ export function createServices(
     revisions: new RevisionsService(dataSource, notifier),
     audit: new AuditService(dataSource),
     attachments,
-    sheets: new SheetsService(dataSource, attachments, config.publicUrl),
+    sheets: new SheetsService(
+      dataSource,
+      attachments,
+      config.publicUrl,
+      sheetRenderer,
+      config.sheets.cacheBytes,
+    ),
+    sheetRenderer,
     settings: new SettingsService(dataSource),
   };
 }

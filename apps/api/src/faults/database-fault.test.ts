@@ -12,6 +12,7 @@ import { createApp } from '../app';
 import { loadConfig } from '../config/config';
 import { createDataSource } from '../db/data-source';
 import { createServices } from '../domain/services';
+import { workerSheetRenderer } from '../sheets/sheet-renderer';
 import { createStorage } from '../storage/create-storage';
 import { makeUser, signIn, type Session } from '../../test/fixtures';
 import type { TestApp } from '../../test/test-app';
@@ -56,7 +57,14 @@ describe('database fault: PostgreSQL stopped under a write loop, then started', 
     await dataSource.initialize();
     await dataSource.runMigrations({ transaction: 'each' });
     const storage = createStorage(config.storage);
-    const app = createApp({ config, dataSource, logger: pino({ level: 'silent' }), storage });
+    const sheetRenderer = workerSheetRenderer(config.sheets.renderThreads);
+    const app = createApp({
+      config,
+      dataSource,
+      logger: pino({ level: 'silent' }),
+      storage,
+      sheetRenderer,
+    });
     server = await new Promise<Server>((resolve) => {
       const s = app.listen(0, '127.0.0.1', () => resolve(s));
     });
@@ -65,15 +73,17 @@ describe('database fault: PostgreSQL stopped under a write loop, then started', 
       server,
       config,
       dataSource,
-      services: createServices(dataSource, config, storage),
+      services: createServices(dataSource, config, storage, undefined, sheetRenderer),
+      sheetRenderer,
       storage,
       uploadDir: uploads,
-      close: async () => {},
+      close: () => sheetRenderer.close(),
     };
   }, 120_000);
 
   afterAll(async () => {
     await new Promise<void>((resolve) => server?.close(() => resolve()));
+    await t?.close();
     if (dataSource?.isInitialized) await dataSource.destroy().catch(() => undefined);
     cluster?.destroy();
     if (uploads) await rm(uploads, { recursive: true, force: true });

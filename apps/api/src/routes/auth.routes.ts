@@ -20,9 +20,9 @@ import { emptyBody } from './common.schemas';
 import type { RouteDeps } from './route-deps';
 
 /** /auth: sign-in, refresh, sign-out, invitations, password reset. */
-export function authRoutes({ config, services }: RouteDeps): Router {
+export function authRoutes({ config, services, dataSource }: RouteDeps): Router {
   const router = Router();
-  const limiters = signInLimiters(config.auth);
+  const limiters = signInLimiters(config.auth, dataSource);
 
   const signIn = validate({ body: signInBody });
   router.post('/auth/sign-in', limiters.address, limiters.account, signIn, async (req, res) => {

@@ -12,7 +12,7 @@ export function sheetsRoutes({ services, signedIn }: RouteDeps): Router {
   const sheet = validate({ params: idParams, query: sheetQuery });
   router.get('/revisions/:id/sheet.pdf', signedIn, sheet, async (req, res) => {
     const { params, query } = valid(req, sheet);
-    const { pdf, fileName, stamp } = await services.sheets.sheet(
+    const { pdf, fileName, stamp, source, renderedAt } = await services.sheets.sheet(
       actorOf(req),
       params.id,
       query.paper,
@@ -25,6 +25,9 @@ export function sheetsRoutes({ services, signedIn }: RouteDeps): Router {
         'content-disposition': contentDisposition('attachment', fileName),
         'cache-control': 'private, no-store',
         'x-hoopline-stamp': stamp,
+        // Whether this download was rendered for it or served from the cache, and when it was rendered.
+        'x-hoopline-sheet-source': source,
+        'x-hoopline-sheet-rendered-at': renderedAt,
       })
       .end(pdf);
   });

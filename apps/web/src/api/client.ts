@@ -120,7 +120,7 @@ export function toApiError(status: number, body: unknown): ApiError {
 }
 
 /**
- * Sends a request; a 401 on an ordinary route means the 15-minute access token
+ * Sends a request; a 401 on an ordinary route means the 5-minute access token
  * has expired (code `token_expired`, or no access cookie at all once the
  * browser has dropped it): refresh once and retry once. A refused refresh
  * tells the session-lost listeners and throws the 401.

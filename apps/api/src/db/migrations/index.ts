@@ -4,6 +4,10 @@ import { ProjectsAndRevisions1764700001000 } from './1764700001000-projects-and-
 import { MailAndAttachments1764800000000 } from './1764800000000-mail-and-attachments';
 import { AttachmentRemoval1764800001000 } from './1764800001000-attachment-removal';
 import { SiteAsTyped1765000000000 } from './1765000000000-site-as-typed';
+import { SharedSessionsAndLimits1765100000000 } from './1765100000000-shared-sessions-and-limits';
+import { SheetRenders1765100001000 } from './1765100001000-sheet-renders';
+import { ListIndexes1765100002000 } from './1765100002000-list-indexes';
+import { SessionNotifications1765100003000 } from './1765100003000-session-notifications';
 import { ProjectStarters1765200000000 } from './1765200000000-project-starters';
 import { ProjectDesignBasis1765300000000 } from './1765300000000-project-design-basis';
 
@@ -15,6 +19,10 @@ export const migrations = [
   MailAndAttachments1764800000000,
   AttachmentRemoval1764800001000,
   SiteAsTyped1765000000000,
+  SharedSessionsAndLimits1765100000000,
+  SheetRenders1765100001000,
+  ListIndexes1765100002000,
+  SessionNotifications1765100003000,
   ProjectStarters1765200000000,
   ProjectDesignBasis1765300000000,
 ];

@@ -4,7 +4,7 @@ import { IsNull } from 'typeorm';
 import type { AuthConfig } from '../../config/config';
 import type { IssuedSession } from '../../auth/cookies';
 import type { Passwords } from '../../auth/passwords';
-import { hashToken, randomToken, signAccessToken, verifyAccessToken } from '../../auth/tokens';
+import { hashToken, randomToken, type AccessTokens } from '../../auth/tokens';
 import { InvitationEntity } from '../../db/entities/invitation.entity';
 import { PasswordResetEntity } from '../../db/entities/password-reset.entity';
 import { RefreshTokenEntity } from '../../db/entities/refresh-token.entity';
@@ -40,6 +40,7 @@ export class AuthService {
     private readonly auth: AuthConfig,
     private readonly passwords: Passwords,
     private readonly notifier: Notifier,
+    private readonly tokens: AccessTokens,
   ) {}
 
   async signIn(email: string, password: string): Promise<SignedInResult> {
@@ -124,7 +125,7 @@ export class AuthService {
    * lives; with neither, 401.
    */
   async signOut(refreshToken: string | undefined, accessToken: string | undefined): Promise<void> {
-    const access = accessToken ? verifyAccessToken(accessToken, this.auth.jwtSecret) : undefined;
+    const access = accessToken ? this.tokens.verify(accessToken) : undefined;
     await this.dataSource.transaction(async (manager) => {
       const token = refreshToken
         ? await manager.findOneBy(RefreshTokenEntity, { tokenHash: hashToken(refreshToken) })
@@ -381,11 +382,7 @@ export class AuthService {
       [user.id],
     );
     return {
-      accessToken: signAccessToken(
-        { sub: user.id, epoch: user.authEpoch },
-        this.auth.jwtSecret,
-        this.auth.accessTokenTtl,
-      ),
+      accessToken: this.tokens.sign({ sub: user.id, epoch: user.authEpoch, sid: familyId }),
       refreshToken,
       csrfToken: randomToken(),
     };

@@ -3,7 +3,7 @@ import type { DataSource, EntityManager } from 'typeorm';
 import { ComponentEntity } from '../../db/entities/component.entity';
 import { RevisionEntity } from '../../db/entities/revision.entity';
 import { forbidden } from '../../http/errors';
-import { pageOf, type Page, type PageRequest } from '../../http/pagination';
+import { offsetOf, pageOf, type Page, type PageRequest } from '../../http/pagination';
 import { canDesign, seesOnlyIssued, type Actor, type Decision } from '../../policy/policy';
 import { recordAudit } from '../audit/audit.service';
 import { requireProjectStanding } from '../projects/project-access';
@@ -12,10 +12,12 @@ import { computeContent, contentHash, verdictOf } from '../revisions/revision-co
 import {
   revisionView,
   summariesByIds,
+  summaryColumnsAs,
+  summaryFromColumns,
   type RevisionSummary,
   type RevisionView,
 } from '../revisions/revision-views';
-import { Where, containsPattern, isoRequired, paged } from '../sql';
+import { Where, containsPattern, isoRequired, rows } from '../sql';
 import { requireComponent } from './component-access';
 
 export interface ComponentView {
@@ -82,6 +84,17 @@ export async function componentViews(
   });
 }
 
+interface ComponentRow extends Record<string, unknown> {
+  id: string;
+  project_id: string;
+  name: string;
+  kind: string;
+  tag: string;
+  version: number;
+  created_at: Date;
+  updated_at: Date;
+}
+
 /** Components of a project: listing, creating (with revision 1), renaming. */
 export class ComponentsService {
   constructor(private readonly dataSource: DataSource) {}
@@ -103,22 +116,52 @@ export class ComponentsService {
         containsPattern(query.q),
       );
     if (query.kind) w.add('c.kind = ?', query.kind);
-    const { rows: found, total } = await paged<{ id: string }>(
+    // One round trip: the page of components, the total of the filtered set,
+    // and each one's latest and issued revision summaries.
+    const n = w.params.length;
+    const found = await rows<ComponentRow & { total__: string }>(
       manager,
-      {
-        columns: 'c.id',
-        from: 'components c',
-        where: w.where,
-        params: w.params,
-        orderBy: 'lower(c.name), c.id',
-      },
-      query,
+      `with page as (
+         select c.*, count(*) over () as total__ from components c
+          where ${w.where.join(' and ')}
+          order by lower(c.name), c.id limit $${n + 1} offset $${n + 2})
+       select page.id, page.project_id, page.name, page.kind, page.tag, page.version,
+              page.created_at, page.updated_at, page.total__,
+              ${summaryColumnsAs('l', 'la', 'l')}, ${summaryColumnsAs('i', 'ia', 'i')}
+         from page
+         left join revisions l on l.id = page.latest_revision_id
+         left join users la on la.id = l.author_id
+         left join revisions i on i.id = page.issued_revision_id
+         left join users ia on ia.id = i.author_id
+        order by lower(page.name), page.id`,
+      [...w.params, query.pageSize, offsetOf(query)],
     );
-    const ordered = await componentsInOrder(
-      manager,
-      found.map((r) => r.id),
-    );
-    return pageOf(await componentViews(manager, ordered, onlyIssued), query, total);
+    let total = Number(found[0]?.total__ ?? 0);
+    if (!found[0] && query.page > 1) {
+      const [count] = await rows<{ n: string }>(
+        manager,
+        `select count(*) as n from components c where ${w.where.join(' and ')}`,
+        w.params,
+      );
+      total = Number(count?.n ?? 0);
+    }
+    const items = found.map((c): ComponentView => {
+      const issued = summaryFromColumns(c, 'i');
+      return {
+        id: c.id,
+        projectId: c.project_id,
+        name: c.name,
+        kind: c.kind,
+        tag: c.tag,
+        version: c.version,
+        createdAt: isoRequired(c.created_at),
+        updatedAt: isoRequired(c.updated_at),
+        // Fabricators see the issued revision as the latest.
+        latestRevision: onlyIssued ? issued : summaryFromColumns(c, 'l'),
+        issuedRevision: issued,
+      };
+    });
+    return pageOf(items, query, total);
   }
 
   async create(

@@ -29,9 +29,25 @@ export async function requireProjectStanding(
   projectId: string,
   options: { lock?: boolean } = {},
 ): Promise<ProjectContext> {
+  if (!options.lock) {
+    // One round trip: the project and the actor's membership.
+    const { entities, raw } = await manager
+      .createQueryBuilder(ProjectEntity, 'p')
+      .leftJoin('project_members', 'm', 'm.project_id = p.id and m.user_id = :actor', {
+        actor: actor.id,
+      })
+      .addSelect('m.role', 'member_role')
+      .where('p.id = :id', { id: projectId })
+      .getRawAndEntities<{ member_role: Role | null }>();
+    const project = entities[0];
+    if (!project) throw notFound('project');
+    const standing = { actor, role: raw[0]?.member_role ?? null };
+    if (!canSeeProject(standing)) throw notFound('project');
+    return { ...standing, project };
+  }
   const project = await manager.findOne(ProjectEntity, {
     where: { id: projectId },
-    ...(options.lock ? { lock: { mode: 'pessimistic_write' as const } } : {}),
+    lock: { mode: 'pessimistic_write' as const },
   });
   if (!project) throw notFound('project');
   const standing = { actor, role: await roleIn(manager, actor.id, projectId) };

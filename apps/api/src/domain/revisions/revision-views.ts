@@ -72,6 +72,41 @@ export function summaryFromRow(r: SummaryRow): RevisionSummary {
   };
 }
 
+/**
+ * The same columns as SUMMARY_COLUMNS for a revision joined as `r` with its
+ * author as `a`, named `<p>_id`, `<p>_number`…: for a query that joins two
+ * revisions to one row (a component's latest and issued).
+ */
+export function summaryColumnsAs(r: string, a: string, p: string): string {
+  return `${r}.id as ${p}_id, ${r}.number as ${p}_number, ${r}.status as ${p}_status,
+    ${r}.verdict as ${p}_verdict, ${r}.content_hash as ${p}_hash, ${r}.author_id as ${p}_author_id,
+    ${a}.name as ${p}_author_name, ${r}.created_at as ${p}_created_at,
+    ${r}.submitted_at as ${p}_submitted_at, ${r}.decided_at as ${p}_decided_at,
+    ${r}.superseded_at as ${p}_superseded_at`;
+}
+
+/** The summary in a row of summaryColumnsAs(…, p); null when the join found none. */
+export function summaryFromColumns(
+  row: Readonly<Record<string, unknown>>,
+  p: string,
+): RevisionSummary | null {
+  if (row[`${p}_id`] == null) return null;
+  const field = (name: string) => row[`${p}_${name}`];
+  return summaryFromRow({
+    r_id: field('id') as string,
+    r_number: field('number') as number,
+    r_status: field('status') as RevisionStatus,
+    r_verdict: field('verdict') as string,
+    r_hash: field('hash') as string,
+    r_author_id: field('author_id') as string,
+    r_author_name: field('author_name') as string,
+    r_created_at: field('created_at') as Date,
+    r_submitted_at: field('submitted_at') as Date | null,
+    r_decided_at: field('decided_at') as Date | null,
+    r_superseded_at: field('superseded_at') as Date | null,
+  });
+}
+
 export async function summariesByIds(
   manager: EntityManager,
   ids: readonly string[],

@@ -9,7 +9,7 @@ import {
   type SignOffDecision,
 } from '../../db/entities/revision.entity';
 import { conflict, forbidden, notFound, validationFailed } from '../../http/errors';
-import { pageOf, type Page, type PageRequest } from '../../http/pagination';
+import { offsetOf, pageOf, type Page, type PageRequest } from '../../http/pagination';
 import {
   canDesign,
   canSignOff,
@@ -126,19 +126,47 @@ export class RevisionsService {
   async list(actor: Actor, componentId: string, page: PageRequest): Promise<Page<RevisionSummary>> {
     const manager = this.dataSource.manager;
     const { standing } = await requireComponent(manager, actor, componentId);
-    const w = new Where().add('r.component_id = ?', componentId);
-    if (seesOnlyIssued(standing)) w.add("r.status = 'countersigned'");
-    const { rows: found, total } = await paged<SummaryRow>(
+    if (seesOnlyIssued(standing)) {
+      // A fabricator sees the countersigned few (a partial index holds them).
+      const w = new Where()
+        .add('r.component_id = ?', componentId)
+        .add("r.status = 'countersigned'");
+      const { rows: found, total } = await paged<SummaryRow>(
+        manager,
+        {
+          columns: SUMMARY_COLUMNS,
+          from: 'revisions r join users a on a.id = r.author_id',
+          where: w.where,
+          params: w.params,
+          orderBy: 'r.number desc',
+        },
+        page,
+      );
+      return pageOf(found.map(summaryFromRow), page, total);
+    }
+    // Everyone else sees every revision. Their numbers run 1, 2, … n with no
+    // gap (each is the latest + 1 under the component's lock, and revisions
+    // are never deleted alone), so the total is the highest number: one
+    // index probe instead of counting a long history (issue 12: 99 501
+    // revisions took 300 ms to count per page).
+    const found = await rows<SummaryRow & { total__: number | null }>(
       manager,
-      {
-        columns: SUMMARY_COLUMNS,
-        from: 'revisions r join users a on a.id = r.author_id',
-        where: w.where,
-        params: w.params,
-        orderBy: 'r.number desc',
-      },
-      page,
+      `select ${SUMMARY_COLUMNS},
+              (select max(t.number) from revisions t where t.component_id = $1) as total__
+         from revisions r join users a on a.id = r.author_id
+        where r.component_id = $1
+        order by r.number desc limit $2 offset $3`,
+      [componentId, page.pageSize, offsetOf(page)],
     );
+    let total = found[0]?.total__ ?? 0;
+    if (!found[0] && page.page > 1) {
+      const [last] = await rows<{ n: number | null }>(
+        manager,
+        'select max(number) as n from revisions where component_id = $1',
+        [componentId],
+      );
+      total = last?.n ?? 0;
+    }
     return pageOf(found.map(summaryFromRow), page, total);
   }
 

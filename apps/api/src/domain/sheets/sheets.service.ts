@@ -1,7 +1,9 @@
 import type { Report } from '@hoopline/calc';
 import type { DataSource } from 'typeorm';
-import { renderSheet } from '../../sheets/render-sheet';
+import { pgPool } from '../../db/pg-pool';
+import type { SheetRenderer } from '../../sheets/sheet-renderer';
 import type { SheetData } from '../../sheets/sheet-data';
+import { SheetCache, sheetKey, type CachedSheet, type SheetContent } from './sheet-cache';
 import type { AttachmentsService } from '../attachments/attachments.service';
 import { recordAudit } from '../audit/audit.service';
 import { requireRevision } from '../components/component-access';
@@ -11,24 +13,46 @@ import { verifyCode } from '../revisions/revision-content';
 
 export type PaperSize = 'A4' | 'LETTER';
 
+/** How a download was answered: from the cache, or rendered for it. */
+export type SheetSource = 'cache' | 'rendered';
+
 /**
  * The stamped-for-review sheet of one revision. Whoever may see the revision
  * may have its sheet: a fabricator only sees countersigned revisions, so only
  * those sheets (stamped FOR REVIEW); designers and checkers may preview any
  * other revision, stamped DRAFT. Every download is audited.
+ *
+ * A sheet is rendered in a worker thread (SheetRenderer) and kept by content
+ * (SheetCache): the same revision, status, stamp, paper and listed
+ * attachments give the same key, so the second download serves the first
+ * render's bytes, and its "generated" time is when that render ran.
  */
 export class SheetsService {
+  private readonly cache: SheetCache;
+  /** Renders under way in this process, by key: a second request waits for the first. */
+  private readonly inFlight = new Map<string, Promise<CachedSheet>>();
+
   constructor(
     private readonly dataSource: DataSource,
     private readonly attachments: AttachmentsService,
     private readonly publicUrl: string,
-  ) {}
+    private readonly renderer: SheetRenderer,
+    cacheBytes: number,
+  ) {
+    this.cache = new SheetCache(() => pgPool(dataSource), cacheBytes);
+  }
 
   async sheet(
     actor: Actor,
     revisionId: string,
     paperSize: PaperSize,
-  ): Promise<{ pdf: Buffer; fileName: string; stamp: SheetData['stamp'] }> {
+  ): Promise<{
+    pdf: Buffer;
+    fileName: string;
+    stamp: SheetData['stamp'];
+    source: SheetSource;
+    renderedAt: string;
+  }> {
     const manager = this.dataSource.manager;
     const { revision, component } = await requireRevision(manager, actor, revisionId);
     const [facts] = await rows<{
@@ -59,7 +83,7 @@ export class SheetsService {
     );
     const countersigned = revision.status === 'countersigned';
     const code = verifyCode(revision.contentHash);
-    const data: SheetData = {
+    const content: SheetContent = {
       project: {
         number: facts.number,
         name: facts.name,
@@ -100,21 +124,55 @@ export class SheetsService {
       verifyUrl: `${this.publicUrl.replace(/\/+$/, '')}/verify/${code}`,
       stamp: countersigned ? 'review' : 'draft',
       paperSize,
-      generatedAt: new Date().toISOString(),
     };
-    const pdf = await renderSheet(data);
+    const { sheet, source } = await this.cachedOrRendered(revision.id, content);
     await recordAudit(manager, {
       actorId: actor.id,
       action: 'sheet.downloaded',
       entityType: 'revision',
       entityId: revision.id,
       projectId: revision.projectId,
-      after: { number: revision.number, stamp: data.stamp, paperSize, componentId: component.id },
+      after: {
+        number: revision.number,
+        stamp: content.stamp,
+        paperSize,
+        componentId: component.id,
+        source,
+        renderedAt: sheet.renderedAt.toISOString(),
+      },
     });
     const safe = (text: string) => text.replace(/[^A-Za-z0-9._-]+/g, '-').replace(/^-+|-+$/g, '');
     const fileName = `${safe(facts.number)}_${safe(component.name) || 'component'}_rev${revision.number}${
       countersigned ? '' : '_DRAFT'
     }.pdf`;
-    return { pdf, fileName, stamp: data.stamp };
+    return {
+      pdf: sheet.pdf,
+      fileName,
+      stamp: content.stamp,
+      source,
+      renderedAt: sheet.renderedAt.toISOString(),
+    };
+  }
+
+  private async cachedOrRendered(
+    revisionId: string,
+    content: SheetContent,
+  ): Promise<{ sheet: CachedSheet; source: SheetSource }> {
+    const key = sheetKey(content);
+    const cached = await this.cache.get(key);
+    if (cached) return { sheet: cached, source: 'cache' };
+    let render = this.inFlight.get(key);
+    if (!render) {
+      render = (async () => {
+        const renderedAt = new Date();
+        const { pdf } = await this.renderer.render({
+          ...content,
+          generatedAt: renderedAt.toISOString(),
+        });
+        return this.cache.put(key, revisionId, pdf, renderedAt);
+      })().finally(() => this.inFlight.delete(key));
+      this.inFlight.set(key, render);
+    }
+    return { sheet: await render, source: 'rendered' };
   }
 }

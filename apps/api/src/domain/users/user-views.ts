@@ -23,7 +23,13 @@ export interface MeView {
   readonly canCreateProjects: boolean;
 }
 
-export function userView(u: UserEntity): UserView {
+/** What the views read of a user row (no password hash: the signed-in request never loads it). */
+export type UserProfile = Pick<
+  UserEntity,
+  'id' | 'email' | 'name' | 'isAdmin' | 'active' | 'unitSystem' | 'mayCreateProjects' | 'createdAt'
+>;
+
+export function userView(u: UserProfile): UserView {
   return {
     id: u.id,
     email: u.email,
@@ -36,7 +42,7 @@ export function userView(u: UserEntity): UserView {
   };
 }
 
-export async function meView(manager: EntityManager, user: UserEntity): Promise<MeView> {
+export async function meView(manager: EntityManager, user: UserProfile): Promise<MeView> {
   const memberships = await rows<{ project_id: string; number: string; role: Role }>(
     manager,
     `select m.project_id, p.number, m.role from project_members m

@@ -12,7 +12,7 @@ import type { AuthService } from '../auth/auth.service';
 import { normaliseEmail } from '../auth/auth.service';
 import type { Notifier } from '../notifications/notifier';
 import { Where, containsPattern, paged } from '../sql';
-import { meView, userView, type MeView, type UserView } from './user-views';
+import { meView, userView, type MeView, type UserProfile, type UserView } from './user-views';
 
 export interface InvitationView {
   readonly id: string;
@@ -45,7 +45,7 @@ export class UsersService {
     private readonly deliveryByMail: boolean,
   ) {}
 
-  me(user: UserEntity): Promise<MeView> {
+  me(user: UserProfile): Promise<MeView> {
     return meView(this.dataSource.manager, user);
   }
 
