@@ -4,6 +4,7 @@ import type pg from 'pg';
 import type { DataSource } from 'typeorm';
 import type { AuthConfig } from '../config/config';
 import { pgPool } from '../db/pg-pool';
+import { afterAnswer } from '../domain/background-work';
 import { AppError } from '../http/errors';
 
 const tooMany = (retryAfterSeconds: number) =>
@@ -68,10 +69,13 @@ export class PostgresRateLimitStore implements Store {
   }
 
   async decrement(key: string): Promise<void> {
-    await this.pool.query(
-      `update rate_limit_hits set hits = greatest(hits - 1, 0)
-        where key = $1 and reset_at > now()`,
-      [this.prefix + key],
+    // Called once the answer is on its way (a successful attempt does not count).
+    await afterAnswer(
+      this.pool.query(
+        `update rate_limit_hits set hits = greatest(hits - 1, 0)
+          where key = $1 and reset_at > now()`,
+        [this.prefix + key],
+      ),
     );
   }
 

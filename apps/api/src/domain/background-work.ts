@@ -20,6 +20,20 @@ export function runInBackground(label: string, work: () => Promise<void>): void 
   pending.add(task);
 }
 
+/**
+ * A write that finishes after the answer (express-rate-limit takes back a
+ * successful attempt once the response is sent): kept in the same set, so
+ * `backgroundSettled` waits for it too.
+ */
+export function afterAnswer<T>(work: Promise<T>): Promise<T> {
+  const task: Promise<void> = work
+    .then(() => undefined)
+    .catch(() => undefined)
+    .finally(() => pending.delete(task));
+  pending.add(task);
+  return work;
+}
+
 export async function backgroundSettled(): Promise<void> {
   while (pending.size > 0) await Promise.all([...pending]);
 }

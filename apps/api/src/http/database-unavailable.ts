@@ -56,6 +56,8 @@ export function isDatabaseUnavailable(error: unknown, depth = 0): boolean {
   // transaction's next statement (or its COMMIT) then throws this. The server
   // rolled the transaction back when the connection went.
   if (e.name === 'QueryRunnerAlreadyReleasedError') return true;
+  // The raw pg pool under the DataSource is gone (db/pg-pool.ts): shutting down.
+  if (e.name === 'DatabaseNotConnectedError') return true;
   if (typeof e.code === 'string') {
     if (SOCKET_CODES.has(e.code) || SQLSTATES.has(e.code) || /^08/.test(e.code)) return true;
   }

@@ -276,14 +276,23 @@ describe('revisions: workflow, four-eyes, concurrency, integrity (real PostgreSQ
     expect(v2.body).toMatchObject({ match: true, status: 'superseded', revisionNumber: 2 });
     const v3 = await fabricator.get(`/api/verify/${r3.body.revision.verifyCode}`).expect(200);
     expect(v3.body).toMatchObject({ match: true, status: 'current', revisionNumber: 3 });
+    // What the sheet prints, to compare the paper with (sheets.test.ts checks the values).
     expect(Object.keys(v3.body).sort()).toEqual(
       [
         'componentName',
+        'contentHash',
         'countersignedAt',
+        'countersignedBy',
+        'governing',
+        'kind',
         'match',
+        'material',
+        'preparedBy',
         'projectNumber',
         'revisionNumber',
         'status',
+        'thickness',
+        'verdict',
       ].sort(),
     );
   });
