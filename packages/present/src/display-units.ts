@@ -1,8 +1,10 @@
 import { findUnit, fromSi, type Dimension, type UnitDefinition } from '@hoopline/calc';
 
 /** The two ways a reader can ask for numbers: SI, or US customary. */
-export const UNIT_SYSTEMS = ['si', 'us'] as const;
-export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
+import { UNIT_SYSTEMS, type UnitSystem } from '@hoopline/contract';
+
+export { UNIT_SYSTEMS };
+export type { UnitSystem };
 
 /** What a displayed number measures: one of the engine's dimensions. */
 export type DisplayDimension = Dimension;

@@ -29,7 +29,7 @@ export { numberedSteps } from './steps';
 export type { NumberedStep } from './steps';
 export {
   DIRECTION_WORDS,
-  REVISION_STATUSES,
+  ROLE_WORDS,
   SEVERITY_WORDS,
   STATUS_WORDS,
   VERDICT_WORDS,
@@ -37,7 +37,6 @@ export {
   kindName,
   statusWords,
 } from './words';
-export type { RevisionStatus } from './words';
 export { TRAIL_SIGNIFICANT, ambientText, checkFigures, presentReport, stepFigures } from './report';
 export type {
   PresentedCase,

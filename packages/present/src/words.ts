@@ -1,3 +1,4 @@
+import type { RevisionStatus, Role } from '@hoopline/contract';
 import {
   findMethod,
   type PressureDirection,
@@ -43,13 +44,18 @@ export const DIRECTION_WORDS: Readonly<Record<PressureDirection, string>> = {
 };
 
 /** A revision's status as people read it. */
-export const REVISION_STATUSES = ['draft', 'submitted', 'countersigned', 'returned'] as const;
-export type RevisionStatus = (typeof REVISION_STATUSES)[number];
 export const STATUS_WORDS: Readonly<Record<RevisionStatus, string>> = {
   draft: 'Draft',
   submitted: 'Awaiting check',
   countersigned: 'Countersigned',
   returned: 'Returned',
+};
+
+/** A person's role on a project, in words. */
+export const ROLE_WORDS: Readonly<Record<Role, string>> = {
+  designer: 'Designer',
+  checker: 'Checker',
+  fabricator: 'Fabricator',
 };
 
 /** A revision's status in words, "(superseded)" added where a later revision replaced it. */

@@ -1,3 +1,4 @@
+import type { UnitSystem } from '@hoopline/contract';
 import { randomUUID } from 'node:crypto';
 import pg from 'pg';
 import type { Logger } from 'pino';
@@ -9,7 +10,7 @@ export interface SessionFacts {
   readonly name: string;
   readonly isAdmin: boolean;
   readonly active: boolean;
-  readonly unitSystem: 'si' | 'us';
+  readonly unitSystem: UnitSystem;
   /** Named by an administrator as someone who may start projects. */
   readonly mayCreateProjects: boolean;
   readonly authEpoch: number;

@@ -6,7 +6,9 @@
  * Nothing registers itself: a rule not written here does not exist.
  */
 
-export type Role = 'designer' | 'checker' | 'fabricator';
+import type { ProjectCreation, Role } from '@hoopline/contract';
+
+export type { ProjectCreation, Role };
 
 /** The signed-in person making a request. */
 export interface Actor {
@@ -53,7 +55,6 @@ export function canLookUpPerson(actor: Actor, leadsAProject: boolean): Decision 
 }
 
 /** The installation's setting: who may start projects. */
-export type ProjectCreation = 'everyone' | 'named';
 
 /** Changing installation settings (who may start projects): administrators. */
 export function canManageSettings(actor: Actor): Decision {

@@ -1,11 +1,10 @@
+import { contentQuery, emptyBody, idParams, uploadFields } from '@hoopline/contract';
 import { Router, type RequestHandler } from 'express';
 import multer from 'multer';
 import { actorOf } from '../auth/authenticate';
 import { contentDisposition } from '../http/content-disposition';
 import { AppError, validationFailed } from '../http/errors';
 import { valid, validate } from '../http/validate';
-import { contentQuery, uploadFields } from './attachments.schemas';
-import { emptyBody, idParams } from './common.schemas';
 import type { RouteDeps } from './route-deps';
 
 // routes/sheets.routes.ts takes the header from here too.

@@ -1,3 +1,11 @@
+import {
+  acceptInvitationBody,
+  emptyBody,
+  invitationTokenParams,
+  resetCompleteBody,
+  resetRequestBody,
+  signInBody,
+} from '@hoopline/contract';
 import { Router } from 'express';
 import {
   ACCESS_COOKIE,
@@ -9,14 +17,6 @@ import {
 import { signInLimiters } from '../auth/rate-limit';
 import { AppError } from '../http/errors';
 import { valid, validate } from '../http/validate';
-import {
-  acceptInvitationBody,
-  invitationTokenParams,
-  resetCompleteBody,
-  resetRequestBody,
-  signInBody,
-} from './auth.schemas';
-import { emptyBody } from './common.schemas';
 import type { RouteDeps } from './route-deps';
 
 /** /auth: sign-in, refresh, sign-out, invitations, password reset. */

@@ -1,12 +1,12 @@
+import {
+  createComponentBody,
+  idParams,
+  listComponentsQuery,
+  updateComponentBody,
+} from '@hoopline/contract';
 import { Router } from 'express';
 import { actorOf } from '../auth/authenticate';
 import { valid, validate } from '../http/validate';
-import { idParams } from './common.schemas';
-import {
-  createComponentBody,
-  listComponentsQuery,
-  updateComponentBody,
-} from './components.schemas';
 import type { RouteDeps } from './route-deps';
 
 /** /projects/:id/components and /components/:id. */

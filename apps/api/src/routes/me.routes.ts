@@ -1,8 +1,8 @@
+import { changePasswordBody, updateMeBody } from '@hoopline/contract';
 import { Router } from 'express';
 import { actorOf } from '../auth/authenticate';
 import { setSessionCookies } from '../auth/cookies';
 import { valid, validate } from '../http/validate';
-import { changePasswordBody, updateMeBody } from './me.schemas';
 import type { RouteDeps } from './route-deps';
 
 /** /me: the signed-in person's own account. */

@@ -1,10 +1,16 @@
+import {
+  auditQuery,
+  issuedQuery,
+  screenBatchBody,
+  screenBody,
+  verifyParams,
+} from '@hoopline/contract';
 import express, { Router } from 'express';
 import { CalcInputError, readCsvCases, screen, screenMany } from '@hoopline/calc';
 import { actorOf } from '../auth/authenticate';
 import { inputIssues } from '../domain/revisions/revision-content';
 import { fieldErrors, valid, validate } from '../http/validate';
 import { validationFailed } from '../http/errors';
-import { auditQuery, issuedQuery, screenBatchBody, screenBody, verifyParams } from './misc.schemas';
 import type { RouteDeps } from './route-deps';
 
 /** /issued, /audit, /screen and the public /verify. */

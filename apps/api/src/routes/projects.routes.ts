@@ -1,16 +1,16 @@
-import { Router } from 'express';
-import { actorOf } from '../auth/authenticate';
-import { valid, validate } from '../http/validate';
-import { idParams } from './common.schemas';
 import {
   addMaterialBody,
   createProjectBody,
+  idParams,
   listProjectsQuery,
   materialParams,
   memberParams,
   setMemberBody,
   updateProjectBody,
-} from './projects.schemas';
+} from '@hoopline/contract';
+import { Router } from 'express';
+import { actorOf } from '../auth/authenticate';
+import { valid, validate } from '../http/validate';
 import type { RouteDeps } from './route-deps';
 
 /** /projects, with their members and custom materials. */

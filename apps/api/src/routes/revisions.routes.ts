@@ -1,15 +1,16 @@
-import { Router } from 'express';
-import { actorOf } from '../auth/authenticate';
-import { valid, validate } from '../http/validate';
-import { emptyBody, idParams } from './common.schemas';
 import {
   countersignBody,
   createRevisionBody,
   diffQuery,
+  emptyBody,
+  idParams,
   listRevisionsQuery,
   queueQuery,
   returnBody,
-} from './revisions.schemas';
+} from '@hoopline/contract';
+import { Router } from 'express';
+import { actorOf } from '../auth/authenticate';
+import { valid, validate } from '../http/validate';
 import type { RouteDeps } from './route-deps';
 
 /** Revisions of a component and the sign-off workflow; the checker's queue. */

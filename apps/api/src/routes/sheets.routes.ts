@@ -1,10 +1,9 @@
+import { idParams, sheetQuery } from '@hoopline/contract';
 import { Router } from 'express';
 import { actorOf } from '../auth/authenticate';
 import { valid, validate } from '../http/validate';
 import { contentDisposition } from './attachments.routes';
-import { idParams } from './common.schemas';
 import type { RouteDeps } from './route-deps';
-import { sheetQuery } from './sheets.schemas';
 
 /** The stamped-for-review PDF sheet of a revision. */
 export function sheetsRoutes({ services, signedIn }: RouteDeps): Router {

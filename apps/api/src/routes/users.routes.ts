@@ -1,16 +1,17 @@
-import { Router } from 'express';
-import { actorOf } from '../auth/authenticate';
-import { paginationQuery } from '../http/pagination';
-import { valid, validate } from '../http/validate';
-import { emptyBody, idParams } from './common.schemas';
-import type { RouteDeps } from './route-deps';
 import {
+  emptyBody,
+  idParams,
   inviteBody,
   listUsersQuery,
   lookupQuery,
+  paginationQuery,
   updateSettingsBody,
   updateUserBody,
-} from './users.schemas';
+} from '@hoopline/contract';
+import { Router } from 'express';
+import { actorOf } from '../auth/authenticate';
+import { valid, validate } from '../http/validate';
+import type { RouteDeps } from './route-deps';
 
 /** /users, /invitations and /settings: the administrator's management of people. */
 export function usersRoutes({ services, signedIn }: RouteDeps): Router {

@@ -1,7 +1,7 @@
 import { execFileSync } from 'node:child_process';
 import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
-import { SI_UNIT, parseQuantity, type Report } from '@hoopline/calc';
+import { SI_UNIT, parseQuantity } from '@hoopline/calc';
 import {
   THIN_SPACE,
   formatPercent,
@@ -95,7 +95,7 @@ describe('README example sheets: every number on the sheet is the report’s val
     expect(res.status).toBe(200);
     const text = pdfText(res.body as Buffer, `example-${i}-${system}`);
     expect(text).toContain(`http://screening.example.test/verify/${created.revision.verifyCode}`);
-    const report = created.revision.report as unknown as Report;
+    const report = created.revision.report;
     const shown = presentReport(report, system);
     const problems: string[] = [];
     const read = (

@@ -7,7 +7,7 @@ import type {
   PasswordResetIssued,
   Settings,
   User,
-} from './types';
+} from '@hoopline/contract';
 
 export function useUsers(params: { q?: string; page?: number; pageSize?: number }) {
   return useQuery({

@@ -8,7 +8,7 @@ import {
   refreshSession,
   toApiError,
 } from './client';
-import type { Attachment } from './types';
+import type { Attachment } from '@hoopline/contract';
 
 export const attachmentKeys = {
   ofComponent: (componentId: string) => ['components', componentId, 'attachments'] as const,

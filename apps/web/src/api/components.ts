@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiFetch, json, query, type Page } from './client';
-import type { Component, Revision } from './types';
+import type { Component, Revision } from '@hoopline/contract';
 
 export const componentKeys = {
   ofProject: (projectId: string) => ['projects', projectId, 'components'] as const,

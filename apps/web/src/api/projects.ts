@@ -15,7 +15,7 @@ import type {
   Role,
   UnitSystem,
   UserLookup,
-} from './types';
+} from '@hoopline/contract';
 
 export interface ProjectListParams {
   readonly q?: string;

@@ -1,7 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiFetch, json, query, type Page } from './client';
 import { componentKeys } from './components';
-import type { Revision, RevisionDiff, RevisionSummary } from './types';
+import type { Revision, RevisionDiff, RevisionSummary } from '@hoopline/contract';
 
 export const revisionKeys = {
   one: (id: string) => ['revisions', id] as const,

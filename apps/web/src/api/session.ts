@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiFetch, json } from './client';
-import type { Me, UnitSystem } from './types';
+import type { Me, UnitSystem } from '@hoopline/contract';
 
 export const meQuery = queryOptions({
   queryKey: ['me'],

@@ -1,5 +1,5 @@
 import { apiDownload, query, saveFile } from './client';
-import type { PaperSize } from './types';
+import type { PaperSize } from '@hoopline/contract';
 
 /**
  * Downloads the stamped sheet of a revision (FOR REVIEW when countersigned,

@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { apiFetch } from './client';
-import type { VerifyResult } from './types';
+import type { VerifyResult } from '@hoopline/contract';
 
 /** The public verify answer for a code as typed (the server ignores dashes and case). */
 export function useVerify(code: string) {

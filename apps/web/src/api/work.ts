@@ -1,6 +1,6 @@
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { apiFetch, query, type Page } from './client';
-import type { IssuedItem, QueueItem } from './types';
+import type { IssuedItem, QueueItem } from '@hoopline/contract';
 
 /** Revisions awaiting the signed-in checker, oldest submitted first (the server's order). */
 export function useCheckQueue(page = 1) {

@@ -1,14 +1,16 @@
 import type { Verdict } from '@hoopline/calc';
-import type { RevisionStatus, Role } from '../api/types';
+import { ROLE_WORDS, STATUS_WORDS, VERDICT_WORDS } from '@hoopline/present';
+import type { RevisionStatus, Role } from '@hoopline/contract';
 
 const PILL =
   'inline-flex items-center gap-1 rounded-full border px-2 py-px text-xs font-medium whitespace-nowrap';
 
-const STATUS: Record<RevisionStatus, { label: string; className: string }> = {
-  draft: { label: 'Draft', className: 'border-line-strong text-muted' },
-  submitted: { label: 'Awaiting check', className: 'border-warn bg-warn-soft text-warn' },
-  countersigned: { label: 'Countersigned', className: 'border-pass bg-pass-soft text-pass' },
-  returned: { label: 'Returned', className: 'border-fail bg-fail-soft text-fail' },
+// Words from @hoopline/present (the sheet's), colours here.
+const STATUS_CLASS: Record<RevisionStatus, string> = {
+  draft: 'border-line-strong text-muted',
+  submitted: 'border-warn bg-warn-soft text-warn',
+  countersigned: 'border-pass bg-pass-soft text-pass',
+  returned: 'border-fail bg-fail-soft text-fail',
 };
 
 export function StatusBadge({
@@ -18,24 +20,19 @@ export function StatusBadge({
   status: RevisionStatus;
   superseded?: boolean;
 }) {
-  const s = STATUS[status];
   return (
-    <span className={`${PILL} ${s.className}`}>
-      {s.label}
+    <span className={`${PILL} ${STATUS_CLASS[status]}`}>
+      {STATUS_WORDS[status]}
       {superseded ? <span className="font-normal">(superseded)</span> : null}
     </span>
   );
 }
 
-const VERDICT: Record<Verdict, { label: string; mark: string; className: string }> = {
-  pass: { label: 'Passes', mark: '+', className: 'border-pass bg-pass-soft text-pass' },
-  fail: { label: 'Fails', mark: '×', className: 'border-fail bg-fail-soft text-fail' },
-  'outside-validity': {
-    label: 'Outside validity',
-    mark: '!',
-    className: 'border-warn bg-warn-soft text-warn',
-  },
-  'no-checks': { label: 'No checks', mark: '·', className: 'border-line-strong text-muted' },
+const VERDICT: Record<Verdict, { mark: string; className: string }> = {
+  pass: { mark: '+', className: 'border-pass bg-pass-soft text-pass' },
+  fail: { mark: '×', className: 'border-fail bg-fail-soft text-fail' },
+  'outside-validity': { mark: '!', className: 'border-warn bg-warn-soft text-warn' },
+  'no-checks': { mark: '·', className: 'border-line-strong text-muted' },
 };
 
 /** The verdict in words and a mark, never colour alone. */
@@ -46,16 +43,13 @@ export function VerdictBadge({ verdict, size = 'sm' }: { verdict: Verdict; size?
       <span aria-hidden="true" className="font-mono">
         {v.mark}
       </span>
-      <span>{v.label}</span>
+      <span>{VERDICT_WORDS[verdict].word}</span>
     </span>
   );
 }
 
-export const ROLE_LABEL: Record<Role, string> = {
-  designer: 'Designer',
-  checker: 'Checker',
-  fabricator: 'Fabricator',
-};
+/** A role in words (@hoopline/present's, as everywhere else). */
+export const ROLE_LABEL: Readonly<Record<Role, string>> = ROLE_WORDS;
 
 export function RoleBadge({ role }: { role: Role | null }) {
   if (!role) return <span className="text-xs text-muted">–</span>;

@@ -7,7 +7,7 @@ import {
   type Dimension,
 } from '@hoopline/calc';
 import { useId, type InputHTMLAttributes } from 'react';
-import type { UnitSystem } from '../api/types';
+import type { UnitSystem } from '@hoopline/contract';
 import { displayUnitSymbol as displayUnitFor, formatSignificant, show } from '@hoopline/present';
 import { describedBy, FieldShell, INPUT_CLASS } from './field';
 

@@ -1,5 +1,5 @@
 import { createContext, useContext, type ReactNode } from 'react';
-import type { UnitSystem } from '../api/types';
+import type { UnitSystem } from '@hoopline/contract';
 
 const UnitSystemContext = createContext<UnitSystem>('si');
 

@@ -3,7 +3,7 @@ import { useEffect, useState } from 'react';
 import { NavLink, Outlet, useNavigate } from 'react-router-dom';
 import { onSessionLost } from '../api/client';
 import { useMe, useSignOut, useUpdateMe } from '../api/session';
-import type { UnitSystem } from '../api/types';
+import type { UnitSystem } from '@hoopline/contract';
 import { useCheckQueue } from '../api/work';
 import { ProgressBar } from '../components/progress-bar';
 import { ThemeSwitch } from '../components/theme-switch';

@@ -1,7 +1,7 @@
 import { useSearchParams } from 'react-router-dom';
 import { useAudit, type AuditFilter } from '../api/admin';
 import { useMe } from '../api/session';
-import type { AuditEvent } from '../api/types';
+import type { AuditEvent } from '@hoopline/contract';
 import { Button } from '../components/button';
 import { DataTable, Pagination, type Column } from '../components/data-table';
 import { ErrorView, NotFoundView } from '../components/error-view';
@@ -61,7 +61,7 @@ export function AuditLogRoute() {
       header: 'Record',
       render: (e) => (
         <span className="font-mono text-xs">
-          {e.entityType} {e.entityId.slice(0, 8)}
+          {e.entityType} {e.entityId?.slice(0, 8) ?? ''}
         </span>
       ),
     },

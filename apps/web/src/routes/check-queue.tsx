@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
-import type { QueueItem } from '../api/types';
+import type { QueueItem } from '@hoopline/contract';
 import { useCheckQueue } from '../api/work';
 import { VerdictBadge } from '../components/badges';
 import { DataTable, Pagination, type Column } from '../components/data-table';

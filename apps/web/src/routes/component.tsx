@@ -2,7 +2,7 @@ import { useParams } from 'react-router-dom';
 import { useComponent, useSaveRevision } from '../api/components';
 import { useProject } from '../api/projects';
 import { useRevision } from '../api/revisions';
-import type { Component, Project, Revision } from '../api/types';
+import type { Component, Project, Revision } from '@hoopline/contract';
 import { StatusBadge, VerdictBadge } from '../components/badges';
 import { buttonClass, ButtonLink } from '../components/button';
 import { ErrorView } from '../components/error-view';

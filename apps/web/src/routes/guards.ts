@@ -2,7 +2,7 @@ import { redirect, type LoaderFunctionArgs } from 'react-router-dom';
 import { ApiError } from '../api/client';
 import { queryClient } from '../api/query-client';
 import { meQuery } from '../api/session';
-import type { Me } from '../api/types';
+import type { Me } from '@hoopline/contract';
 
 /** Where to come back to after signing in: only a path on this site, never another origin. */
 export function safeNext(next: string | null | undefined): string {

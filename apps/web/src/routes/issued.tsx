@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
-import type { IssuedItem } from '../api/types';
+import type { IssuedItem } from '@hoopline/contract';
 import { useIssued } from '../api/work';
 import { VerdictBadge } from '../components/badges';
 import { DataTable, Pagination, type Column } from '../components/data-table';

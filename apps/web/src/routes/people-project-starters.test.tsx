@@ -1,7 +1,7 @@
 import { screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import type { User } from '../api/types';
+import type { User } from '@hoopline/contract';
 import { fakeApi, ME, renderApp } from '../test/render';
 import { PeopleRoute } from './people';
 import { ProjectsRoute } from './projects';

@@ -9,7 +9,7 @@ import {
   useUsers,
 } from '../api/admin';
 import { useMe } from '../api/session';
-import type { Invitation, User } from '../api/types';
+import type { Invitation, User } from '@hoopline/contract';
 import { Button } from '../components/button';
 import { DataTable, Pagination, type Column } from '../components/data-table';
 import { ErrorView, NotFoundView } from '../components/error-view';

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { useParams } from 'react-router-dom';
 import { useMembers, useProject, useRemoveMember, useSetMember } from '../api/projects';
 import { useMe } from '../api/session';
-import type { Member, Role } from '../api/types';
+import type { Member, Role } from '@hoopline/contract';
 import { ROLE_LABEL } from '../components/badges';
 import { Button } from '../components/button';
 import { DataTable, type Column } from '../components/data-table';

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { useProjectComponents } from '../api/components';
 import { useProject } from '../api/projects';
-import type { Component } from '../api/types';
+import type { Component } from '@hoopline/contract';
 import { StatusBadge, RoleBadge, VerdictBadge } from '../components/badges';
 import { ButtonLink } from '../components/button';
 import { DataTable, Pagination, type Column } from '../components/data-table';

@@ -2,7 +2,7 @@ import { useSearchParams, Link } from 'react-router-dom';
 import { useState } from 'react';
 import { useProjects, type ProjectListParams } from '../api/projects';
 import { useMe } from '../api/session';
-import type { Project } from '../api/types';
+import type { Project } from '@hoopline/contract';
 import { RoleBadge } from '../components/badges';
 import { ButtonLink } from '../components/button';
 import { DataTable, Pagination, type Column } from '../components/data-table';

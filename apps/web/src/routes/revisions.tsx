@@ -3,7 +3,7 @@ import { Link, useNavigate, useParams } from 'react-router-dom';
 import { useComponent } from '../api/components';
 import { useProject } from '../api/projects';
 import { useComponentRevisions } from '../api/revisions';
-import type { RevisionSummary } from '../api/types';
+import type { RevisionSummary } from '@hoopline/contract';
 import { StatusBadge, VerdictBadge } from '../components/badges';
 import { Button } from '../components/button';
 import { DataTable, type Column } from '../components/data-table';

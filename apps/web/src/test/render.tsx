@@ -4,7 +4,7 @@ import type { ReactElement } from 'react';
 import { createMemoryRouter, RouterProvider } from 'react-router-dom';
 import { vi } from 'vitest';
 import { meQuery } from '../api/session';
-import type { Me } from '../api/types';
+import type { Me } from '@hoopline/contract';
 
 export const ME: Me = {
   user: {

@@ -1,3 +1,4 @@
+import type { ComponentKind } from '@hoopline/calc';
 import { Column, Entity, PrimaryColumn } from 'typeorm';
 
 @Entity('components')
@@ -6,7 +7,8 @@ export class ComponentEntity {
   @Column('uuid', { name: 'project_id' }) projectId: string;
   @Column('text') name: string;
   /** A calc ComponentKind; fixed by the first revision's inputs. */
-  @Column('text') kind: string;
+  /** One of the engine's kinds (the API refuses inputs of another). */
+  @Column('text') kind: ComponentKind;
   @Column('text') tag: string;
   /** Optimistic version: bumped by every edit and every new revision. */
   @Column('integer') version: number;

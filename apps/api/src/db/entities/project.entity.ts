@@ -6,7 +6,9 @@ import type { UnitSystem } from './user.entity';
 /** A site field as typed: text with its unit, or an SI number. */
 export type SiteAsTyped = { altitude?: string | number; ambientPressure?: string | number };
 
-export type ProjectRole = 'designer' | 'checker' | 'fabricator';
+import type { Role as ProjectRole } from '@hoopline/contract';
+
+export type { ProjectRole };
 
 @Entity('projects')
 export class ProjectEntity {

@@ -1,7 +1,10 @@
+import type { Verdict } from '@hoopline/calc';
 import { Column, Entity, PrimaryColumn } from 'typeorm';
 import type { JsonObject } from './json';
 
-export type RevisionStatus = 'draft' | 'submitted' | 'countersigned' | 'returned';
+import type { RevisionStatus } from '@hoopline/contract';
+
+export type { RevisionStatus };
 export type SignOffDecision = 'countersigned' | 'returned';
 
 /** Immutable once written, except for its status and the times that go with it. */
@@ -20,7 +23,7 @@ export class RevisionEntity {
   @Column('jsonb') report: JsonObject;
   /** SHA-256 (hex) of the RFC 8785 canonical JSON of { inputs, engineVersion, report }. */
   @Column('text', { name: 'content_hash' }) contentHash: string;
-  @Column('text') verdict: string;
+  @Column('text') verdict: Verdict;
   @Column('uuid', { name: 'author_id' }) authorId: string;
   @Column('timestamptz', { name: 'created_at' }) createdAt: Date;
   @Column('timestamptz', { name: 'submitted_at', nullable: true }) submittedAt: Date | null;

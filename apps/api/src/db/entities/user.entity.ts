@@ -1,6 +1,8 @@
 import { Column, Entity, PrimaryColumn } from 'typeorm';
 
-export type UnitSystem = 'si' | 'us';
+import type { UnitSystem } from '@hoopline/contract';
+
+export type { UnitSystem };
 
 @Entity('users')
 export class UserEntity {

@@ -1,3 +1,4 @@
+import type { Attachment } from '@hoopline/contract';
 import { createHash, randomUUID } from 'node:crypto';
 import { IsNull, type DataSource, type EntityManager } from 'typeorm';
 import { AttachmentEntity } from '../../db/entities/attachment.entity';
@@ -15,18 +16,6 @@ import { recordAudit } from '../audit/audit.service';
 import { requireComponent } from '../components/component-access';
 import { isoRequired } from '../sql';
 
-export interface AttachmentView {
-  readonly id: string;
-  readonly componentId: string;
-  readonly name: string;
-  readonly sha256: string;
-  readonly size: number;
-  readonly contentType: string;
-  readonly kind: string;
-  readonly uploadedBy: { id: string; name: string } | null;
-  readonly createdAt: string;
-}
-
 function enforce(decision: Decision) {
   if (!decision.allowed) throw forbidden(decision.code, decision.reason);
 }
@@ -34,7 +23,7 @@ function enforce(decision: Decision) {
 async function viewsOf(
   manager: EntityManager,
   entities: AttachmentEntity[],
-): Promise<AttachmentView[]> {
+): Promise<Attachment[]> {
   const ids = [
     ...new Set(entities.map((a) => a.uploadedBy).filter((id): id is string => id !== null)),
   ];
@@ -69,7 +58,7 @@ export class AttachmentsService {
     private readonly storage: BlobStorage,
   ) {}
 
-  async list(actor: Actor, componentId: string): Promise<AttachmentView[]> {
+  async list(actor: Actor, componentId: string): Promise<Attachment[]> {
     const manager = this.dataSource.manager;
     await requireComponent(manager, actor, componentId);
     return viewsOf(
@@ -86,7 +75,7 @@ export class AttachmentsService {
     manager: EntityManager,
     componentId: string,
     asOf: Date | null,
-  ): Promise<AttachmentView[]> {
+  ): Promise<Attachment[]> {
     const query = manager
       .getRepository(AttachmentEntity)
       .createQueryBuilder('a')
@@ -107,7 +96,7 @@ export class AttachmentsService {
     actor: Actor,
     componentId: string,
     file: { originalName: string; bytes: Buffer },
-  ): Promise<AttachmentView> {
+  ): Promise<Attachment> {
     const manager = this.dataSource.manager;
     const { standing } = await requireComponent(manager, actor, componentId);
     enforce(canDesign(standing));
@@ -171,7 +160,7 @@ export class AttachmentsService {
   async content(
     actor: Actor,
     attachmentId: string,
-  ): Promise<{ attachment: AttachmentView; bytes: Buffer }> {
+  ): Promise<{ attachment: Attachment; bytes: Buffer }> {
     const manager = this.dataSource.manager;
     const entity = await manager.findOneBy(AttachmentEntity, {
       id: attachmentId,

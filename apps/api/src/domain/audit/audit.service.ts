@@ -1,3 +1,4 @@
+import type { AuditEvent } from '@hoopline/contract';
 import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import { AuditEventEntity } from '../../db/entities/audit-event.entity';
@@ -48,17 +49,6 @@ export interface AuditFilter extends PageRequest {
   readonly to?: Date | undefined;
 }
 
-export interface AuditEventView {
-  readonly id: string;
-  readonly actor: { id: string; name: string } | null;
-  readonly action: string;
-  readonly entityType: string;
-  readonly entityId: string | null;
-  readonly projectId: string | null;
-  readonly summary: { before?: unknown; after?: unknown };
-  readonly createdAt: string;
-}
-
 interface AuditRow {
   id: string;
   actor_id: string | null;
@@ -75,7 +65,7 @@ export class AuditService {
   constructor(private readonly dataSource: DataSource) {}
 
   /** Newest first. Admins read everything; designers and checkers one project at a time. */
-  async list(actor: Actor, filter: AuditFilter): Promise<Page<AuditEventView>> {
+  async list(actor: Actor, filter: AuditFilter): Promise<Page<AuditEvent>> {
     const manager = this.dataSource.manager;
     if (!canReadWholeAudit(actor)) {
       if (!filter.projectId) {

@@ -1,3 +1,4 @@
+import type { Me } from '@hoopline/contract';
 import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import { IsNull } from 'typeorm';
@@ -15,10 +16,10 @@ import { recordAudit } from '../audit/audit.service';
 import { runInBackground } from '../background-work';
 import type { Notifier } from '../notifications/notifier';
 import { rows, run } from '../sql';
-import { meView, type MeView } from '../users/user-views';
+import { meView } from '../users/user-views';
 
 export interface SignedInResult {
-  readonly me: MeView;
+  readonly me: Me;
   readonly session: IssuedSession;
 }
 

@@ -1,3 +1,5 @@
+import type { ComponentKind } from '@hoopline/calc';
+import type { Component, Revision } from '@hoopline/contract';
 import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import { ComponentEntity } from '../../db/entities/component.entity';
@@ -14,24 +16,9 @@ import {
   summariesByIds,
   summaryColumnsAs,
   summaryFromColumns,
-  type RevisionSummary,
-  type RevisionView,
 } from '../revisions/revision-views';
 import { Where, containsPattern, isoRequired, rows } from '../sql';
 import { requireComponent } from './component-access';
-
-export interface ComponentView {
-  readonly id: string;
-  readonly projectId: string;
-  readonly name: string;
-  readonly kind: string;
-  readonly tag: string;
-  readonly version: number;
-  readonly createdAt: string;
-  readonly updatedAt: string;
-  readonly latestRevision: RevisionSummary | null;
-  readonly issuedRevision: RevisionSummary | null;
-}
 
 function enforce(decision: Decision) {
   if (!decision.allowed) throw forbidden(decision.code, decision.reason);
@@ -57,7 +44,7 @@ export async function componentViews(
   manager: EntityManager,
   components: readonly ComponentEntity[],
   onlyIssued: boolean,
-): Promise<ComponentView[]> {
+): Promise<Component[]> {
   const ids = components.flatMap((c) =>
     [onlyIssued ? null : c.latestRevisionId, c.issuedRevisionId].filter((x): x is string => !!x),
   );
@@ -88,7 +75,7 @@ interface ComponentRow extends Record<string, unknown> {
   id: string;
   project_id: string;
   name: string;
-  kind: string;
+  kind: ComponentKind;
   tag: string;
   version: number;
   created_at: Date;
@@ -103,7 +90,7 @@ export class ComponentsService {
     actor: Actor,
     projectId: string,
     query: PageRequest & { q?: string | undefined; kind?: string | undefined },
-  ): Promise<Page<ComponentView>> {
+  ): Promise<Page<Component>> {
     const manager = this.dataSource.manager;
     const standing = await requireProjectStanding(manager, actor, projectId);
     const onlyIssued = seesOnlyIssued(standing);
@@ -145,7 +132,7 @@ export class ComponentsService {
       );
       total = Number(count?.n ?? 0);
     }
-    const items = found.map((c): ComponentView => {
+    const items = found.map((c): Component => {
       const issued = summaryFromColumns(c, 'i');
       return {
         id: c.id,
@@ -168,7 +155,7 @@ export class ComponentsService {
     actor: Actor,
     projectId: string,
     input: { name: string; tag?: string | undefined; inputs: unknown; note?: string | undefined },
-  ): Promise<{ component: ComponentView; revision: RevisionView }> {
+  ): Promise<{ component: Component; revision: Revision }> {
     return this.dataSource.transaction(async (manager) => {
       const standing = await requireProjectStanding(manager, actor, projectId);
       enforce(canDesign(standing));
@@ -182,7 +169,7 @@ export class ComponentsService {
         id: randomUUID(),
         projectId,
         name: input.name,
-        kind: String(content.inputs['kind']),
+        kind: content.inputs['kind'] as ComponentKind, // the engine parsed it
         tag: input.tag ?? '',
         version: 1,
         latestRevisionId: null,
@@ -219,7 +206,7 @@ export class ComponentsService {
     });
   }
 
-  async get(actor: Actor, componentId: string): Promise<ComponentView> {
+  async get(actor: Actor, componentId: string): Promise<Component> {
     const manager = this.dataSource.manager;
     const { component, standing } = await requireComponent(manager, actor, componentId);
     const [view] = await componentViews(manager, [component], seesOnlyIssued(standing));
@@ -230,7 +217,7 @@ export class ComponentsService {
     actor: Actor,
     componentId: string,
     patch: { name?: string | undefined; tag?: string | undefined; version: number },
-  ): Promise<ComponentView> {
+  ): Promise<Component> {
     return this.dataSource.transaction(async (manager) => {
       const { component: before, standing } = await requireComponent(manager, actor, componentId, {
         lock: true,

@@ -1,3 +1,4 @@
+import type { CustomMaterialItem, Member, Project } from '@hoopline/contract';
 import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import {
@@ -15,7 +16,7 @@ import {
   type SiteAsTyped,
 } from '../../db/entities/project.entity';
 import { UserEntity, type UnitSystem } from '../../db/entities/user.entity';
-import { toJson, type JsonObject } from '../../db/entities/json';
+import { toJson } from '../../db/entities/json';
 import { conflict, forbidden, notFound } from '../../http/errors';
 import { pageOf, type Page, type PageRequest } from '../../http/pagination';
 import {
@@ -47,39 +48,6 @@ export type DesignBasisInput = {
   allowableStress?: AllowableBasis | undefined;
   barometer?: Barometer | undefined;
 };
-
-export interface ProjectView {
-  readonly id: string;
-  readonly number: string;
-  readonly name: string;
-  readonly client: string;
-  /** The site in SI: altitude in m or ambient pressure in Pa. */
-  readonly site: SiteValue;
-  /** The site as it was typed ("5280 ft"); SI numbers for a project from before typed sites were kept. */
-  readonly siteAsTyped: SiteAsTyped;
-  /** Pa, absolute: from the altitude (standard atmosphere), as given, or sea level (before the high-barometer margin). */
-  readonly ambientPressure: number;
-  readonly designBasis: DesignBasisValue;
-  readonly unitSystem: UnitSystem;
-  readonly notes: string;
-  readonly version: number;
-  readonly createdAt: string;
-  readonly updatedAt: string;
-  readonly myRole: Role | null;
-}
-
-export interface MemberView {
-  readonly user: { id: string; name: string; email: string };
-  readonly role: Role;
-  readonly addedAt: string;
-}
-
-export interface MaterialView {
-  readonly id: string;
-  readonly name: string;
-  readonly material: JsonObject;
-  readonly createdAt: string;
-}
 
 export interface ProjectInput {
   readonly number: string;
@@ -139,7 +107,7 @@ export function projectDesignBasis(p: ProjectEntity): DesignBasisValue {
   return { allowableStress: p.allowableBasis, barometer: p.designBarometer };
 }
 
-export function projectView(p: ProjectEntity, myRole: Role | null): ProjectView {
+export function projectView(p: ProjectEntity, myRole: Role | null): Project {
   return {
     id: p.id,
     number: p.number,
@@ -184,7 +152,7 @@ export class ProjectsService {
   async list(
     actor: Actor,
     query: PageRequest & { q?: string | undefined; sort: ProjectSort; order: 'asc' | 'desc' },
-  ): Promise<Page<ProjectView>> {
+  ): Promise<Page<Project>> {
     const w = new Where();
     w.params.push(actor.id); // $1, in the membership join
     w.add('(? or m.user_id is not null)', actor.isAdmin);
@@ -211,7 +179,7 @@ export class ProjectsService {
     );
   }
 
-  async create(actor: Actor, input: ProjectInput): Promise<ProjectView> {
+  async create(actor: Actor, input: ProjectInput): Promise<Project> {
     enforce(await projectCreationDecision(this.dataSource.manager, actor));
     try {
       return await this.dataSource.transaction(async (manager) => {
@@ -255,7 +223,7 @@ export class ProjectsService {
     }
   }
 
-  async get(actor: Actor, projectId: string): Promise<ProjectView> {
+  async get(actor: Actor, projectId: string): Promise<Project> {
     const { project, role } = await requireProjectStanding(
       this.dataSource.manager,
       actor,
@@ -264,7 +232,7 @@ export class ProjectsService {
     return projectView(project, role);
   }
 
-  async update(actor: Actor, projectId: string, patch: ProjectPatch): Promise<ProjectView> {
+  async update(actor: Actor, projectId: string, patch: ProjectPatch): Promise<Project> {
     try {
       return await this.dataSource.transaction(async (manager) => {
         const standing = await requireProjectStanding(manager, actor, projectId, { lock: true });
@@ -304,18 +272,13 @@ export class ProjectsService {
     }
   }
 
-  async members(actor: Actor, projectId: string): Promise<{ items: MemberView[] }> {
+  async members(actor: Actor, projectId: string): Promise<{ items: Member[] }> {
     const manager = this.dataSource.manager;
     await requireProjectStanding(manager, actor, projectId);
     return { items: await this.memberList(manager, projectId) };
   }
 
-  async setMember(
-    actor: Actor,
-    projectId: string,
-    userId: string,
-    role: Role,
-  ): Promise<MemberView> {
+  async setMember(actor: Actor, projectId: string, userId: string, role: Role): Promise<Member> {
     return this.dataSource.transaction(async (manager) => {
       const standing = await requireProjectStanding(manager, actor, projectId, { lock: true });
       enforce(canManageMembers(standing));
@@ -373,7 +336,7 @@ export class ProjectsService {
     });
   }
 
-  async materials(actor: Actor, projectId: string): Promise<{ items: MaterialView[] }> {
+  async materials(actor: Actor, projectId: string): Promise<{ items: CustomMaterialItem[] }> {
     const manager = this.dataSource.manager;
     await requireProjectStanding(manager, actor, projectId);
     const found = await manager.find(CustomMaterialEntity, {
@@ -387,7 +350,7 @@ export class ProjectsService {
     actor: Actor,
     projectId: string,
     material: { name: string },
-  ): Promise<MaterialView> {
+  ): Promise<CustomMaterialItem> {
     return this.dataSource.transaction(async (manager) => {
       const standing = await requireProjectStanding(manager, actor, projectId);
       enforce(canManageMaterials(standing));
@@ -430,7 +393,7 @@ export class ProjectsService {
     });
   }
 
-  private async memberList(manager: EntityManager, projectId: string): Promise<MemberView[]> {
+  private async memberList(manager: EntityManager, projectId: string): Promise<Member[]> {
     const found = await rows<{
       id: string;
       name: string;
@@ -475,7 +438,7 @@ export class ProjectsService {
   }
 }
 
-function materialView(m: CustomMaterialEntity): MaterialView {
+function materialView(m: CustomMaterialEntity): CustomMaterialItem {
   return { id: m.id, name: m.name, material: m.material, createdAt: isoRequired(m.createdAt) };
 }
 

@@ -1,15 +1,4 @@
-/**
- * What changed between two revisions of one component: input fields by
- * dotted path, and results (verdict, governing case, every check's
- * utilisation and pass, every output) by case.
- */
-export interface Change {
-  readonly path: string;
-  readonly label?: string;
-  readonly before: unknown;
-  readonly after: unknown;
-}
-
+import type { Change } from '@hoopline/contract';
 type Leaves = Map<string, { value: unknown; label?: string }>;
 
 function flatten(value: unknown, path: string, out: Leaves): void {

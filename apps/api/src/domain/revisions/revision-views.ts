@@ -1,41 +1,10 @@
+import type { Report, Verdict } from '@hoopline/calc';
+import type { Revision, RevisionSummary } from '@hoopline/contract';
 import type { EntityManager } from 'typeorm';
 import type { JsonObject } from '../../db/entities/json';
 import type { RevisionStatus } from '../../db/entities/revision.entity';
 import { iso, isoRequired, rows } from '../sql';
 import { verifyCode } from './revision-content';
-
-export interface RevisionSummary {
-  readonly id: string;
-  readonly number: number;
-  readonly status: RevisionStatus;
-  readonly verdict: string;
-  readonly contentHash: string;
-  readonly author: { id: string; name: string };
-  readonly createdAt: string;
-  readonly submittedAt: string | null;
-  readonly decidedAt: string | null;
-  readonly superseded: boolean;
-}
-
-export interface SignOffView {
-  readonly id: string;
-  readonly checker: { id: string; name: string };
-  readonly decision: 'countersigned' | 'returned';
-  readonly comment: string;
-  readonly hashSigned: string;
-  readonly createdAt: string;
-}
-
-export interface RevisionView extends RevisionSummary {
-  readonly componentId: string;
-  readonly projectId: string;
-  readonly note: string;
-  readonly inputs: JsonObject;
-  readonly engineVersion: string;
-  readonly report: JsonObject;
-  readonly signOffs: readonly SignOffView[];
-  readonly verifyCode: string;
-}
 
 /** Columns for a RevisionSummary, from `revisions r join users a on a.id = r.author_id`. */
 export const SUMMARY_COLUMNS = `r.id as r_id, r.number as r_number, r.status as r_status,
@@ -47,7 +16,7 @@ export interface SummaryRow {
   r_id: string;
   r_number: number;
   r_status: RevisionStatus;
-  r_verdict: string;
+  r_verdict: Verdict;
   r_hash: string;
   r_author_id: string;
   r_author_name: string;
@@ -96,7 +65,7 @@ export function summaryFromColumns(
     r_id: field('id') as string,
     r_number: field('number') as number,
     r_status: field('status') as RevisionStatus,
-    r_verdict: field('verdict') as string,
+    r_verdict: field('verdict') as Verdict,
     r_hash: field('hash') as string,
     r_author_id: field('author_id') as string,
     r_author_name: field('author_name') as string,
@@ -130,7 +99,7 @@ interface FullRow extends SummaryRow {
   r_report: JsonObject;
 }
 
-export async function revisionView(manager: EntityManager, id: string): Promise<RevisionView> {
+export async function revisionView(manager: EntityManager, id: string): Promise<Revision> {
   const [row] = await rows<FullRow>(
     manager,
     `select ${SUMMARY_COLUMNS}, r.component_id as r_component_id, r.project_id as r_project_id,
@@ -163,7 +132,7 @@ export async function revisionView(manager: EntityManager, id: string): Promise<
     note: row.r_note,
     inputs: row.r_inputs,
     engineVersion: row.r_engine_version,
-    report: row.r_report,
+    report: row.r_report as unknown as Report,
     signOffs: signOffs.map((s) => ({
       id: s.id,
       checker: { id: s.checker_id, name: s.checker_name },

@@ -1,6 +1,22 @@
+import type {
+  Change,
+  Component,
+  Integrity,
+  IssuedItem,
+  QueueItem,
+  Revision,
+  RevisionSummary,
+  VerifyResult,
+} from '@hoopline/contract';
 import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
-import { ENGINE_VERSION, computeReport, parseComponent, type Report } from '@hoopline/calc';
+import {
+  ENGINE_VERSION,
+  computeReport,
+  parseComponent,
+  type ComponentKind,
+  type Report,
+} from '@hoopline/calc';
 import { ComponentEntity } from '../../db/entities/component.entity';
 import { toJson } from '../../db/entities/json';
 import {
@@ -23,7 +39,6 @@ import {
   componentViews,
   componentsInOrder,
   insertRevision,
-  type ComponentView,
 } from '../components/components.service';
 import {
   requireComponent,
@@ -33,75 +48,13 @@ import {
 import type { Notifier } from '../notifications/notifier';
 import { projectDesignBasis, projectSite, staleVersion } from '../projects/projects.service';
 import { Where, containsPattern, isoRequired, paged, rows, run } from '../sql';
-import { diffInputs, diffResults, type Change } from './diff';
+import { diffInputs, diffResults } from './diff';
 import { computeContent, contentHash } from './revision-content';
-import {
-  SUMMARY_COLUMNS,
-  revisionView,
-  summaryFromRow,
-  type RevisionSummary,
-  type RevisionView,
-  type SummaryRow,
-} from './revision-views';
+import { SUMMARY_COLUMNS, revisionView, summaryFromRow, type SummaryRow } from './revision-views';
 
 function enforce(decision: Decision) {
   if (!decision.allowed) throw forbidden(decision.code, decision.reason);
 }
-
-export interface Integrity {
-  /** Whether the stored inputs, engine version and report still hash to the stored hash. */
-  readonly matches: boolean;
-  readonly storedHash: string;
-  readonly recomputedHash: string;
-  /** Whether every sign-off signed the hash the data has now; null without sign-offs. */
-  readonly signOffsMatch: boolean | null;
-  /**
-   * Whether today's engine, run again on the stored inputs, gives the stored
-   * report; null when the revision was computed by another engine version.
-   */
-  readonly reproduces: boolean | null;
-}
-
-export interface QueueItem extends RevisionSummary {
-  readonly project: { id: string; number: string; name: string };
-  readonly component: { id: string; name: string; kind: string };
-}
-
-export interface IssuedItem {
-  readonly project: { id: string; number: string; name: string };
-  readonly component: ComponentView;
-  readonly revision: RevisionSummary;
-}
-
-/**
- * The public answer for a verify code. Beyond "it matches", what the sheet
- * itself prints, so its holder can compare the paper line by line: a sheet
- * with altered numbers but a copied code is caught.
- */
-export type VerifyResult =
-  | { readonly match: false }
-  | {
-      readonly match: true;
-      readonly status: 'current' | 'superseded';
-      readonly projectNumber: string;
-      readonly componentName: string;
-      readonly revisionNumber: number;
-      readonly countersignedAt: string;
-      readonly contentHash: string;
-      readonly kind: string;
-      /** The wall or plate thickness screened, m (SI), where the kind has one. */
-      readonly thickness: number | null;
-      readonly material: string | null;
-      readonly verdict: string;
-      readonly governing: {
-        readonly loadCase: string;
-        readonly checkLabel: string;
-        readonly utilisation: number;
-      } | null;
-      /** Who prepared it and who countersigned it, as the sheet names them. */
-      readonly preparedBy: string;
-      readonly countersignedBy: string;
-    };
 
 function storedHashOf(revision: RevisionEntity): string {
   try {
@@ -179,7 +132,7 @@ export class RevisionsService {
     actor: Actor,
     componentId: string,
     input: { inputs: unknown; baseVersion: number; note?: string | undefined },
-  ): Promise<{ component: ComponentView; revision: RevisionView }> {
+  ): Promise<{ component: Component; revision: Revision }> {
     return this.dataSource.transaction(async (manager) => {
       const { component, standing } = await requireComponent(manager, actor, componentId, {
         lock: true,
@@ -226,7 +179,7 @@ export class RevisionsService {
     });
   }
 
-  async get(actor: Actor, revisionId: string): Promise<RevisionView> {
+  async get(actor: Actor, revisionId: string): Promise<Revision> {
     const manager = this.dataSource.manager;
     await requireRevision(manager, actor, revisionId);
     return revisionView(manager, revisionId);
@@ -294,7 +247,7 @@ export class RevisionsService {
     };
   }
 
-  async submit(actor: Actor, revisionId: string): Promise<RevisionView> {
+  async submit(actor: Actor, revisionId: string): Promise<Revision> {
     return this.dataSource.transaction(async (manager) => {
       const ctx = await this.lockForWorkflow(manager, actor, revisionId);
       enforce(canDesign(ctx.standing));
@@ -321,7 +274,7 @@ export class RevisionsService {
     });
   }
 
-  async withdraw(actor: Actor, revisionId: string): Promise<RevisionView> {
+  async withdraw(actor: Actor, revisionId: string): Promise<Revision> {
     return this.dataSource.transaction(async (manager) => {
       const ctx = await this.lockForWorkflow(manager, actor, revisionId);
       enforce(canWithdraw(ctx.standing, ctx.revision));
@@ -352,7 +305,7 @@ export class RevisionsService {
     revisionId: string,
     decision: SignOffDecision,
     input: { hash: string; comment?: string | undefined },
-  ): Promise<RevisionView> {
+  ): Promise<Revision> {
     return this.dataSource.transaction(async (manager) => {
       const ctx = await this.lockForWorkflow(manager, actor, revisionId);
       enforce(canSignOff(ctx.standing, ctx.revision));
@@ -445,7 +398,7 @@ export class RevisionsService {
         p_name: string;
         c_id: string;
         c_name: string;
-        c_kind: string;
+        c_kind: ComponentKind;
       }
     >(
       this.dataSource.manager,
@@ -555,7 +508,7 @@ export class RevisionsService {
     const [names] = await rows<{
       number: string;
       name: string;
-      kind: string;
+      kind: ComponentKind;
       author: string;
       checker: string | null;
     }>(
@@ -632,7 +585,7 @@ export class RevisionsService {
   }
 }
 
-function summaryOnly(v: RevisionView): RevisionSummary {
+function summaryOnly(v: Revision): RevisionSummary {
   return {
     id: v.id,
     number: v.number,

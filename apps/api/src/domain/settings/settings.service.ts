@@ -1,3 +1,4 @@
+import type { Settings } from '@hoopline/contract';
 import type { DataSource, EntityManager } from 'typeorm';
 import { forbidden } from '../../http/errors';
 import {
@@ -9,11 +10,6 @@ import {
 } from '../../policy/policy';
 import { recordAudit } from '../audit/audit.service';
 import { rows } from '../sql';
-
-export interface SettingsView {
-  /** Who may start projects: everyone signed in, or administrators and the people they name. */
-  readonly projectCreation: ProjectCreation;
-}
 
 /** The installation's setting on who starts projects (the one row of `deployment`). */
 export async function projectCreationSetting(manager: EntityManager): Promise<ProjectCreation> {
@@ -46,7 +42,7 @@ export async function projectCreationDecision(
 export class SettingsService {
   constructor(private readonly dataSource: DataSource) {}
 
-  async get(actor: Actor): Promise<SettingsView> {
+  async get(actor: Actor): Promise<Settings> {
     enforce(canManageSettings(actor));
     return { projectCreation: await projectCreationSetting(this.dataSource.manager) };
   }
@@ -54,7 +50,7 @@ export class SettingsService {
   async update(
     actor: Actor,
     patch: { projectCreation?: ProjectCreation | undefined },
-  ): Promise<SettingsView> {
+  ): Promise<Settings> {
     enforce(canManageSettings(actor));
     return this.dataSource.transaction(async (manager) => {
       const before = await projectCreationSetting(manager);

@@ -1,3 +1,4 @@
+import type { UnitSystem } from '@hoopline/contract';
 import type { Report } from '@hoopline/calc';
 import type { DataSource } from 'typeorm';
 import { pgPool } from '../../db/pg-pool';
@@ -59,7 +60,7 @@ export class SheetsService {
       number: string;
       name: string;
       client: string;
-      unit_system: 'si' | 'us';
+      unit_system: UnitSystem;
       author: string;
     }>(
       manager,

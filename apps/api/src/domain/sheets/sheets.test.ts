@@ -197,7 +197,7 @@ describe('the stamped-for-review sheet (rendered through the API, read back with
       // Greek symbols of the trail come through the sheet's fonts intact.
       expect(text).toMatch(/[σΔνγ]/);
       expect(text).toMatch(/qualified engineer/);
-      for (const caution of created.revision.report['cautions'] as Array<{ title: string }>) {
+      for (const caution of created.revision.report.cautions) {
         expect(text).toContain(caution.title);
       }
       // The known value, source beside it in CASES: c.source.

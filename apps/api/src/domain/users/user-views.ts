@@ -1,27 +1,9 @@
+import type { Me, User } from '@hoopline/contract';
 import type { EntityManager } from 'typeorm';
 import type { UserEntity } from '../../db/entities/user.entity';
 import type { Role } from '../../policy/policy';
 import { projectCreationDecision } from '../settings/settings.service';
 import { rows } from '../sql';
-
-export interface UserView {
-  readonly id: string;
-  readonly email: string;
-  readonly name: string;
-  readonly isAdmin: boolean;
-  readonly active: boolean;
-  readonly unitSystem: 'si' | 'us';
-  /** Named by an administrator as someone who may start projects. */
-  readonly mayCreateProjects: boolean;
-  readonly createdAt: string;
-}
-
-export interface MeView {
-  readonly user: UserView;
-  readonly memberships: readonly { projectId: string; projectNumber: string; role: Role }[];
-  /** Whether this person may start a project now (the setting, their name on the list, or admin). */
-  readonly canCreateProjects: boolean;
-}
 
 /** What the views read of a user row (no password hash: the signed-in request never loads it). */
 export type UserProfile = Pick<
@@ -29,7 +11,7 @@ export type UserProfile = Pick<
   'id' | 'email' | 'name' | 'isAdmin' | 'active' | 'unitSystem' | 'mayCreateProjects' | 'createdAt'
 >;
 
-export function userView(u: UserProfile): UserView {
+export function userView(u: UserProfile): User {
   return {
     id: u.id,
     email: u.email,
@@ -42,7 +24,7 @@ export function userView(u: UserProfile): UserView {
   };
 }
 
-export async function meView(manager: EntityManager, user: UserProfile): Promise<MeView> {
+export async function meView(manager: EntityManager, user: UserProfile): Promise<Me> {
   const memberships = await rows<{ project_id: string; number: string; role: Role }>(
     manager,
     `select m.project_id, p.number, m.role from project_members m

@@ -1,3 +1,4 @@
+import type { Invitation, Me, User } from '@hoopline/contract';
 import { randomUUID } from 'node:crypto';
 import { In, type DataSource } from 'typeorm';
 import type { AuthConfig } from '../../config/config';
@@ -12,18 +13,7 @@ import type { AuthService } from '../auth/auth.service';
 import { normaliseEmail } from '../auth/auth.service';
 import type { Notifier } from '../notifications/notifier';
 import { Where, containsPattern, paged } from '../sql';
-import { meView, userView, type MeView, type UserProfile, type UserView } from './user-views';
-
-export interface InvitationView {
-  readonly id: string;
-  readonly email: string;
-  readonly name: string;
-  readonly isAdmin: boolean;
-  readonly invitedBy: { id: string; name: string } | null;
-  readonly createdAt: string;
-  readonly expiresAt: string;
-  readonly acceptedAt: string | null;
-}
+import { meView, userView, type UserProfile } from './user-views';
 
 function requireAdmin(actor: Actor) {
   const decision = canManagePeople(actor);
@@ -45,14 +35,14 @@ export class UsersService {
     private readonly deliveryByMail: boolean,
   ) {}
 
-  me(user: UserProfile): Promise<MeView> {
+  me(user: UserProfile): Promise<Me> {
     return meView(this.dataSource.manager, user);
   }
 
   async updateMe(
     actor: Actor,
     patch: { name?: string | undefined; unitSystem?: UnitSystem | undefined },
-  ): Promise<MeView> {
+  ): Promise<Me> {
     return this.dataSource.transaction(async (manager) => {
       const before = await manager.findOneByOrFail(UserEntity, { id: actor.id });
       const changes: Partial<UserEntity> = { updatedAt: new Date() };
@@ -90,10 +80,7 @@ export class UsersService {
     return { id: user.id, name: user.name, email: user.email };
   }
 
-  async list(
-    actor: Actor,
-    query: PageRequest & { q?: string | undefined },
-  ): Promise<Page<UserView>> {
+  async list(actor: Actor, query: PageRequest & { q?: string | undefined }): Promise<Page<User>> {
     requireAdmin(actor);
     const w = new Where();
     if (query.q)
@@ -133,7 +120,7 @@ export class UsersService {
       active?: boolean | undefined;
       mayCreateProjects?: boolean | undefined;
     },
-  ): Promise<UserView> {
+  ): Promise<User> {
     requireAdmin(actor);
     return this.dataSource.transaction(async (manager) => {
       const before = await manager.findOne(UserEntity, {
@@ -210,7 +197,7 @@ export class UsersService {
     });
   }
 
-  async listInvitations(actor: Actor, page: PageRequest): Promise<Page<InvitationView>> {
+  async listInvitations(actor: Actor, page: PageRequest): Promise<Page<Invitation>> {
     requireAdmin(actor);
     const { rows: found, total } = await paged<{
       id: string;
@@ -254,7 +241,7 @@ export class UsersService {
   async invite(
     actor: Actor,
     input: { email: string; name: string; isAdmin?: boolean | undefined },
-  ): Promise<{ invitation: InvitationView } & TokenDelivery> {
+  ): Promise<{ invitation: Invitation } & TokenDelivery> {
     requireAdmin(actor);
     const email = normaliseEmail(input.email);
     const token = randomToken();

@@ -1,7 +1,7 @@
 import { screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import type { Invitation, User } from '../../api/types';
+import type { Invitation, User } from '@hoopline/contract';
 import { PeopleRoute } from '../../routes/people';
 import { fakeApi, ME, renderApp } from '../../test/render';
 

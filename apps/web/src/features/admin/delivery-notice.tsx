@@ -1,4 +1,4 @@
-import type { InvitationCreated, PasswordResetIssued } from '../../api/types';
+import type { InvitationCreated, PasswordResetIssued } from '@hoopline/contract';
 import { Button } from '../../components/button';
 import { INPUT_CLASS } from '../../components/field';
 import { formatDateTime } from '../../lib/dates';

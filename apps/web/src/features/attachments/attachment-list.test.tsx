@@ -1,7 +1,7 @@
 import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import type { Attachment } from '../../api/types';
+import type { Attachment } from '@hoopline/contract';
 import { fakeApi, renderApp } from '../../test/render';
 import { AttachmentSummary, AttachmentTable } from './attachment-list';
 

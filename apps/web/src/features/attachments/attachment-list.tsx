@@ -6,7 +6,7 @@ import {
   useDeleteAttachment,
 } from '../../api/attachments';
 import { apiDownload, saveFile } from '../../api/client';
-import type { Attachment } from '../../api/types';
+import type { Attachment } from '@hoopline/contract';
 import { Button } from '../../components/button';
 import { DataTable, type Column } from '../../components/data-table';
 import { Dialog } from '../../components/dialog';

@@ -1,4 +1,4 @@
-import type { Component, Project } from '../../api/types';
+import type { Component, Project } from '@hoopline/contract';
 import { Panel } from '../../components/page';
 import { AttachmentTable } from './attachment-list';
 import { UploadControl } from './upload-control';

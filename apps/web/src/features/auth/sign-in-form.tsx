@@ -4,7 +4,7 @@ import { Link } from 'react-router-dom';
 import * as yup from 'yup';
 import { ApiError } from '../../api/client';
 import { useSignIn } from '../../api/session';
-import type { Me } from '../../api/types';
+import type { Me } from '@hoopline/contract';
 import { Button } from '../../components/button';
 import { FormError, FormikTextField } from '../../components/field';
 import { serverFieldErrors } from '../../components/server-errors';

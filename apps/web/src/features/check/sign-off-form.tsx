@@ -2,7 +2,7 @@ import { Form, Formik } from 'formik';
 import { useState } from 'react';
 import * as yup from 'yup';
 import { useCountersign, useReturnRevision } from '../../api/revisions';
-import type { Revision } from '../../api/types';
+import type { Revision } from '@hoopline/contract';
 import { Button } from '../../components/button';
 import { FormError, FormikTextAreaField } from '../../components/field';
 import { serverFieldErrors } from '../../components/server-errors';

@@ -1,6 +1,6 @@
 import { useNavigate } from 'react-router-dom';
 import { useMe } from '../../api/session';
-import type { Project, Revision } from '../../api/types';
+import type { Project, Revision } from '@hoopline/contract';
 import { Panel } from '../../components/page';
 import { SignOffForm } from './sign-off-form';
 

@@ -1,7 +1,7 @@
 import { screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import type { Project, Revision } from '../../api/types';
+import type { Project, Revision } from '@hoopline/contract';
 import { fakeApi, ME, renderApp } from '../../test/render';
 import { signOffBlockedReason } from './sign-off-panel';
 import { SignOffForm } from './sign-off-form';

@@ -2,7 +2,7 @@ import { casesToCsv, screen as engine } from '@hoopline/calc';
 import { screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import type { Project } from '../../api/types';
+import type { Project } from '@hoopline/contract';
 import { fakeApi, renderApp } from '../../test/render';
 import { readCaseFile } from './case-file';
 import { KIND_FORMS } from './kind-forms';

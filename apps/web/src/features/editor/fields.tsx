@@ -1,5 +1,5 @@
 import { SI_UNIT } from '@hoopline/calc';
-import type { UnitSystem } from '../../api/types';
+import type { UnitSystem } from '@hoopline/contract';
 import { SelectField, TextField } from '../../components/field';
 import { UnitInput, type QuantityKind } from '../../components/unit-input';
 import type { EditorApi } from './editor-state';

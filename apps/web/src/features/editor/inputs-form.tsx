@@ -1,6 +1,6 @@
 import type { ComponentKind, InputIssue } from '@hoopline/calc';
 import { useState } from 'react';
-import type { UnitSystem } from '../../api/types';
+import type { UnitSystem } from '@hoopline/contract';
 import { TextAreaField } from '../../components/field';
 import type { EditorApi } from './editor-state';
 import { SpecField } from './fields';

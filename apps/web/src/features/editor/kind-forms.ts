@@ -6,7 +6,7 @@ import {
   type ComponentKind,
   type FieldDescription,
 } from '@hoopline/calc';
-import type { UnitSystem } from '../../api/types';
+import type { UnitSystem } from '@hoopline/contract';
 import type { QuantityKind } from '../../components/unit-input';
 import type { Raw } from './paths';
 

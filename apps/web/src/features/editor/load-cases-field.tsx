@@ -1,4 +1,4 @@
-import type { UnitSystem } from '../../api/types';
+import type { UnitSystem } from '@hoopline/contract';
 import { Button } from '../../components/button';
 import { SelectField, TextField } from '../../components/field';
 import { UnitInput } from '../../components/unit-input';

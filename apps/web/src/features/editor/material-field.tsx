@@ -1,7 +1,7 @@
 import { customMaterialSchema, findMaterial, isCodeMaterial, MATERIALS } from '@hoopline/calc';
 import { useState } from 'react';
 import { useAddProjectMaterial, useProjectMaterials } from '../../api/projects';
-import type { UnitSystem } from '../../api/types';
+import type { UnitSystem } from '@hoopline/contract';
 import { Button } from '../../components/button';
 import { CheckboxField, SelectField, TextField } from '../../components/field';
 import { messageFor } from '../../components/server-errors';

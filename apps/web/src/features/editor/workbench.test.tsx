@@ -3,7 +3,7 @@ import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { ApiError } from '../../api/client';
-import type { Project } from '../../api/types';
+import type { Project } from '@hoopline/contract';
 import { formatPercent as percent } from '@hoopline/present';
 import { fakeApi, renderApp } from '../../test/render';
 import { KIND_FORMS } from './kind-forms';

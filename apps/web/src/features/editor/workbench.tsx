@@ -1,7 +1,7 @@
 import type { ComponentKind, InputIssue, Report } from '@hoopline/calc';
 import { useMemo, useState, type ReactNode } from 'react';
 import { ApiError } from '../../api/client';
-import type { Project, Revision } from '../../api/types';
+import type { Project, Revision } from '@hoopline/contract';
 import { Button } from '../../components/button';
 import { FormError, TextField } from '../../components/field';
 import { Panel } from '../../components/page';

@@ -1,7 +1,7 @@
 import { screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import type { Member } from '../../api/types';
+import type { Member } from '@hoopline/contract';
 import { fakeApi, renderApp } from '../../test/render';
 import { AddMemberForm } from './add-member-form';
 

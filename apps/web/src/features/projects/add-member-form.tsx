@@ -4,7 +4,7 @@ import * as yup from 'yup';
 import { useUsers } from '../../api/admin';
 import { ApiError } from '../../api/client';
 import { lookUpUser, useSetMember } from '../../api/projects';
-import type { Member, Role } from '../../api/types';
+import type { Member, Role } from '@hoopline/contract';
 import { ROLE_LABEL } from '../../components/badges';
 import { Button } from '../../components/button';
 import { FormError, FormikSelectField, FormikTextField } from '../../components/field';

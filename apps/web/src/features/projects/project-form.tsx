@@ -3,7 +3,7 @@ import { Form, Formik, useFormikContext } from 'formik';
 import { useState } from 'react';
 import * as yup from 'yup';
 import type { ProjectInput } from '../../api/projects';
-import type { DesignBasis, Project, SiteAsTyped, UnitSystem } from '../../api/types';
+import type { DesignBasis, Project, SiteAsTyped, UnitSystem } from '@hoopline/contract';
 import { Button } from '../../components/button';
 import {
   FormError,

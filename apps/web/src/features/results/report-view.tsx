@@ -1,6 +1,6 @@
 import type { Report } from '@hoopline/calc';
 import { useDeferredValue, useMemo, type ReactNode } from 'react';
-import type { UnitSystem } from '../../api/types';
+import type { UnitSystem } from '@hoopline/contract';
 import { VerdictBadge } from '../../components/badges';
 import { ScreeningCaution } from '../../components/screening-caution';
 import { UtilisationBar } from '../../components/utilisation-bar';

@@ -1,6 +1,6 @@
 import { findUnit, fromSi } from '@hoopline/calc';
 import { useId } from 'react';
-import type { UnitSystem } from '../../api/types';
+import type { UnitSystem } from '@hoopline/contract';
 import {
   formatPercent as percent,
   formatSignificant,

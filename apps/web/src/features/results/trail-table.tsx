@@ -1,6 +1,6 @@
 import type { Report } from '@hoopline/calc';
 import type { PresentedStep } from '@hoopline/present';
-import type { UnitSystem } from '../../api/types';
+import type { UnitSystem } from '@hoopline/contract';
 import { ScrollArea } from '../../components/scroll-area';
 import { usePresented } from './report-view';
 

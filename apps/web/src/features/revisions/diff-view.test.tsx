@@ -1,6 +1,6 @@
 import { render, screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import type { RevisionDiff, RevisionSummary } from '../../api/types';
+import type { RevisionDiff, RevisionSummary } from '@hoopline/contract';
 import { DiffView, diffValue } from './diff-view';
 import { inputLabel } from '@hoopline/present';
 
@@ -18,8 +18,8 @@ const summary = (number: number, verdict: RevisionSummary['verdict']): RevisionS
 });
 
 const diff: RevisionDiff = {
-  from: 'r1',
-  to: 'r2',
+  from: summary(1, 'fail'),
+  to: summary(2, 'pass'),
   inputs: [{ path: 'thickness', before: '8 mm', after: '12 mm' }],
   results: [
     {

@@ -1,5 +1,5 @@
 import { ScrollArea } from '../../components/scroll-area';
-import type { Change, RevisionDiff, RevisionSummary } from '../../api/types';
+import type { Change, RevisionDiff, RevisionSummary } from '@hoopline/contract';
 import { StatusBadge, VerdictBadge } from '../../components/badges';
 import { formatDateTime } from '../../lib/dates';
 import {
@@ -10,7 +10,7 @@ import {
   show,
 } from '@hoopline/present';
 import { useUnitSystem } from '../../lib/unit-system';
-import type { UnitSystem } from '../../api/types';
+import type { UnitSystem } from '@hoopline/contract';
 
 /**
  * A value in a diff cell: a utilisation as a percentage, a result whose label

@@ -1,4 +1,4 @@
-import type { Revision } from '../../api/types';
+import type { Revision } from '@hoopline/contract';
 import { Panel } from '../../components/page';
 import { formatDateTime } from '../../lib/dates';
 import { useUnitSystem } from '../../lib/unit-system';

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { useMe } from '../../api/session';
 import { useSubmitRevision, useWithdrawRevision } from '../../api/revisions';
-import type { Project, RevisionSummary } from '../../api/types';
+import type { Project, RevisionSummary } from '@hoopline/contract';
 import { Button } from '../../components/button';
 import { FormError } from '../../components/field';
 import { messageFor } from '../../components/server-errors';

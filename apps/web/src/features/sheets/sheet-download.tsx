@@ -1,7 +1,7 @@
 import { useId, useState } from 'react';
 import { downloadSheet } from '../../api/sheets';
 import { useMe } from '../../api/session';
-import type { PaperSize, RevisionStatus, Role } from '../../api/types';
+import type { PaperSize, RevisionStatus, Role } from '@hoopline/contract';
 import { Button } from '../../components/button';
 import { messageFor } from '../../components/server-errors';
 

@@ -1,4 +1,4 @@
-import type { VerifyResult } from '../../api/types';
+import type { VerifyResult } from '@hoopline/contract';
 import { VERDICT_WORDS, formatPercent, kindName, show } from '@hoopline/present';
 import { formatDateTime } from '../../lib/dates';
 

@@ -1,7 +1,7 @@
 import type { Report } from '@hoopline/calc';
 import { sketchOf } from '@hoopline/present';
 import { useMemo } from 'react';
-import type { UnitSystem } from '../../../api/types';
+import type { UnitSystem } from '@hoopline/contract';
 import { SketchSvg } from './sketch-svg';
 
 /**

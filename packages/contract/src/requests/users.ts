@@ -1,6 +1,6 @@
 import { z } from 'zod';
-import { paginationShape } from '../http/pagination';
-import { email, text } from './common.schemas';
+import { projectCreation } from '../enums';
+import { email, paginationShape, text } from '../fields';
 
 export const listUsersQuery = z.object({ ...paginationShape, q: text(0, 200).optional() }).strict();
 
@@ -25,8 +25,6 @@ export const lookupQuery = z.object({ email }).strict();
 
 export const updateSettingsBody = z
   .object({
-    projectCreation: z
-      .enum(['everyone', 'named'], { error: 'must be "everyone" or "named"' })
-      .optional(),
+    projectCreation: projectCreation.optional(),
   })
   .strict();

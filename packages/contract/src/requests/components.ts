@@ -1,12 +1,6 @@
-import { COMPONENT_KINDS, type ComponentKind } from '@hoopline/calc';
 import { z } from 'zod';
-import { paginationShape } from '../http/pagination';
-import { calcInputs, text, version } from './common.schemas';
-
-/** Every kind the engine screens: its list of methods, not a copy of it. */
-const kind = z.enum(COMPONENT_KINDS as [ComponentKind, ...ComponentKind[]], {
-  error: 'is not a component kind',
-});
+import { componentKind as kind } from '../enums';
+import { calcInputs, paginationShape, text, version } from '../fields';
 
 export const listComponentsQuery = z
   .object({ ...paginationShape, q: text(0, 200).optional(), kind: kind.optional() })

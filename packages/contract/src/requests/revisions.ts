@@ -1,6 +1,5 @@
 import { z } from 'zod';
-import { paginationQuery } from '../http/pagination';
-import { calcInputs, text, uuid, version } from './common.schemas';
+import { calcInputs, paginationQuery, text, uuid, version } from '../fields';
 
 export const listRevisionsQuery = paginationQuery;
 

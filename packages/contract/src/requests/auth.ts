@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { email, newPassword, text } from './common.schemas';
+import { email, newPassword, text } from '../fields';
 
 export const signInBody = z
   .object({

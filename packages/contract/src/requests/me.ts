@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { newPassword, text, unitSystem } from './common.schemas';
+import { unitSystem } from '../enums';
+import { newPassword, text } from '../fields';
 
 export const updateMeBody = z
   .object({ name: text(1, 120).optional(), unitSystem: unitSystem.optional() })

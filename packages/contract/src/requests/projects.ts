@@ -5,8 +5,8 @@ import {
   siteSchema,
   type SiteInput,
 } from '@hoopline/calc';
-import { paginationShape } from '../http/pagination';
-import { role, text, unitSystem, uuid, version } from './common.schemas';
+import { role, unitSystem } from '../enums';
+import { paginationShape, text, uuid, version } from '../fields';
 
 /**
  * The project site: checked by the calc's own site schema (altitude or

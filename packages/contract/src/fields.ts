@@ -1,5 +1,7 @@
 import { z } from 'zod';
 
+/** Field schemas the request schemas share, with the messages the API answers. */
+
 /** An id in a path or a body: a UUID. */
 export const uuid = z.uuid({ error: 'must be a UUID' });
 
@@ -28,11 +30,6 @@ export const newPassword = z
   .max(256, 'must be at most 256 characters')
   .refine((p) => p.trim().length > 0, 'must not be only spaces');
 
-export const unitSystem = z.enum(['si', 'us'], { error: 'must be "si" or "us"' });
-export const role = z.enum(['designer', 'checker', 'fabricator'], {
-  error: 'must be "designer", "checker" or "fabricator"',
-});
-
 /** Optimistic version a client read; 409 stale_version when it has moved. */
 export const version = z
   .number({ error: (i) => (i.input === undefined ? 'is required' : 'must be a whole number') })
@@ -47,3 +44,35 @@ export const calcInputs = z.record(z.string(), z.unknown(), {
 });
 
 export const emptyBody = z.object({}).strict();
+
+export const MAX_PAGE_SIZE = 100;
+
+/** `?page&pageSize`: page from 1, pageSize 1–100, 25 by default. */
+export const paginationShape = {
+  page: z.coerce
+    .number({ error: 'must be a whole number' })
+    .int('must be a whole number')
+    .min(1, 'must be at least 1')
+    .max(100_000, 'must be at most 100000')
+    .default(1),
+  pageSize: z.coerce
+    .number({ error: 'must be a whole number' })
+    .int('must be a whole number')
+    .min(1, 'must be at least 1')
+    .max(MAX_PAGE_SIZE, `must be at most ${MAX_PAGE_SIZE}`)
+    .default(25),
+};
+
+export const paginationQuery = z.object(paginationShape).strict();
+
+/** A page of a list, as every list route answers. */
+export function pageOf<T extends z.ZodType>(item: T) {
+  return z
+    .object({
+      items: z.array(item).readonly(),
+      page: z.number().int(),
+      pageSize: z.number().int(),
+      total: z.number().int(),
+    })
+    .strict();
+}

@@ -1,0 +1,49 @@
+import { COMPONENT_KINDS, type ComponentKind, type Verdict } from '@hoopline/calc';
+import { z } from 'zod';
+
+/**
+ * The enumerations both ends of the API share, each declared once: the
+ * request schemas validate with them, the response schemas and the web app's
+ * types take their unions from them.
+ */
+
+export const UNIT_SYSTEMS = ['si', 'us'] as const;
+export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
+export const unitSystem = z.enum(UNIT_SYSTEMS, { error: 'must be "si" or "us"' });
+
+export const ROLES = ['designer', 'checker', 'fabricator'] as const;
+export type Role = (typeof ROLES)[number];
+export const role = z.enum(ROLES, { error: 'must be "designer", "checker" or "fabricator"' });
+
+export const REVISION_STATUSES = ['draft', 'submitted', 'countersigned', 'returned'] as const;
+export type RevisionStatus = (typeof REVISION_STATUSES)[number];
+export const revisionStatus = z.enum(REVISION_STATUSES);
+
+export const SIGN_OFF_DECISIONS = ['countersigned', 'returned'] as const;
+export type SignOffDecision = (typeof SIGN_OFF_DECISIONS)[number];
+
+/** Paper sizes as the API takes them (`?paper=`). */
+export const PAPER_SIZES = ['a4', 'letter'] as const;
+export type PaperSize = (typeof PAPER_SIZES)[number];
+export const paperSize = z.enum(PAPER_SIZES, { error: 'must be "a4" or "letter"' });
+
+/** The engine's verdicts (`satisfies` ties this list to the engine's type). */
+export const VERDICTS = [
+  'pass',
+  'fail',
+  'outside-validity',
+  'no-checks',
+] as const satisfies readonly Verdict[];
+export const verdict = z.enum(VERDICTS);
+
+/** Who may start projects (an installation setting). */
+export const PROJECT_CREATION = ['everyone', 'named'] as const;
+export type ProjectCreation = (typeof PROJECT_CREATION)[number];
+export const projectCreation = z.enum(PROJECT_CREATION, {
+  error: 'must be "everyone" or "named"',
+});
+
+/** Every kind the engine screens: its list of methods, not a copy of it. */
+export const componentKind = z.enum(COMPONENT_KINDS as [ComponentKind, ...ComponentKind[]], {
+  error: 'is not a component kind',
+});
