@@ -6,6 +6,7 @@ import { AttachmentRemoval1764800001000 } from './1764800001000-attachment-remov
 import { SiteAsTyped1765000000000 } from './1765000000000-site-as-typed';
 import { ProjectStarters1765200000000 } from './1765200000000-project-starters';
 import { ProjectDesignBasis1765300000000 } from './1765300000000-project-design-basis';
+import { ProjectDesignTemperature1765400000000 } from './1765400000000-project-design-temperature';
 
 /** Every migration class, oldest first. Add new ones at the end. */
 export const migrations = [
@@ -17,4 +18,5 @@ export const migrations = [
   SiteAsTyped1765000000000,
   ProjectStarters1765200000000,
   ProjectDesignBasis1765300000000,
+  ProjectDesignTemperature1765400000000,
 ];

@@ -60,6 +60,8 @@ export interface ProjectView {
   /** Pa, absolute: from the altitude (standard atmosphere), as given, or sea level (before the high-barometer margin). */
   readonly ambientPressure: number;
   readonly designBasis: DesignBasisValue;
+  /** The default design temperature of its components, as typed ("150 degC"); null: none (room temperature). */
+  readonly designTemperature: string | number | null;
   readonly unitSystem: UnitSystem;
   readonly notes: string;
   readonly version: number;
@@ -87,6 +89,8 @@ export interface ProjectInput {
   readonly client?: string | undefined;
   readonly site?: SiteGiven | undefined;
   readonly designBasis?: DesignBasisInput | undefined;
+  /** Checked by the calc's design temperature field; kept as typed. */
+  readonly designTemperature?: string | number | undefined;
   readonly unitSystem: UnitSystem;
   readonly notes?: string | undefined;
 }
@@ -98,6 +102,8 @@ export interface ProjectPatch {
   readonly site?: SiteGiven | null | undefined;
   /** The keys given change; a key left out keeps its value. */
   readonly designBasis?: DesignBasisInput | undefined;
+  /** A temperature sets the default, null clears it, left out keeps it. */
+  readonly designTemperature?: string | number | null | undefined;
   readonly unitSystem?: UnitSystem | undefined;
   readonly notes?: string | undefined;
   readonly version: number;
@@ -151,6 +157,7 @@ export function projectView(p: ProjectEntity, myRole: Role | null): ProjectView 
       p.siteAmbientPressure ??
       (p.siteAltitude !== null ? ambientPressureAtAltitude(p.siteAltitude) : STANDARD_ATMOSPHERE),
     designBasis: projectDesignBasis(p),
+    designTemperature: p.designTemperature,
     unitSystem: p.unitSystem,
     notes: p.notes,
     version: p.version,
@@ -224,6 +231,7 @@ export class ProjectsService {
           ...siteColumns(input.site),
           allowableBasis: input.designBasis?.allowableStress ?? 'asme-viii-1',
           designBarometer: input.designBasis?.barometer ?? 'standard',
+          designTemperature: input.designTemperature ?? null,
           unitSystem: input.unitSystem,
           notes: input.notes ?? '',
           version: 1,
@@ -285,6 +293,8 @@ export class ProjectsService {
           changes.allowableBasis = patch.designBasis.allowableStress;
         if (patch.designBasis?.barometer !== undefined)
           changes.designBarometer = patch.designBasis.barometer;
+        if (patch.designTemperature !== undefined)
+          changes.designTemperature = patch.designTemperature;
         await manager.update(ProjectEntity, { id: projectId }, changes);
         const after = await manager.findOneByOrFail(ProjectEntity, { id: projectId });
         await recordAudit(manager, {
@@ -486,6 +496,7 @@ function projectSummary(p: ProjectEntity) {
     client: p.client,
     site: projectSite(p),
     designBasis: projectDesignBasis(p),
+    designTemperature: p.designTemperature,
     unitSystem: p.unitSystem,
     version: p.version,
   };
