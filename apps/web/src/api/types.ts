@@ -56,6 +56,8 @@ export interface Project {
   readonly siteAsTyped: SiteAsTyped;
   readonly ambientPressure: number;
   readonly designBasis: DesignBasis;
+  /** The components' default design temperature, as typed ("150 degC"); null: none (room temperature). */
+  readonly designTemperature: string | number | null;
   readonly unitSystem: UnitSystem;
   readonly notes: string;
   readonly version: number;
