@@ -122,6 +122,15 @@ test('a designer creates a project and a door plate, sees results change live, s
 
   await thickness.fill('10 mm');
   await expect(verdict).toHaveText('Passes');
+  const at10 = await summary.textContent();
+  // At a design temperature the 304 plate is derated (ASME II-D tables): a higher utilisation,
+  // the trail's temperature step and the design-temperature caution; cleared, room temperature again.
+  const temperature = page.getByLabel('Design temperature (optional)');
+  await temperature.fill('300 degC');
+  await expect(summary).not.toHaveText(at10 ?? '');
+  await expect(page.getByText('Properties at the design temperature').first()).toBeVisible();
+  await temperature.fill('');
+  await expect(summary).toHaveText(at10 ?? '');
   await expect(page.getByRole('complementary', { name: 'Screening caution' })).toContainText(
     'Screening only — not a code calculation',
   );

@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { EXAMPLE_REPORTS, EXTRA_CASES, FIXTURE_KINDS } from '../test/example-reports';
+import {
+  EXAMPLE_REPORTS,
+  EXTRA_CASES,
+  FIXTURE_KINDS,
+  TEMPERATURE_CASES,
+} from '../test/example-reports';
 import { METHODS, screen } from './index';
 
 // The stored reports were written by test/write-example-reports.ts from the
@@ -13,7 +18,8 @@ describe('reports equal the stored fixture', () => {
       cases.push([`${method.kind}#${index}`, example.input]),
     );
   }
-  for (const [key, input] of Object.entries(EXTRA_CASES)) cases.push([key, input]);
+  for (const [key, input] of Object.entries({ ...EXTRA_CASES, ...TEMPERATURE_CASES }))
+    cases.push([key, input]);
 
   it('covers every stored report', () => {
     expect(cases.map(([key]) => key).sort()).toEqual(Object.keys(EXAMPLE_REPORTS).sort());

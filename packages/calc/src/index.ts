@@ -87,6 +87,13 @@ export {
   designBasisSchema,
 } from './core/design-basis';
 export type { AllowableBasis, Barometer, DesignBasisInput } from './core/design-basis';
+export {
+  MAX_DESIGN_TEMPERATURE,
+  MIN_DESIGN_TEMPERATURE,
+  ROOM_TEMPERATURE,
+  designTemperatureField,
+} from './core/temperature';
+export type { TemperatureContext } from './core/temperature';
 export type { MethodDefinition, SweepParameter } from './core/method';
 
 // Materials
@@ -99,6 +106,13 @@ export {
   materialSchema,
 } from './materials/materials';
 export type { Material, MaterialInput, StrengthBasis, ValueBasis } from './materials/materials';
+export { TEMPERATURE_DATA } from './materials/temperature-tables';
+export type {
+  MaterialTemperatureData,
+  PropertyTable,
+  TemperatureLimit,
+} from './materials/temperature-tables';
+export type { MaterialAtTemperature, DeratedProperty } from './materials/at-temperature';
 
 // Methods and their input schemas
 export { flatAreaLoad, flatAreaLoadSchema } from './methods/flat-area-load/flat-area-load';
@@ -154,6 +168,7 @@ export {
   COMPONENT_KINDS,
   METHODS,
   computeReport,
+  computeResult,
   findMethod,
   parseComponent,
   screen,

@@ -3,8 +3,10 @@ import { assembleReport } from './core/assemble';
 import { CalcInputError, issuesFromZod, type InputIssue } from './core/errors';
 import { resolveDesignBasis } from './core/design-basis';
 import { resolveAmbient, resolveLoadCases } from './core/load-cases';
-import type { MethodContext, MethodDefinition } from './core/method';
-import type { ComponentKind, Report } from './core/report';
+import { computeMethod, type CaseTemperature } from './core/compute';
+import type { MethodContext, MethodDefinition, MethodResult } from './core/method';
+import type { ComponentKind, Report, ResolvedLoadCase } from './core/report';
+import { ROOM_TEMPERATURE, celsiusText, roomTemperatureContext } from './core/temperature';
 import { METHODS, type EngineMethod } from './methods';
 
 export { METHODS };
@@ -20,7 +22,54 @@ export const COMPONENT_KINDS: readonly ComponentKind[] = METHODS.map((m) => m.ki
 export interface ParsedComponent {
   readonly method: EngineMethod;
   readonly input: unknown;
+  /** The ambient, the design basis and every load case (its temperature in `temperatures`). */
   readonly context: MethodContext;
+  /**
+   * The temperature of each load case, in order, or null when the component
+   * gives none anywhere (then every case is at room temperature and the report
+   * says nothing of temperature beyond its caution).
+   */
+  readonly temperatures: readonly CaseTemperature[] | null;
+  /** The component's design temperature, K, where given. */
+  readonly designTemperature?: number;
+}
+
+const SOURCE_COMPONENT_TEMPERATURE = 'the component’s design temperature (designTemperature)';
+
+/**
+ * Each load case's temperature: its own, else the component's, else room
+ * temperature; null when none is given anywhere.
+ */
+function caseTemperatures(
+  designTemperature: number | undefined,
+  own: readonly (number | undefined)[],
+): CaseTemperature[] | null {
+  if (designTemperature === undefined && own.every((t) => t === undefined)) return null;
+  return own.map((t, index): CaseTemperature => {
+    if (t !== undefined)
+      return {
+        value: t,
+        given: true,
+        source: `the load case’s own temperature (loadCases.${index}.temperature)`,
+      };
+    if (designTemperature !== undefined)
+      return { value: designTemperature, given: true, source: SOURCE_COMPONENT_TEMPERATURE };
+    return {
+      value: ROOM_TEMPERATURE,
+      given: false,
+      source:
+        'none given for the load case, and the component gives no design temperature: room temperature, 20 °C',
+    };
+  });
+}
+
+/** A resolved load case with the temperature it is screened at, said in its description too. */
+function withTemperature(loadCase: ResolvedLoadCase, t: CaseTemperature): ResolvedLoadCase {
+  return {
+    ...loadCase,
+    description: `${loadCase.description}, at ${t.given ? celsiusText(t.value) : 'room temperature (20 °C, none given)'}`,
+    temperature: t.value,
+  };
 }
 
 /**
@@ -47,11 +96,16 @@ export function parseComponent(raw: unknown): ParsedComponent {
   const data = parsed.data as {
     site?: Parameters<typeof resolveAmbient>[0];
     designBasis?: Parameters<typeof resolveDesignBasis>[0];
-    loadCases?: unknown[];
+    designTemperature?: number;
+    loadCases?: { temperature?: number | undefined }[];
   };
   const designBasis = resolveDesignBasis(data.designBasis);
   const ambient = resolveAmbient(data.site, designBasis);
+  const designTemperature =
+    data.designTemperature !== undefined ? { designTemperature: data.designTemperature } : {};
   if (method.singleCase) {
+    const single = method.singleCase(parsed.data, ambient);
+    const temperatures = caseTemperatures(data.designTemperature, [undefined]);
     return {
       method,
       input: parsed.data,
@@ -59,12 +113,15 @@ export function parseComponent(raw: unknown): ParsedComponent {
         ambient,
         designBasis,
         warnings: [],
-        loadCases: [method.singleCase(parsed.data, ambient)],
+        loadCases: [temperatures ? withTemperature(single, temperatures[0]!) : single],
+        temperature: roomTemperatureContext(),
       },
+      temperatures,
+      ...designTemperature,
     };
   }
   const { cases, issues, warnings } = resolveLoadCases(
-    (data.loadCases ?? []) as Parameters<typeof resolveLoadCases>[0],
+    (data.loadCases ?? []) as unknown as Parameters<typeof resolveLoadCases>[0],
     ambient,
     designBasis,
   );
@@ -76,17 +133,41 @@ export function parseComponent(raw: unknown): ParsedComponent {
       })),
     );
   }
+  const temperatures = caseTemperatures(
+    data.designTemperature,
+    (data.loadCases ?? []).map((c) => c.temperature),
+  );
   return {
     method,
     input: parsed.data,
-    context: { ambient, designBasis, warnings, loadCases: cases },
+    context: {
+      ambient,
+      designBasis,
+      warnings,
+      loadCases: temperatures ? cases.map((c, i) => withTemperature(c, temperatures[i]!)) : cases,
+      temperature: roomTemperatureContext(),
+    },
+    temperatures,
+    ...designTemperature,
   };
+}
+
+/**
+ * What the method computes for a parsed component (with another input of the
+ * same component, e.g. a swept thickness): every load case at its temperature.
+ */
+export function computeResult(component: ParsedComponent, input = component.input): MethodResult {
+  return computeMethod(component.method, input, component.context, component.temperatures);
 }
 
 /** Computes the report of a parsed component. */
 export function computeReport(component: ParsedComponent): Report {
-  const result = component.method.compute(component.input as never, component.context);
-  return assembleReport(component.method, component.context, result);
+  return assembleReport(component.method, component.context, computeResult(component), {
+    temperatureGiven: component.temperatures !== null,
+    ...(component.designTemperature !== undefined
+      ? { designTemperature: component.designTemperature }
+      : {}),
+  });
 }
 
 /**

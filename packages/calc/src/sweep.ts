@@ -2,7 +2,7 @@ import { CalcInputError, type InputIssue } from './core/errors';
 import { formatNumber, withoutTrailText } from './core/format';
 import type { MethodDefinition, MethodResult, SweepParameter } from './core/method';
 import { outsideValidityWarnings } from './core/validity';
-import { parseComponent, type ParsedComponent } from './screen';
+import { computeResult, parseComponent, type ParsedComponent } from './screen';
 import { QuantityParseError, parseQuantity } from './units/parse';
 
 /** Where a thickness sweep runs: SI metres or text with a length unit ("5 mm"). */
@@ -164,13 +164,11 @@ export function sweepThickness(rawInput: unknown, options: SweepOptions = {}): S
 
   // Each point keeps numbers only, so its trail text is not written (withoutTrailText).
   const evaluate = (value: number) =>
-    withoutTrailText(() =>
-      method.compute(sweep.set(component.input, value) as never, component.context),
-    );
+    withoutTrailText(() => computeResult(component, sweep.set(component.input, value)));
   const found = (at: { value: number | null; note: string }): SweepResult['minimumPassing'] => {
     if (at.value === null) return { ...at, outsideValidity: false };
     // With its text this time: the note quotes the warnings.
-    const result = method.compute(sweep.set(component.input, at.value) as never, component.context);
+    const result = computeResult(component, sweep.set(component.input, at.value));
     const outside = outsideValidityWarnings(component.context, result);
     if (outside.length === 0) return { ...at, outsideValidity: false };
     return {

@@ -98,5 +98,77 @@ export const EXTRA_CASES: Readonly<Record<string, unknown>> = {
   },
 };
 
-/** Stored reports by "kind#exampleIndex" or the EXTRA_CASES key. */
+/**
+ * Inputs at a design temperature (Hoopline method notes §l): per-case
+ * temperatures (one computation per temperature), the creep range, a polymer
+ * above its service limit, a custom material's own temperature table.
+ */
+export const TEMPERATURE_CASES: Readonly<Record<string, unknown>> = {
+  'cylindrical-shell 316L at 250 °C under vacuum, hydrotest at 20 °C, ring spacing': {
+    kind: 'cylindrical-shell',
+    diameter: '800 mm',
+    thickness: '6 mm',
+    length: '1.5 m',
+    material: 'stainless-316l',
+    designTemperature: '250 degC',
+    ringSpacingFor: '4 mm',
+    loadCases: [
+      { name: 'Bake-out: full vacuum', internal: 'full vacuum' },
+      { name: 'Hydrotest: 3 bar(g)', internal: '3 bar(g)', temperature: '20 degC' },
+    ],
+  },
+  'sphere-or-head carbon steel at 400 °C, in the creep range, EN basis': {
+    kind: 'sphere-or-head',
+    designBasis: { allowableStress: 'en-13445-3' },
+    shape: 'torispherical',
+    diameter: '600 mm',
+    thickness: '8 mm',
+    material: 'carbon-steel',
+    designTemperature: '752 degF',
+    loadCases: [
+      { name: 'Design: 5 bar(g)', internal: '5 bar(g)' },
+      { name: 'Vacuum', internal: 'full vacuum' },
+    ],
+  },
+  'circular-plate polycarbonate at 130 °C, above its service limit': {
+    kind: 'circular-plate',
+    diameter: '120 mm',
+    thickness: '15 mm',
+    edge: 'simply-supported',
+    material: 'polycarbonate',
+    designTemperature: '130 degC',
+    loadCases: [{ name: 'Vacuum', internal: 'full vacuum' }],
+  },
+  'circular-plate custom steel with its temperature table at 250 °C': {
+    kind: 'circular-plate',
+    diameter: '400 mm',
+    thickness: '14 mm',
+    edge: 'clamped',
+    material: {
+      name: 'Shop plate',
+      elasticModulus: '205 GPa',
+      poissonRatio: 0.3,
+      strength: '275 MPa',
+      ultimateStrength: '430 MPa',
+      temperatureTable: [
+        {
+          temperature: '100 degC',
+          elasticModulus: '200 GPa',
+          strength: '250 MPa',
+          ultimateStrength: '430 MPa',
+        },
+        {
+          temperature: '300 degC',
+          elasticModulus: '186 GPa',
+          strength: '210 MPa',
+          ultimateStrength: '410 MPa',
+        },
+      ],
+    },
+    loadCases: [{ name: 'Vacuum', internal: 'full vacuum' }],
+    designTemperature: '250 degC',
+  },
+};
+
+/** Stored reports by "kind#exampleIndex" or the EXTRA_CASES or TEMPERATURE_CASES key. */
 export const EXAMPLE_REPORTS = reports as Readonly<Record<string, unknown>>;

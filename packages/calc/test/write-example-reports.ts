@@ -8,7 +8,7 @@
 import { writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { METHODS, screen } from '../src/index';
-import { EXTRA_CASES, FIXTURE_KINDS } from './example-reports';
+import { EXTRA_CASES, FIXTURE_KINDS, TEMPERATURE_CASES } from './example-reports';
 
 const reports: Record<string, unknown> = {};
 for (const method of METHODS) {
@@ -17,7 +17,8 @@ for (const method of METHODS) {
     reports[`${method.kind}#${index}`] = screen(example.input);
   });
 }
-for (const [key, input] of Object.entries(EXTRA_CASES)) reports[key] = screen(input);
+for (const [key, input] of Object.entries({ ...EXTRA_CASES, ...TEMPERATURE_CASES }))
+  reports[key] = screen(input);
 const target = fileURLToPath(new URL('./fixtures/example-reports.json', import.meta.url));
 writeFileSync(target, `${JSON.stringify(reports, null, 2)}\n`);
 console.log(`wrote ${Object.keys(reports).length} reports to ${target}`);

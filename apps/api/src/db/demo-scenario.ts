@@ -99,7 +99,7 @@ export const DEMO_PROJECTS: readonly DemoProject[] = [
     client: 'Larchmont Applied Materials',
     site: { altitude: 340 },
     notes:
-      'Drying cabinet VDC-3 with its door and viewport, the process chamber and the pilot reactor head. Screening before the vendor’s code calculation.',
+      'Drying cabinet VDC-3 with its door and viewport, the door of vacuum oven VO-4 (dries at 180 °C), the process chamber and the pilot reactor head. Screening before the vendor’s code calculation.',
     designer: 'dana',
     members: [
       { person: 'ravi', role: 'checker' },
@@ -196,6 +196,51 @@ export const DEMO_PROJECTS: readonly DemoProject[] = [
               loadCases: [fullVacuum],
             },
             note: 'Window thickened to 12 mm after the check.',
+            outcome: 'submitted',
+          },
+        ],
+      },
+      {
+        name: 'VO-4 vacuum drying oven door',
+        tag: 'VO-4-D1',
+        kind: 'rectangular-plate',
+        steps: [
+          {
+            inputs: {
+              kind: 'rectangular-plate',
+              width: '500 mm',
+              height: '450 mm',
+              thickness: '10 mm',
+              edge: 'simply-supported',
+              material: 'stainless-304',
+              deflectionLimit: '1.5 mm',
+              loadCases: [fullVacuum, ventBackFill],
+            },
+            note: 'Oven door on its silicone gasket: simply supported.',
+            outcome: 'returned',
+            comment:
+              'The oven dries at 180 °C: screen the door at its design temperature, not at room temperature. The vent comes in cold.',
+          },
+          {
+            inputs: {
+              kind: 'rectangular-plate',
+              width: '500 mm',
+              height: '450 mm',
+              thickness: '10 mm',
+              edge: 'simply-supported',
+              material: 'stainless-304',
+              deflectionLimit: '1.5 mm',
+              designTemperature: '180 degC',
+              loadCases: [
+                { name: 'Drying: full vacuum at 180 °C', internal: 'full vacuum' },
+                {
+                  name: 'Cold vent back-fill: +0.2 bar at 20 °C',
+                  internal: '0.2 bar(g)',
+                  temperature: '20 degC',
+                },
+              ],
+            },
+            note: 'Design temperature 180 °C; the vent case at 20 °C.',
             outcome: 'submitted',
           },
         ],

@@ -81,6 +81,28 @@ describe('demo seed (real PostgreSQL)', () => {
     expect(result.skipped.filter((s) => !s.reason.includes('no "'))).toEqual([]);
   });
 
+  it('the vacuum oven runs hot: its door’s latest revision is screened at 180 °C, the vent at 20 °C, and the first was returned at room temperature', async () => {
+    await seedDemo(t.dataSource, t.config, t.services);
+    const rows = (await t.dataSource.query(
+      `select r.number, r.status, r.report from revisions r join components c on c.id = r.component_id
+        where c.tag = 'VO-4-D1' order by r.number`,
+    )) as {
+      number: number;
+      status: string;
+      report: {
+        designTemperature?: number;
+        cases: { loadCase: { temperature?: number } }[];
+        steps: { id: string }[];
+      };
+    }[];
+    expect(rows.map((r) => r.status)).toEqual(['returned', 'submitted']);
+    expect(rows[0]!.report.designTemperature).toBeUndefined();
+    const hot = rows[1]!.report;
+    expect(hot.designTemperature).toBeCloseTo(453.15, 9);
+    expect(hot.cases.map((c) => c.loadCase.temperature)).toEqual([453.15, 293.15]);
+    expect(hot.steps.map((st) => st.id)).toContain('yield-strength-at-temperature');
+  });
+
   it('the printed passwords sign the demo people in, with their per-project roles', async () => {
     const result = await seedDemo(t.dataSource, t.config, t.services);
     const ravi = result.signIns.find((s) => s.email.startsWith('ravi'))!;

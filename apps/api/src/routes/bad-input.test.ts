@@ -165,8 +165,9 @@ describe('bad input on every route: 400 with the fields, nothing written, never 
           name: 'x',
           unitSystem: 'metric',
           site: { altitude: 'high' },
+          designTemperature: '2000 degC',
         }),
-      fields: ['number', 'site.altitude', 'unitSystem'],
+      fields: ['designTemperature', 'number', 'site.altitude', 'unitSystem'],
     },
     {
       name: 'GET /api/projects/:id',

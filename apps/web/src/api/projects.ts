@@ -32,6 +32,8 @@ export interface ProjectInput {
   /** null clears the site (sea level); on create it is left out. */
   readonly site?: SiteAsTyped | null;
   readonly designBasis?: DesignBasis;
+  /** The components' default design temperature; null clears it; left out keeps it (or none, on create). */
+  readonly designTemperature?: string | number | null;
   readonly unitSystem: UnitSystem;
   readonly notes?: string;
 }
@@ -70,8 +72,15 @@ export function useProject(id: string) {
 export function useCreateProject() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: ({ site, ...body }: ProjectInput) =>
-      apiFetch<Project>('/projects', json('POST', site ? { ...body, site } : body)),
+    mutationFn: ({ site, designTemperature, ...body }: ProjectInput) =>
+      apiFetch<Project>(
+        '/projects',
+        json('POST', {
+          ...body,
+          ...(site ? { site } : {}),
+          ...(designTemperature != null ? { designTemperature } : {}),
+        }),
+      ),
     onSuccess: (project) => {
       client.setQueryData(projectKeys.one(project.id), project);
       return client.invalidateQueries({ queryKey: projectKeys.all });

@@ -91,6 +91,9 @@ export function ProjectRoute() {
             {siteText(p.site, system)}
             {p.designBasis?.barometer === 'high' ? ', designed for a high barometer' : ''}) ·{' '}
             {p.designBasis?.allowableStress === 'en-13445-3' ? 'EN 13445-3' : 'ASME VIII-1'} basis ·{' '}
+            {p.designTemperature != null
+              ? `design temperature ${typeof p.designTemperature === 'number' ? `${p.designTemperature} K` : p.designTemperature} · `
+              : ''}
             {p.unitSystem === 'si' ? 'SI' : 'US customary'} · my role: <RoleBadge role={p.myRole} />
           </>
         }

@@ -13,17 +13,25 @@ import type {
 } from './report';
 import { outsideValidityWarnings } from './validity';
 
+/** Whether the component gives a temperature anywhere, and its own design temperature. */
+export interface ReportTemperature {
+  readonly temperatureGiven: boolean;
+  readonly designTemperature?: number;
+}
+
 /**
  * Turns what a method computed into the report: engine stamp, one case report
  * per load case with its governing check, the governing case overall, the
  * verdict, and the cautions (screening-only always first, then the
- * room-temperature caution, which every report carries too). The ambient
+ * temperature caution, which every report carries too: room-temperature where
+ * no temperature is given, design-temperature where one is). The ambient
  * pressure is the first common step of every report.
  */
 export function assembleReport(
   method: Pick<MethodDefinition<z.ZodType, ComponentKind>, 'kind'>,
   context: MethodContext,
   result: MethodResult,
+  temperature: ReportTemperature = { temperatureGiven: false },
 ): Report {
   const cases: CaseReport[] = result.cases.map((trail, index) => {
     let governing: CaseReport['governing'] = null;
@@ -74,7 +82,10 @@ export function assembleReport(
         ? 'pass'
         : 'no-checks';
 
-  const codes: CautionCode[] = ['screening-only', 'room-temperature'];
+  const codes: CautionCode[] = [
+    'screening-only',
+    temperature.temperatureGiven ? 'design-temperature' : 'room-temperature',
+  ];
   for (const code of result.cautions) if (!codes.includes(code)) codes.push(code);
 
   const report: Report = {
@@ -97,6 +108,9 @@ export function assembleReport(
       allowableStress: context.designBasis.allowableStress,
       barometer: context.designBasis.barometer,
     },
+    ...(temperature.designTemperature !== undefined
+      ? { designTemperature: temperature.designTemperature }
+      : {}),
     steps: [ambientStep(context.ambient), ...result.steps],
     cases,
     governing,
@@ -134,6 +148,7 @@ function stepsHaveNonFinite(steps: Report['steps']): boolean {
 
 function reportHasNonFinite(report: Report): boolean {
   if (bad(report.ambient.pressure)) return true;
+  if (report.designTemperature !== undefined && bad(report.designTemperature)) return true;
   if (report.ambient.altitude !== undefined && bad(report.ambient.altitude)) return true;
   if (report.ambient.standardPressure !== undefined && bad(report.ambient.standardPressure))
     return true;
@@ -142,6 +157,7 @@ function reportHasNonFinite(report: Report): boolean {
   for (const c of report.cases) {
     const lc = c.loadCase;
     if (bad(lc.internal) || bad(lc.external) || bad(lc.differential) || bad(lc.factor)) return true;
+    if (lc.temperature !== undefined && bad(lc.temperature)) return true;
     if (stepsHaveNonFinite(c.steps)) return true;
     for (const k of c.checks)
       if (bad(k.demand) || bad(k.capacity) || bad(k.utilisation)) return true;

@@ -2,7 +2,9 @@ import type { Caution } from './report';
 
 /**
  * The cautions Hoopline attaches to results (PRODUCT.md, "Cautions that must
- * appear"). `screening-only` and `room-temperature` are on every report.
+ * appear"). `screening-only` is on every report, and second to it the
+ * temperature caution: `room-temperature` where no temperature is given,
+ * `design-temperature` where one is.
  */
 export const CAUTIONS = {
   'screening-only': {
@@ -18,10 +20,43 @@ export const CAUTIONS = {
     code: 'room-temperature',
     title: 'Properties at room temperature',
     text:
-      'Every material property, allowable stress and gas property here is taken at room temperature (about ' +
-      '20 °C). Strength, elastic modulus and allowable stress fall as the temperature rises (polymers steeply, ' +
-      'acrylic and polycarbonate well below 100 °C), and some materials turn brittle in the cold. Screen again ' +
-      'with the properties at the design temperature, or the code’s allowable stress at that temperature.',
+      'No design temperature is given, so every material property, allowable stress and gas property here is ' +
+      'taken at room temperature (about 20 °C). Strength, elastic modulus and allowable stress fall as the ' +
+      'temperature rises (polymers steeply, acrylic and polycarbonate well below 100 °C), and some materials turn ' +
+      'brittle in the cold. Give the design temperature of the component, or of a load case, and the built-in ' +
+      'metals are derated to it; or screen with the code’s allowable stress at that temperature.',
+  },
+  'design-temperature': {
+    code: 'design-temperature',
+    title: 'Properties at the design temperature',
+    text:
+      'Each load case is screened at its temperature, which the trail states. The built-in metals take their ' +
+      'elastic modulus and their yield and tensile strengths, and with them the allowable stress, at that ' +
+      'temperature from the published elevated-temperature tables the trail names (ASME II-D Tables TM-1, Y-1 and ' +
+      'U for the steels, EN 1999-1-2 for aluminium); at room temperature these are their room-temperature values. ' +
+      'Not derated: Poisson’s ratio, density, the joint efficiency, a polymer’s long-term modulus, and the ' +
+      'properties of polymers, glass and custom materials without a temperature table, which stand at their ' +
+      'room-temperature values with a warning away from it. Not considered: creep and other time-dependent ' +
+      'strength (the screening is outside validity from the start of the creep range, 371 °C for carbon steel ' +
+      'and 510 °C for austenitic stainless steel, from memory), thermal stresses from temperature differences, ' +
+      'long exposure of tempered aluminium, and the ratings of seals, fasteners and window mounts at temperature.',
+  },
+  'creep-range': {
+    code: 'creep-range',
+    title: 'Creep range',
+    text:
+      'At this temperature the metal creeps: under sustained load it keeps deforming, and the code allowable ' +
+      'stress is set by its creep-rupture and creep-rate strength, well below the time-independent allowable ' +
+      'screened here. Use the code’s allowable stress at the design temperature and a creep assessment.',
+  },
+  'low-temperature': {
+    code: 'low-temperature',
+    title: 'Brittle fracture at low temperature',
+    text:
+      'Below its low-temperature limit the material can fracture without warning at stresses below those ' +
+      'screened here. This screening does not check toughness: establish the minimum design metal temperature ' +
+      'and the impact-test requirements of the applicable code (for example ASME VIII-1 UG-20, UCS-66 and UHA-51), ' +
+      'or the maker’s lower service limit for a polymer.',
   },
   'brittle-material': {
     code: 'brittle-material',

@@ -23,14 +23,20 @@ describe('every report', () => {
   it.each(
     METHODS.flatMap((m) => m.examples.map((e) => [`${m.kind}: ${e.name}`, e.input] as const)),
   )(
-    '%s: the ambient pressure is the first step, the room-temperature caution second to the screening one, the design basis stated',
+    '%s: the ambient pressure is the first step, the temperature caution second to the screening one, the design basis stated',
     (_name, input) => {
       const report = screen(input);
       expect(ambientStep(report).value).toBe(report.ambient.pressure);
+      // Room temperature where no temperature is given; the design-temperature caution where one is.
+      const raw = input as { designTemperature?: unknown; loadCases?: { temperature?: unknown }[] };
+      const hot =
+        raw.designTemperature !== undefined ||
+        (raw.loadCases ?? []).some((c) => c.temperature !== undefined);
       expect(report.cautions.slice(0, 2).map((c) => c.code)).toEqual([
         'screening-only',
-        'room-temperature',
+        hot ? 'design-temperature' : 'room-temperature',
       ]);
+      if (hot) expect(report.steps[1]!.id).toBe('design-temperature');
       expect(report.designBasis).toEqual({ allowableStress: 'asme-viii-1', barometer: 'standard' });
     },
   );

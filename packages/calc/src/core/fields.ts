@@ -123,6 +123,9 @@ function quantitySchema(dimension: Dimension, example: string, options: Quantity
 
 function describe(si: number, dimension: Dimension, unit: string): string {
   if (unit === SI_UNIT[dimension]) return `${si} ${unit}`;
+  // Temperatures are affine: °C is K less 273.15 (rounded to the hundredth the offset carries).
+  if (unit === 'degC' && dimension === 'temperature')
+    return `${Math.round((si - 273.15) * 100) / 100} °C (${si} K)`;
   // Only a few display units are used for bounds; keep this small and exact.
   const factors: Record<string, number> = { mm: 1e-3, MPa: 1e6, kPa: 1e3, GPa: 1e9 };
   const factor = factors[unit];

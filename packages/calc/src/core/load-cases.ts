@@ -10,6 +10,7 @@ import {
   type PressureSpec,
 } from './fields';
 import { HIGH_BAROMETER_PRESSURE, type DesignBasis } from './design-basis';
+import { designTemperatureField } from './temperature';
 import { formatNumber, withUnit } from './format';
 import type { PressureDirection, Report, ResolvedLoadCase, Step, ValidityWarning } from './report';
 
@@ -156,6 +157,8 @@ export const loadCaseSchema = z
       })
       .optional(),
     factor: factor(0.1, 10, 'load factor').optional(),
+    /** This case's temperature where it differs from the component's design temperature. */
+    temperature: designTemperatureField().optional(),
   })
   .strict()
   .superRefine((c, ctx) => {

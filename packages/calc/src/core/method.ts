@@ -2,6 +2,7 @@ import { z } from 'zod';
 import type { CautionCode } from './cautions';
 import { designBasisSchema, type DesignBasis } from './design-basis';
 import { loadCasesSchema, siteSchema, type Ambient } from './load-cases';
+import { designTemperatureField, type TemperatureContext } from './temperature';
 import type { ResolvedLoadCase, Step, ValidityWarning } from './report';
 import type { Trail } from './trail';
 import type { Vocabulary } from './vocabulary';
@@ -13,8 +14,17 @@ export interface MethodContext {
   readonly designBasis: DesignBasis;
   /** Warnings about the load cases as a whole (the ambient chosen), added to the report's. */
   readonly warnings: readonly ValidityWarning[];
-  /** The component's load cases, resolved to absolute pressures (empty for methods without). */
+  /**
+   * The load cases this computation screens, resolved to absolute pressures.
+   * The engine runs a method once per distinct temperature of its load cases,
+   * so these all share `temperature`; the report puts them back in order.
+   */
   readonly loadCases: readonly ResolvedLoadCase[];
+  /**
+   * The temperature of these load cases. Pass the context to
+   * `resolveMaterial(input.material, context)`, and the material comes at it.
+   */
+  readonly temperature: TemperatureContext;
 }
 
 /** What a method computes; the engine adds the engine stamp, governing case, verdict and cautions. */
@@ -84,10 +94,13 @@ export function defineMethod<Schema extends z.ZodType, const Kind extends string
 
 const nameField = z.string().trim().max(120, 'must be at most 120 characters').optional();
 
+/** The component's design temperature ("150 degC"); each load case may give its own. */
+const designTemperature = designTemperatureField().optional();
+
 /**
  * The shape every component input has: its kind, an optional name, the site
- * (for ambient pressure), the design basis (allowable-stress basis, barometer)
- * and its load cases, plus the method's own fields.
+ * (for ambient pressure), the design basis (allowable-stress basis, barometer),
+ * the design temperature and its load cases, plus the method's own fields.
  */
 export function componentShape<const Kind extends string, Shape extends z.ZodRawShape>(
   kind: Kind,
@@ -98,6 +111,7 @@ export function componentShape<const Kind extends string, Shape extends z.ZodRaw
     name: nameField,
     site: siteSchema.optional(),
     designBasis: designBasisSchema.optional(),
+    designTemperature,
     loadCases: loadCasesSchema,
     ...shape,
   };
@@ -113,6 +127,7 @@ export function componentShapeWithoutLoadCases<
     name: nameField,
     site: siteSchema.optional(),
     designBasis: designBasisSchema.optional(),
+    designTemperature,
     ...shape,
   };
 }

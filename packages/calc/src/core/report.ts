@@ -79,6 +79,12 @@ export interface ResolvedLoadCase {
   readonly factor: number;
   /** How the case was given, in words ("inside 0 Pa(a), outside ambient 101 325 Pa(a)"). */
   readonly description: string;
+  /**
+   * The temperature the case is screened at, K: its own, else the
+   * component's design temperature, else room temperature (293.15 K). Present
+   * only when a temperature is given somewhere in the component.
+   */
+  readonly temperature?: number;
 }
 
 export interface CaseReport {
@@ -127,6 +133,8 @@ export interface Report {
     readonly allowableStress: 'asme-viii-1' | 'en-13445-3';
     readonly barometer: 'standard' | 'high';
   };
+  /** The component's design temperature, K, where one is given (each case's is in its `loadCase`). */
+  readonly designTemperature?: number;
   /** Steps common to every load case (geometry, material, rigidity…). */
   readonly steps: readonly Step[];
   readonly cases: readonly CaseReport[];

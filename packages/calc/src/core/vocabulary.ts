@@ -17,7 +17,7 @@ export interface FieldWords {
 /** Field words by generic path ("loadCases.*.internal", "externalPressure.knockdown"). */
 export type Vocabulary = Readonly<Record<string, FieldWords>>;
 
-/** Words for the fields every component has: its name, the site and its load cases. */
+/** Words for the fields every component has: its name, the site, the design basis and temperature, its load cases. */
 export const COMMON_VOCABULARY: Vocabulary = {
   kind: { label: 'Kind of component' },
   name: { label: 'Name' },
@@ -38,6 +38,14 @@ export const COMMON_VOCABULARY: Vocabulary = {
     },
   },
   'loadCases.*.factor': { label: 'Load factor' },
+  'loadCases.*.temperature': {
+    label: 'Temperature of this case',
+    hint: 'Where this case differs from the design temperature, e.g. a hot bake-out or a cold start.',
+  },
+  designTemperature: {
+    label: 'Design temperature',
+    hint: 'e.g. "150 degC"; blank: room temperature. Built-in metals are derated to it; polymers and glass are checked against their limits.',
+  },
   'designBasis.allowableStress': {
     label: 'Allowable-stress basis',
     options: {

@@ -25,6 +25,15 @@ export const MATERIAL_VOCABULARY: Vocabulary = {
   'material.polymer': { label: 'Polymer (creeps under sustained load)' },
   'material.longTermModulus': { label: 'Long-term (creep) modulus' },
   'material.designFactor': { label: 'Material design factor' },
+  'material.temperatureTable.*.temperature': {
+    label: 'Temperature',
+    hint: 'Above 20 °C, rising; the material’s own values are its 20 °C row.',
+  },
+  'material.temperatureTable.*.elasticModulus': { label: 'Elastic modulus E at the temperature' },
+  'material.temperatureTable.*.strength': { label: 'Strength at the temperature' },
+  'material.temperatureTable.*.ultimateStrength': {
+    label: 'Ultimate tensile strength at the temperature',
+  },
   allowableStress: {
     label: 'Allowable stress (given)',
     hint: 'A code allowable, e.g. "138 MPa"; wins over the design factor.',

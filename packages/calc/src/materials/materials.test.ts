@@ -3,6 +3,7 @@ import { checkValue, relativeError } from '../../test/check-values';
 import { issuesOf } from '../../test/report-checks';
 import type { Report } from '../core/report';
 import { screen } from '../screen';
+import { roomTemperatureContext } from '../core/temperature';
 import {
   MATERIALS,
   codeAllowableStress,
@@ -13,6 +14,9 @@ import {
   resolveMaterial,
   type Material,
 } from './materials';
+
+/** Room temperature, none given: how a material resolves in a component without a design temperature. */
+const AT_ROOM = { temperature: roomTemperatureContext() };
 
 function builtIn(id: string): Material {
   const m = findMaterial(id);
@@ -191,7 +195,7 @@ describe('custom materials', () => {
 
   it('the default factor follows the strength basis: tensile 3.5, yield 1.5, a design value 1', () => {
     const resolve = (extra: Record<string, unknown>) =>
-      resolveMaterial(customMaterialSchema.parse({ ...base, ...extra }));
+      resolveMaterial(customMaterialSchema.parse({ ...base, ...extra }), AT_ROOM);
     expect(resolve({ strengthBasis: 'tensile' }).designFactor).toBe(3.5);
     expect(resolve({ strengthBasis: 'yield' }).designFactor).toBe(1.5);
     expect(resolve({}).designFactor).toBe(1.5);
@@ -220,14 +224,20 @@ describe('custom materials', () => {
   });
 
   it('a brittle custom material gets the brittle caution, not the polymer one; the polymer flag decides creep', () => {
-    const glass = resolveMaterial({ ...base, elasticModulus: 70e9, strength: 40e6, brittle: true });
+    const glass = resolveMaterial(
+      { ...base, elasticModulus: 70e9, strength: 40e6, brittle: true },
+      AT_ROOM,
+    );
     expect(materialCautions(glass)).toEqual(['brittle-material']);
-    const polymer = resolveMaterial({
-      ...base,
-      elasticModulus: 2e9,
-      strength: 40e6,
-      polymer: true,
-    });
+    const polymer = resolveMaterial(
+      {
+        ...base,
+        elasticModulus: 2e9,
+        strength: 40e6,
+        polymer: true,
+      },
+      AT_ROOM,
+    );
     expect(materialCautions(polymer)).toEqual(['polymer-creep']);
     // Built-ins: acrylic and polycarbonate are polymers, glass is not.
     expect(materialCautions(builtIn('cast-acrylic'))).toEqual([

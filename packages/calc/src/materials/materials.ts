@@ -5,6 +5,19 @@ import { density, factor, poissonRatio, stress } from '../core/fields';
 import { formatNumber, withUnit } from '../core/format';
 import type { ValidityWarning } from '../core/report';
 import type { Trail } from '../core/trail';
+import {
+  ROOM_TEMPERATURE,
+  celsiusText,
+  designTemperatureField,
+  type TemperatureContext,
+} from '../core/temperature';
+import {
+  atTemperature,
+  customTemperatureData,
+  type MaterialAtTemperature,
+  type RoomProperties,
+} from './at-temperature';
+import { TEMPERATURE_DATA, type MaterialTemperatureData } from './temperature-tables';
 
 /** What the strength figure of a material is. */
 export type StrengthBasis = 'yield' | 'tensile' | 'design-value';
@@ -60,6 +73,12 @@ export interface Material {
     >
   >;
   readonly notes: string;
+  /**
+   * Present when a design temperature is given: the values above (E, the
+   * strengths) are then those at it, and this says how they were derated from
+   * the room-temperature ones, or that they were not.
+   */
+  readonly atTemperature?: MaterialAtTemperature;
 }
 
 const ASME_FACTORS =
@@ -345,9 +364,55 @@ export const customMaterialSchema = z
     /** Long-term (creep) modulus of a polymer for the time and temperature of service. */
     longTermModulus: stress({ min: 1e6, max: 1.2e12 }).optional(),
     designFactor: factor(1, 50, 'design factor').optional(),
+    /**
+     * The material's properties at temperatures above 20 °C (its own values
+     * are the 20 °C row), interpolated linearly at a design temperature.
+     */
+    temperatureTable: z
+      .array(
+        z
+          .object({
+            temperature: designTemperatureField(),
+            elasticModulus: stress({ min: 1e8, max: 1.2e12 }),
+            strength: stress({ positive: true, max: 1e10 }),
+            ultimateStrength: stress({ positive: true, max: 1e10 }).optional(),
+          })
+          .strict(),
+        { error: 'must be a list of rows { temperature, elasticModulus, strength }' },
+      )
+      .min(1, 'give at least one row')
+      .max(20, 'at most 20 rows')
+      .optional(),
   })
   .strict()
   .superRefine((m, ctx) => {
+    m.temperatureTable?.forEach((row, i) => {
+      const before = i === 0 ? ROOM_TEMPERATURE : m.temperatureTable![i - 1]!.temperature;
+      if (row.temperature <= before) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['temperatureTable', i, 'temperature'],
+          message:
+            i === 0
+              ? 'must be above 20 °C: the material’s own properties are its 20 °C row'
+              : `must be above the row before (${celsiusText(before)})`,
+        });
+      }
+      if (m.ultimateStrength !== undefined && row.ultimateStrength === undefined) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['temperatureTable', i, 'ultimateStrength'],
+          message: 'is required: the material gives an ultimate strength',
+        });
+      }
+      if (m.ultimateStrength === undefined && row.ultimateStrength !== undefined) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['temperatureTable', i, 'ultimateStrength'],
+          message: 'applies only when the material gives its ultimateStrength',
+        });
+      }
+    });
     if (m.longTermModulus !== undefined) {
       if (m.polymer !== true) {
         ctx.addIssue({
@@ -432,8 +497,50 @@ function customDesignFactor(
       };
 }
 
-/** A built-in material by id, or the custom one completed with defaults. */
-export function resolveMaterial(input: z.output<typeof materialSchema>): Material {
+/**
+ * The material of a component at the temperature of the load cases being
+ * computed: a built-in material by id, or the custom one completed with
+ * defaults, and, where a design temperature is given, with E and the
+ * strengths at it (the built-in metals from their published tables, a custom
+ * material from its own temperature table) and its temperature limits
+ * checked (the warnings go to the report through the context). Every method
+ * resolves its materials here, with its context, so that each picks up the
+ * design temperature.
+ */
+export function resolveMaterial(
+  input: z.output<typeof materialSchema>,
+  context: { readonly temperature: TemperatureContext },
+): Material {
+  const room = roomTemperatureMaterial(input);
+  if (!context.temperature.given) return room;
+  const data: MaterialTemperatureData | undefined =
+    typeof input === 'string'
+      ? TEMPERATURE_DATA[input]
+      : input.temperatureTable
+        ? customTemperatureData(input.name, roomPropertiesOf(room), input.temperatureTable)
+        : undefined;
+  const found = atTemperature(roomPropertiesOf(room), data, context.temperature);
+  return {
+    ...room,
+    elasticModulus: found.elasticModulus,
+    strength: found.strength,
+    ultimateStrength: found.ultimateStrength,
+    atTemperature: found.at,
+  };
+}
+
+function roomPropertiesOf(material: Material): RoomProperties {
+  return {
+    name: material.name,
+    elasticModulus: material.elasticModulus,
+    strength: material.strength,
+    ultimateStrength: material.ultimateStrength,
+    strengthSymbol: strengthSymbol(material),
+  };
+}
+
+/** A built-in material by id, or the custom one completed with defaults, at room temperature. */
+function roomTemperatureMaterial(input: z.output<typeof materialSchema>): Material {
   if (typeof input === 'string') {
     const found = findMaterial(input);
     if (!found) throw new Error(`engine bug: material ${input} passed validation but is unknown`);
@@ -513,11 +620,28 @@ export function isCodeMaterial(material: Material): boolean {
   return !material.brittle && !material.polymer && material.strengthBasis !== 'design-value';
 }
 
-/** Specified minimum yield S_Y and tensile strength S_T of a code material, where known. */
-function codeStrengths(material: Material): { yield: number | null; tensile: number | null } {
+/**
+ * Specified minimum yield S_Y and tensile strength S_T of a code material at
+ * room temperature, where known, and at the design temperature where they
+ * were derated to one (null otherwise: the room value stands).
+ */
+function codeStrengths(material: Material): {
+  yield: number | null;
+  tensile: number | null;
+  yieldAt: number | null;
+  tensileAt: number | null;
+} {
+  const at = material.atTemperature;
+  const room = at?.roomTemperature ?? material;
+  const derated = (property: 'strength' | 'ultimateStrength') =>
+    at?.derated.find((d) => d.property === property)?.value ?? null;
+  const yieldBasis = material.strengthBasis === 'yield';
   return {
-    yield: material.strengthBasis === 'yield' ? material.strength : null,
-    tensile: material.strengthBasis === 'tensile' ? material.strength : material.ultimateStrength,
+    yield: yieldBasis ? room.strength : null,
+    tensile: material.strengthBasis === 'tensile' ? room.strength : room.ultimateStrength,
+    yieldAt: yieldBasis ? derated('strength') : null,
+    tensileAt:
+      material.strengthBasis === 'tensile' ? derated('strength') : derated('ultimateStrength'),
   };
 }
 
@@ -528,28 +652,46 @@ const BASIS_NAMES: Record<AllowableBasis, string> = {
 
 const SOURCE_ASME_BASIS =
   'ASME BPVC Section II Part D, Mandatory Appendix 1, 1-100: the basis of the Section VIII Division 1 allowable stresses, at room temperature the lower of S_T/3.5 and 2/3·S_Y on the specified minimum tensile and yield strengths (from memory)';
+const SOURCE_ASME_BASIS_AT_TEMPERATURE =
+  'ASME BPVC Section II Part D, Mandatory Appendix 1, 1-100 (Table 1-100 criteria below the creep range): the lowest of S_T/3.5, 1.1·S_T(T)/3.5, 2/3·S_Y and 2/3·S_Y(T), on the specified minimum strengths at room temperature and the strengths at the design temperature (from memory)';
 const SOURCE_EN_BASIS =
   'EN 13445-3 clause 6.2, nominal design stress f of steels other than austenitic for normal operating load cases: f = min(R_p0.2/1.5, R_m/2.4), here R_p0.2 = S_Y and R_m = S_T (from memory)';
+const SOURCE_EN_BASIS_AT_TEMPERATURE =
+  'EN 13445-3 clause 6.2, nominal design stress f of steels other than austenitic for normal operating load cases: f = min(R_p0.2/t/1.5, R_m/20/2.4), the 0.2 % proof strength at the design temperature t and the tensile strength at 20 °C, here R_p0.2/t = S_Y(T) and R_m/20 = S_T (from memory)';
+
+/** The terms of a code basis the allowable is the least of. */
+export type BasisTermName = 'tensile' | 'yield' | 'tensile-at-temperature' | 'yield-at-temperature';
 
 interface BasisTerm {
-  readonly name: 'tensile' | 'yield';
+  readonly name: BasisTermName;
   readonly text: string;
   readonly substituted: string;
   readonly value: number;
 }
 
+/** The words of a term's name in a label ("the yield term at temperature governs"). */
+function termWords(name: BasisTermName): string {
+  return name === 'tensile-at-temperature'
+    ? 'tensile term at temperature'
+    : name === 'yield-at-temperature'
+      ? 'yield term at temperature'
+      : `${name} term`;
+}
+
 /**
  * The allowable stress of a code material on a code's basis: ASME VIII-1,
- * S = min(S_T/3.5, 2/3·S_Y); EN 13445-3, f = min(S_Y/1.5, S_T/2.4). Each
- * term that can be formed is, and the lowest governs. Null for a material the
- * bases do not cover.
+ * S = min(S_T/3.5, 2/3·S_Y); EN 13445-3, f = min(S_Y/1.5, S_T/2.4). At a
+ * design temperature the strengths there join in: ASME II-D Appendix 1's
+ * 1.1·S_T(T)/3.5 and 2/3·S_Y(T), EN 13445-3's R_p0.2/t/1.5 in place of the
+ * yield term (its tensile term stays at 20 °C). Each term that can be formed
+ * is, and the lowest governs. Null for a material the bases do not cover.
  */
 export function codeAllowableStress(
   material: Material,
   basis: AllowableBasis,
 ): { value: number; terms: readonly BasisTerm[]; governing: BasisTerm } | null {
   if (!isCodeMaterial(material)) return null;
-  const { yield: Y, tensile: T } = codeStrengths(material);
+  const { yield: Y, tensile: T, yieldAt: YT, tensileAt: TT } = codeStrengths(material);
   const terms: BasisTerm[] = [];
   if (basis === 'asme-viii-1') {
     if (T !== null)
@@ -559,6 +701,13 @@ export function codeAllowableStress(
         substituted: `${withUnit(T, 'Pa')}/3.5`,
         value: T / 3.5,
       });
+    if (TT !== null)
+      terms.push({
+        name: 'tensile-at-temperature',
+        text: '1.1·S_T(T)/3.5',
+        substituted: `1.1·${withUnit(TT, 'Pa')}/3.5`,
+        value: (1.1 * TT) / 3.5,
+      });
     if (Y !== null)
       terms.push({
         name: 'yield',
@@ -566,8 +715,22 @@ export function codeAllowableStress(
         substituted: `2/3·${withUnit(Y, 'Pa')}`,
         value: (2 * Y) / 3,
       });
+    if (YT !== null)
+      terms.push({
+        name: 'yield-at-temperature',
+        text: '2/3·S_Y(T)',
+        substituted: `2/3·${withUnit(YT, 'Pa')}`,
+        value: (2 * YT) / 3,
+      });
   } else {
-    if (Y !== null)
+    if (YT !== null)
+      terms.push({
+        name: 'yield-at-temperature',
+        text: 'S_Y(T)/1.5',
+        substituted: `${withUnit(YT, 'Pa')}/1.5`,
+        value: YT / 1.5,
+      });
+    else if (Y !== null)
       terms.push({
         name: 'yield',
         text: 'S_Y/1.5',
@@ -593,7 +756,7 @@ export interface AllowableContext {
   readonly warnings: ValidityWarning[];
 }
 
-function strengthSymbol(material: Material): string {
+function strengthSymbol(material: Material): 'S_Y' | 'S_T' | 'S_d' {
   return material.strengthBasis === 'yield'
     ? 'S_Y'
     : material.strengthBasis === 'tensile'
@@ -613,43 +776,88 @@ function strengthWords(material: Material): string {
 /**
  * The material's properties as trail steps, each with its source and whether
  * it is a specified minimum or a typical value: E and ν, then the strengths
- * (yield S_Y and tensile S_T, or a design strength S_d). Written once, among
- * the common steps, by every method that takes a material.
+ * (yield S_Y and tensile S_T, or a design strength S_d) at room temperature;
+ * and where a design temperature is given, each derated property at it
+ * (E(T), S_Y(T), S_T(T), with the table read and its source), or a step
+ * saying the properties were not derated and why. Written once, among the
+ * common steps, by every method that takes a material.
  */
 export function materialSteps(trail: Trail, material: Material): void {
+  const at = material.atTemperature;
+  const room = at?.roomTemperature ?? material;
+  const atRoom = at ? ' at room temperature' : '';
   trail.step({
     id: 'elastic-modulus',
-    label: `Young’s modulus and Poisson’s ratio (${material.valueBasis.elasticModulus})`,
+    label: `Young’s modulus and Poisson’s ratio${atRoom} (${material.valueBasis.elasticModulus})`,
     expression: 'E, ν',
-    substituted: `E = ${withUnit(material.elasticModulus, 'Pa')}, ν = ${formatNumber(material.poissonRatio)}`,
-    value: material.elasticModulus,
+    substituted: `E = ${withUnit(room.elasticModulus, 'Pa')}, ν = ${formatNumber(material.poissonRatio)}`,
+    value: room.elasticModulus,
     unit: 'Pa',
     source: `${material.name}: E ${material.sources.elasticModulus}; ν ${material.sources.poissonRatio}`,
   });
   const symbol = strengthSymbol(material);
+  const strengthId =
+    material.strengthBasis === 'yield'
+      ? 'yield-strength'
+      : material.strengthBasis === 'tensile'
+        ? 'tensile-strength'
+        : 'design-strength';
   trail.step({
-    id:
-      material.strengthBasis === 'yield'
-        ? 'yield-strength'
-        : material.strengthBasis === 'tensile'
-          ? 'tensile-strength'
-          : 'design-strength',
-    label: `${capitalise(strengthWords(material))} ${symbol} (${material.valueBasis.strength})`,
+    id: strengthId,
+    label: `${capitalise(strengthWords(material))} ${symbol}${atRoom} (${material.valueBasis.strength})`,
     expression: symbol,
-    substituted: `${symbol} = ${withUnit(material.strength, 'Pa')}`,
-    value: material.strength,
+    substituted: `${symbol} = ${withUnit(room.strength, 'Pa')}`,
+    value: room.strength,
     unit: 'Pa',
     source: `${material.name}: ${material.sources.strength}`,
   });
-  if (material.strengthBasis === 'yield' && material.ultimateStrength !== null) {
+  if (material.strengthBasis === 'yield' && room.ultimateStrength !== null) {
     trail.step({
       id: 'tensile-strength',
-      label: `${material.brittle || material.polymer ? 'Short-term tensile' : 'Tensile'} strength S_T (${material.valueBasis.ultimateStrength ?? 'typical'})`,
+      label: `${material.brittle || material.polymer ? 'Short-term tensile' : 'Tensile'} strength S_T${atRoom} (${material.valueBasis.ultimateStrength ?? 'typical'})`,
       expression: 'S_T',
-      substituted: `S_T = ${withUnit(material.ultimateStrength, 'Pa')}`,
-      value: material.ultimateStrength,
+      substituted: `S_T = ${withUnit(room.ultimateStrength, 'Pa')}`,
+      value: room.ultimateStrength,
       unit: 'Pa',
       source: `${material.name}: ${material.sources.ultimateStrength}`,
+    });
+  }
+  if (!at) return;
+  const where = celsiusText(at.temperature);
+  if (at.derated.length === 0) {
+    trail.step({
+      id: 'properties-at-temperature',
+      label: `Properties at the design temperature (${where}): not derated`,
+      expression: 'E(T) = E, strength(T) = strength',
+      substituted: `${material.name} at ${where}: ${at.notDerated}`,
+      value: null,
+      unit: '1',
+      source: `${material.name}: ${at.notDerated}`,
+    });
+    return;
+  }
+  for (const d of at.derated) {
+    // As at room temperature: a tensile strength beside another strength basis is not shown.
+    if (d.property === 'ultimateStrength' && material.strengthBasis !== 'yield') continue;
+    const words =
+      d.property === 'elasticModulus'
+        ? 'Young’s modulus'
+        : d.property === 'ultimateStrength'
+          ? 'Tensile strength'
+          : capitalise(strengthWords(material));
+    trail.step({
+      id:
+        d.property === 'elasticModulus'
+          ? 'elastic-modulus-at-temperature'
+          : d.property === 'ultimateStrength'
+            ? 'tensile-strength-at-temperature'
+            : `${strengthId}-at-temperature`,
+      label: `${words} at the design temperature (${where}), ${d.symbol}`,
+      expression: d.expression,
+      substituted: d.substituted,
+      value: d.value,
+      unit: 'Pa',
+      source: d.property === 'elasticModulus' ? `${d.source}; ${at.notDerated}` : d.source,
     });
   }
 }
@@ -718,7 +926,9 @@ export function allowableStress(
       substituted: `S = ${withUnit(overrides.allowableStress, 'Pa')}`,
       value: overrides.allowableStress,
       unit: 'Pa',
-      source: 'entered by the user',
+      source: material.atTemperature
+        ? `entered by the user: taken as the allowable at the design temperature (${celsiusText(material.atTemperature.temperature)}) as it stands`
+        : 'entered by the user',
     });
   }
 
@@ -728,7 +938,8 @@ export function allowableStress(
       value: material.designFactor,
       source: material.sources.designFactor,
     };
-    const symbol = strengthSymbol(material);
+    const deratedStrength = material.atTemperature?.derated.some((d) => d.property === 'strength');
+    const symbol = `${strengthSymbol(material)}${deratedStrength ? '(T)' : ''}`;
     const value = material.strength / n.value;
     if (factorOnStrength)
       aboveCode(value, `design factor entered (n_s = ${formatNumber(n.value)})`);
@@ -746,7 +957,7 @@ export function allowableStress(
     }
     return trail.step({
       id: 'allowable-stress',
-      label: `Allowable stress from the ${strengthWords(material)} and a design factor`,
+      label: `Allowable stress from the ${strengthWords(material)}${deratedStrength ? ' at the design temperature' : ''} and a design factor`,
       expression: `S = ${symbol}/n_s`,
       substituted: `S = ${withUnit(material.strength, 'Pa')}/${formatNumber(n.value)}`,
       value,
@@ -760,43 +971,57 @@ export function allowableStress(
   }
 
   const { terms, governing } = code;
-  if (terms.length < 2) {
-    const missing = governing.name === 'yield' ? 'tensile strength' : 'yield strength';
+  const strengths = codeStrengths(material);
+  if (strengths.yield === null || strengths.tensile === null) {
+    const lacksTensile = strengths.tensile === null;
+    const missing = lacksTensile ? 'tensile strength' : 'yield strength';
+    const taken = lacksTensile ? 'yield' : 'tensile';
     context.warnings.push({
       code: 'allowable-term-missing',
       severity: 'caution',
-      message: `${material.name} has no ${missing}: the ${basisName} allowable takes the ${governing.name} term alone (${governing.text}); the other term may be lower${
-        governing.name === 'yield'
+      message: `${material.name} has no ${missing}: the ${basisName} allowable takes the ${taken} term alone (${terms.map((t) => t.text).join(', ')}); the other term may be lower${
+        lacksTensile
           ? ' (for carbon steels the tensile term usually governs): give the ultimate strength'
           : ': give the yield strength'
       }`,
     });
   }
+  const hot =
+    material.atTemperature !== undefined && (strengths.yieldAt ?? strengths.tensileAt) !== null;
   const steel = material.id !== 'aluminium-6061-t6' && material.id !== 'aluminium-6061-t6-welded';
   const basisSource =
     basis === 'asme-viii-1'
-      ? SOURCE_ASME_BASIS
-      : `${SOURCE_EN_BASIS}${
+      ? hot
+        ? `${SOURCE_ASME_BASIS_AT_TEMPERATURE}${
+            material.id.startsWith('stainless')
+              ? '; the higher allowable II-D permits austenitic steels where slight deformation is acceptable (0.9·S_Y(T)) is not taken: conservative'
+              : ''
+          }`
+        : SOURCE_ASME_BASIS
+      : `${hot ? SOURCE_EN_BASIS_AT_TEMPERATURE : SOURCE_EN_BASIS}${
           material.id.startsWith('stainless')
             ? '; austenitic steels with an elongation of at least 30 % may use a higher f (clause 6.4, from memory), not taken here: conservative'
             : steel
               ? ''
               : '; EN 13445 covers steels: applied to this alloy as a screening basis only'
         }`;
+  const at = material.atTemperature;
+  const where = hot && at ? ` at ${celsiusText(at.temperature)}` : '';
+  const several = terms.length > 1;
   return trail.step({
     id: 'allowable-stress',
-    label: `Allowable stress S, ${basisName} basis${terms.length > 1 ? `: the ${governing.name} term governs` : `, ${governing.name} term only`}`,
-    expression:
-      terms.length > 1
-        ? `S = min(${terms.map((t) => t.text).join(', ')})`
-        : `S = ${governing.text}`,
-    substituted:
-      terms.length > 1
-        ? `S = min(${terms.map((t) => t.substituted).join(', ')}) = min(${terms.map((t) => withUnit(t.value, 'Pa')).join(', ')})`
-        : `S = ${governing.substituted}`,
+    label: `Allowable stress S${where}, ${basisName} basis${several ? `: the ${termWords(governing.name)} governs` : `, ${termWords(governing.name)} only`}`,
+    expression: several
+      ? `S = min(${terms.map((t) => t.text).join(', ')})`
+      : `S = ${governing.text}`,
+    substituted: several
+      ? `S = min(${terms.map((t) => t.substituted).join(', ')}) = min(${terms.map((t) => withUnit(t.value, 'Pa')).join(', ')})`
+      : `S = ${governing.substituted}`,
     value: code.value,
     unit: 'Pa',
-    source: `${basisSource}; ${basisChoice}; S_Y and S_T: ${material.name}, specified minimums (above)`,
+    source: `${basisSource}; ${basisChoice}; S_Y and S_T: ${material.name}, specified minimums (above)${
+      hot ? '; S_Y(T) and S_T(T): at the design temperature (above)' : ''
+    }`,
   });
 }
 

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import {
   customMaterialSchema,
   designBasisSchema,
+  designTemperatureField,
   siteSchema,
   type SiteInput,
 } from '@hoopline/calc';
@@ -25,6 +26,22 @@ const site = z
 /** The project's design basis is the calc's own: allowable-stress basis and barometer. */
 const designBasis = designBasisSchema;
 
+/**
+ * The project's default design temperature: checked by the calc's own field
+ * ("150 degC", "302 degF", or a number in K), kept as typed.
+ */
+const checkedTemperature = designTemperatureField();
+const designTemperature = z
+  .union([z.string(), z.number()], {
+    error: 'must be a temperature such as "150 degC", or a number in K',
+  })
+  .superRefine((raw, ctx) => {
+    const parsed = checkedTemperature.safeParse(raw);
+    if (parsed.success) return;
+    for (const issue of parsed.error.issues)
+      ctx.addIssue({ code: 'custom', message: issue.message });
+  });
+
 export const listProjectsQuery = z
   .object({
     ...paginationShape,
@@ -45,6 +62,7 @@ export const createProjectBody = z
     client: text(0, 200).optional(),
     site: site.optional(),
     designBasis: designBasis.optional(),
+    designTemperature: designTemperature.optional(),
     unitSystem,
     notes: text(0, 5000).optional(),
   })
@@ -57,6 +75,7 @@ export const updateProjectBody = z
     client: text(0, 200).optional(),
     site: site.nullable().optional(),
     designBasis: designBasis.optional(),
+    designTemperature: designTemperature.nullable().optional(),
     unitSystem: unitSystem.optional(),
     notes: text(0, 5000).optional(),
     version,

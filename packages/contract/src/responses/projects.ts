@@ -26,6 +26,8 @@ export const project = z
         barometer: z.enum(['standard', 'high']),
       })
       .strict(),
+    /** The components' default design temperature, as typed ("150 degC"); null: none (room temperature). */
+    designTemperature: quantityGiven.nullable(),
     unitSystem,
     notes: z.string(),
     version: z.number().int(),

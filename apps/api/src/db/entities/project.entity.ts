@@ -31,6 +31,12 @@ export class ProjectEntity {
   /** Barometer every component is designed for (the calc's designBasis.barometer). */
   @Column('text', { name: 'design_barometer', default: 'standard' })
   designBarometer: Barometer;
+  /**
+   * The default design temperature of its components, as typed ("150 degC"),
+   * written into inputs that give none (the calc's designTemperature); null: none.
+   */
+  @Column('jsonb', { name: 'design_temperature', nullable: true })
+  designTemperature: string | number | null;
   @Column('text', { name: 'unit_system' }) unitSystem: UnitSystem;
   @Column('text') notes: string;
   @Column('integer') version: number;

@@ -10,6 +10,7 @@ import { ListIndexes1765100002000 } from './1765100002000-list-indexes';
 import { SessionNotifications1765100003000 } from './1765100003000-session-notifications';
 import { ProjectStarters1765200000000 } from './1765200000000-project-starters';
 import { ProjectDesignBasis1765300000000 } from './1765300000000-project-design-basis';
+import { ProjectDesignTemperature1765400000000 } from './1765400000000-project-design-temperature';
 
 /** Every migration class, oldest first. Add new ones at the end. */
 export const migrations = [
@@ -25,4 +26,5 @@ export const migrations = [
   SessionNotifications1765100003000,
   ProjectStarters1765200000000,
   ProjectDesignBasis1765300000000,
+  ProjectDesignTemperature1765400000000,
 ];

@@ -163,6 +163,7 @@ export class ComponentsService {
         input.inputs,
         projectSite(standing.project),
         projectDesignBasis(standing.project),
+        standing.project.designTemperature,
       );
       const now = new Date();
       const component: ComponentEntity = Object.assign(new ComponentEntity(), {

@@ -55,6 +55,8 @@ export interface ProjectInput {
   readonly client?: string | undefined;
   readonly site?: SiteGiven | undefined;
   readonly designBasis?: DesignBasisInput | undefined;
+  /** Checked by the calc's design temperature field; kept as typed. */
+  readonly designTemperature?: string | number | undefined;
   readonly unitSystem: UnitSystem;
   readonly notes?: string | undefined;
 }
@@ -66,6 +68,8 @@ export interface ProjectPatch {
   readonly site?: SiteGiven | null | undefined;
   /** The keys given change; a key left out keeps its value. */
   readonly designBasis?: DesignBasisInput | undefined;
+  /** A temperature sets the default, null clears it, left out keeps it. */
+  readonly designTemperature?: string | number | null | undefined;
   readonly unitSystem?: UnitSystem | undefined;
   readonly notes?: string | undefined;
   readonly version: number;
@@ -119,6 +123,7 @@ export function projectView(p: ProjectEntity, myRole: Role | null): Project {
       p.siteAmbientPressure ??
       (p.siteAltitude !== null ? ambientPressureAtAltitude(p.siteAltitude) : STANDARD_ATMOSPHERE),
     designBasis: projectDesignBasis(p),
+    designTemperature: p.designTemperature,
     unitSystem: p.unitSystem,
     notes: p.notes,
     version: p.version,
@@ -192,6 +197,7 @@ export class ProjectsService {
           ...siteColumns(input.site),
           allowableBasis: input.designBasis?.allowableStress ?? 'asme-viii-1',
           designBarometer: input.designBasis?.barometer ?? 'standard',
+          designTemperature: input.designTemperature ?? null,
           unitSystem: input.unitSystem,
           notes: input.notes ?? '',
           version: 1,
@@ -253,6 +259,8 @@ export class ProjectsService {
           changes.allowableBasis = patch.designBasis.allowableStress;
         if (patch.designBasis?.barometer !== undefined)
           changes.designBarometer = patch.designBasis.barometer;
+        if (patch.designTemperature !== undefined)
+          changes.designTemperature = patch.designTemperature;
         await manager.update(ProjectEntity, { id: projectId }, changes);
         const after = await manager.findOneByOrFail(ProjectEntity, { id: projectId });
         await recordAudit(manager, {
@@ -449,6 +457,7 @@ function projectSummary(p: ProjectEntity) {
     client: p.client,
     site: projectSite(p),
     designBasis: projectDesignBasis(p),
+    designTemperature: p.designTemperature,
     unitSystem: p.unitSystem,
     version: p.version,
   };

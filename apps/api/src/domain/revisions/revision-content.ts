@@ -57,9 +57,10 @@ export function inputIssues(error: CalcInputError, prefix = 'inputs') {
 
 /**
  * Recomputes on the server from the inputs alone (a client's numbers are
- * never taken): fills the site and the design basis from the project when
- * the inputs carry none (the basis only where the project's differs from the
- * engine's defaults, so a default project's inputs stay as typed), parses
+ * never taken): fills the site, the design basis and the design temperature
+ * from the project when the inputs carry none (the basis only where the
+ * project's differs from the engine's defaults, the temperature only where
+ * the project has one, so a default project's inputs stay as typed), parses
  * with the calc (its issues become 400s under `inputs.`), computes the
  * report and stamps the engine version.
  */
@@ -67,6 +68,7 @@ export function computeContent(
   rawInputs: unknown,
   projectSite: SiteAsTyped,
   projectBasis?: DesignBasisValue,
+  projectDesignTemperature?: string | number | null,
 ): RevisionContent {
   if (rawInputs === null || typeof rawInputs !== 'object' || Array.isArray(rawInputs)) {
     throw validationFailed([
@@ -83,6 +85,13 @@ export function computeContent(
       chosen['allowableStress'] = projectBasis.allowableStress;
     if (projectBasis.barometer !== 'standard') chosen['barometer'] = projectBasis.barometer;
     if (Object.keys(chosen).length > 0) inputs['designBasis'] = chosen;
+  }
+  if (
+    inputs['designTemperature'] === undefined &&
+    projectDesignTemperature !== undefined &&
+    projectDesignTemperature !== null
+  ) {
+    inputs['designTemperature'] = projectDesignTemperature;
   }
   let report: Report;
   try {

@@ -152,6 +152,7 @@ export class RevisionsService {
         input.inputs,
         projectSite(standing.project),
         projectDesignBasis(standing.project),
+        standing.project.designTemperature,
       );
       if (content.inputs['kind'] !== component.kind) {
         throw validationFailed([

@@ -34,14 +34,20 @@ export function SpecField({
   editor,
   issues,
   system,
+  blankMeans,
 }: {
   spec: Exclude<FieldSpec, { type: 'material' } | { type: 'load-cases' }>;
   editor: EditorApi;
   issues: ReadonlyMap<string, string>;
   system: UnitSystem;
+  /** What the field stands for when left blank here (the project's default), said in its hint. */
+  blankMeans?: string;
 }) {
   const raw = editor.state.raw;
   const error = issues.get(spec.path);
+  const hint = blankMeans
+    ? `${spec.hint ? `${spec.hint} ` : ''}Blank in this project: ${blankMeans}.`
+    : spec.hint;
   switch (spec.type) {
     case 'quantity':
       return (
@@ -53,7 +59,7 @@ export function SpecField({
           value={quantityText(getIn(raw, spec.path), spec.kind)}
           onValueChange={(text) => editor.set(spec.path, text)}
           error={error}
-          {...(spec.hint ? { hint: spec.hint } : {})}
+          {...(hint ? { hint } : {})}
         />
       );
     case 'number':
@@ -67,7 +73,7 @@ export function SpecField({
           value={numberText(editor, spec.path)}
           onChange={(event) => editor.setNumber(spec.path, event.target.value)}
           error={error}
-          hint={spec.hint}
+          hint={hint}
         />
       );
     case 'select': {
@@ -78,7 +84,7 @@ export function SpecField({
           label={spec.label}
           value={typeof current === 'string' ? current : ''}
           error={error}
-          hint={spec.hint}
+          hint={hint}
           onChange={(event) => {
             const value = event.target.value;
             const reset = spec.resets?.[value];

@@ -106,6 +106,7 @@ export function InputsForm({
   system,
   projectId,
   canSaveMaterials,
+  defaults = {},
 }: {
   kind: ComponentKind;
   editor: EditorApi;
@@ -113,6 +114,8 @@ export function InputsForm({
   system: UnitSystem;
   projectId: string;
   canSaveMaterials: boolean;
+  /** What a blank field stands for, by path (the project's default design temperature). */
+  defaults?: Readonly<Record<string, string>>;
 }) {
   const form = KIND_FORMS[kind];
   if (!form) return <JsonInputs editor={editor} issues={issues} />;
@@ -159,7 +162,16 @@ export function InputsForm({
                     canSaveToProject={canSaveMaterials}
                   />
                 );
-              return <SpecField spec={field} editor={editor} issues={byPath} system={system} />;
+              const blank = defaults[field.path];
+              return (
+                <SpecField
+                  spec={field}
+                  editor={editor}
+                  issues={byPath}
+                  system={system}
+                  {...(blank ? { blankMeans: blank } : {})}
+                />
+              );
             }}
           />
         ))}

@@ -1,4 +1,4 @@
-import { screen } from '@hoopline/calc';
+import { COMMON_VOCABULARY, screen } from '@hoopline/calc';
 import { describe, expect, it } from 'vitest';
 import { KIND_ORDER } from '../../lib/kinds';
 import { KIND_FORMS, engineHasKind, fieldSpec, sectionFields } from './kind-forms';
@@ -44,6 +44,24 @@ describe('kind forms', () => {
       }
     });
   }
+
+  it('every kind’s form has the design temperature, with the engine’s label, hint and quantity kind', () => {
+    for (const kind of KIND_ORDER) {
+      const form = KIND_FORMS[kind]!;
+      const paths = form.sections.flatMap((s) =>
+        s.fields.map((f) => (typeof f === 'string' ? f : 'path' in f ? f.path : f.type)),
+      );
+      expect(paths, kind).toContain('designTemperature');
+      expect(fieldSpec(kind, 'designTemperature'), kind).toEqual({
+        type: 'quantity',
+        path: 'designTemperature',
+        label: 'Design temperature (optional)',
+        kind: 'temperature',
+        hint: COMMON_VOCABULARY['designTemperature']!.hint,
+        optional: true,
+      });
+    }
+  });
 
   it('takes labels, kinds, options and hints from the engine, not from the layout', () => {
     // Words from the cylinder's vocabulary (packages/calc/src/methods/cylindrical-shell/vocabulary.ts).

@@ -128,13 +128,18 @@ export function sectionFields(kind: ComponentKind, section: FormSection): FieldS
 const len = (si: string, us: string) => (system: UnitSystem) => (system === 'si' ? si : us);
 
 const strength = ['material', 'allowableStress', 'designFactor'];
+/**
+ * The design temperature, a field every component has (the engine derates the
+ * built-in metals to it; each load case may give its own in the load-case editor).
+ */
+const TEMPERATURE = 'designTemperature';
 const externalPressure = ['externalPressure.knockdown', 'externalPressure.designFactor'];
 
 const circularPlate: KindForm = {
   kind: 'circular-plate',
   sections: [
     { title: 'Geometry', fields: ['diameter', 'thickness', 'edge', 'corrosionAllowance'] },
-    { title: 'Material and limits', fields: [...strength, 'deflectionLimit'] },
+    { title: 'Material and limits', fields: [...strength, TEMPERATURE, 'deflectionLimit'] },
     { title: 'Load cases', fields: [LOAD_CASES] },
   ],
   template: (system) => ({
@@ -170,7 +175,10 @@ const flatAreaLoad: KindForm = {
       when: (raw) => (raw['outline'] as Raw | undefined)?.['shape'] === 'rectangle',
       fields: ['outline.sealWidth', 'outline.sealHeight'],
     },
-    { title: 'Closure and fasteners', fields: ['seating', 'fastenerCount', 'fastenerCapacity'] },
+    {
+      title: 'Closure and fasteners',
+      fields: ['seating', 'fastenerCount', 'fastenerCapacity', TEMPERATURE],
+    },
     { title: 'Load cases', fields: [LOAD_CASES] },
   ],
   template: (system) => ({
@@ -190,7 +198,7 @@ const rectangularPlate: KindForm = {
   kind: 'rectangular-plate',
   sections: [
     { title: 'Geometry', fields: ['width', 'height', 'thickness', 'edge', 'corrosionAllowance'] },
-    { title: 'Material and limits', fields: [...strength, 'deflectionLimit'] },
+    { title: 'Material and limits', fields: [...strength, TEMPERATURE, 'deflectionLimit'] },
     { title: 'Load cases', fields: [LOAD_CASES] },
   ],
   template: (system) => ({
@@ -211,7 +219,7 @@ const cylindricalShell: KindForm = {
       title: 'Geometry',
       fields: ['diameter', 'diameterBasis', 'thickness', 'length', 'ends', 'corrosionAllowance'],
     },
-    { title: 'Material', fields: [...strength, 'jointEfficiency'] },
+    { title: 'Material', fields: [...strength, TEMPERATURE, 'jointEfficiency'] },
     { title: 'External pressure', fields: [...externalPressure, 'ringSpacingFor'] },
     { title: 'Load cases', fields: [LOAD_CASES] },
   ],
@@ -242,7 +250,7 @@ const sphereOrHead: KindForm = {
       when: (raw) => raw['shape'] === 'torispherical',
       fields: ['crownRadius', 'knuckleRadius'],
     },
-    { title: 'Material', fields: [...strength, 'jointEfficiency'] },
+    { title: 'Material', fields: [...strength, TEMPERATURE, 'jointEfficiency'] },
     { title: 'External pressure', fields: externalPressure },
     { title: 'Load cases', fields: [LOAD_CASES] },
   ],
@@ -263,7 +271,10 @@ const sphereOrHead: KindForm = {
 const storedEnergy: KindForm = {
   kind: 'stored-energy',
   sections: [
-    { title: 'Vessel and gas', fields: ['volume', 'gas', 'heatCapacityRatio', 'energyLimit'] },
+    {
+      title: 'Vessel and gas',
+      fields: ['volume', 'gas', 'heatCapacityRatio', 'energyLimit', TEMPERATURE],
+    },
     { title: 'Load cases', fields: [LOAD_CASES] },
   ],
   template: (system) => ({
@@ -290,6 +301,7 @@ const pumpDown: KindForm = {
         'gasLoad',
         'targetTime',
         'waterTemperature',
+        TEMPERATURE,
       ],
     },
   ],

@@ -1,5 +1,6 @@
 import type { UnitSystem } from '@hoopline/contract';
 import { Button } from '../../components/button';
+import { COMMON_VOCABULARY } from '@hoopline/calc';
 import { SelectField, TextField } from '../../components/field';
 import { UnitInput } from '../../components/unit-input';
 import type { EditorApi } from './editor-state';
@@ -8,10 +9,14 @@ import type { Raw } from './paths';
 
 const MAX_CASES = 20;
 
+/** The case temperature's words, from the engine's vocabulary. */
+const CASE_TEMPERATURE = COMMON_VOCABULARY['loadCases.*.temperature']!;
+
 /**
  * The component's load cases: each either the pressures inside and outside
- * (blank = the site's ambient), or a differential with its direction, and an
- * optional load factor (e.g. 1.3 for a proof test).
+ * (blank = the site's ambient), or a differential with its direction, an
+ * optional load factor (e.g. 1.3 for a proof test), and an optional
+ * temperature where the case differs from the component's design temperature.
  */
 export function LoadCasesField({
   editor,
@@ -58,11 +63,13 @@ export function LoadCasesField({
                 onChange={(event) => {
                   const name = c['name'];
                   const factor = c['factor'];
+                  const temperature = c['temperature'];
                   const next: Raw =
                     event.target.value === 'differential'
                       ? { name, differential: '', direction: 'external-over' }
                       : { name, internal: '' };
                   if (factor !== undefined) next['factor'] = factor;
+                  if (temperature !== undefined) next['temperature'] = temperature;
                   if (next['differential'] === '') delete next['differential'];
                   if (next['internal'] === '') delete next['internal'];
                   editor.set(base, next);
@@ -128,6 +135,16 @@ export function LoadCasesField({
                   />
                 </>
               )}
+              <UnitInput
+                id={fieldId(`${base}.temperature`)}
+                label={`${CASE_TEMPERATURE.label} (optional)`}
+                kind="temperature"
+                system={system}
+                {...(CASE_TEMPERATURE.hint ? { hint: CASE_TEMPERATURE.hint } : {})}
+                value={quantityText(c['temperature'], 'temperature')}
+                onValueChange={(text) => editor.set(`${base}.temperature`, text)}
+                error={issues.get(`${base}.temperature`)}
+              />
             </div>
             {cases.length > 1 ? (
               <div className="mt-2 flex justify-end">

@@ -138,6 +138,56 @@ describe('Workbench', () => {
     expect(inputs).toEqual(expected);
   });
 
+  it('the design temperature field and a load case’s own temperature: the engine screens at them (its words on the fields)', async () => {
+    const onSave = renderWorkbench();
+    const summary = () => screen.getByText(/^Governing:/).closest('p')!;
+    await screen.findByText(/^Governing:/);
+    // The label and hint are the engine's (core/vocabulary.ts), with "(optional)".
+    const field = screen.getByLabelText('Design temperature (optional)');
+    expect(field).toHaveAccessibleDescription(/Built-in metals are derated to it/);
+    await userEvent.type(field, '300 degC');
+    const hot = { ...template, designTemperature: '300 degC' };
+    expect(summary()).toHaveTextContent(governingText(hot));
+    expect(governingText(hot)).not.toBe(governingText(template));
+    // A load case at its own temperature.
+    const caseField = screen.getByLabelText('Temperature of this case (optional)');
+    await userEvent.type(caseField, '20 degC');
+    const mixed = {
+      ...hot,
+      loadCases: [{ ...(template['loadCases'] as object[])[0], temperature: '20 degC' }],
+    };
+    expect(summary()).toHaveTextContent(governingText(mixed));
+    await userEvent.click(screen.getByRole('button', { name: 'Save as revision 1' }));
+    await vi.waitFor(() => expect(onSave).toHaveBeenCalledTimes(1));
+    const [inputs] = onSave.mock.calls[0] as unknown as [Record<string, unknown>];
+    expect(inputs).toEqual(mixed);
+  });
+
+  it('a project’s default design temperature screens the components that give none, and the field says so', async () => {
+    const onSave = vi.fn(async () => undefined);
+    fakeApi({ 'GET /projects/p1/materials': { body: { items: [] } } });
+    renderApp(
+      <Workbench
+        project={{ ...project, designTemperature: '250 degC' } as unknown as Project}
+        kind="circular-plate"
+        initialInputs={template}
+        saveLabel="Save as revision 1"
+        canSaveMaterials
+        onSave={onSave}
+      />,
+    );
+    const expected = { ...template, designTemperature: '250 degC' };
+    const summary = await screen.findByText(/^Governing:/);
+    expect(summary.closest('p')!).toHaveTextContent(governingText(expected));
+    expect(screen.getByLabelText('Design temperature (optional)')).toHaveAccessibleDescription(
+      /Blank in this project: the project’s 250 degC\./,
+    );
+    await userEvent.click(screen.getByRole('button', { name: 'Save as revision 1' }));
+    await vi.waitFor(() => expect(onSave).toHaveBeenCalledTimes(1));
+    const [inputs] = onSave.mock.calls[0] as unknown as [Record<string, unknown>];
+    expect(inputs).toEqual(expected);
+  });
+
   it('maps the server’s 400 fields (inputs.<path>) onto the fields', async () => {
     const onSave = vi.fn(async () => {
       throw new ApiError(400, 'validation_failed', 'invalid', [

@@ -50,14 +50,32 @@ export function designBasisInput(project: Project): Raw | undefined {
 }
 
 /**
- * The inputs with the project's site and design basis put in, so the live
- * report and the server's use the same ambient and allowable-stress basis.
+ * The inputs with the project's site and design basis put in, and its default
+ * design temperature where the inputs give none (as the server writes it), so
+ * the live report and the server's use the same ambient, allowable-stress
+ * basis and temperature.
  */
 export function withSite(raw: Raw, project: Project): Raw {
   const site = siteInput(project);
   const designBasis = designBasisInput(project);
   const { site: _old, designBasis: _oldBasis, ...rest } = raw;
-  return { ...rest, ...(site ? { site } : {}), ...(designBasis ? { designBasis } : {}) };
+  const temperature =
+    raw['designTemperature'] === undefined && project.designTemperature != null
+      ? { designTemperature: project.designTemperature }
+      : {};
+  return {
+    ...rest,
+    ...(site ? { site } : {}),
+    ...(designBasis ? { designBasis } : {}),
+    ...temperature,
+  };
+}
+
+/** What a blank field stands for in this project (its default design temperature), by field path. */
+export function projectDefaults(project: Project): Readonly<Record<string, string>> {
+  return project.designTemperature != null
+    ? { designTemperature: `the project’s ${String(project.designTemperature)}` }
+    : {};
 }
 
 export interface SaveMeta {
@@ -182,6 +200,7 @@ export function Workbench({
               system={system}
               projectId={project.id}
               canSaveMaterials={canSaveMaterials}
+              defaults={projectDefaults(project)}
             />
             <CaseFile kind={kind} inputs={inputs} onImport={editor.replace} />
             <div className="flex flex-col gap-2 border-t border-line pt-3">

@@ -83,6 +83,58 @@ describe('ProjectForm', () => {
     expect(screen.getByLabelText('Ambient for design')).toHaveValue('high');
   });
 
+  it('the default design temperature: read by the engine’s field, sent as typed; blank sends none', async () => {
+    const onSubmit = vi.fn(async () => undefined);
+    renderApp(
+      <ProjectForm
+        initialValues={projectFormValues(undefined, 'si')}
+        submitLabel="Create"
+        onSubmit={onSubmit}
+      />,
+    );
+    await userEvent.type(await screen.findByLabelText(/Project number/), 'HL-9');
+    await userEvent.type(screen.getByLabelText(/Project name/), 'Oven');
+    const field = screen.getByLabelText('Design temperature (optional)');
+    // Above the engine's 1000 °C: its own message (core/temperature.ts), nothing sent.
+    await userEvent.type(field, '1200 degC');
+    await userEvent.click(screen.getByRole('button', { name: 'Create' }));
+    expect(
+      await screen.findByText(/Design temperature must be at most 1000 °C/),
+    ).toBeInTheDocument();
+    expect(onSubmit).not.toHaveBeenCalled();
+    await userEvent.clear(field);
+    await userEvent.type(field, '180 degC');
+    await userEvent.click(screen.getByRole('button', { name: 'Create' }));
+    await vi.waitFor(() => expect(onSubmit).toHaveBeenCalledTimes(1));
+    const input = (onSubmit.mock.calls[0] as unknown as [ReturnType<typeof projectInput>])[0];
+    expect(input.designTemperature).toBe('180 degC');
+  });
+
+  it('shows a project’s saved design temperature, and clearing it sends null', async () => {
+    const onSubmit = vi.fn(async () => undefined);
+    renderApp(
+      <ProjectForm
+        initialValues={projectFormValues(
+          {
+            number: 'HL-10',
+            name: 'Oven',
+            designTemperature: '350 degF',
+          } as unknown as Parameters<typeof projectFormValues>[0],
+          'us',
+        )}
+        submitLabel="Save"
+        onSubmit={onSubmit}
+      />,
+    );
+    const field = await screen.findByLabelText('Design temperature (optional)');
+    expect(field).toHaveValue('350 degF');
+    await userEvent.clear(field);
+    await userEvent.click(screen.getByRole('button', { name: 'Save' }));
+    await vi.waitFor(() => expect(onSubmit).toHaveBeenCalledTimes(1));
+    const input = (onSubmit.mock.calls[0] as unknown as [ReturnType<typeof projectInput>])[0];
+    expect(input.designTemperature).toBeNull();
+  });
+
   it('refuses an altitude without a unit, or outside the standard atmosphere', async () => {
     renderApp(
       <ProjectForm

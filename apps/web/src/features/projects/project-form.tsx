@@ -1,4 +1,4 @@
-import { parseQuantity } from '@hoopline/calc';
+import { COMMON_VOCABULARY, designTemperatureField, parseQuantity } from '@hoopline/calc';
 import { Form, Formik, useFormikContext } from 'formik';
 import { useState } from 'react';
 import * as yup from 'yup';
@@ -24,6 +24,8 @@ export interface ProjectFormValues {
   ambientPressure: string;
   allowableBasis: DesignBasis['allowableStress'];
   barometer: DesignBasis['barometer'];
+  /** The components' default design temperature as typed; blank: none (room temperature). */
+  designTemperature: string;
   unitSystem: UnitSystem;
   notes: string;
 }
@@ -39,6 +41,9 @@ function readsAs(dimension: 'length' | 'pressure') {
     }
   };
 }
+
+const TEMPERATURE = designTemperatureField();
+const TEMPERATURE_WORDS = COMMON_VOCABULARY['designTemperature']!;
 
 // Same bounds as the engine's site schema (packages/calc core/load-cases.ts): ISA range, 1–120 kPa.
 export const projectSchema = yup.object({
@@ -90,6 +95,16 @@ export const projectSchema = yup.object({
   }),
   allowableBasis: yup.string().oneOf(['asme-viii-1', 'en-13445-3']).required(),
   barometer: yup.string().oneOf(['standard', 'high']).required(),
+  // The engine's own design-temperature field decides, and its message is shown.
+  designTemperature: yup.string().test('temperature', (text, context) => {
+    if (!text || text.trim() === '') return true;
+    const parsed = TEMPERATURE.safeParse(text.trim());
+    return parsed.success
+      ? true
+      : context.createError({
+          message: `Design temperature ${parsed.error.issues[0]?.message ?? 'cannot be read'}`,
+        });
+  }),
   unitSystem: yup.string().oneOf(['si', 'us']).required(),
   notes: yup.string().max(4000, 'Use at most 4000 characters'),
 });
@@ -119,6 +134,12 @@ export function projectFormValues(
     ambientPressure: typed(site.ambientPressure, 'Pa'),
     allowableBasis: project?.designBasis?.allowableStress ?? 'asme-viii-1',
     barometer: project?.designBasis?.barometer ?? 'standard',
+    designTemperature:
+      project?.designTemperature == null
+        ? ''
+        : typeof project.designTemperature === 'number'
+          ? `${project.designTemperature} K`
+          : project.designTemperature,
     unitSystem: project?.unitSystem ?? defaultSystem,
     notes: project?.notes ?? '',
   };
@@ -139,6 +160,9 @@ export function projectInput(values: ProjectFormValues): ProjectInput {
     client: values.client.trim(),
     site,
     designBasis: { allowableStress: values.allowableBasis, barometer: values.barometer },
+    // Blank is "no default": left out on create, null (the API's way to clear it) on edit.
+    designTemperature:
+      values.designTemperature.trim() === '' ? null : values.designTemperature.trim(),
     unitSystem: values.unitSystem,
     notes: values.notes,
   };
@@ -155,6 +179,7 @@ const FIELDS = [
   'siteBasis',
   'allowableBasis',
   'barometer',
+  'designTemperature',
 ];
 
 function SiteFields() {
@@ -211,6 +236,12 @@ function DesignBasisFields() {
         <option value="standard">Standard atmosphere of the site</option>
         <option value="high">High barometer (105 kPa at sea level, +3.6 %)</option>
       </FormikSelectField>
+      <FormikTextField
+        name="designTemperature"
+        label={`${TEMPERATURE_WORDS.label} (optional)`}
+        hint="The default of every component that gives none, e.g. “180 degC”; blank: room temperature. A component or a load case may give its own."
+        className="num"
+      />
     </fieldset>
   );
 }

@@ -214,7 +214,7 @@ export const circularPlate = defineMethod({
   schema: circularPlateSchema,
   vocabulary: circularPlateVocabulary,
   compute(input, context) {
-    const material = resolveMaterial(input.material);
+    const material = resolveMaterial(input.material, context);
     const common = new Trail();
     const a = common.step({
       id: 'radius',

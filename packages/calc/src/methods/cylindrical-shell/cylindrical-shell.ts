@@ -876,7 +876,7 @@ export const cylindricalShell = defineMethod({
   schema: cylindricalShellSchema,
   vocabulary: cylindricalShellVocabulary,
   compute(input, context) {
-    const material = resolveMaterial(input.material);
+    const material = resolveMaterial(input.material, context);
     const common = new Trail();
     const warnings: ValidityWarning[] = [];
     const g = geometryFor(input, input.thickness);

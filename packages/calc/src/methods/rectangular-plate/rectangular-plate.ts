@@ -209,7 +209,7 @@ export const rectangularPlate = defineMethod({
   schema: rectangularPlateSchema,
   vocabulary: rectangularPlateVocabulary,
   compute(input, context) {
-    const material = resolveMaterial(input.material);
+    const material = resolveMaterial(input.material, context);
     const clamped = input.edge === 'clamped';
     const common = new Trail();
     const a = common.step({
@@ -349,6 +349,27 @@ export const rectangularPlate = defineMethod({
         edge: 'clamped',
         material: 'stainless-316l',
         loadCases: [{ name: 'Rough vacuum: 10 mbar(a)', internal: '10 mbar(a)' }],
+      },
+    },
+    {
+      name: 'Vacuum drying oven door at 180 °C: 500 × 450 × 10 mm 304 plate on its gasket, hot vacuum and a cold vent',
+      input: {
+        kind: 'rectangular-plate',
+        width: '500 mm',
+        height: '450 mm',
+        thickness: '10 mm',
+        edge: 'simply-supported',
+        material: 'stainless-304',
+        deflectionLimit: '1.5 mm',
+        designTemperature: '180 degC',
+        loadCases: [
+          { name: 'Drying: full vacuum at 180 °C', internal: 'full vacuum' },
+          {
+            name: 'Cold vent back-fill: +0.2 bar at 20 °C',
+            internal: '0.2 bar(g)',
+            temperature: '20 degC',
+          },
+        ],
       },
     },
   ],

@@ -909,7 +909,7 @@ export const sphereOrHead = defineMethod({
   schema: sphereOrHeadSchema,
   vocabulary: sphereOrHeadVocabulary,
   compute(input, context) {
-    const material = resolveMaterial(input.material);
+    const material = resolveMaterial(input.material, context);
     const common = new Trail();
     const warnings: ValidityWarning[] = [];
     const tNominal = input.thickness;
