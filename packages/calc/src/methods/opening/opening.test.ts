@@ -765,6 +765,20 @@ describe('allowable stresses on the code basis, and the strength-reduction facto
     ).toBeLessThan(1e-12);
   });
 
+  it('a pad material without a pad is the sizing’s: a weaker one needs a wider pad', () => {
+    const bare = opening.examples[2]!.input;
+    const shells = screen(bare);
+    const weaker = screen({ ...bare, pad: { material: 'stainless-316l' } } as OpeningInput);
+    expect(step(weaker, 'fr4')).toBeLessThan(1);
+    expect(output(weaker.cases[0], 'pad-outside-diameter-needed')).toBeGreaterThan(
+      output(shells.cases[0], 'pad-outside-diameter-needed'),
+    );
+    // No pad is screened: the areas are the bare opening's.
+    expect(output(weaker.cases[0], 'area-available')).toBe(
+      output(shells.cases[0], 'area-available'),
+    );
+  });
+
   it('a pad of its own, weaker material lowers f_r4 and its credit', () => {
     const withPad = (material?: string) =>
       screen(
@@ -930,11 +944,7 @@ describe('bad input is refused, naming the field', () => {
       'pad.outsideDiameter',
     ],
     ['pad without its thickness', port({ pad: { outsideDiameter: '400 mm' } }), 'pad.thickness'],
-    [
-      'pad with only a material',
-      port({ pad: { material: 'carbon-steel' } }),
-      'pad.outsideDiameter',
-    ],
+    ['a pad weld with no pad', port({ pad: { weldLeg: '6 mm' } }), 'pad.weldLeg'],
     [
       'set-on nozzle projecting inside',
       port({

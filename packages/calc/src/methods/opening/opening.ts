@@ -325,20 +325,16 @@ export const openingSchema = z
     if ((nozzle.inwardWeldLeg ?? 0) > 0 && !(inward > 0))
       add(['nozzle', 'inwardWeldLeg'], 'needs an inward projection of the nozzle');
     if (pad) {
+      // A pad is its outside diameter and thickness; its material and allowable alone say what
+      // the sizing's pad is made of, a weld leg alone has nothing to belong to.
       const given = pad.outsideDiameter !== undefined || pad.thickness !== undefined;
-      const other =
-        pad.material !== undefined ||
-        pad.weldLeg !== undefined ||
-        pad.allowableStress !== undefined ||
-        pad.designFactor !== undefined;
-      if (given || other) {
+      if (given) {
         if (pad.outsideDiameter === undefined)
-          add(
-            ['pad', 'outsideDiameter'],
-            'is required for a pad (leave every pad field out for none)',
-          );
+          add(['pad', 'outsideDiameter'], 'is required with a pad thickness');
         if (pad.thickness === undefined)
-          add(['pad', 'thickness'], 'is required for a pad (leave every pad field out for none)');
+          add(['pad', 'thickness'], 'is required with a pad outside diameter');
+      } else if (pad.weldLeg !== undefined) {
+        add(['pad', 'weldLeg'], 'needs a pad (its outside diameter and thickness)');
       }
       if (given && nozzle.attachment === 'set-on')
         add(
@@ -1355,19 +1351,27 @@ export const opening = defineMethod({
       context,
       warnings,
     );
-    const Sp = partMaterialSteps(
-      common,
-      { id: 'pad', name: input.pad?.material !== undefined ? 'Pad' : 'Pad (the shell’s material)' },
-      padMaterial,
-      // A pad of the shell's material takes the shell's allowable (given or not) unless its own is given.
+    // The pad's own material and allowable where given, for the pad or, without one, for the
+    // sizing's; otherwise the shell's, and then S_p = S_v.
+    const padOwn =
       input.pad?.material !== undefined ||
-        input.pad?.allowableStress !== undefined ||
-        input.pad?.designFactor !== undefined
-        ? (input.pad ?? {})
-        : shell,
-      context,
-      warnings,
-    );
+      input.pad?.allowableStress !== undefined ||
+      input.pad?.designFactor !== undefined;
+    const padSteps = padGiven || padOwn;
+    const Sp = padSteps
+      ? partMaterialSteps(
+          common,
+          {
+            id: 'pad',
+            name: `${padGiven ? 'Pad' : 'Pad for the sizing'}${input.pad?.material !== undefined ? '' : ' (the shell’s material)'}`,
+          },
+          padMaterial,
+          // A pad of the shell's material takes the shell's allowable (given or not) unless its own is given.
+          padOwn ? (input.pad ?? {}) : shell,
+          context,
+          warnings,
+        )
+      : Sv;
     const ratio = (
       id: string,
       label: string,
@@ -1414,13 +1418,21 @@ export const opening = defineMethod({
       `f_r3 = min(1, ${withUnit(pad ? Math.min(Sn, Sp) : Sn, 'Pa')}/${sv})`,
       (pad ? Math.min(Sn, Sp) : Sn) / Sv,
     );
-    const fr4 = ratio(
-      'fr4',
-      'Strength-reduction factor, pad',
-      'f_r4 = min(1, S_p/S_v)',
-      `f_r4 = min(1, ${withUnit(Sp, 'Pa')}/${sv})`,
-      Sp / Sv,
-    );
+    const fr4 = padSteps
+      ? ratio(
+          'fr4',
+          'Strength-reduction factor, pad',
+          'f_r4 = min(1, S_p/S_v)',
+          `f_r4 = min(1, ${withUnit(Sp, 'Pa')}/${sv})`,
+          Sp / Sv,
+        )
+      : ratio(
+          'fr4',
+          'Strength-reduction factor of a pad, for the pad sizing',
+          'f_r4 = 1',
+          'f_r4 = 1: a pad of the shell’s material',
+          1,
+        );
     const factors: StrengthFactors = { fr1, fr2, fr3, fr4 };
     const e1 = common.step({
       id: 'e1',

@@ -88,6 +88,6 @@ export const openingVocabulary: Vocabulary = {
   'pad.weldLeg': { label: 'Pad fillet weld leg, outer edge' },
   'pad.material': {
     ...partMaterialWords('pad', 'Pad', false)['pad.material']!,
-    hint: 'Blank: the shell’s material.',
+    hint: 'Blank: the shell’s material; without a pad, the material of the pad the sizing proposes.',
   },
 };
