@@ -689,11 +689,16 @@ function areaSteps(
       });
       trail.output(
         'pad-outside-diameter-needed',
-        'Pad outside diameter needed',
+        'Pad outside diameter that closes the case',
         sizing.outsideDiameter,
         'm',
       );
-      trail.output('pad-thickness-needed', 'Pad thickness needed', sizing.thickness, 'm');
+      trail.output(
+        'pad-thickness-needed',
+        'Pad thickness that closes the case',
+        sizing.thickness,
+        'm',
+      );
       break;
     case 'thicker':
       trail.step({
@@ -707,11 +712,16 @@ function areaSteps(
       });
       trail.output(
         'pad-outside-diameter-needed',
-        'Pad outside diameter needed',
+        'Pad outside diameter that closes the case',
         sizing.outsideDiameter,
         'm',
       );
-      trail.output('pad-thickness-needed', 'Pad thickness needed', sizing.thickness, 'm');
+      trail.output(
+        'pad-thickness-needed',
+        'Pad thickness that closes the case',
+        sizing.thickness,
+        'm',
+      );
       break;
     case 'impossible':
       trail.step({
