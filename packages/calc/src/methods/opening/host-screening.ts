@@ -68,8 +68,8 @@ export type ThinnestPassing =
  * passes (its governing utilisation reaches 1), to 1e-10 relative. The
  * utilisation falls as the wall thickens (buckling and the UG-33 internal
  * rule alike), nearly as a power of it: the first guess takes u ∝ t^−2.5,
- * then the root of log u in log t is bracketed and closed by regula falsi
- * with the Illinois modification (superlinear, and never leaves its bracket).
+ * then the root of log u in log t is bracketed and closed by secants kept
+ * inside the bracket (about 7 host computations for a shell or a nozzle).
  */
 export function thinnestPassing(
   host: HostScreening,
@@ -85,19 +85,23 @@ export function thinnestPassing(
   const at = (t: number) => ({ t, y: Math.log(Math.max(u(t), 1e-300)) });
   let a = at(Math.min(Math.max(start, floor), ceiling));
   if (a.y === 0) return { kind: 'found', nominal: a.t, required: a.t - c };
-  const guess = (p: { t: number; y: number }, slope: number) =>
-    Math.min(Math.max(c + (p.t - c) * Math.exp(-p.y / slope), floor), ceiling);
-  let b = at(guess(a, -2.5));
-  // Widen until the two straddle y = 0, each step a power-law guess at least doubling the reach.
-  for (let i = 0; i < 100 && Math.sign(a.y) === Math.sign(b.y); i++) {
+  // Bracket the answer: a power-law step from the last point (the secant of the last two, u ∝ t^−2.5
+  // at first), overshot a little so that it lands past the answer, more each time it does not.
+  let b = a;
+  let slope = -2.5;
+  let overshoot = 1.2;
+  for (let i = 0; i < 100 && (b === a || Math.sign(a.y) === Math.sign(b.y)); i++) {
     const passing = b.y < 0;
-    if (passing ? b.t <= floor : b.t >= ceiling) break;
-    const slope = b.t !== a.t ? (b.y - a.y) / (Math.log(b.t - c) - Math.log(a.t - c)) : -2.5;
-    let next = guess(b, Math.min(slope, -0.5));
-    const reach = passing ? c + (b.t - c) / 2 : c + (b.t - c) * 2;
-    next = passing ? Math.min(next, reach) : Math.max(next, reach);
-    a = b;
-    b = at(Math.min(Math.max(next, floor), ceiling));
+    if (b !== a && (passing ? b.t <= floor : b.t >= ceiling)) break;
+    if (b !== a) {
+      const secant = (b.y - a.y) / (Math.log(b.t - c) - Math.log(a.t - c));
+      if (Number.isFinite(secant)) slope = Math.min(Math.max(secant, -8), -0.3);
+      a = b;
+    }
+    let dx = (-b.y / slope) * overshoot;
+    if (Math.abs(dx) < 0.01) dx = passing ? -0.01 : 0.01;
+    overshoot *= 2;
+    b = at(Math.min(Math.max(c + (b.t - c) * Math.exp(dx), floor), ceiling));
   }
   if (b.y === 0) return { kind: 'found', nominal: b.t, required: b.t - c };
   if (Math.sign(a.y) === Math.sign(b.y)) {
@@ -108,30 +112,33 @@ export function thinnestPassing(
   }
   let low = a.y > 0 ? a : b; // fails
   let high = a.y > 0 ? b : a; // passes
-  let side = 0;
+  // The secant through the two latest points (superlinear on a smooth log–log curve), kept
+  // inside the bracket: where it leaves it, the bracket's own chord (regula falsi) instead.
+  let last = a;
+  let latest = b;
+  const x = (p: { t: number }) => Math.log(p.t - c);
+  const widths: number[] = [];
   for (let i = 0; i < 200 && high.t - low.t > high.t * 1e-10; i++) {
-    const xl = Math.log(low.t - c);
-    const xh = Math.log(high.t - c);
-    let ratio = low.y / (low.y - high.y);
-    if (!(ratio > 0 && ratio < 1)) ratio = 0.5;
+    const margin = high.t * 4e-11;
+    const inside = (t: number) => t > low.t + margin && t < high.t - margin;
+    const chord = (p: { t: number; y: number }, q: { t: number; y: number }) =>
+      c + Math.exp(x(p) + ((x(q) - x(p)) * p.y) / (p.y - q.y));
+    widths.push(high.t - low.t);
+    // A bracket that has not halved in eight steps is halved (in log t) before anything else.
+    const stalled = i >= 8 && widths[i]! > widths[i - 8]! / 2;
+    let t = stalled ? c + Math.sqrt((low.t - c) * (high.t - c)) : chord(latest, last);
+    if (!inside(t)) t = chord(low, high);
     // A guess closer to an end than a fraction of the tolerance moves to that distance from it,
     // so that a root found at one end is pinned by the next probe rather than by halvings.
-    const margin = high.t * 4e-11;
-    let t = c + Math.exp(xl + (xh - xl) * ratio);
     if (!(t > low.t + margin)) t = low.t + margin;
     if (!(t < high.t - margin)) t = high.t - margin;
     if (!(t > low.t && t < high.t)) t = (low.t + high.t) / 2;
     if (!(t > low.t && t < high.t)) break;
     const next = at(t);
-    if (next.y > 0) {
-      low = next;
-      if (side === -1) high = { t: high.t, y: high.y / 2 };
-      side = -1;
-    } else {
-      high = next;
-      if (side === 1) low = { t: low.t, y: low.y / 2 };
-      side = 1;
-    }
+    last = latest;
+    latest = next;
+    if (next.y > 0) low = next;
+    else high = next;
   }
   return { kind: 'found', nominal: high.t, required: high.t - c };
 }

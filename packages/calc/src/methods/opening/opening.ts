@@ -464,18 +464,46 @@ function areaInputs(s: Shared, tr: number, trn: number, share: number): AreaInpu
   return { geometry: s.geometry, factors: s.factors, e1: s.e1, f: s.f, tr, trn, share };
 }
 
-/** The largest internal pressure the opening holds (every check of an inside-higher case at 1), by bisection. */
+/**
+ * The largest internal pressure the opening holds (every check of an
+ * inside-higher case at 1), to 1e-12 relative: u(P) rises steadily from 0
+ * (t_r, t_rn and A with P, A1 and A2 falling), nearly in proportion, so a
+ * secant kept inside a doubling bracket (bisection where it leaves it, or
+ * where the bracket stops halving) closes it in a few steps.
+ */
 function allowableInternalPressure(s: Shared, start: number): number | null {
-  let high = Math.max(start, 1e3);
-  for (let i = 0; i < 200 && internalUtilisation(s, high) <= 1; i++) high *= 2;
-  if (internalUtilisation(s, high) <= 1) return null;
-  let low = 0;
-  for (let i = 0; i < 200 && high - low > high * 1e-12; i++) {
-    const mid = (low + high) / 2;
-    if (internalUtilisation(s, mid) <= 1) low = mid;
-    else high = mid;
+  const u = (p: number) => internalUtilisation(s, p);
+  let low = { p: 0, u: 0 };
+  let high = { p: Math.max(start, 1e3), u: u(Math.max(start, 1e3)) };
+  for (let i = 0; i < 200 && high.u <= 1; i++) {
+    low = high;
+    high = { p: high.p * 2, u: u(high.p * 2) };
   }
-  return low > 0 ? low : null;
+  if (high.u <= 1) return null;
+  let last = low;
+  let latest = high;
+  const widths: number[] = [];
+  for (let i = 0; i < 200 && high.p - low.p > high.p * 1e-12; i++) {
+    widths.push(high.p - low.p);
+    const stalled = i >= 8 && widths[i]! > widths[i - 8]! / 2;
+    const margin = high.p * 4e-13;
+    const chord = (a: { p: number; u: number }, b: { p: number; u: number }) =>
+      Number.isFinite(a.u) && Number.isFinite(b.u) && a.u !== b.u
+        ? a.p + ((1 - a.u) * (b.p - a.p)) / (b.u - a.u)
+        : Number.NaN;
+    let p = stalled ? Number.NaN : chord(latest, last);
+    if (!(p > low.p + margin && p < high.p - margin)) p = chord(low, high);
+    if (!(p > low.p + margin)) p = low.p + margin;
+    if (!(p < high.p - margin)) p = high.p - margin;
+    if (!(p > low.p && p < high.p)) p = (low.p + high.p) / 2;
+    if (!(p > low.p && p < high.p)) break;
+    const next = { p, u: u(p) };
+    last = latest;
+    latest = next;
+    if (next.u <= 1) low = next;
+    else high = next;
+  }
+  return low.p > 0 ? low.p : null;
 }
 
 function thicknessCheck(
