@@ -140,6 +140,8 @@ export {
   zoellyCoefficient,
 } from './methods/sphere-or-head/sphere-or-head';
 export type { HeadShape, SphereOrHeadInput } from './methods/sphere-or-head/sphere-or-head';
+export { opening, openingSchema } from './methods/opening/opening';
+export type { OpeningInput, OpeningShellShape } from './methods/opening/opening';
 export { GASES, storedEnergy, storedEnergySchema } from './methods/stored-energy/stored-energy';
 export type { StoredEnergyGas, StoredEnergyInput } from './methods/stored-energy/stored-energy';
 export {

@@ -8,6 +8,7 @@ export const FIXTURE_KINDS: readonly ComponentKind[] = [
   'rectangular-plate',
   'cylindrical-shell',
   'sphere-or-head',
+  'opening',
   'stored-energy',
   'pump-down',
 ];
@@ -95,6 +96,59 @@ export const EXTRA_CASES: Readonly<Record<string, unknown>> = {
     material: 'borosilicate-3.3',
     allowableStress: '5 MPa',
     loadCases: [{ name: 'Vacuum', internal: 'full vacuum' }],
+  },
+  'opening torispherical off centre, inward projection, weaker nozzle and pad, EN basis, vacuum and pressure':
+    {
+      kind: 'opening',
+      designBasis: { allowableStress: 'en-13445-3' },
+      shell: {
+        shape: 'torispherical',
+        diameter: '800 mm',
+        thickness: '8 mm',
+        crownRadius: '700 mm',
+        knuckleRadius: '80 mm',
+        material: 'carbon-steel',
+        corrosionAllowance: '1 mm',
+      },
+      offset: '250 mm',
+      nozzle: {
+        outsideDiameter: '114.3 mm',
+        thickness: '6.02 mm',
+        projection: '150 mm',
+        inwardProjection: '25 mm',
+        material: 'stainless-316l',
+        corrosionAllowance: '0.5 mm',
+        weldLeg: '6 mm',
+        inwardWeldLeg: '5 mm',
+      },
+      pad: {
+        outsideDiameter: '220 mm',
+        thickness: '6 mm',
+        material: 'stainless-304',
+        weldLeg: '5 mm',
+      },
+      loadCases: [
+        { name: 'Vacuum', internal: 'full vacuum' },
+        { name: 'Design', internal: '8 bar(g)' },
+        { name: 'Balanced', internal: 'ambient' },
+      ],
+    },
+  'opening small port in a hemispherical head, set on, no length, exempt note, outside validity': {
+    kind: 'opening',
+    shell: {
+      shape: 'hemispherical',
+      diameter: '500 mm',
+      thickness: '3 mm',
+      material: 'aluminium-6061-t6',
+    },
+    nozzle: {
+      outsideDiameter: '48.3 mm',
+      thickness: '2.77 mm',
+      attachment: 'set-on',
+      projection: '60 mm',
+      material: 'cast-acrylic',
+    },
+    loadCases: [{ name: 'Vacuum', internal: '10 torr' }],
   },
 };
 

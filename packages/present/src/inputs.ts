@@ -124,17 +124,35 @@ export function presentInputs(
   const omit = new Set(['kind', ...(options.omit ?? [])]);
   const flat: [string, unknown][] = [];
   leaves(inputs, '', flat);
-  // Top-level fields in the schema's order; inside one (a list of load cases,
-  // a custom material) the order the inputs give.
+  // Top-level fields in the schema's order; the items of a list (load cases)
+  // in their own order; within a top-level object or an item, its fields in
+  // the schema's order too (stored inputs come back from jsonb with their
+  // keys re-ordered); a field the schema lacks keeps the order the inputs give.
   const rank = (path: string) => {
     const top = path.split('.')[0]!;
     const index = fields.findIndex((f) => f.path === top || f.path.startsWith(`${top}.`));
     return index < 0 ? fields.length : index;
   };
+  const item = (path: string) => {
+    const found = /\.(\d+)(?=\.|$)/.exec(path);
+    return found ? Number(found[1]) : -1;
+  };
+  const within = (path: string) => {
+    const generic = genericPath(path);
+    const index = fields.findIndex((f) => f.path === generic);
+    return index < 0 ? fields.length : index;
+  };
   return flat
     .filter(([path]) => !omit.has(path.split('.')[0]!))
-    .map(([path, value], order) => ({ path, value, order, rank: rank(path) }))
-    .sort((a, b) => a.rank - b.rank || a.order - b.order)
+    .map(([path, value], order) => ({
+      path,
+      value,
+      order,
+      rank: rank(path),
+      item: item(path),
+      within: within(path),
+    }))
+    .sort((a, b) => a.rank - b.rank || a.item - b.item || a.within - b.within || a.order - b.order)
     .map(({ path, value }) => {
       const field = fieldAt(fields, path);
       const label = labelOf(method?.vocabulary, path);

@@ -91,6 +91,15 @@ export interface DemoProject {
 
 const fullVacuum = { name: 'Operating: full vacuum', internal: 'full vacuum' };
 const ventBackFill = { name: 'Vent back-fill: +0.2 bar', internal: '0.2 bar(g)' };
+/** The process chamber's wall (PC-1-S1) as the shell its ports sit in. */
+const processChamberWall = {
+  shape: 'cylinder',
+  diameter: '400 mm',
+  diameterBasis: 'outside',
+  thickness: '4 mm',
+  length: '600 mm',
+  material: 'stainless-304',
+};
 
 export const DEMO_PROJECTS: readonly DemoProject[] = [
   {
@@ -262,6 +271,53 @@ export const DEMO_PROJECTS: readonly DemoProject[] = [
               loadCases: [fullVacuum],
             },
             note: 'First look at the wall for full vacuum between the end flanges.',
+            outcome: 'draft',
+          },
+        ],
+      },
+      {
+        name: 'Process chamber pump port',
+        tag: 'PC-1-N1',
+        kind: 'opening',
+        steps: [
+          {
+            inputs: {
+              kind: 'opening',
+              shell: { ...processChamberWall },
+              nozzle: {
+                outsideDiameter: '168.3 mm',
+                thickness: '2.11 mm',
+                attachment: 'set-in',
+                projection: '120 mm',
+                material: 'stainless-304',
+                weldLeg: '3 mm',
+              },
+              loadCases: [fullVacuum, ventBackFill],
+            },
+            note: 'Turbo pump port, NPS 6 Sch 5S tube set through the chamber wall, fillet welded outside.',
+            outcome: 'submitted',
+          },
+        ],
+      },
+      {
+        name: 'Process chamber gauge port',
+        tag: 'PC-1-N2',
+        kind: 'opening',
+        steps: [
+          {
+            inputs: {
+              kind: 'opening',
+              shell: { ...processChamberWall },
+              nozzle: {
+                outsideDiameter: '33.4 mm',
+                thickness: '1.65 mm',
+                attachment: 'set-in',
+                projection: '80 mm',
+                material: 'stainless-304',
+              },
+              loadCases: [fullVacuum, ventBackFill],
+            },
+            note: 'Gauge port, NPS 1 Sch 5S; small enough for the code’s exemption, screened anyway.',
             outcome: 'draft',
           },
         ],

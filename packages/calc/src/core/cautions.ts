@@ -134,6 +134,31 @@ export const CAUTIONS = {
       'water vapour (below about 10–100 Pa in an unbaked chamber), conductance of lines and the fall of pump ' +
       'speed near its base pressure all make the real time longer.',
   },
+  'opening-welds-not-checked': {
+    code: 'opening-welds-not-checked',
+    title: 'Weld strength at the opening is not checked',
+    text:
+      'Area replacement counts the weld metal as reinforcement but does not check that the welds can carry the ' +
+      'load of the reinforcement into the shell: the weld strength paths of ASME VIII-1 UG-41, the minimum weld ' +
+      'sizes of UW-16 and the nozzle neck minimum of UG-45 are not checked here. Check them by the applicable code.',
+  },
+  'nozzle-loads': {
+    code: 'nozzle-loads',
+    title: 'Nozzle loads are not included',
+    text:
+      'Only pressure is screened. Forces and moments from connected piping, its weight, thermal expansion and ' +
+      'supports, and loads from equipment on a port (a pump, a valve, a viewport frame) raise the stresses at the ' +
+      'nozzle well above those of pressure alone: check them by a local-load method (for example WRC 107/537 or ' +
+      'WRC 297, or EN 13445-3 clause 16) or a finite-element analysis.',
+  },
+  'opening-fatigue': {
+    code: 'opening-fatigue',
+    title: 'Fatigue at the opening is not assessed',
+    text:
+      'The peak stress at a nozzle-to-shell junction is several times the membrane stress. Area replacement is a ' +
+      'rule for static pressure; a vessel cycled in pressure or temperature (a vacuum chamber pumped down and ' +
+      'vented many times, a receiver that cycles) needs a fatigue assessment of its openings by the applicable code.',
+  },
 } as const satisfies Record<string, Caution>;
 
 export type CautionCode = keyof typeof CAUTIONS;

@@ -3,6 +3,7 @@ import type { MethodDefinition } from '../core/method';
 import { circularPlate } from './circular-plate/circular-plate';
 import { cylindricalShell } from './cylindrical-shell/cylindrical-shell';
 import { flatAreaLoad } from './flat-area-load/flat-area-load';
+import { opening } from './opening/opening';
 import { pumpDown } from './pump-down/pump-down';
 import { rectangularPlate } from './rectangular-plate/rectangular-plate';
 import { sphereOrHead } from './sphere-or-head/sphere-or-head';
@@ -18,6 +19,7 @@ const ALL = [
   rectangularPlate,
   cylindricalShell,
   sphereOrHead,
+  opening,
   flatAreaLoad,
   storedEnergy,
   pumpDown,

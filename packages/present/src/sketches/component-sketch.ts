@@ -559,6 +559,234 @@ function head(
   };
 }
 
+interface OpeningDrawing {
+  readonly shellShape: string;
+  readonly shellDiameter: number;
+  readonly shellThickness: number;
+  readonly nozzleOutside: number;
+  readonly nozzleThickness: number;
+  readonly boreRadius: number;
+  readonly projection: number;
+  readonly inwardProjection: number;
+  readonly weldLeg: number;
+  readonly pad: { readonly outsideDiameter: number; readonly thickness: number } | null;
+  readonly limits: { readonly parallel: number; readonly outward: number; readonly inward: number };
+}
+
+const OPENING_HOSTS: Record<string, string> = {
+  cylinder: 'cylindrical shell',
+  sphere: 'sphere',
+  hemispherical: 'hemispherical head',
+  'ellipsoidal-2-1': '2:1 ellipsoidal head',
+  torispherical: 'torispherical head',
+};
+
+/**
+ * Section through the shell and the nozzle on the nozzle's axis (the
+ * longitudinal plane of a cylinder): the shell's wall, the nozzle's walls
+ * outside and inside, a pad and the outside fillets, and the reinforcement
+ * zone (dashed) with its limits parallel (X) and normal (h_o, h_i) to the
+ * wall. Walls thinner than a few pixels are drawn thicker, and the limits
+ * normal to the wall are drawn in proportion to the drawn wall.
+ */
+function openingSection(o: OpeningDrawing, system: UnitSystem): Sketch {
+  const box = { width: W, height: H };
+  const cx = W / 2;
+  const padRadius = o.pad ? o.pad.outsideDiameter / 2 : 0;
+  const halfSpan = Math.max(o.limits.parallel, padRadius, o.nozzleOutside / 2 + o.weldLeg) * 1.12;
+  // Room right of the zone for the dimensions of the normal limits.
+  const scale = (W / 2 - 100) / halfSpan;
+  const shell = drawnThickness(o.shellThickness, scale, 7, 22);
+  const wall = drawnThickness(o.nozzleThickness, scale, 4, 16);
+  const padDrawn = o.pad ? drawnThickness(o.pad.thickness, scale, 4, 18) : null;
+  // Lengths normal to the wall are drawn against the drawn wall, so the zone keeps its proportions.
+  const normal = shell.px / o.shellThickness;
+  const top = 136;
+  const bottom = top + shell.px;
+  const bore = o.boreRadius * scale;
+  const outer = bore + wall.px;
+  const rise = Math.min(o.projection * normal, 86);
+  const drop = Math.min(o.inwardProjection * normal, 54);
+  const padTop = padDrawn ? top - padDrawn.px : top;
+  const shapes: Shape[] = [];
+  // The shell, both sides of the opening, cut at the sketch's edges.
+  for (const side of [-1, 1] as const) {
+    const x0 = side < 0 ? 12 : cx + outer;
+    const x1 = side < 0 ? cx - outer : W - 12;
+    shapes.push(
+      {
+        type: 'rect',
+        x: x0,
+        y: top,
+        width: x1 - x0,
+        height: shell.px,
+        fill: 'body',
+        stroke: 'ink',
+        strokeWidth: 1.2,
+      },
+      ...hatch(x0, top, x1 - x0, shell.px, 7),
+    );
+    if (padDrawn && o.pad) {
+      const px0 = side < 0 ? cx - padRadius * scale : cx + outer;
+      const pw = padRadius * scale - outer;
+      shapes.push({
+        type: 'rect',
+        x: px0,
+        y: padTop,
+        width: pw,
+        height: padDrawn.px,
+        fill: 'body',
+        stroke: 'ink',
+        strokeWidth: 1.2,
+      });
+    }
+    // The nozzle's wall: outside, through the shell (and pad), and inside.
+    const wx = side < 0 ? cx - outer : cx + bore;
+    shapes.push({
+      type: 'rect',
+      x: wx,
+      y: top - rise,
+      width: wall.px,
+      height: rise + shell.px + drop,
+      fill: 'body',
+      stroke: 'ink',
+      strokeWidth: 1.2,
+    });
+    if (o.weldLeg > 0) {
+      const leg = Math.max(o.weldLeg * scale, 4);
+      const foot = side < 0 ? cx - outer : cx + outer;
+      shapes.push({
+        type: 'path',
+        points: [
+          { x: foot, y: padTop },
+          { x: foot + side * leg, y: padTop },
+          { x: foot, y: padTop - leg },
+        ],
+        closed: true,
+        fill: 'ink',
+        stroke: 'none',
+      });
+    }
+  }
+  if (rise < o.projection * normal) {
+    // The nozzle goes on beyond the sketch: break marks across its walls.
+    for (const side of [-1, 1] as const) {
+      const x = side < 0 ? cx - outer : cx + bore;
+      shapes.push({
+        type: 'line',
+        x1: x - 3,
+        y1: top - rise + 3,
+        x2: x + wall.px + 3,
+        y2: top - rise - 3,
+        stroke: 'ink',
+      });
+    }
+  }
+  shapes.push({
+    type: 'line',
+    x1: cx,
+    y1: top - rise - 8,
+    x2: cx,
+    y2: bottom + drop + 14,
+    stroke: 'muted',
+    pattern: 'centre',
+  });
+  // The reinforcement zone.
+  const zx = o.limits.parallel * scale;
+  const zTop = top - o.limits.outward * normal;
+  const zBottom = bottom + o.limits.inward * normal;
+  shapes.push({
+    type: 'rect',
+    x: cx - zx,
+    y: zTop,
+    width: 2 * zx,
+    height: zBottom - zTop,
+    fill: 'none',
+    stroke: 'accent',
+    strokeWidth: 1.4,
+    dashed: true,
+  });
+  shapes.push(
+    ...dimension(
+      cx,
+      bottom + drop + 10,
+      cx + zx,
+      bottom + drop + 10,
+      14,
+      `X ${show(o.limits.parallel, 'm', system)}`,
+      box,
+    ),
+    ...dimension(
+      cx + zx,
+      zTop,
+      cx + zx,
+      top,
+      -14,
+      `h_o ${show(o.limits.outward, 'm', system)}`,
+      box,
+    ),
+    ...dimension(
+      cx - bore,
+      top - rise,
+      cx + bore,
+      top - rise,
+      14,
+      `d ${show(2 * o.boreRadius, 'm', system)}`,
+      box,
+    ),
+    label(16, top - 6, `t ${show(o.shellThickness, 'm', system)}`, box, { anchor: 'start' }),
+    label(cx - outer - 6, top - rise + 12, `t_n ${show(o.nozzleThickness, 'm', system)}`, box, {
+      anchor: 'end',
+    }),
+    label(W - 8, zTop - 6, 'limit of reinforcement', box, {
+      anchor: 'end',
+      size: 'note',
+      role: 'accent',
+    }),
+    label(16, bottom + 16, 'inside', box, { anchor: 'start', size: 'note', role: 'muted' }),
+    label(16, top - 24, 'outside', box, { anchor: 'start', size: 'note', role: 'muted' }),
+  );
+  if (o.limits.inward > 0) {
+    shapes.push(
+      ...dimension(
+        cx + zx,
+        bottom,
+        cx + zx,
+        zBottom,
+        -14,
+        `h_i ${show(o.limits.inward, 'm', system)}`,
+        box,
+      ),
+    );
+  }
+  if (o.pad) {
+    shapes.push(
+      // Above the zone, left of the nozzle: clear of the zone's lines and of the wall's label.
+      label(
+        cx - outer - 6,
+        Math.min(zTop, padTop) - 6,
+        `pad ${show(o.pad.outsideDiameter, 'm', system)} × ${show(o.pad.thickness, 'm', system)}`,
+        box,
+        { anchor: 'end', size: 'note' },
+      ),
+    );
+  }
+  const host = OPENING_HOSTS[o.shellShape] ?? 'shell';
+  return {
+    width: W,
+    height: H,
+    title: `Section through the opening: nozzle ${show(o.nozzleOutside, 'm', system)} × ${show(o.nozzleThickness, 'm', system)} in a ${show(o.shellDiameter, 'm', system)} ${host}, wall ${show(o.shellThickness, 'm', system)}${
+      o.pad
+        ? `, pad ${show(o.pad.outsideDiameter, 'm', system)} × ${show(o.pad.thickness, 'm', system)}`
+        : ''
+    }; limits of reinforcement X ${show(o.limits.parallel, 'm', system)} each side of the axis, h_o ${show(o.limits.outward, 'm', system)}${
+      o.limits.inward > 0 ? `, h_i ${show(o.limits.inward, 'm', system)}` : ''
+    }.`,
+    note: shell.toScale && wall.toScale && (padDrawn?.toScale ?? true) ? null : NOT_TO_SCALE,
+    shapes,
+  };
+}
+
 function stepValue(report: Report, id: string): number | undefined {
   return num(report.steps.find((s) => s.id === id)?.value);
 }
@@ -637,6 +865,51 @@ export function sketchOf(report: Report, system: UnitSystem): Sketch | null {
       const crown = num(inputs['crownRadius']) ?? stepValue(report, 'crown-radius');
       const knuckle = num(inputs['knuckleRadius']) ?? stepValue(report, 'knuckle-radius');
       return head(shape, d, t, system, crown, knuckle);
+    }
+    case 'opening': {
+      const shell = inputs['shell'] as Record<string, unknown> | undefined;
+      const nozzle = inputs['nozzle'] as Record<string, unknown> | undefined;
+      const pad = inputs['pad'] as Record<string, unknown> | undefined;
+      const shellThickness = num(shell?.['thickness']);
+      const shellDiameter = num(shell?.['diameter']);
+      const nozzleOutside = num(nozzle?.['outsideDiameter']);
+      const nozzleThickness = num(nozzle?.['thickness']);
+      const projection = num(nozzle?.['projection']);
+      const boreRadius = stepValue(report, 'opening-radius');
+      const parallel = stepValue(report, 'limit-parallel');
+      const outward = stepValue(report, 'limit-normal-outward');
+      if (
+        !shellThickness ||
+        !shellDiameter ||
+        !nozzleOutside ||
+        !nozzleThickness ||
+        !projection ||
+        !boreRadius ||
+        !parallel ||
+        !outward
+      )
+        return null;
+      const padDiameter = num(pad?.['outsideDiameter']);
+      const padThickness = num(pad?.['thickness']);
+      return openingSection(
+        {
+          shellShape: String(shell?.['shape'] ?? ''),
+          shellDiameter,
+          shellThickness,
+          nozzleOutside,
+          nozzleThickness,
+          boreRadius,
+          projection,
+          inwardProjection: num(nozzle?.['inwardProjection']) ?? 0,
+          weldLeg: num(nozzle?.['weldLeg']) ?? 0,
+          pad:
+            padDiameter && padThickness
+              ? { outsideDiameter: padDiameter, thickness: padThickness }
+              : null,
+          limits: { parallel, outward, inward: stepValue(report, 'limit-normal-inward') ?? 0 },
+        },
+        system,
+      );
     }
     default:
       return null;

@@ -120,6 +120,25 @@ describe('component sketches', () => {
     expect(sketch.shapes.filter((s) => s.type === 'circle' && s.fill === 'ink')).toHaveLength(12);
   });
 
+  it('draws an opening in section with its limits of reinforcement, and its pad', () => {
+    const opening = METHODS.find((m) => m.kind === 'opening')!;
+    const withPad = opening.examples.find((e) => 'pad' in (e.input as object))!;
+    const sketch = sketchOf(screen(withPad.input), 'si')!;
+    const texts = sketch.shapes.flatMap((s) => (s.type === 'text' ? [s.text] : []));
+    expect(texts).toContain('pad 300 mm × 8 mm');
+    expect(texts).toContain('t 8 mm');
+    expect(texts).toContain('t_n 8.18 mm');
+    expect(texts).toContain('d 205.7 mm'); // 219.1 − 2·8.18 + 2·1.5 mm, the corroded bore
+    expect(texts.some((t) => t.startsWith('X '))).toBe(true);
+    expect(texts.some((t) => t.startsWith('h_o '))).toBe(true);
+    // The zone: one dashed rectangle, as wide as 2·X at the sketch's scale and centred on the axis.
+    const zone = sketch.shapes.filter((s) => s.type === 'rect' && s.dashed);
+    expect(zone).toHaveLength(1);
+    const z = zone[0] as { x: number; width: number };
+    expect(z.x + z.width / 2).toBeCloseTo(sketch.width / 2, 9);
+    expect(sketch.title).toMatch(/limits of reinforcement X 205\.7 mm/);
+  });
+
   it('has no sketch for stored energy and pump-down', () => {
     for (const kind of ['stored-energy', 'pump-down']) {
       const m = METHODS.find((x) => x.kind === kind)!;

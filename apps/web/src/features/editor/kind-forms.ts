@@ -92,7 +92,9 @@ export function fieldSpec(kind: ComponentKind, layout: FieldLayout): FieldSpec {
   const base = words?.label ?? path;
   const label = field.optional ? `${base} (optional)` : base;
   const hint = words?.hint !== undefined ? { hint: words.hint } : {};
-  if (path === 'material') return { type: 'material', path, label: base };
+  // A material field, the component's own or a part's ("nozzle.material"): the material picker.
+  if (path === 'material' || path.endsWith('.material'))
+    return { type: 'material', path, label: base };
   switch (field.type) {
     case 'quantity':
       return {
@@ -268,6 +270,82 @@ const sphereOrHead: KindForm = {
   }),
 };
 
+const opening: KindForm = {
+  kind: 'opening',
+  sections: [
+    {
+      title: 'Shell or head',
+      // The length (cylinders) and the offset (heads) stay in view whatever the shape, so that one
+      // left over from the other shape can be seen and cleared where the engine names it.
+      fields: [
+        'shell.shape',
+        'shell.diameter',
+        'shell.diameterBasis',
+        'shell.thickness',
+        'shell.length',
+        'offset',
+        'shell.corrosionAllowance',
+        'shell.jointEfficiency',
+      ],
+    },
+    {
+      title: 'Torispherical radii',
+      when: (raw) => (raw['shell'] as Raw | undefined)?.['shape'] === 'torispherical',
+      fields: ['shell.crownRadius', 'shell.knuckleRadius'],
+    },
+    {
+      title: 'Shell material',
+      fields: ['shell.material', 'shell.allowableStress', 'shell.designFactor', TEMPERATURE],
+    },
+    {
+      title: 'Nozzle',
+      fields: [
+        'nozzle.outsideDiameter',
+        'nozzle.thickness',
+        'nozzle.attachment',
+        'nozzle.projection',
+        'nozzle.inwardProjection',
+        'nozzle.corrosionAllowance',
+        'nozzle.weldLeg',
+        'nozzle.inwardWeldLeg',
+      ],
+    },
+    {
+      title: 'Nozzle material',
+      fields: ['nozzle.material', 'nozzle.allowableStress', 'nozzle.designFactor'],
+    },
+    {
+      title: 'Reinforcing pad',
+      fields: ['pad.outsideDiameter', 'pad.thickness', 'pad.weldLeg', 'pad.material'],
+    },
+    { title: 'External pressure', fields: externalPressure },
+    { title: 'Load cases', fields: [LOAD_CASES] },
+  ],
+  template: (system) => ({
+    kind: 'opening',
+    shell: {
+      shape: 'cylinder',
+      diameter: len('600 mm', '24 in')(system),
+      diameterBasis: 'outside',
+      thickness: len('5 mm', '3/16 in')(system),
+      length: len('900 mm', '36 in')(system),
+      material: 'stainless-304',
+    },
+    nozzle: {
+      outsideDiameter: len('168.3 mm', '6.625 in')(system),
+      thickness: len('3.4 mm', '0.134 in')(system),
+      attachment: 'set-in',
+      projection: len('150 mm', '6 in')(system),
+      material: 'stainless-304',
+      weldLeg: len('4 mm', '3/16 in')(system),
+    },
+    loadCases: [
+      { name: 'Operating: full vacuum', internal: 'full vacuum' },
+      { name: 'Vent back-fill', internal: len('0.2 bar(g)', '3 psig')(system) },
+    ],
+  }),
+};
+
 const storedEnergy: KindForm = {
   kind: 'stored-energy',
   sections: [
@@ -320,6 +398,7 @@ export const KIND_FORMS: Partial<Record<ComponentKind, KindForm>> = {
   'rectangular-plate': rectangularPlate,
   'cylindrical-shell': cylindricalShell,
   'sphere-or-head': sphereOrHead,
+  opening,
   'stored-energy': storedEnergy,
   'pump-down': pumpDown,
 };
