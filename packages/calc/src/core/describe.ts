@@ -23,6 +23,7 @@ type AnyDef = {
   element?: z.ZodType;
   options?: readonly z.ZodType[];
   entries?: Record<string, string>;
+  values?: readonly unknown[];
 };
 
 function defOf(schema: z.ZodType): AnyDef {
@@ -33,7 +34,8 @@ function defOf(schema: z.ZodType): AnyDef {
  * Every field a schema accepts, in the schema's order, with what the field
  * builders recorded about it. A field that is either a choice or an object
  * (a built-in material id or a custom material) appears once as the choice
- * and then with the object's fields under it.
+ * and then with the object's fields under it. The discriminator of a union
+ * of objects (a section's `shape`) is a choice of the union's literals.
  */
 export function describeFields(schema: z.ZodType): FieldDescription[] {
   const out: FieldDescription[] = [];
@@ -42,6 +44,20 @@ export function describeFields(schema: z.ZodType): FieldDescription[] {
     if (seen.has(field.path)) return;
     seen.add(field.path);
     out.push(field);
+  };
+  // The values of literals met at each path: the discriminator of a union of
+  // objects ("outline.shape": circle | rectangle) is a choice among them.
+  const literals = new Map<string, string[]>();
+  const literal = (path: string, values: readonly unknown[], optional: boolean) => {
+    const known = literals.get(path);
+    if (!known) {
+      literals.set(path, values.map(String));
+      push({ path, type: 'constant', optional });
+      return;
+    }
+    for (const v of values.map(String)) if (!known.includes(v)) known.push(v);
+    const index = out.findIndex((f) => f.path === path);
+    out[index] = { path, type: 'choice', options: [...known], optional: out[index]!.optional };
   };
   // `optional` is true below an optional or defaulted object too (a custom
   // material's fields are optional when the material may be a built-in id).
@@ -79,7 +95,7 @@ export function describeFields(schema: z.ZodType): FieldDescription[] {
         push({ path, type: 'choice', options: Object.values(d.entries ?? {}), optional });
         return;
       case 'literal':
-        push({ path, type: 'constant', optional });
+        literal(path, d.values ?? [], optional);
         return;
       case 'number':
         push({ path, type: 'number', optional });
