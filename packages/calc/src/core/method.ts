@@ -15,6 +15,12 @@ export interface MethodContext {
   readonly warnings: readonly ValidityWarning[];
   /** The component's load cases, resolved to absolute pressures (empty for methods without). */
   readonly loadCases: readonly ResolvedLoadCase[];
+  /**
+   * Set by a sweep, which keeps only each point's checks and outputs: a method
+   * may leave out common steps that cost much and feed no check (the
+   * stiffened wall's own search for the largest spacing that passes).
+   */
+  readonly numbersOnly?: boolean;
 }
 
 /** What a method computes; the engine adds the engine stamp, governing case, verdict and cautions. */
@@ -33,9 +39,12 @@ export interface MethodResult {
   readonly cautions: readonly CautionCode[];
 }
 
-/** A parameter a sweep varies (thickness), read from and written to a parsed input. */
+/**
+ * A parameter a sweep varies (a thickness, or a stiffener spacing), read from
+ * and written to a parsed input. Its id is the input field it sets.
+ */
 export interface SweepParameter<Parsed> {
-  readonly id: 'thickness';
+  readonly id: 'thickness' | 'spacing';
   readonly label: string;
   readonly unit: 'm';
   get(input: Parsed): number;
@@ -65,7 +74,10 @@ export interface MethodDefinition<
    */
   readonly vocabulary: Vocabulary;
   readonly compute: (input: z.output<Schema>, context: MethodContext) => MethodResult;
+  /** The thickness to sweep (utilisation falls as it rises). */
   readonly sweep?: SweepParameter<z.output<Schema>>;
+  /** A spacing to sweep (utilisation rises with it): the stiffened wall's stiffener spacing. */
+  readonly spacingSweep?: SweepParameter<z.output<Schema>> & { readonly id: 'spacing' };
   /**
    * For methods without load cases (pump-down): the single case the report
    * shows, made from the input. Methods with load cases leave this out.

@@ -6,6 +6,7 @@ import { flatAreaLoad } from './flat-area-load/flat-area-load';
 import { pumpDown } from './pump-down/pump-down';
 import { rectangularPlate } from './rectangular-plate/rectangular-plate';
 import { sphereOrHead } from './sphere-or-head/sphere-or-head';
+import { stiffenedWall } from './stiffened-wall/stiffened-wall';
 import { storedEnergy } from './stored-energy/stored-energy';
 
 /**
@@ -16,6 +17,7 @@ import { storedEnergy } from './stored-energy/stored-energy';
 const ALL = [
   circularPlate,
   rectangularPlate,
+  stiffenedWall,
   cylindricalShell,
   sphereOrHead,
   flatAreaLoad,
