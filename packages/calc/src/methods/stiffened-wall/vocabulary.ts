@@ -28,7 +28,7 @@ export const stiffenedWallVocabulary: Vocabulary = {
     },
   },
   stiffenerSide: {
-    label: 'Stiffeners on the',
+    label: 'Side of the wall the stiffeners are on',
     options: { outside: 'Outside of the wall', inside: 'Inside of the wall' },
   },
   ...sectionVocabulary('stiffener', 'Stiffener'),
