@@ -645,6 +645,12 @@ function caseTrail(c: Shared, loadCase: ResolvedLoadCase): Trail {
     'm',
   );
   trail.output('weld-shear-flow', 'Shear flow in the stiffener-to-plate welds', weldFlow, 'N/m');
+  trail.output(
+    'plating-compression',
+    'Compression in the plating from the stiffener’s bending (0: in tension)',
+    platingCompression,
+    'Pa',
+  );
   if (deflection > 0) {
     trail.output(
       'required-moment-of-inertia',
@@ -685,15 +691,35 @@ function caseTrail(c: Shared, loadCase: ResolvedLoadCase): Trail {
   return trail;
 }
 
-/** The governing utilisation of a wall at another spacing (numbers only), for the spacing search. */
+/** The validity warnings the spacing search follows as margins, rather than as flags. */
+const SPACING_LIMITS = new Set(['panel-large-deflection', 'plating-buckling']);
+
+/**
+ * A wall at another spacing, numbers only, for the spacing search: the
+ * governing utilisation of its checks, and its margin, the largest of that
+ * utilisation and the two ratios that bound its validity as the spacing grows
+ * (the panel's deflection over half its thickness, the plating's compression
+ * over its buckling stress); with the other outside-validity warnings.
+ */
 function governingAt(input: Parsed, context: MethodContext, spacing: number) {
   const result = withoutTrailText(() =>
     stiffenedWall.compute({ ...input, spacing }, { ...context, numbersOnly: true }),
   );
+  const halfThickness = (input.thickness - (input.corrosionAllowance ?? 0)) / 2;
+  const buckling = result.steps.find((step) => step.id === 'plating-buckling-stress')!.value!;
   let utilisation = 0;
-  for (const trail of result.cases)
+  let margin = 0;
+  for (const trail of result.cases) {
     for (const check of trail.checks) utilisation = Math.max(utilisation, check.utilisation);
-  return { utilisation, outside: outsideValidityWarnings(context, result) };
+    for (const o of trail.outputs) {
+      if (o.id === 'panel-max-deflection') margin = Math.max(margin, o.value / halfThickness);
+      if (o.id === 'plating-compression') margin = Math.max(margin, o.value / buckling);
+    }
+  }
+  margin = Math.max(margin, utilisation);
+  const outside = outsideValidityWarnings(context, result);
+  const other = outside.filter((w) => !SPACING_LIMITS.has(w.code));
+  return { utilisation, margin, outside, other, passes: margin <= 1 && other.length === 0 };
 }
 
 /**
@@ -710,8 +736,8 @@ function spacingRange(input: Parsed): { low: number; high: number } {
 
 /**
  * The largest spacing at which every check of every load case passes and
- * the screening stays within its validity, by bisection in log s to 1e-6
- * relative between the smallest spacing the panel's thin-plate theory holds
+ * the screening stays within its validity, to 1e-6 relative (regula falsi
+ * in ln s) between the smallest spacing the panel's thin-plate theory holds
  * for (10·t) and 4 spans: the
  * utilisation rises with the spacing (more load and a wider panel per
  * stiffener), and so do the deflection of the panel and the compression of
@@ -721,14 +747,11 @@ function largestPassingSpacing(common: Trail, input: Parsed, context: MethodCont
   const label =
     'Largest stiffener spacing at which every check of every load case passes, within the method’s validity';
   const expression =
-    'largest s with max utilisation(s) <= 1 and no outside-validity warning, by bisection in s; this plate and stiffener';
+    'largest s with max utilisation(s) <= 1 and no outside-validity warning, by regula falsi in ln s; this plate and stiffener';
   const source =
     'this method solved for the spacing: the panel, the effective width, the load and the checks all taken at each spacing';
   const { low, high } = spacingRange(input);
-  const at = (spacing: number) => {
-    const g = governingAt(input, context, spacing);
-    return { ...g, passes: g.utilisation <= 1 && g.outside.length === 0 };
-  };
+  const at = (spacing: number) => governingAt(input, context, spacing);
   const atLow = at(low);
   const none = (text: string) =>
     common.step({
@@ -740,11 +763,14 @@ function largestPassingSpacing(common: Trail, input: Parsed, context: MethodCont
       unit: 'm',
       source,
     });
+  const codes = (ws: readonly ValidityWarning[]) => [...new Set(ws.map((w) => w.code))].join(', ');
   if (!atLow.passes) {
     none(
-      atLow.utilisation > 1
-        ? `even s = ${withUnit(low, 'm')} has a utilisation of ${formatNumber(atLow.utilisation)}: no spacing passes with this plate and stiffener`
-        : `even s = ${withUnit(low, 'm')} is outside the method’s validity (${[...new Set(atLow.outside.map((w) => w.code))].join(', ')}): no spacing can be given`,
+      atLow.other.length > 0
+        ? `even s = ${withUnit(low, 'm')} is outside the method’s validity (${codes(atLow.other)}): no spacing can be given`
+        : atLow.utilisation > 1
+          ? `even s = ${withUnit(low, 'm')} has a utilisation of ${formatNumber(atLow.utilisation)}: no spacing passes with this plate and stiffener`
+          : `even s = ${withUnit(low, 'm')} is outside the method’s validity (${codes(atLow.outside)}): no spacing can be given`,
     );
     return;
   }
@@ -755,24 +781,45 @@ function largestPassingSpacing(common: Trail, input: Parsed, context: MethodCont
     );
     return;
   }
-  let lo = low;
-  let hi = high;
-  for (let i = 0; i < 80 && hi / lo - 1 > 1e-6; i++) {
-    const mid = Math.sqrt(lo * hi);
-    if (at(mid).passes) lo = mid;
-    else hi = mid;
+  // The margin grows nearly as a power of the spacing: regula falsi (Illinois) on ln(margin)
+  // against ln(s) closes the bracket [passes, fails] in a few steps.
+  let lo = { s: low, f: Math.log(atLow.margin) };
+  let hi = {
+    s: high,
+    f: atHigh.other.length > 0 ? Math.log(Math.max(atHigh.margin, 2)) : Math.log(atHigh.margin),
+  };
+  let side = 0;
+  for (let i = 0; i < 100 && hi.s / lo.s - 1 > 1e-6; i++) {
+    const xl = Math.log(lo.s);
+    const xh = Math.log(hi.s);
+    let x = lo.f < 0 && hi.f > 0 ? xl - (lo.f * (xh - xl)) / (hi.f - lo.f) : (xl + xh) / 2;
+    // Stay inside the bracket, away from its ends.
+    const gap = xh - xl;
+    x = Math.min(Math.max(x, xl + gap * 1e-3), xh - gap * 1e-3);
+    const s = Math.exp(x);
+    const g = at(s);
+    const f = g.other.length > 0 ? Math.max(Math.log(g.margin), 1e-9) : Math.log(g.margin);
+    if (g.passes) {
+      lo = { s, f: Math.min(f, 0) };
+      if (side === -1) hi = { ...hi, f: hi.f / 2 };
+      side = -1;
+    } else {
+      hi = { s, f: Math.max(f, 1e-12) };
+      if (side === 1) lo = { ...lo, f: lo.f / 2 };
+      side = 1;
+    }
   }
-  const beyond = at(hi);
+  const beyond = at(hi.s);
   const limit =
     beyond.utilisation > 1
-      ? `a check reaches 1 there (utilisation ${formatNumber(at(lo).utilisation)})`
-      : `beyond it the screening is outside its validity (${[...new Set(beyond.outside.map((w) => w.code))].join(', ')})`;
+      ? `a check reaches 1 there (utilisation ${formatNumber(at(lo.s).utilisation)})`
+      : `beyond it the screening is outside its validity (${codes(beyond.outside)})`;
   common.step({
     id: 'largest-passing-spacing',
     label,
     expression,
-    substituted: `s_max = ${withUnit(lo, 'm')}: ${limit}; the spacing entered is ${withUnit(input.spacing, 'm')}`,
-    value: lo,
+    substituted: `s_max = ${withUnit(lo.s, 'm')}: ${limit}; the spacing entered is ${withUnit(input.spacing, 'm')}`,
+    value: lo.s,
     unit: 'm',
     source,
   });
