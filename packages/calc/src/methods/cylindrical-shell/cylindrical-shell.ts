@@ -953,7 +953,7 @@ function ringSteps(
     spacing: spacingFound?.spacing ?? input.length,
     thicknessSource: spacingFound
       ? 'the thinner wall of ringSpacingFor less the allowance, whose ring spacing is found above'
-      : 'the shell’s thickness less the allowance',
+      : 'the shell’s thickness less the allowance; UG-29 takes the shell’s required thickness there (from memory), which in the chart’s elastic range makes no difference (t + A_s/L_s cancels out of I_s)',
     spacingSource: spacingFound
       ? 'the ring spacing the thinner wall needs (above)'
       : 'the unsupported length between rings (input length)',

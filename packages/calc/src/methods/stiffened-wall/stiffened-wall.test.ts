@@ -381,6 +381,15 @@ describe('which side is compressed, fixed ends and validity', () => {
     expect(report.verdict === 'outside-validity' || report.verdict === 'fail').toBe(true);
   });
 
+  it('cautions that fixed ends need a frame that holds them', () => {
+    expect(
+      screen(wall({ stiffenerEnds: 'fixed' })).warnings.find(
+        (w) => w.code === 'stiffener-ends-fixed',
+      )?.severity,
+    ).toBe('caution');
+    expect(screen(wall()).warnings.map((w) => w.code)).not.toContain('stiffener-ends-fixed');
+  });
+
   it('warns of a deep, short stiffener and of an angle given without its radii', () => {
     const deep = screen(
       wall({ span: 0.5, stiffener: { shape: 'flat-bar', depth: 0.08, thickness: 0.01 } }),

@@ -854,6 +854,14 @@ export const stiffenedWall = defineMethod({
         message: `span over depth is ${formatNumber(shared.L / depth)}, below 10: shear deformation adds to the deflection (a Timoshenko beam), which the bending formulas leave out (common practice, no source)`,
       });
     }
+    if (input.stiffenerEnds === 'fixed') {
+      warnings.push({
+        code: 'stiffener-ends-fixed',
+        severity: 'caution',
+        message:
+          'fixed ends halve the mid-span moment (w·L²/24 against w·L²/8) only while the frame holds the ends against rotation; a frame that gives lets the moment move to mid-span: screen the stiffeners simply supported too unless the frame is stiff and the end connections carry w·L²/12',
+      });
+    }
     const s = input.stiffener;
     if (s.shape === 'angle' && s.rootRadius === undefined) {
       warnings.push({
