@@ -411,7 +411,11 @@ function commonSteps(
   };
 }
 
-/** Response per unit pressure of one load case's beam, so the checks and the allowable pressure share it. */
+/**
+ * One load case: the panel by the rectangular-plate method, then the
+ * stiffener as a beam, its stresses, shear, deflection and checks, the
+ * allowable pressure (every check is linear in q) and the plating's validity.
+ */
 function caseTrail(c: Shared, loadCase: ResolvedLoadCase): Trail {
   const trail = new Trail();
   const { input, L, s, material } = c;
