@@ -125,6 +125,12 @@ export {
 } from './methods/rectangular-plate/rectangular-plate';
 export type { RectangularPlateInput } from './methods/rectangular-plate/rectangular-plate';
 export {
+  DEFAULT_DEFLECTION_RATIO,
+  stiffenedWall,
+  stiffenedWallSchema,
+} from './methods/stiffened-wall/stiffened-wall';
+export type { StiffenedWallInput } from './methods/stiffened-wall/stiffened-wall';
+export {
   EXTERNAL_PRESSURE_DEFAULTS,
   cylindricalShell,
   cylindricalShellSchema,
@@ -179,9 +185,20 @@ export {
 export type { ParsedComponent, ScreenOutcome } from './screen';
 export type { EngineMethod } from './methods';
 
-// Thickness sweeps
-export { SWEEP_DEFAULT_POINTS, SWEEP_MAX_POINTS, sweepThickness } from './sweep';
-export type { SweepCase, SweepOptions, SweepPoint, SweepResult } from './sweep';
+// Stiffener and ring sections
+export { sectionSchema } from './sections/section-schema';
+export type { SectionInput } from './sections/section-schema';
+export { sectionProperties, withPlate } from './sections/section-properties';
+export type {
+  CompositeSection,
+  SectionProperties,
+  SectionShape,
+  SectionShapeName,
+} from './sections/section-properties';
+
+// Thickness and spacing sweeps
+export { SWEEP_DEFAULT_POINTS, SWEEP_MAX_POINTS, sweepSpacing, sweepThickness } from './sweep';
+export type { SpacingSweepResult, SweepCase, SweepOptions, SweepPoint, SweepResult } from './sweep';
 
 // Batch screening from CSV
 export { CHECKS_CSV_COLUMNS, casesToCsv, checksToCsv, csvField, readCsvCases } from './batch/csv';

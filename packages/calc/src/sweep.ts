@@ -42,7 +42,7 @@ export interface SweepPoint {
 
 /** A thickness sweep: every point, and the thinnest value that passes. */
 export interface SweepResult {
-  readonly parameter: SweepParameter<unknown>['id'];
+  readonly parameter: 'thickness';
   readonly label: string;
   readonly unit: 'm';
   /** The value in the input, SI. */
@@ -58,6 +58,28 @@ export interface SweepResult {
    * `note` names the warnings.
    */
   readonly minimumPassing: {
+    readonly value: number | null;
+    readonly note: string;
+    readonly outsideValidity: boolean;
+  };
+}
+
+/**
+ * A spacing sweep (the stiffened wall's stiffener spacing): every point, and
+ * the largest spacing that passes. The utilisation rises with the spacing.
+ */
+export interface SpacingSweepResult {
+  readonly parameter: 'spacing';
+  readonly label: string;
+  readonly unit: 'm';
+  readonly current: number;
+  readonly points: readonly SweepPoint[];
+  /**
+   * The largest value whose governing utilisation is at most 1 (utilisation
+   * assumed to rise with the value), or null when the range does not contain
+   * it; `note` and `outsideValidity` as for a thickness sweep's minimum.
+   */
+  readonly largestPassing: {
     readonly value: number | null;
     readonly note: string;
     readonly outsideValidity: boolean;
@@ -120,11 +142,51 @@ function governingOf(result: MethodResult): { utilisation: number; pass: boolean
  * thickness to sweep.
  */
 export function sweepThickness(rawInput: unknown, options: SweepOptions = {}): SweepResult {
+  const run = runSweep(rawInput, options, 'thickness');
+  return {
+    parameter: 'thickness',
+    label: run.label,
+    unit: 'm',
+    current: run.current,
+    points: run.points,
+    minimumPassing: run.limit,
+  };
+}
+
+/**
+ * Screens one component over a range of its stiffener spacing, as
+ * sweepThickness does over its thickness (the same rules for the range and
+ * its ends, `sweep.from`, `sweep.to`, `sweep.points`), and finds the largest
+ * spacing that passes: the utilisation rises with the spacing. `kind` is the
+ * issue for a method without a spacing to sweep.
+ */
+export function sweepSpacing(rawInput: unknown, options: SweepOptions = {}): SpacingSweepResult {
+  const run = runSweep(rawInput, options, 'spacing');
+  return {
+    parameter: 'spacing',
+    label: run.label,
+    unit: 'm',
+    current: run.current,
+    points: run.points,
+    largestPassing: run.limit,
+  };
+}
+
+function runSweep(
+  rawInput: unknown,
+  options: SweepOptions,
+  which: 'thickness' | 'spacing',
+): {
+  label: string;
+  current: number;
+  points: SweepPoint[];
+  limit: SweepResult['minimumPassing'];
+} {
   const component = parseComponent(rawInput);
   const method = component.method as MethodDefinition;
-  const sweep = method.sweep as SweepParameter<unknown> | undefined;
-  if (!sweep) fail('kind', `"${method.kind}" has no thickness to sweep`);
-
+  const sweep = (which === 'thickness' ? method.sweep : method.spacingSweep) as
+    SweepParameter<unknown> | undefined;
+  if (!sweep) fail('kind', `"${method.kind}" has no ${which} to sweep`);
   const points = options.points ?? SWEEP_DEFAULT_POINTS;
   if (typeof points !== 'number' || !Number.isInteger(points))
     fail('sweep.points', 'must be a whole number');
@@ -162,9 +224,13 @@ export function sweepThickness(rawInput: unknown, options: SweepOptions = {}): S
   if (!(from < to))
     fail('sweep', `no valid range of ${sweep.id} around ${formatNumber(current)} m`);
 
-  // Each point keeps numbers only, so its trail text is not written (withoutTrailText).
+  // Each point keeps numbers only, so its trail text is not written (withoutTrailText), and the
+  // method may leave out what feeds no check (numbersOnly).
+  const numbersOnly = { ...component.context, numbersOnly: true };
   const evaluate = (value: number) =>
-    withoutTrailText(() => computeResult(component, sweep.set(component.input, value)));
+    withoutTrailText(() =>
+      computeResult({ ...component, context: numbersOnly }, sweep.set(component.input, value)),
+    );
   const found = (at: { value: number | null; note: string }): SweepResult['minimumPassing'] => {
     if (at.value === null) return { ...at, outsideValidity: false };
     // With its text this time: the note quotes the warnings.
@@ -185,20 +251,29 @@ export function sweepThickness(rawInput: unknown, options: SweepOptions = {}): S
   let last: MethodResult | undefined;
   const sweptPoints = values.map((value) => point(component, value, (last = evaluate(value))));
 
-  return {
-    parameter: sweep.id,
-    label: sweep.label,
-    unit: sweep.unit,
-    current,
-    points: sweptPoints,
-    minimumPassing: last!.cases.some((trail) => trail.checks.length > 0)
-      ? found(minimumPassing(sweptPoints, from, to, (v) => governingOf(evaluate(v))))
-      : {
-          value: null,
-          note: 'not found: the method has no checks at these inputs',
-          outsideValidity: false,
-        },
-  };
+  const hasChecks = last!.cases.some((trail) => trail.checks.length > 0);
+  let limit: SweepResult['minimumPassing'];
+  if (!hasChecks) {
+    limit = {
+      value: null,
+      note: 'not found: the method has no checks at these inputs',
+      outsideValidity: false,
+    };
+  } else if (which === 'thickness') {
+    limit = found(minimumPassing(sweptPoints, from, to, (v) => governingOf(evaluate(v))));
+  } else {
+    // Utilisation rises with the spacing: search in 1/s, where it falls, and turn the answer back.
+    const mirrored = [...sweptPoints].reverse().map((p) => ({ ...p, value: 1 / p.value }));
+    const inverse = minimumPassing(
+      mirrored,
+      1 / to,
+      1 / from,
+      (v) => governingOf(evaluate(1 / v)),
+      SPACING_WORDS,
+    );
+    limit = found({ value: inverse.value === null ? null : 1 / inverse.value, note: inverse.note });
+  }
+  return { label: sweep.label, current, points: sweptPoints, limit };
 }
 
 /**
@@ -279,11 +354,40 @@ function point(component: ParsedComponent, value: number, result: MethodResult):
   return { value, utilisation, pass, outsideValidity, cases };
 }
 
+/** How a sweep's notes speak of its parameter. */
+interface SweepWords {
+  readonly unsteady: string;
+  /** The value shown for a swept value (a spacing sweep searches in 1/s). */
+  readonly shown: (value: number) => number;
+  readonly noneInRange: (end: string, utilisation: string) => string;
+  readonly allInRange: (end: string, utilisation: string) => string;
+}
+
+const THICKNESS_WORDS: SweepWords = {
+  unsteady:
+    '; the utilisation does not fall steadily with thickness over the range, so a thinner passing value may exist',
+  shown: (v) => v,
+  noneInRange: (end, u) => `not found in range: even ${end} m has a utilisation of ${u}`,
+  allInRange: (end, u) =>
+    `not found in range: ${end} m already passes (utilisation ${u}); the minimum lies below the range`,
+};
+
+const SPACING_WORDS: SweepWords = {
+  unsteady:
+    '; the utilisation does not rise steadily with spacing over the range, so a wider passing spacing may exist',
+  shown: (v) => 1 / v,
+  noneInRange: (end, u) =>
+    `not found in range: even the closest spacing, ${end} m, has a utilisation of ${u}`,
+  allInRange: (end, u) =>
+    `not found in range: the widest spacing, ${end} m, already passes (utilisation ${u}); the largest lies beyond the range`,
+};
+
 function minimumPassing(
   points: readonly SweepPoint[],
   from: number,
   to: number,
   governing: (value: number) => { utilisation: number },
+  words: SweepWords = THICKNESS_WORDS,
 ): { value: number | null; note: string } {
   const first = points[0]!;
   const last = points[points.length - 1]!;
@@ -291,19 +395,17 @@ function minimumPassing(
   for (let i = 1; i < points.length; i++) {
     if (points[i]!.utilisation > points[i - 1]!.utilisation * (1 + 1e-12)) monotonic = false;
   }
-  const caveat = monotonic
-    ? ''
-    : '; the utilisation does not fall steadily with thickness over the range, so a thinner passing value may exist';
+  const caveat = monotonic ? '' : words.unsteady;
   if (last.utilisation > 1) {
     return {
       value: null,
-      note: `not found in range: even ${formatNumber(to)} m has a utilisation of ${formatNumber(last.utilisation)}${caveat}`,
+      note: `${words.noneInRange(formatNumber(words.shown(to)), formatNumber(last.utilisation))}${caveat}`,
     };
   }
   if (first.utilisation <= 1) {
     return {
       value: null,
-      note: `not found in range: ${formatNumber(from)} m already passes (utilisation ${formatNumber(first.utilisation)}); the minimum lies below the range${caveat}`,
+      note: `${words.allInRange(formatNumber(words.shown(from)), formatNumber(first.utilisation))}${caveat}`,
     };
   }
   // The sampled points bracket the crossing; close the bracket [low fails,

@@ -30,6 +30,8 @@ const REPORT_UNIT_DIMENSION: Readonly<Record<string, DisplayDimension>> = {
   'Pa·m³/s': 'throughput',
   'N/m': 'lineForce',
   'N·m': 'moment',
+  m4: 'secondMomentOfArea',
+  'm^4': 'secondMomentOfArea',
 };
 
 /** The dimension of an SI report unit, or undefined for units shown as they come ("tf", "bar", "1"). */
@@ -71,6 +73,11 @@ const PRINTED: Readonly<Record<string, string>> = {
   'Pa·m3/s': 'Pa·m³/s',
   degC: '°C',
   degF: '°F',
+  // A superscript 4 is outside the shipped fonts' ranges (Latin-1 has ² and ³ only).
+  m4: 'm^4',
+  cm4: 'cm^4',
+  mm4: 'mm^4',
+  in4: 'in^4',
 };
 
 /** How a unit symbol of the engine's table is printed ("m2" → "m²", "degC" → "°C"). */
@@ -99,9 +106,9 @@ const FOOT = findUnit('ft')?.factor ?? Number.NaN;
  *
  * SI: Pa below 1 kPa, kPa below 1 MPa, then MPa; mm below 10 m, then m;
  * N, kN from 1 kN, MN from 1 MN; mm² below 0.01 m²; L below 1 m³; J, kJ, MJ;
- * N/m, N/mm from 1 N/mm; N·m, kN·m from 1 kN·m.
+ * N/m, N/mm from 1 N/mm; N·m, kN·m from 1 kN·m; cm^4 below 0.01 m^4.
  * US: psi below 1000 psi, then ksi; in below 10 ft, then ft; lbf below
- * 1000 lbf, then kip; in² below 1 ft²; ft³; ft·lbf; lbf/in; lbf·in.
+ * 1000 lbf, then kip; in² below 1 ft²; ft³; ft·lbf; lbf/in; lbf·in; in^4.
  */
 export function displayUnitSymbol(
   dimension: DisplayDimension,
@@ -139,6 +146,9 @@ export function displayUnitSymbol(
         return size >= 1e3 ? 'N/mm' : 'N/m';
       case 'moment':
         return size >= 1e3 ? 'kN·m' : 'N·m';
+      case 'secondMomentOfArea':
+        // Section tables print cm^4; a ring of a large shell may reach m^4.
+        return size >= 1e-2 ? 'm4' : 'cm4';
       case 'dimensionless':
         return '1';
     }
@@ -172,6 +182,8 @@ export function displayUnitSymbol(
       return 'lbf/in';
     case 'moment':
       return 'lbf·in';
+    case 'secondMomentOfArea':
+      return 'in4';
     case 'dimensionless':
       return '1';
   }

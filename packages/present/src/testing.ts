@@ -25,6 +25,7 @@ export const REPORT_UNITS = [
   'Pa·m³/s',
   'N/m',
   'N·m',
+  'm^4',
   '1',
   'tf',
   'bar',

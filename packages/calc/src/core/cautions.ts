@@ -159,6 +159,35 @@ export const CAUTIONS = {
       'rule for static pressure; a vessel cycled in pressure or temperature (a vacuum chamber pumped down and ' +
       'vented many times, a receiver that cycles) needs a fatigue assessment of its openings by the applicable code.',
   },
+  'stiffener-welds': {
+    code: 'stiffener-welds',
+    title: 'Stiffeners act through their welds',
+    text:
+      'A stiffener carries its share of the plate only through the welds that join them: they carry the ' +
+      'shear flow given in the trail. Intermittent or one-sided welds let the plate slip past the stiffener ' +
+      'between welds, so less of it acts with the stiffener than the effective width assumes, and a stiffener ' +
+      'over a gap acts alone. Fixed ends need welds or bolts that carry the end moment into a frame stiff ' +
+      'enough to hold it. Size the welds and end connections by the applicable code.',
+  },
+  'stiffener-stability': {
+    code: 'stiffener-stability',
+    title: 'Stiffener tripping and lateral buckling are not screened',
+    text:
+      'Where its free edge is in compression a stiffener can twist and buckle sideways (tripping, ' +
+      'lateral–torsional buckling) before it yields, a slender flat bar or an unbraced angle soonest. The ' +
+      'screening checks stresses, deflection and the local slenderness of the section, not this: brace the ' +
+      'free edge (a flange, tripping brackets, a tie to the next stiffener) or check it by a structural code ' +
+      '(for example EN 1993-1-1 or AISC 360).',
+  },
+  'ring-stiffeners': {
+    code: 'ring-stiffeners',
+    title: 'Stiffening rings: attachment, gaps and tripping',
+    text:
+      'The ring sizing assumes rings welded to the shell all round (ASME VIII-1 UG-30 allows intermittent ' +
+      'welds only within its limits), no gaps beyond those UG-29(c) permits, rings no farther apart than the ' +
+      'spacing used here and the shell’s out-of-roundness within the code’s tolerance. A ring’s free flange ' +
+      'in compression can trip; check its welds, its stability and any cut-outs by the applicable code.',
+  },
 } as const satisfies Record<string, Caution>;
 
 export type CautionCode = keyof typeof CAUTIONS;

@@ -134,6 +134,11 @@ function describe(si: number, dimension: Dimension, unit: string): string {
 
 /** A length, m ("12 mm", "0.5 in", "3/8 in", 0.012). */
 export const length = (options?: QuantityFieldOptions) => quantity('length', '12 mm', options);
+/** An area, m² ("1920 mm2", "19.2 cm2", "3.75 in2"): a section's area. */
+export const area = (options?: QuantityFieldOptions) => quantity('area', '1920 mm2', options);
+/** A second moment of area, m^4 ("177 cm4", "5.52 in4"): a section's I. */
+export const secondMomentOfArea = (options?: QuantityFieldOptions) =>
+  quantity('secondMomentOfArea', '177 cm4', options);
 /** An energy, J ("50 kJ", "0.1 kgTNT", 5e4). */
 export const energy = (options?: QuantityFieldOptions) => quantity('energy', '100 kJ', options);
 /** A stress or pressure magnitude (not a load-case pressure), Pa ("200 GPa", "138 MPa", "20 ksi"). */

@@ -25,6 +25,12 @@ export interface MethodContext {
    * `resolveMaterial(input.material, context)`, and the material comes at it.
    */
   readonly temperature: TemperatureContext;
+  /**
+   * Set by a sweep, which keeps only each point's checks and outputs: a method
+   * may leave out common steps that cost much and feed no check (the
+   * stiffened wall's own search for the largest spacing that passes).
+   */
+  readonly numbersOnly?: boolean;
 }
 
 /** What a method computes; the engine adds the engine stamp, governing case, verdict and cautions. */
@@ -43,9 +49,12 @@ export interface MethodResult {
   readonly cautions: readonly CautionCode[];
 }
 
-/** A parameter a sweep varies (thickness), read from and written to a parsed input. */
+/**
+ * A parameter a sweep varies (a thickness, or a stiffener spacing), read from
+ * and written to a parsed input. Its id is the input field it sets.
+ */
 export interface SweepParameter<Parsed> {
-  readonly id: 'thickness';
+  readonly id: 'thickness' | 'spacing';
   readonly label: string;
   readonly unit: 'm';
   get(input: Parsed): number;
@@ -75,7 +84,10 @@ export interface MethodDefinition<
    */
   readonly vocabulary: Vocabulary;
   readonly compute: (input: z.output<Schema>, context: MethodContext) => MethodResult;
+  /** The thickness to sweep (utilisation falls as it rises). */
   readonly sweep?: SweepParameter<z.output<Schema>>;
+  /** A spacing to sweep (utilisation rises with it): the stiffened wall's stiffener spacing. */
+  readonly spacingSweep?: SweepParameter<z.output<Schema>> & { readonly id: 'spacing' };
   /**
    * For methods without load cases (pump-down): the single case the report
    * shows, made from the input. Methods with load cases leave this out.

@@ -7,6 +7,7 @@ import { opening } from './opening/opening';
 import { pumpDown } from './pump-down/pump-down';
 import { rectangularPlate } from './rectangular-plate/rectangular-plate';
 import { sphereOrHead } from './sphere-or-head/sphere-or-head';
+import { stiffenedWall } from './stiffened-wall/stiffened-wall';
 import { storedEnergy } from './stored-energy/stored-energy';
 
 /**
@@ -17,6 +18,7 @@ import { storedEnergy } from './stored-energy/stored-energy';
 const ALL = [
   circularPlate,
   rectangularPlate,
+  stiffenedWall,
   cylindricalShell,
   sphereOrHead,
   opening,

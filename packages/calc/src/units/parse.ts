@@ -155,6 +155,8 @@ function describe(dimension: Dimension): string {
       return 'volume flow (pumping speed)';
     case 'throughput':
       return 'gas throughput (leak rate)';
+    case 'secondMomentOfArea':
+      return 'second moment of area';
     default:
       return dimension;
   }
@@ -178,6 +180,10 @@ function exampleUnit(dimension: Dimension | undefined): string {
       return 'mbar·L/s';
     case 'time':
       return 's';
+    case 'area':
+      return 'mm2';
+    case 'secondMomentOfArea':
+      return 'cm4';
     default:
       return 'm';
   }

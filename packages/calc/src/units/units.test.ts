@@ -128,6 +128,12 @@ describe('conversions against mathjs and js-quantities', () => {
     ['ft3', 'ft^3', 'm^3', 1e-15, 'mathjs'],
     ['J', 'J', 'J', 1e-15, 'mathjs'],
     ['kJ', 'kJ', 'J', 1e-15, 'mathjs'],
+    ['mm2', 'mm^2', 'm^2', 1e-15, 'mathjs'],
+    ['in2', 'in^2', 'm^2', 1e-15, 'mathjs'],
+    ['m4', 'm^4', 'm^4', 1e-15, 'mathjs'],
+    ['cm4', 'cm^4', 'm^4', 1e-15, 'mathjs'],
+    ['mm4', 'mm^4', 'm^4', 1e-15, 'mathjs'],
+    ['in4', 'in^4', 'm^4', 1e-15, 'mathjs'],
   ];
   it.each(cases)('1 %s = 1 %s (%s)', (ours, theirs, si, tolerance) => {
     const expected = theirs.includes(' ') ? mathUnit(theirs).toNumber(si) : viaMath(1, theirs, si);

@@ -25,6 +25,8 @@ export type Dimension =
   | 'lineForce'
   /** Force times length: a moment, a flexural rigidity (N·m). */
   | 'moment'
+  /** Second moment of area of a section (m^4): a stiffener's or a ring's I. */
+  | 'secondMomentOfArea'
   | 'dimensionless';
 
 export interface UnitDefinition {
@@ -419,6 +421,19 @@ export const UNITS: readonly UnitDefinition[] = [
     `${NIST}; exact from lb, g0 and foot`,
   ),
 
+  // second moment of area (a section's I); section tables print cm^4 (EN) and in^4 (AISC)
+  unit('m4', 'secondMomentOfArea', 1, 'metre to the fourth', ['m^4'], 'SI'),
+  unit('cm4', 'secondMomentOfArea', 1e-8, 'centimetre to the fourth', ['cm^4'], 'SI prefix'),
+  unit('mm4', 'secondMomentOfArea', 1e-12, 'millimetre to the fourth', ['mm^4'], 'SI prefix'),
+  unit(
+    'in4',
+    'secondMomentOfArea',
+    INCH ** 4,
+    'inch to the fourth',
+    ['in^4'],
+    `${NIST} (exact from the inch)`,
+  ),
+
   unit('1', 'dimensionless', 1, 'dimensionless', ['-', ''], 'SI'),
 ];
 
@@ -454,6 +469,7 @@ export const SI_UNIT: Readonly<Record<Dimension, string>> = {
   throughput: 'Pa·m3/s',
   lineForce: 'N/m',
   moment: 'N·m',
+  secondMomentOfArea: 'm4',
   dimensionless: '1',
 };
 

@@ -388,9 +388,141 @@ function closure(
   return { width: W, height: H, title, note: null, shapes };
 }
 
-function cylinder(diameter: number, thickness: number, length: number, system: UnitSystem): Sketch {
+/** A stiffener's or ring's section as plain numbers (SI), from a report's normalised inputs. */
+interface SectionDrawing {
+  readonly shape: 'flat-bar' | 'angle' | 'channel' | 'rhs' | 'properties';
+  readonly depth: number;
+  /** Width on the plate and of the flange (the bar's thickness for a flat bar). */
+  readonly width: number;
+  /** Web (or wall) thickness. */
+  readonly web: number;
+  /** Flange thickness. */
+  readonly flange: number;
+}
+
+function sectionOf(raw: unknown): SectionDrawing | null {
+  if (raw === null || typeof raw !== 'object') return null;
+  const r = raw as Record<string, unknown>;
+  const depth = num(r['depth']);
+  if (!depth) return null;
+  switch (r['shape']) {
+    case 'flat-bar': {
+      const t = num(r['thickness']);
+      return t ? { shape: 'flat-bar', depth, width: t, web: t, flange: t } : null;
+    }
+    case 'angle':
+    case 'rhs': {
+      const b = num(r['width']);
+      const t = num(r['thickness']);
+      return b && t ? { shape: r['shape'], depth, width: b, web: t, flange: t } : null;
+    }
+    case 'channel': {
+      const b = num(r['width']);
+      const tw = num(r['webThickness']);
+      const tf = num(r['flangeThickness']);
+      return b && tw && tf ? { shape: 'channel', depth, width: b, web: tw, flange: tf } : null;
+    }
+    case 'properties': {
+      const tw = num(r['webThickness']);
+      return tw ? { shape: 'properties', depth, width: tw, web: tw, flange: tw } : null;
+    }
+    default:
+      return null;
+  }
+}
+
+/** "flat bar 50 mm × 8 mm", "angle 60 mm × 60 mm × 6 mm": the section in words. */
+function sectionText(section: SectionDrawing, system: UnitSystem): string {
+  const d = show(section.depth, 'm', system);
+  const b = show(section.width, 'm', system);
+  const t = show(section.web, 'm', system);
+  switch (section.shape) {
+    case 'flat-bar':
+      return `flat bar ${d} × ${t}`;
+    case 'angle':
+      return `angle ${d} × ${b} × ${t}`;
+    case 'channel':
+      return `channel ${d} × ${b}`;
+    case 'rhs':
+      return `hollow section ${d} × ${b} × ${t}`;
+    case 'properties':
+      return `section ${d} deep (properties given)`;
+  }
+}
+
+/**
+ * The shapes of a section standing on a plate face at (x, y), growing in
+ * direction `up` (−1 upwards on the page, +1 downwards), drawn at `scale`
+ * px/m with every part at least `min` px thick.
+ */
+function sectionShapes(
+  section: SectionDrawing,
+  x: number,
+  y: number,
+  up: 1 | -1,
+  scale: number,
+  min = 2,
+): Shape[] {
+  const px = (m: number, floor = min) => Math.max(m * scale, floor);
+  const h = px(section.depth, 6);
+  const web = px(section.web);
+  const flange = px(section.flange);
+  const b = px(section.width, web);
+  const rect = (x0: number, from: number, w: number, height: number): Shape => ({
+    type: 'rect',
+    x: x0,
+    y: up === -1 ? y - from - height : y + from,
+    width: w,
+    height,
+    fill: 'body',
+    stroke: 'ink',
+    strokeWidth: 1,
+  });
+  switch (section.shape) {
+    case 'flat-bar':
+      return [rect(x - web / 2, 0, web, h)];
+    case 'angle':
+      // The standing leg centred on x, the free leg reaching to one side at the far edge.
+      return [rect(x - web / 2, 0, web, h - flange), rect(x - web / 2, h - flange, b, flange)];
+    case 'channel':
+      return [
+        rect(x - web / 2, 0, b, flange),
+        rect(x - web / 2, flange, web, Math.max(h - 2 * flange, 1)),
+        rect(x - web / 2, h - flange, b, flange),
+      ];
+    case 'rhs':
+      return [
+        rect(x - b / 2, 0, b, web),
+        rect(x - b / 2, h - web, b, web),
+        rect(x - b / 2, web, web, Math.max(h - 2 * web, 1)),
+        rect(x + b / 2 - web, web, web, Math.max(h - 2 * web, 1)),
+      ];
+    case 'properties':
+      return [
+        {
+          type: 'rect',
+          x: x - Math.max(web, h / 3) / 2,
+          y: up === -1 ? y - h : y,
+          width: Math.max(web, h / 3),
+          height: h,
+          fill: 'none',
+          stroke: 'ink',
+          strokeWidth: 1,
+          dashed: true,
+        },
+      ];
+  }
+}
+
+function cylinder(
+  diameter: number,
+  thickness: number,
+  length: number,
+  system: UnitSystem,
+  ring: SectionDrawing | null,
+): Sketch {
   const box = { width: W, height: H };
-  const fit = fitToBox(length, diameter, W, H, 46);
+  const fit = fitToBox(length, diameter, W, H, ring ? 56 : 46);
   const l = length * fit.scale;
   const d = diameter * fit.scale;
   const x0 = (W - l) / 2;
@@ -410,15 +542,210 @@ function cylinder(diameter: number, thickness: number, length: number, system: U
       stroke: 'muted',
       pattern: 'centre',
     },
-    ...dimension(x0, y0 + d, x0 + l, y0 + d, -18, `L ${show(length, 'm', system)}`, box),
+    ...dimension(
+      x0,
+      y0 + d,
+      x0 + l,
+      y0 + d,
+      -18,
+      `${ring ? 'L between rings' : 'L'} ${show(length, 'm', system)}`,
+      box,
+    ),
     ...dimension(x0, y0, x0, y0 + d, 18, `D ${show(diameter, 'm', system)}`, box),
-    label(x0 + l / 2, y0 - 6, `t ${show(thickness, 'm', system)}`, box),
   ];
+  if (ring) {
+    // A ring at each end of the length, standing out from the shell (not to scale when small).
+    const ringScale = Math.min(fit.scale, 22 / ring.depth);
+    for (const x of [x0, x0 + l]) {
+      shapes.push(
+        ...sectionShapes(ring, x, y0, -1, ringScale, 3),
+        ...sectionShapes(ring, x, y0 + d, 1, ringScale, 3),
+      );
+    }
+    shapes.push(
+      label(x0 + l / 2, y0 - 8, `t ${show(thickness, 'm', system)}`, box),
+      label(x0 + l / 2, 12, `rings: ${sectionText(ring, system)}`, box, {
+        size: 'note',
+        role: 'muted',
+      }),
+    );
+  } else {
+    shapes.push(label(x0 + l / 2, y0 - 6, `t ${show(thickness, 'm', system)}`, box));
+  }
   return {
     width: W,
     height: H,
-    title: `Cylindrical shell, diameter ${show(diameter, 'm', system)}, length ${show(length, 'm', system)}, wall ${show(thickness, 'm', system)}.`,
-    note: t.toScale ? null : NOT_TO_SCALE,
+    title: `Cylindrical shell, diameter ${show(diameter, 'm', system)}, length ${show(length, 'm', system)}, wall ${show(thickness, 'm', system)}${
+      ring ? `, stiffening rings (${sectionText(ring, system)}) at each end of the length` : ''
+    }.`,
+    note: t.toScale && !ring ? null : NOT_TO_SCALE,
+    shapes,
+  };
+}
+
+/**
+ * A stiffened wall: on the left a front view of three panels between
+ * stiffeners (span and spacing dimensioned, the supports at the stiffeners'
+ * ends), on the right a section through one stiffener and its plate with the
+ * pressure on its higher side.
+ */
+function stiffenedWall(
+  span: number,
+  spacing: number,
+  thickness: number,
+  section: SectionDrawing,
+  ends: 'simply-supported' | 'fixed',
+  panelEdge: 'clamped' | 'simply-supported',
+  stiffenersOutside: boolean,
+  direction: PressureDirection,
+  system: UnitSystem,
+): Sketch {
+  const box = { width: W, height: H };
+  // Front view: three bays, stiffeners at their middles' boundaries.
+  const left = 70;
+  const frontWidth = 190;
+  const frontHeight = H - 86;
+  const fit = fitToBox(3 * spacing, span, frontWidth, frontHeight, 0);
+  const w = 3 * spacing * fit.scale;
+  const h = span * fit.scale;
+  const x0 = left + (frontWidth - w) / 2;
+  const y0 = 30 + (frontHeight - h) / 2;
+  const shapes: Shape[] = [
+    { type: 'rect', x: x0, y: y0, width: w, height: h, fill: 'body', stroke: 'muted' },
+  ];
+  const barWidth = Math.max(section.width * fit.scale, 3);
+  for (let i = 0; i < 3; i++) {
+    const x = x0 + (i + 0.5) * spacing * fit.scale;
+    shapes.push({
+      type: 'rect',
+      x: x - barWidth / 2,
+      y: y0,
+      width: barWidth,
+      height: h,
+      fill: 'support',
+      stroke: 'ink',
+      strokeWidth: 1,
+    });
+  }
+  // The stiffeners' end supports along the top and bottom.
+  if (ends === 'fixed') {
+    shapes.push(...hatch(x0, y0 - 8, w, 8), ...hatch(x0, y0 + h, w, 8));
+  } else {
+    for (let i = 0; i < 3; i++) {
+      const x = x0 + (i + 0.5) * spacing * fit.scale;
+      for (const [y, dy] of [
+        [y0, -1],
+        [y0 + h, 1],
+      ] as const) {
+        shapes.push({
+          type: 'path',
+          points: [
+            { x, y },
+            { x: x - 6, y: y + dy * 10 },
+            { x: x + 6, y: y + dy * 10 },
+          ],
+          closed: true,
+          fill: 'support',
+          stroke: 'ink',
+        });
+      }
+    }
+  }
+  const xs1 = x0 + 0.5 * spacing * fit.scale;
+  const xs2 = x0 + 1.5 * spacing * fit.scale;
+  shapes.push(
+    ...dimension(xs1, y0 + h, xs2, y0 + h, 22, `s ${show(spacing, 'm', system)}`, box),
+    ...dimension(x0, y0, x0, y0 + h, 22, `L ${show(span, 'm', system)}`, box),
+    label(x0 + w / 2, 12, 'stiffeners (front view)', box, { size: 'note', role: 'muted' }),
+  );
+
+  // Section through one stiffener and its plate, stiffeners up (outside) or down.
+  const cx = W - 70;
+  const plateWidth = Math.min(spacing, Math.max(4 * section.width, 1.6 * section.depth));
+  const sectionScale = Math.min(110 / plateWidth, 110 / (section.depth + thickness));
+  const pw = plateWidth * sectionScale;
+  const tp = Math.max(thickness * sectionScale, 3);
+  const up: 1 | -1 = stiffenersOutside ? -1 : 1;
+  const plateY = stiffenersOutside ? H / 2 + 34 : H / 2 - 34;
+  shapes.push({
+    type: 'rect',
+    x: cx - pw / 2,
+    y: stiffenersOutside ? plateY : plateY - tp,
+    width: pw,
+    height: tp,
+    fill: 'body',
+    stroke: 'ink',
+    strokeWidth: 1.2,
+  });
+  shapes.push(
+    ...sectionShapes(section, cx, stiffenersOutside ? plateY : plateY - tp, up, sectionScale),
+  );
+  const tip = Math.max(section.depth * sectionScale, 6);
+  const farEdge = stiffenersOutside ? plateY - tip : plateY + tip;
+  if (direction !== 'balanced') {
+    const fromOutside = direction === 'external-over';
+    // The outside is the top of the section view when the stiffeners are outside.
+    const fromTop = fromOutside === stiffenersOutside;
+    const face = fromTop
+      ? Math.min(plateY, farEdge)
+      : Math.max(plateY + (stiffenersOutside ? tp : 0), farEdge);
+    for (const dx of [-0.4, 0.4]) {
+      const ax = cx + dx * pw;
+      shapes.push(
+        ...(fromTop
+          ? arrow(ax, face - 24, ax, face - 4, 'accent')
+          : arrow(ax, face + 24, ax, face + 4, 'accent')),
+      );
+    }
+    shapes.push(
+      label(
+        cx,
+        fromTop ? face - 30 : face + 38,
+        `higher pressure ${fromOutside ? 'outside' : 'inside'}`,
+        box,
+        {
+          size: 'note',
+          role: 'accent',
+        },
+      ),
+    );
+  }
+  shapes.push(
+    label(
+      cx,
+      stiffenersOutside ? plateY + tp + 14 : plateY - tp - 6,
+      `plate ${show(thickness, 'm', system)}`,
+      box,
+      {
+        size: 'note',
+      },
+    ),
+    label(
+      cx + Math.max(section.width * sectionScale, 4) / 2 + 6,
+      (plateY + farEdge) / 2 + 4,
+      show(section.depth, 'm', system),
+      box,
+      {
+        anchor: 'start',
+        size: 'note',
+      },
+    ),
+    label(
+      x0 + w / 2,
+      H - 4,
+      `${ends === 'fixed' ? 'stiffener ends fixed' : 'stiffener ends simply supported'}; panels ${panelEdge === 'clamped' ? 'clamped' : 'simply supported'}`,
+      box,
+      {
+        size: 'note',
+        role: 'muted',
+      },
+    ),
+  );
+  return {
+    width: W,
+    height: H,
+    title: `Stiffened flat wall: ${sectionText(section, system)} stiffeners at ${show(spacing, 'm', system)} on a span of ${show(span, 'm', system)}, plate ${show(thickness, 'm', system)}, stiffeners on the ${stiffenersOutside ? 'outside' : 'inside'}.`,
+    note: NOT_TO_SCALE,
     shapes,
   };
 }
@@ -846,7 +1173,25 @@ export function sketchOf(report: Report, system: UnitSystem): Sketch | null {
       const d = num(inputs['diameter']);
       const t = num(inputs['thickness']);
       const l = num(inputs['length']);
-      return d && t && l ? cylinder(d, t, l, system) : null;
+      return d && t && l ? cylinder(d, t, l, system, sectionOf(inputs['ringSection'])) : null;
+    }
+    case 'stiffened-wall': {
+      const span = num(inputs['span']);
+      const spacing = num(inputs['spacing']);
+      const t = num(inputs['thickness']);
+      const section = sectionOf(inputs['stiffener']);
+      if (!span || !spacing || !t || !section) return null;
+      return stiffenedWall(
+        span,
+        spacing,
+        t,
+        section,
+        inputs['stiffenerEnds'] === 'fixed' ? 'fixed' : 'simply-supported',
+        inputs['panelEdge'] === 'simply-supported' ? 'simply-supported' : 'clamped',
+        inputs['stiffenerSide'] !== 'inside',
+        higherSide(report),
+        system,
+      );
     }
     case 'sphere-or-head': {
       const d = num(inputs['diameter']);

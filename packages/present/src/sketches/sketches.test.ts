@@ -139,6 +139,37 @@ describe('component sketches', () => {
     expect(sketch.title).toMatch(/limits of reinforcement X 205\.7 mm/);
   });
 
+  it('draws a stiffened wall: spacing, span, plate and the stiffener’s section, and the side of the pressure', () => {
+    const wall = METHODS.find((m) => m.kind === 'stiffened-wall')!;
+    const sketch = sketchOf(screen(wall.examples[0]!.input), 'si')!;
+    const texts = sketch.shapes.flatMap((s) => (s.type === 'text' ? [s.text] : []));
+    expect(texts).toEqual(
+      expect.arrayContaining([
+        's 400 mm',
+        'L 1000 mm',
+        'plate 3 mm',
+        '50 mm',
+        'higher pressure outside',
+      ]),
+    );
+    expect(sketch.title).toMatch(/flat bar 50 mm × 6 mm stiffeners at 400 mm on a span of 1000 mm/);
+    // Three stiffeners in the front view, and the section's bar.
+    expect(sketch.shapes.filter((s) => s.type === 'rect' && s.fill === 'support')).toHaveLength(3);
+    const oven = sketchOf(screen(wall.examples[1]!.input), 'us')!;
+    expect(oven.title).toMatch(/angle 2.362 in × 2.362 in × 0.2362 in stiffeners/);
+  });
+
+  it('draws stiffening rings on a cylinder that has a ring section', () => {
+    const shell = METHODS.find((m) => m.kind === 'cylindrical-shell')!;
+    const withRings = shell.examples.find((e) => 'ringSection' in (e.input as object))!;
+    const sketch = sketchOf(screen(withRings.input), 'si')!;
+    const texts = sketch.shapes.flatMap((s) => (s.type === 'text' ? [s.text] : []));
+    expect(texts).toContain('rings: flat bar 50 mm × 8 mm');
+    expect(texts).toContain('L between rings 1000 mm');
+    const plain = sketchOf(screen(shell.examples[0]!.input), 'si')!;
+    expect(plain.shapes.some((s) => s.type === 'text' && s.text.startsWith('rings'))).toBe(false);
+  });
+
   it('has no sketch for stored energy and pump-down', () => {
     for (const kind of ['stored-energy', 'pump-down']) {
       const m = METHODS.find((x) => x.kind === kind)!;

@@ -78,6 +78,7 @@ export function SpecField({
       );
     case 'select': {
       const current = getIn(raw, spec.path);
+      const parent = spec.path.split('.').slice(0, -1).join('.');
       return (
         <SelectField
           id={fieldId(spec.path)}
@@ -87,14 +88,21 @@ export function SpecField({
           hint={hint}
           onChange={(event) => {
             const value = event.target.value;
+            // The empty choice of an optional object removes it (a cylinder without rings).
+            if (value === '' && spec.none !== undefined) {
+              editor.set(parent, undefined);
+              return;
+            }
             const reset = spec.resets?.[value];
-            if (reset) {
-              const parent = spec.path.split('.').slice(0, -1).join('.');
-              editor.set(parent, { ...(reset as Raw) });
-            } else editor.set(spec.path, value);
+            if (reset) editor.set(parent, { ...(reset as Raw) });
+            else editor.set(spec.path, value);
           }}
         >
-          {typeof current !== 'string' ? <option value="">Choose…</option> : null}
+          {spec.none !== undefined ? (
+            <option value="">{spec.none}</option>
+          ) : typeof current !== 'string' ? (
+            <option value="">Choose…</option>
+          ) : null}
           {spec.options.map((o) => (
             <option key={o.value} value={o.value}>
               {o.label}

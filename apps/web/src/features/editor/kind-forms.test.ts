@@ -85,4 +85,36 @@ describe('kind forms', () => {
     });
     expect(() => fieldSpec('circular-plate', 'noSuchField')).toThrow(/lacks/);
   });
+
+  it('makes a union’s discriminator a choice: a seal outline, a stiffener’s section, an optional ring', () => {
+    expect(fieldSpec('flat-area-load', 'outline.shape')).toMatchObject({
+      type: 'select',
+      options: [
+        { value: 'circle', label: 'Circle' },
+        { value: 'rectangle', label: 'Rectangle' },
+      ],
+    });
+    expect(fieldSpec('stiffened-wall', 'stiffener.shape')).toMatchObject({
+      type: 'select',
+      label: 'Stiffener section',
+    });
+    // A ring's dimensions are not "optional" once there is a ring; the ring itself is.
+    expect(fieldSpec('cylindrical-shell', 'ringSection.depth')).toMatchObject({
+      label: 'Ring depth (off the plate)',
+      kind: 'length',
+    });
+    expect(fieldSpec('cylindrical-shell', 'ringSection.rootRadius')).toMatchObject({
+      label: 'Ring root radius (optional)',
+    });
+    expect(fieldSpec('stiffened-wall', 'stiffener.momentOfInertia')).toMatchObject({
+      kind: 'secondMomentOfArea',
+    });
+    const ring = KIND_FORMS['cylindrical-shell']!.sections.find(
+      (s) => s.title === 'Stiffening rings',
+    )!;
+    expect(fieldSpec('cylindrical-shell', ring.fields[0]!)).toMatchObject({
+      label: 'Stiffening-ring section (optional)',
+      none: 'No ring section (rings not checked)',
+    });
+  });
 });

@@ -24,6 +24,11 @@ export type FieldLayout =
       readonly path: string;
       /** Other fields to set when this choice changes (e.g. the outline's dimensions with its shape). */
       readonly resets?: Readonly<Record<string, Raw>>;
+      /**
+       * For the choice of an optional object (a cylinder's ring section): the words of the
+       * empty choice, which removes the object.
+       */
+      readonly none?: string;
     }
   | { readonly type: 'load-cases' };
 
@@ -51,6 +56,8 @@ export type FieldSpec =
       readonly options: readonly { readonly value: string; readonly label: string }[];
       readonly hint?: string;
       readonly resets?: Readonly<Record<string, Raw>>;
+      /** The words of an empty choice that removes the object this choice belongs to. */
+      readonly none?: string;
     }
   | { readonly type: 'material'; readonly path: string; readonly label: string }
   | { readonly type: 'load-cases' };
@@ -90,7 +97,10 @@ export function fieldSpec(kind: ComponentKind, layout: FieldLayout): FieldSpec {
   if (!method || !field) throw new Error(`the ${kind} form names ${path}, which the engine lacks`);
   const words = wordsFor(method.vocabulary, path);
   const base = words?.label ?? path;
-  const label = field.optional ? `${base} (optional)` : base;
+  // "(optional)" for a field that may be left out where it stands: not for a dimension of a
+  // ring section, which the ring needs once there is one (the form's choice removes the ring).
+  const removable = typeof layout !== 'string' && layout.none !== undefined;
+  const label = field.optionalInParent || removable ? `${base} (optional)` : base;
   const hint = words?.hint !== undefined ? { hint: words.hint } : {};
   // A material field, the component's own or a part's ("nozzle.material"): the material picker.
   if (path === 'material' || path.endsWith('.material'))
@@ -116,6 +126,7 @@ export function fieldSpec(kind: ComponentKind, layout: FieldLayout): FieldSpec {
         })),
         ...hint,
         ...(typeof layout !== 'string' && layout.resets ? { resets: layout.resets } : {}),
+        ...(typeof layout !== 'string' && layout.none ? { none: layout.none } : {}),
       };
     default:
       return { type: 'number', path, label, ...hint, optional: field.optional };
@@ -196,6 +207,33 @@ const flatAreaLoad: KindForm = {
   }),
 };
 
+/** A section's choice resets its dimensions; one form section per shape shows them. */
+const SECTION_SHAPES = ['flat-bar', 'angle', 'channel', 'rhs', 'properties'] as const;
+const sectionResets = Object.fromEntries(SECTION_SHAPES.map((shape) => [shape, { shape }]));
+const SECTION_FIELDS: Record<(typeof SECTION_SHAPES)[number], readonly string[]> = {
+  'flat-bar': ['depth', 'thickness'],
+  angle: ['depth', 'width', 'thickness', 'rootRadius', 'toeRadius'],
+  channel: ['depth', 'width', 'webThickness', 'flangeThickness', 'rootRadius'],
+  rhs: ['depth', 'width', 'thickness', 'cornerRadius', 'innerCornerRadius'],
+  properties: ['area', 'momentOfInertia', 'centroid', 'depth', 'webThickness'],
+};
+const SECTION_TITLES: Record<(typeof SECTION_SHAPES)[number], string> = {
+  'flat-bar': 'Flat bar',
+  angle: 'Angle',
+  channel: 'Channel',
+  rhs: 'Hollow section',
+  properties: 'Section properties',
+};
+
+/** The dimension sections of a section input at `prefix` ("stiffener", "ringSection"). */
+function sectionDimensions(prefix: string, titlePrefix: string): FormSection[] {
+  return SECTION_SHAPES.map((shape) => ({
+    title: `${titlePrefix}: ${SECTION_TITLES[shape].toLowerCase()}`,
+    when: (raw: Raw) => (raw[prefix] as Raw | undefined)?.['shape'] === shape,
+    fields: SECTION_FIELDS[shape].map((field) => `${prefix}.${field}`),
+  }));
+}
+
 const rectangularPlate: KindForm = {
   kind: 'rectangular-plate',
   sections: [
@@ -223,6 +261,17 @@ const cylindricalShell: KindForm = {
     },
     { title: 'Material', fields: [...strength, TEMPERATURE, 'jointEfficiency'] },
     { title: 'External pressure', fields: [...externalPressure, 'ringSpacingFor'] },
+    {
+      title: 'Stiffening rings',
+      fields: [
+        {
+          path: 'ringSection.shape',
+          resets: sectionResets,
+          none: 'No ring section (rings not checked)',
+        },
+      ],
+    },
+    ...sectionDimensions('ringSection', 'Ring'),
     { title: 'Load cases', fields: [LOAD_CASES] },
   ],
   template: (system) => ({
@@ -236,6 +285,47 @@ const cylindricalShell: KindForm = {
     loadCases: [
       { name: 'Operating: full vacuum', internal: 'full vacuum' },
       { name: 'Vent back-fill', internal: len('0.5 bar(g)', '7 psig')(system) },
+    ],
+  }),
+};
+
+const stiffenedWall: KindForm = {
+  kind: 'stiffened-wall',
+  sections: [
+    { title: 'Wall', fields: ['span', 'spacing', 'thickness', 'panelEdge', 'corrosionAllowance'] },
+    {
+      title: 'Stiffeners',
+      fields: [
+        'stiffenerEnds',
+        'stiffenerSide',
+        { path: 'stiffener.shape', resets: sectionResets },
+      ],
+    },
+    ...sectionDimensions('stiffener', 'Stiffener'),
+    {
+      title: 'Material and limits',
+      fields: [...strength, TEMPERATURE, 'deflectionRatio', 'panelDeflectionLimit'],
+    },
+    { title: 'Load cases', fields: [LOAD_CASES] },
+  ],
+  // A glovebox side wall: 316L plate with flat-bar stiffeners, at a small under- and over-pressure.
+  template: (system) => ({
+    kind: 'stiffened-wall',
+    span: len('1000 mm', '40 in')(system),
+    spacing: len('400 mm', '16 in')(system),
+    thickness: len('3 mm', '0.125 in')(system),
+    panelEdge: 'clamped',
+    stiffenerEnds: 'simply-supported',
+    stiffenerSide: 'outside',
+    stiffener: {
+      shape: 'flat-bar',
+      depth: len('50 mm', '2 in')(system),
+      thickness: len('6 mm', '0.25 in')(system),
+    },
+    material: 'stainless-316l',
+    loadCases: [
+      { name: 'Design underpressure', internal: len('-25 mbar(g)', '-10 inH2O(g)')(system) },
+      { name: 'Design overpressure', internal: len('25 mbar(g)', '10 inH2O(g)')(system) },
     ],
   }),
 };
@@ -396,6 +486,7 @@ export const KIND_FORMS: Partial<Record<ComponentKind, KindForm>> = {
   'circular-plate': circularPlate,
   'flat-area-load': flatAreaLoad,
   'rectangular-plate': rectangularPlate,
+  'stiffened-wall': stiffenedWall,
   'cylindrical-shell': cylindricalShell,
   'sphere-or-head': sphereOrHead,
   opening,

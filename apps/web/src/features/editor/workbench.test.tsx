@@ -212,3 +212,67 @@ describe('Workbench', () => {
     }
   });
 });
+
+describe('Workbench: sections of stiffeners and rings', () => {
+  afterEach(() => vi.unstubAllGlobals());
+
+  function renderKind(
+    kind: 'stiffened-wall' | 'cylindrical-shell',
+    inputs: Record<string, unknown>,
+  ) {
+    const onSave = vi.fn(async () => undefined);
+    fakeApi({ 'GET /projects/p1/materials': { body: { items: [] } } });
+    renderApp(
+      <Workbench
+        project={project}
+        kind={kind}
+        initialInputs={inputs}
+        saveLabel="Save as revision 1"
+        canSaveMaterials
+        onSave={onSave}
+      />,
+    );
+    return onSave;
+  }
+
+  it('a stiffened wall: choosing an angle shows its dimensions, and the result follows them', async () => {
+    const wall = KIND_FORMS['stiffened-wall']!.template('si');
+    const onSave = renderKind('stiffened-wall', wall);
+    expect(await screen.findByText(/^Governing:/)).toBeInTheDocument();
+    expect(screen.getByLabelText('Stiffener depth (off the plate)')).toHaveValue('50 mm');
+    await userEvent.selectOptions(
+      screen.getByLabelText('Stiffener section'),
+      'Angle (one leg standing, the other a free flange)',
+    );
+    // The shape's own fields, empty: the engine names each as required.
+    const depth = screen.getByLabelText('Stiffener depth (off the plate)');
+    expect(depth).toHaveValue('');
+    await userEvent.type(depth, '60 mm');
+    await userEvent.type(screen.getByLabelText('Stiffener flange width'), '60 mm');
+    await userEvent.type(screen.getByLabelText('Stiffener thickness'), '6 mm');
+    expect(screen.getByLabelText('Stiffener root radius (optional)')).toBeInTheDocument();
+    const angle = {
+      ...wall,
+      stiffener: { shape: 'angle', depth: '60 mm', width: '60 mm', thickness: '6 mm' },
+    };
+    expect(screen.getByText(/^Governing:/).closest('p')!).toHaveTextContent(governingText(angle));
+    await userEvent.click(screen.getByRole('button', { name: 'Save as revision 1' }));
+    await vi.waitFor(() => expect(onSave).toHaveBeenCalled());
+    expect((onSave.mock.calls[0] as unknown[])[0]).toMatchObject({ stiffener: angle.stiffener });
+  });
+
+  it('a cylinder: a ring section can be chosen and removed again', async () => {
+    const shell = KIND_FORMS['cylindrical-shell']!.template('si');
+    renderKind('cylindrical-shell', shell);
+    const choice = await screen.findByLabelText('Stiffening-ring section (optional)');
+    expect(choice).toHaveValue('');
+    await userEvent.selectOptions(choice, 'Flat bar on edge');
+    await userEvent.type(screen.getByLabelText('Ring depth (off the plate)'), '50 mm');
+    await userEvent.type(screen.getByLabelText('Ring thickness'), '8 mm');
+    expect(
+      await screen.findByRole('table', { name: /Checks for Operating: full vacuum/ }),
+    ).toHaveTextContent('ring');
+    await userEvent.selectOptions(choice, 'No ring section (rings not checked)');
+    expect(screen.queryByLabelText('Ring depth (off the plate)')).not.toBeInTheDocument();
+  });
+});

@@ -236,6 +236,14 @@ export function ReportPictures({
         : sweepForPlot(deferredInput, report.governing?.utilisation ?? null),
     [deferredInput, report],
   );
+  // A stiffened wall has a spacing to sweep too (null for every other kind).
+  const spacingSweep = useMemo(
+    () =>
+      deferredInput === undefined
+        ? null
+        : sweepForPlot(deferredInput, report.governing?.utilisation ?? null, {}, 'spacing'),
+    [deferredInput, report],
+  );
   const lobes = lobeCount(report);
   // No heading over nothing: stored energy and pump-down have no sketch.
   const hasSketch = useMemo(() => sketchOf(report, system) !== null, [report, system]);
@@ -263,6 +271,14 @@ export function ReportPictures({
             Thickness sweep
           </h3>
           <SweepPlot sweep={sweep} system={system} />
+        </section>
+      ) : null}
+      {spacingSweep ? (
+        <section aria-labelledby="spacing-sweep-title">
+          <h3 id="spacing-sweep-title" className="mb-1 text-sm font-semibold">
+            Spacing sweep
+          </h3>
+          <SweepPlot sweep={spacingSweep} system={system} />
         </section>
       ) : null}
     </div>

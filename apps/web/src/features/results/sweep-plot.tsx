@@ -14,8 +14,9 @@ const H = 250;
 const M = { left: 50, right: 14, top: 14, bottom: 40 };
 
 /**
- * Governing utilisation against thickness: the curve, the 100 % line, the
- * current design and the smallest thickness that passes. Where the engine
+ * Governing utilisation against thickness (or stiffener spacing): the curve,
+ * the 100 % line, the current design and the smallest thickness (largest
+ * spacing) that passes. Where the engine
  * flags the method as outside its validity range the curve is dashed over a
  * shaded band (a legend entry says so). Utilisations above the top of the
  * chart are drawn at the top (the caption has the numbers).
@@ -35,7 +36,7 @@ export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSys
   const yOf = (u: number) => y(Math.min(u * 100, yTop));
   // Two paths: intervals with a flagged end go into the dashed one (sweep.ts, outsideRuns).
   const at = (p: (typeof pts)[number]) =>
-    `${x(toLen(p.thickness)).toFixed(1)},${yOf(p.utilisation).toFixed(1)}`;
+    `${x(toLen(p.value)).toFixed(1)},${yOf(p.utilisation).toFixed(1)}`;
   let inside = '';
   let outside = '';
   for (let i = 0; i + 1 < pts.length; i++) {
@@ -52,19 +53,27 @@ export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSys
   const xTicks = niceTicks(toLen(sweep.from), toLen(sweep.to), 6);
   const yTicks = niceTicks(0, yTop, 5);
   const current = sweep.current;
-  const min = sweep.minimumPassing;
+  const min = sweep.limit;
   const lenText = (m: number) => `${formatSignificant(toLen(m))} ${prettyUnit(lengthUnit)}`;
+  const spacing = sweep.parameter === 'spacing';
+  const what = spacing ? 'spacing' : 'thickness';
 
   const summary =
-    `Current thickness ${lenText(current.thickness)}` +
+    `Current ${what} ${lenText(current.value)}` +
     (current.utilisation !== null
       ? ` at ${percent(current.utilisation)} governing utilisation. `
       : '. ') +
     (typeof min === 'number'
-      ? `Smallest thickness that passes: ${lenText(min)}.`
-      : min === 'below'
-        ? `Every thickness from ${lenText(sweep.from)} passes.`
-        : `No thickness up to ${lenText(sweep.to)} passes.`) +
+      ? spacing
+        ? `Largest spacing that passes: ${lenText(min)}.`
+        : `Smallest thickness that passes: ${lenText(min)}.`
+      : min === 'all-pass'
+        ? spacing
+          ? `Every spacing up to ${lenText(sweep.to)} passes.`
+          : `Every thickness from ${lenText(sweep.from)} passes.`
+        : spacing
+          ? `No spacing from ${lenText(sweep.from)} passes.`
+          : `No thickness up to ${lenText(sweep.to)} passes.`) +
     (runs.length > 0
       ? ` Outside the method's validity range (dashed, shaded): ${runs
           .map((r) => `${lenText(r.from)} to ${lenText(r.to)}`)
@@ -79,7 +88,9 @@ export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSys
         aria-labelledby={titleId}
         className="h-auto w-full max-w-[640px] text-ink"
       >
-        <title id={titleId}>{`Utilisation against thickness. ${summary}`}</title>
+        <title
+          id={titleId}
+        >{`Utilisation against ${spacing ? 'stiffener spacing' : 'thickness'}. ${summary}`}</title>
         {runs.map((r) => (
           <rect
             key={`outside-${r.from}`}
@@ -174,33 +185,33 @@ export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSys
               y={M.top + 10}
               className="fill-pass text-[10px] font-medium"
             >
-              min {lenText(min)}
+              {spacing ? 'max' : 'min'} {lenText(min)}
             </text>
           </g>
         ) : null}
         {current.utilisation !== null ? (
           <g>
             <line
-              x1={x(toLen(current.thickness))}
-              x2={x(toLen(current.thickness))}
+              x1={x(toLen(current.value))}
+              x2={x(toLen(current.value))}
               y1={yOf(current.utilisation)}
               y2={H - M.bottom}
               className="stroke-ink"
               strokeDasharray="2 2"
             />
             <circle
-              cx={x(toLen(current.thickness))}
+              cx={x(toLen(current.value))}
               cy={yOf(current.utilisation)}
               r={4.5}
               className="fill-panel stroke-ink"
               strokeWidth={2}
             />
             <text
-              x={x(toLen(current.thickness)) + 7}
+              x={x(toLen(current.value)) + 7}
               y={yOf(current.utilisation) - 7}
               className="fill-ink text-[10px] font-medium"
             >
-              current {lenText(current.thickness)}, {percent(current.utilisation)}
+              current {lenText(current.value)}, {percent(current.utilisation)}
             </text>
           </g>
         ) : null}

@@ -23,14 +23,14 @@ describe('sweepForPlot (the engine’s sweepThickness, shaped for the chart)', (
     const a = 0.25;
     const S = 205e6 / 1.5;
     const expected = a * Math.sqrt((3 * q) / (4 * S));
-    expect(typeof sweep!.minimumPassing).toBe('number');
-    expect(sweep!.minimumPassing as number).toBeCloseTo(expected, 6);
+    expect(typeof sweep!.limit).toBe('number');
+    expect(sweep!.limit as number).toBeCloseTo(expected, 6);
   });
 
   it('marks the current design with the engine’s own governing utilisation', () => {
     const report = screenComponent(door);
     const sweep = sweepForPlot(door, report.governing!.utilisation)!;
-    expect(sweep.current.thickness).toBeCloseTo(0.012, 12);
+    expect(sweep.current.value).toBeCloseTo(0.012, 12);
     expect(sweep.current.utilisation).toBe(report.governing!.utilisation);
     // The engine's own point at the current thickness agrees with its report.
     const at = sweepForPlot(door, null, { from: 0.006, to: 0.012, points: 2 })!;
@@ -43,15 +43,12 @@ describe('sweepForPlot (the engine’s sweepThickness, shaped for the chart)', (
     for (let i = 1; i < u.length; i++) expect(u[i]!).toBeLessThan(u[i - 1]!);
     const first = sweep.points[0]!;
     const last = sweep.points[sweep.points.length - 1]!;
-    expect(first.utilisation / last.utilisation).toBeCloseTo(
-      (last.thickness / first.thickness) ** 2,
-      9,
-    );
+    expect(first.utilisation / last.utilisation).toBeCloseTo((last.value / first.value) ** 2, 9);
   });
 
-  it('says "above" when no thickness in range passes, "below" when all do', () => {
-    expect(sweepForPlot(door, null, { from: 0.001, to: 0.003 })!.minimumPassing).toBe('above');
-    expect(sweepForPlot(door, null, { from: 0.05, to: 0.1 })!.minimumPassing).toBe('below');
+  it('says "none-pass" when no thickness in range passes, "all-pass" when all do', () => {
+    expect(sweepForPlot(door, null, { from: 0.001, to: 0.003 })!.limit).toBe('none-pass');
+    expect(sweepForPlot(door, null, { from: 0.05, to: 0.1 })!.limit).toBe('all-pass');
   });
 
   it('is null for an input the engine cannot read, or a kind without a thickness', () => {
@@ -66,6 +63,38 @@ describe('sweepForPlot (the engine’s sweepThickness, shaped for the chart)', (
         null,
       ),
     ).toBeNull();
+  });
+});
+
+describe('the spacing sweep of a stiffened wall (the engine’s sweepSpacing)', () => {
+  // The glovebox wall of the engine's examples: 3 mm 316L, 50 × 6 mm flat bars at 400 mm, ±25 mbar.
+  const wall = {
+    kind: 'stiffened-wall',
+    span: '1000 mm',
+    spacing: '400 mm',
+    thickness: '3 mm',
+    panelEdge: 'clamped',
+    stiffenerEnds: 'simply-supported',
+    stiffener: { shape: 'flat-bar', depth: '50 mm', thickness: '6 mm' },
+    material: 'stainless-316l',
+    loadCases: [{ name: 'Under', internal: '-25 mbar(g)' }],
+  };
+  it('rises with the spacing and marks the largest that passes, which passes while a wider one fails', () => {
+    const sweep = sweepForPlot(wall, null, { from: 0.2, to: 2 }, 'spacing')!;
+    expect(sweep.parameter).toBe('spacing');
+    const u = sweep.points.map((p) => p.utilisation);
+    for (let i = 1; i < u.length; i++) expect(u[i]!).toBeGreaterThan(u[i - 1]!);
+    const s = sweep.limit as number;
+    expect(screenComponent({ ...wall, spacing: s }).governing!.utilisation).toBeLessThanOrEqual(1);
+    expect(screenComponent({ ...wall, spacing: s * 1.001 }).governing!.utilisation).toBeGreaterThan(
+      1,
+    );
+    // Past the panel's small-deflection limit (about 590 mm) the points are flagged.
+    expect(sweep.outsideValidity.length).toBeGreaterThan(0);
+  });
+  it('is null for a kind without a spacing, and says "all-pass" when the whole range passes', () => {
+    expect(sweepForPlot(door, null, {}, 'spacing')).toBeNull();
+    expect(sweepForPlot(wall, null, { from: 0.1, to: 0.3 }, 'spacing')!.limit).toBe('all-pass');
   });
 });
 
@@ -95,22 +124,22 @@ describe('the sweep outside the method’s validity range', () => {
       ((3 * q * a ** 4 * (1 - steel.poissonRatio ** 2)) / (8 * steel.elasticModulus)) ** 0.25;
     const thickestThinPlate = 0.1 * 2 * a;
     for (const p of sweep.points) {
-      const expected = p.thickness < thinnestSmallDeflection || p.thickness > thickestThinPlate;
-      expect(p.outsideValidity, `t = ${p.thickness} m`).toBe(expected);
+      const expected = p.value < thinnestSmallDeflection || p.value > thickestThinPlate;
+      expect(p.outsideValidity, `t = ${p.value} m`).toBe(expected);
     }
     // Two stretches, one at each end, each reaching to the first point known to be inside.
     expect(sweep.outsideValidity).toHaveLength(2);
     const [thin, thick] = sweep.outsideValidity;
     expect(thin!.from).toBe(sweep.from);
     expect(thin!.to).toBeGreaterThan(thinnestSmallDeflection);
-    expect(sweep.points.find((p) => p.thickness === thin!.to)!.outsideValidity).toBe(false);
+    expect(sweep.points.find((p) => p.value === thin!.to)!.outsideValidity).toBe(false);
     expect(thick!.to).toBe(sweep.to);
     expect(thick!.from).toBeLessThan(thickestThinPlate);
   });
 
   it('merges neighbouring flagged intervals and leaves a fully valid sweep without any', () => {
-    const pt = (thickness: number, outsideValidity: boolean) => ({
-      thickness,
+    const pt = (value: number, outsideValidity: boolean) => ({
+      value,
       utilisation: 1,
       pass: true,
       outsideValidity,

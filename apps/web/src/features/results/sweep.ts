@@ -1,9 +1,10 @@
-import { CalcInputError, sweepThickness } from '@hoopline/calc';
+import { CalcInputError, sweepSpacing, sweepThickness } from '@hoopline/calc';
 
 /**
- * The thickness sweep the plot draws, from the engine's `sweepThickness`
- * (packages/calc): every number on the chart, the smallest passing thickness
- * included, is the engine's. This only shapes it for the plot.
+ * The sweeps the plot draws, from the engine's `sweepThickness` and
+ * `sweepSpacing` (packages/calc): every number on the chart, the smallest
+ * passing thickness or the largest passing spacing included, is the
+ * engine's. This only shapes them for the plot.
  */
 export interface PlotOptions {
   readonly from?: number;
@@ -11,37 +12,41 @@ export interface PlotOptions {
   readonly points?: number;
 }
 
+/** What a sweep varies: a wall's thickness (utilisation falls as it grows) or a stiffener spacing (it rises). */
+export type SweptParameter = 'thickness' | 'spacing';
+
 export interface PlotPoint {
-  /** m */
-  readonly thickness: number;
+  /** The swept thickness or spacing, m. */
+  readonly value: number;
   /** Governing utilisation over every load case and check. */
   readonly utilisation: number;
   /** No check fails. */
   readonly pass: boolean;
-  /** A method is outside its validity range at this thickness (the engine's flag). */
+  /** A method is outside its validity range at this value (the engine's flag). */
   readonly outsideValidity: boolean;
 }
 
-/** A stretch of thicknesses, m, where the engine flags the method as outside its validity range. */
-export interface ThicknessRange {
+/** A stretch of the swept value, m, where the engine flags the method as outside its validity range. */
+export interface ValueRange {
   readonly from: number;
   readonly to: number;
 }
 
 export interface PlotSweep {
+  readonly parameter: SweptParameter;
   readonly label: string;
   readonly points: readonly PlotPoint[];
-  /** The design as entered: its thickness and the engine's governing utilisation for it. */
-  readonly current: { readonly thickness: number; readonly utilisation: number | null };
+  /** The design as entered: its value and the engine's governing utilisation for it. */
+  readonly current: { readonly value: number; readonly utilisation: number | null };
   /**
-   * The smallest thickness at which every check passes, m; 'below' when the
-   * whole range passes, 'above' when none of it does.
+   * Where the checks just pass, m: the smallest thickness or the largest
+   * spacing; 'all-pass' when the whole range passes, 'none-pass' when none of it does.
    */
-  readonly minimumPassing: number | 'below' | 'above';
+  readonly limit: number | 'all-pass' | 'none-pass';
   readonly from: number;
   readonly to: number;
   /** Where the curve is outside the method's validity range (see outsideRuns). */
-  readonly outsideValidity: readonly ThicknessRange[];
+  readonly outsideValidity: readonly ValueRange[];
 }
 
 /**
@@ -51,15 +56,15 @@ export interface PlotSweep {
  * flagged end counts as outside: the limit lies somewhere in it, and the plot
  * does not claim validity it has not been told.
  */
-export function outsideRuns(points: readonly PlotPoint[]): ThicknessRange[] {
+export function outsideRuns(points: readonly PlotPoint[]): ValueRange[] {
   const runs: { from: number; to: number }[] = [];
   for (let i = 0; i + 1 < points.length; i++) {
     const a = points[i]!;
     const b = points[i + 1]!;
     if (!a.outsideValidity && !b.outsideValidity) continue;
     const last = runs[runs.length - 1];
-    if (last && last.to === a.thickness) last.to = b.thickness;
-    else runs.push({ from: a.thickness, to: b.thickness });
+    if (last && last.to === a.value) last.to = b.value;
+    else runs.push({ from: a.value, to: b.value });
   }
   return runs;
 }
@@ -68,38 +73,53 @@ export function outsideRuns(points: readonly PlotPoint[]): ThicknessRange[] {
 export const PLOT_POINTS = 60;
 
 /**
- * Null for a kind without a thickness (flat-area load, stored energy,
- * pump-down), a method without checks, or inputs the engine cannot read (the
- * form shows why).
+ * Null for a kind without the parameter (a thickness: flat-area load, stored
+ * energy, pump-down; a spacing: all but the stiffened wall), a method without
+ * checks, or inputs the engine cannot read (the form shows why).
  */
 export function sweepForPlot(
   raw: unknown,
   currentUtilisation: number | null,
   options: PlotOptions = {},
+  parameter: SweptParameter = 'thickness',
 ): PlotSweep | null {
-  let result: ReturnType<typeof sweepThickness>;
+  let result: {
+    label: string;
+    current: number;
+    points: ReturnType<typeof sweepThickness>['points'];
+    limit: number | null;
+  };
   try {
-    result = sweepThickness(raw, { points: PLOT_POINTS, ...options });
+    if (parameter === 'thickness') {
+      const r = sweepThickness(raw, { points: PLOT_POINTS, ...options });
+      result = { ...r, limit: r.minimumPassing.value };
+    } else {
+      const r = sweepSpacing(raw, { points: PLOT_POINTS, ...options });
+      result = { ...r, limit: r.largestPassing.value };
+    }
   } catch (error) {
     if (error instanceof CalcInputError) return null;
     throw error;
   }
   const points = result.points.map((p) => ({
-    thickness: p.value,
+    value: p.value,
     utilisation: p.utilisation,
     pass: p.pass,
     outsideValidity: p.outsideValidity,
   }));
   const hasChecks = result.points.some((p) => p.cases.some((c) => c.utilisation > 0));
   if (points.length < 2 || !hasChecks) return null;
-  const min = result.minimumPassing.value;
+  // With no crossing in range, the whole range passes or none of it does: the thin end of a
+  // thickness sweep decides, the wide end of a spacing sweep.
+  const decisive = parameter === 'thickness' ? points[0]! : points[points.length - 1]!;
   return {
+    parameter,
     label: result.label,
     points,
-    current: { thickness: result.current, utilisation: currentUtilisation },
-    minimumPassing: min !== null ? min : points[0]!.pass ? 'below' : 'above',
-    from: points[0]!.thickness,
-    to: points[points.length - 1]!.thickness,
+    current: { value: result.current, utilisation: currentUtilisation },
+    limit: result.limit !== null ? result.limit : decisive.pass ? 'all-pass' : 'none-pass',
+    from: points[0]!.value,
+    to: points[points.length - 1]!.value,
     outsideValidity: outsideRuns(points),
   };
 }

@@ -18,7 +18,9 @@ import {
   materialCautions,
   type Material,
 } from '../../materials/materials';
+import { sectionSchema, type SectionInput } from '../../sections/section-schema';
 import { hazardCautions, vesselEnergySteps } from '../vessel-hazards';
+import { ringCaseSteps, ringCommonSteps, type RingCommon } from './ring-stiffener';
 import {
   bressePressure,
   collapsePressure,
@@ -123,6 +125,11 @@ export const cylindricalShellSchema = z
         .optional(),
       /** A (thinner) nominal thickness for which to find the stiffening-ring spacing that holds every external case. */
       ringSpacingFor: length({ positive: true, max: 2 }).optional(),
+      /**
+       * The stiffening rings' section: checked by ASME VIII-1 UG-29 at the spacing the shell
+       * needs (ringSpacingFor), or else at the length between rings.
+       */
+      ringSection: sectionSchema.optional(),
     }),
   )
   .strict()
@@ -143,6 +150,16 @@ export const cylindricalShellSchema = z
         message: `must be less than the radius (${formatNumber(radius)} m)`,
       });
     }
+    if (v.ringSection !== undefined) {
+      const footprint = ringFootprint(v.ringSection);
+      if (footprint >= v.length) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['length'],
+          message: `must be more than the ring’s width on the shell (${formatNumber(footprint * 1000)} mm)`,
+        });
+      }
+    }
     if (v.ringSpacingFor !== undefined) {
       if (v.ringSpacingFor <= allowance) {
         ctx.addIssue({
@@ -160,6 +177,20 @@ export const cylindricalShellSchema = z
       }
     }
   });
+
+/** How wide a ring stands on the shell. */
+function ringFootprint(s: SectionInput): number {
+  switch (s.shape) {
+    case 'flat-bar':
+    case 'angle':
+      return s.thickness;
+    case 'channel':
+    case 'rhs':
+      return s.width;
+    case 'properties':
+      return s.webThickness;
+  }
+}
 
 /** What a cylindrical-shell component accepts (numbers in SI or text with units). */
 export type CylindricalShellInput = z.input<typeof cylindricalShellSchema>;
@@ -440,7 +471,11 @@ function internalCaseTrail(
   return trail;
 }
 
-function externalCaseTrail(summary: ExternalSummary, loadCase: ResolvedLoadCase): Trail {
+function externalCaseTrail(
+  summary: ExternalSummary,
+  loadCase: ResolvedLoadCase,
+  ring: RingCommon | null,
+): Trail {
   const trail = new Trail();
   const p = pressureStep(trail, loadCase);
   trail.check({
@@ -451,6 +486,8 @@ function externalCaseTrail(summary: ExternalSummary, loadCase: ResolvedLoadCase)
     unit: 'Pa',
     basis: 'p <= p_allow = p_c/n_b (collapse pressure over the design factor)',
   });
+  // The rings' checks are linear in p (elastic range of the chart): they bound the allowable too.
+  const ringLimit = ring ? ringCaseSteps(trail, ring, p) : Number.POSITIVE_INFINITY;
   trail.output(
     'elastic-buckling-pressure',
     'Elastic buckling pressure (von Mises)',
@@ -460,7 +497,12 @@ function externalCaseTrail(summary: ExternalSummary, loadCase: ResolvedLoadCase)
   trail.output('lobes', 'Buckling lobes n', summary.lobes, '1');
   trail.output('collapse-pressure', 'Collapse pressure (with interaction)', summary.collapse, 'Pa');
   trail.output('critical-length', 'Critical length', summary.criticalLength, 'm');
-  trail.output('allowable-pressure', 'Allowable pressure difference', summary.allowable, 'Pa');
+  trail.output(
+    'allowable-pressure',
+    'Allowable pressure difference',
+    Math.min(summary.allowable, ringLimit),
+    'Pa',
+  );
   return trail;
 }
 
@@ -801,7 +843,7 @@ function ringSpacingSteps(
   basis: ExternalPressureBasis | null,
   target: number,
   externalCases: readonly ResolvedLoadCase[],
-): void {
+): { readonly thickness: number; readonly spacing: number | null } {
   const g = geometryFor(input, target);
   common.step({
     id: 'ring-spacing-thickness',
@@ -827,7 +869,7 @@ function ringSpacingSteps(
       unit: 'm',
       source,
     });
-    return;
+    return { thickness: g.thickness, spacing: null };
   }
   let pressure = 0;
   for (const lc of externalCases) pressure = Math.max(pressure, -lc.differential);
@@ -843,7 +885,7 @@ function ringSpacingSteps(
       unit: 'm',
       source,
     });
-    return;
+    return { thickness: g.thickness, spacing: found.length };
   }
   common.step({
     id: 'ring-spacing',
@@ -864,6 +906,58 @@ function ringSpacingSteps(
       message: `no ring spacing lets a ${formatNumber(target * 1000)} mm wall carry ${formatNumber(pressure)} Pa: even with rings close together the allowable tends to p_y/n_b = ${formatNumber(found.allowable)} Pa`,
     });
   }
+  return { thickness: g.thickness, spacing: null };
+}
+
+/**
+ * The rings' common steps, at the spacing the thinner wall needs when
+ * ringSpacingFor found one, else at the length between rings; null (with a
+ * step saying why) when there is nothing to check.
+ */
+function ringSteps(
+  common: Trail,
+  warnings: ValidityWarning[],
+  input: Parsed,
+  material: Material,
+  g: Geometry,
+  spacingFound: { readonly thickness: number; readonly spacing: number | null } | null,
+  externalCases: readonly ResolvedLoadCase[],
+): RingCommon | null {
+  const section = input.ringSection;
+  if (section === undefined) return null;
+  const skip = (why: string) => {
+    common.step({
+      id: 'ring-check',
+      label: 'Stiffening rings (ASME VIII-1 UG-29)',
+      expression: 'I_s or I′_s against UG-29’s required',
+      substituted: why,
+      value: null,
+      unit: 'm^4',
+      source: 'the ring section given',
+    });
+    warnings.push({
+      code: 'ring-not-checked',
+      severity: 'info',
+      message: `the rings are not checked: ${why}`,
+    });
+    return null;
+  };
+  if (externalCases.length === 0) return skip('no load case has the outside pressure higher');
+  if (spacingFound && spacingFound.spacing === null)
+    return skip(
+      'the thinner wall of ringSpacingFor needs no rings, or no spacing lets it carry the pressure (above)',
+    );
+  return ringCommonSteps(common, warnings, section, material, {
+    outsideDiameter: g.outsideDiameter,
+    thickness: spacingFound ? spacingFound.thickness : g.thickness,
+    spacing: spacingFound?.spacing ?? input.length,
+    thicknessSource: spacingFound
+      ? 'the thinner wall of ringSpacingFor less the allowance, whose ring spacing is found above'
+      : 'the shell’s thickness less the allowance; UG-29 takes the shell’s required thickness there (from memory), which in the chart’s elastic range makes no difference (t + A_s/L_s cancels out of I_s)',
+    spacingSource: spacingFound
+      ? 'the ring spacing the thinner wall needs (above)'
+      : 'the unsupported length between rings (input length)',
+  });
 }
 
 /** The cylindrical-shell method: internal pressure (thin wall, Lamé, UG-27) and external pressure (buckling, collapse, ring spacing). */
@@ -872,7 +966,7 @@ export const cylindricalShell = defineMethod({
   name: 'Cylindrical shell',
   summary: 'Chamber or drum: internal pressure, buckling under vacuum, ring spacing.',
   description:
-    'Cylindrical shell (vessel, chamber, drum) for every load case: inside higher, thin-wall and Lamé stresses and the ASME VIII-1 UG-27 thickness and MAWP; outside higher (vacuum), elastic buckling (Bresse, von Mises with its lobe number, Windenburg–Trilling), plastic collapse, their interaction with a knock-down and a design factor, the critical length and the stiffening-ring spacing for a target thickness. The length is the unsupported length between rings or heads; between dished heads add about 1/3 of each head depth (ASME UG-28, from memory).',
+    'Cylindrical shell (vessel, chamber, drum) for every load case: inside higher, thin-wall and Lamé stresses and the ASME VIII-1 UG-27 thickness and MAWP; outside higher (vacuum), elastic buckling (Bresse, von Mises with its lobe number, Windenburg–Trilling), plastic collapse, their interaction with a knock-down and a design factor, the critical length, the stiffening-ring spacing for a target thickness, and the rings’ moment of inertia against ASME VIII-1 UG-29 for a ring section. The length is the unsupported length between rings or heads; between dished heads add about 1/3 of each head depth (ASME UG-28, from memory).',
   schema: cylindricalShellSchema,
   vocabulary: cylindricalShellVocabulary,
   compute(input, context) {
@@ -947,16 +1041,18 @@ export const cylindricalShell = defineMethod({
     const external = externalBasisUsed
       ? externalSummary(common, warnings, input, material, g, externalBasisUsed)
       : null;
-    if (input.ringSpacingFor !== undefined) {
-      ringSpacingSteps(
-        common,
-        warnings,
-        input,
-        externalBasisUsed?.basis ?? null,
-        input.ringSpacingFor,
-        externalCases,
-      );
-    }
+    const spacingFound =
+      input.ringSpacingFor !== undefined
+        ? ringSpacingSteps(
+            common,
+            warnings,
+            input,
+            externalBasisUsed?.basis ?? null,
+            input.ringSpacingFor,
+            externalCases,
+          )
+        : null;
+    const ring = ringSteps(common, warnings, input, material, g, spacingFound, externalCases);
     const hazards =
       internal || external
         ? vesselEnergySteps(
@@ -977,7 +1073,8 @@ export const cylindricalShell = defineMethod({
     const cases = context.loadCases.map((lc) => {
       if (lc.direction === 'internal-over' && internal)
         return internalCaseTrail(input, g, internal, lc);
-      if (lc.direction === 'external-over' && external) return externalCaseTrail(external, lc);
+      if (lc.direction === 'external-over' && external)
+        return externalCaseTrail(external, lc, ring);
       return balancedCaseTrail(lc);
     });
 
@@ -1032,6 +1129,7 @@ export const cylindricalShell = defineMethod({
 
     const cautions: CautionCode[] = [];
     if (external) cautions.push('external-pressure-imperfection');
+    if (ring) cautions.push('ring-stiffeners');
     cautions.push(...hazardCautions(material, context.loadCases, hazards));
     cautions.push(...materialCautions(material));
 
@@ -1066,6 +1164,7 @@ export const cylindricalShell = defineMethod({
             EXTERNAL_PRESSURE_DEFAULTS.interaction,
         },
         ...(input.ringSpacingFor !== undefined ? { ringSpacingFor: input.ringSpacingFor } : {}),
+        ...(input.ringSection !== undefined ? { ringSection: input.ringSection } : {}),
       },
       steps: common.steps,
       cases,
@@ -1115,6 +1214,20 @@ export const cylindricalShell = defineMethod({
           { name: 'Operating: 10 bar(g)', internal: '10 bar(g)' },
           { name: 'Hydrotest: 1.3 × operating', internal: '10 bar(g)', factor: 1.3 },
         ],
+      },
+    },
+    {
+      name: 'Vacuum chamber with stiffening rings: 1.2 m outside diameter, 6 mm 304 shell, 50 × 8 mm flat-bar rings every 1 m',
+      input: {
+        kind: 'cylindrical-shell',
+        diameter: '1200 mm',
+        diameterBasis: 'outside',
+        thickness: '6 mm',
+        length: '1 m',
+        ends: 'closed',
+        material: 'stainless-304',
+        ringSection: { shape: 'flat-bar', depth: '50 mm', thickness: '8 mm' },
+        loadCases: [{ name: 'Operating: full vacuum', internal: 'full vacuum' }],
       },
     },
   ],

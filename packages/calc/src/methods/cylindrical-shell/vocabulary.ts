@@ -1,5 +1,6 @@
 import type { Vocabulary } from '../../core/vocabulary';
 import { MATERIAL_VOCABULARY } from '../../materials/material-vocabulary';
+import { sectionVocabulary } from '../../sections/section-schema';
 
 /** Words for the external-pressure factors a cylinder and a head share. */
 export const EXTERNAL_PRESSURE_VOCABULARY: Vocabulary = {
@@ -39,4 +40,16 @@ export const cylindricalShellVocabulary: Vocabulary = {
     hint: '0.35–1; blank is 1 (seamless or fully radiographed).',
   },
   ringSpacingFor: { label: 'Thinner wall to find a stiffening-ring spacing for' },
+  ...sectionVocabulary('ringSection', 'Ring'),
+  'ringSection.shape': {
+    label: 'Stiffening-ring section',
+    hint: 'Checked by ASME VIII-1 UG-29 at the spacing the thinner wall needs, or else at the length between rings.',
+    options: {
+      'flat-bar': 'Flat bar on edge',
+      angle: 'Angle (one leg standing, the other a free flange)',
+      channel: 'Channel (web standing, a flange on the shell)',
+      rhs: 'Rectangular hollow section',
+      properties: 'Properties entered directly',
+    },
+  },
 };
