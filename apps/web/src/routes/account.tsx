@@ -1,6 +1,8 @@
 import { Form, Formik } from 'formik';
 import { useState } from 'react';
 import * as yup from 'yup';
+import { contractText } from '../lib/contract-rules';
+import { UNIT_SYSTEMS, updateMeBody } from '@hoopline/contract';
 import { useMe, useUpdateMe } from '../api/session';
 import { Button } from '../components/button';
 import { FormError, FormikSelectField, FormikTextField } from '../components/field';
@@ -23,12 +25,8 @@ export function AccountRoute() {
           <Formik
             initialValues={{ name: me.user.name, unitSystem: me.user.unitSystem }}
             validationSchema={yup.object({
-              name: yup
-                .string()
-                .trim()
-                .required('Enter your name')
-                .max(120, 'Use at most 120 characters'),
-              unitSystem: yup.string().oneOf(['si', 'us']).required(),
+              name: contractText(updateMeBody.shape.name, 'Your name', 'Enter your name'),
+              unitSystem: yup.string().oneOf(UNIT_SYSTEMS).required(),
             })}
             onSubmit={async (values, helpers) => {
               setFormError(null);

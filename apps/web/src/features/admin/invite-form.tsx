@@ -1,6 +1,8 @@
 import { Form, Formik } from 'formik';
 import { useState } from 'react';
 import * as yup from 'yup';
+import { contractText } from '../../lib/contract-rules';
+import { inviteBody } from '@hoopline/contract';
 import { useCreateInvitation } from '../../api/admin';
 import { Button } from '../../components/button';
 import { FormError, FormikTextField } from '../../components/field';
@@ -14,7 +16,7 @@ const schema = yup.object({
     .trim()
     .email('Enter an e-mail address such as name@example.com')
     .required('Enter their e-mail address'),
-  name: yup.string().trim().required('Enter their name').max(120, 'Use at most 120 characters'),
+  name: contractText(inviteBody.shape.name, 'The name', 'Enter their name'),
   isAdmin: yup.boolean(),
 });
 

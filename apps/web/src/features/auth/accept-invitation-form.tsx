@@ -1,6 +1,8 @@
 import { Form, Formik } from 'formik';
 import { useState } from 'react';
 import * as yup from 'yup';
+import { contractText } from '../../lib/contract-rules';
+import { acceptInvitationBody } from '@hoopline/contract';
 import { useAcceptInvitation } from '../../api/session';
 import { Button } from '../../components/button';
 import { FormError, FormikTextField, TextField } from '../../components/field';
@@ -8,7 +10,7 @@ import { serverFieldErrors } from '../../components/server-errors';
 import { confirmPassword, newPassword } from './password-rules';
 
 const schema = yup.object({
-  name: yup.string().trim().required('Enter your name').max(120, 'Use at most 120 characters'),
+  name: contractText(acceptInvitationBody.shape.name, 'Your name', 'Enter your name'),
   password: newPassword,
   confirm: confirmPassword(),
 });

@@ -1,11 +1,12 @@
+import { newPassword as contractNewPassword } from '@hoopline/contract';
 import * as yup from 'yup';
+import { ruleOf } from '../../lib/contract-rules';
 
-/** The new-password rule shown to people; the server enforces its own as well. */
+/** The new-password rule: the API's own (the contract's newPassword), shown as people type. */
 export const newPassword = yup
   .string()
   .required('Choose a password')
-  .min(10, 'Use at least 10 characters')
-  .max(200, 'Use at most 200 characters');
+  .test('contract', ruleOf(contractNewPassword, 'The password'));
 
 export const confirmPassword = (field = 'password') =>
   yup

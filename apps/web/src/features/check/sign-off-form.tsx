@@ -1,6 +1,8 @@
 import { Form, Formik } from 'formik';
 import { useState } from 'react';
 import * as yup from 'yup';
+import { ruleOf } from '../../lib/contract-rules';
+import { returnBody } from '@hoopline/contract';
 import { useCountersign, useReturnRevision } from '../../api/revisions';
 import type { Revision } from '@hoopline/contract';
 import { Button } from '../../components/button';
@@ -13,7 +15,7 @@ export const signOffSchema = yup.object({
   decision: yup.string().oneOf(['countersign', 'return']).required(),
   comment: yup
     .string()
-    .max(4000, 'Use at most 4000 characters')
+    .test('contract', ruleOf(returnBody.shape.comment, 'The comment'))
     .when('decision', {
       is: 'return',
       then: (s) => s.trim().required('Say what the designer must change: a return needs a comment'),

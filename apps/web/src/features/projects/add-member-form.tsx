@@ -1,6 +1,7 @@
 import { Form, Formik } from 'formik';
 import { useId, useState } from 'react';
 import * as yup from 'yup';
+import { ROLES } from '@hoopline/contract';
 import { useUsers } from '../../api/admin';
 import { ApiError } from '../../api/client';
 import { lookUpUser, useSetMember } from '../../api/projects';
@@ -16,7 +17,7 @@ const schema = yup.object({
     .trim()
     .email('Enter an e-mail address such as name@example.com')
     .required('Enter the e-mail address they sign in with'),
-  role: yup.string().oneOf(['designer', 'checker', 'fabricator']).required('Choose a role'),
+  role: yup.string().oneOf(ROLES).required('Choose a role'),
 });
 
 export interface PersonSuggestion {

@@ -1,9 +1,22 @@
-import { COMMON_VOCABULARY, designTemperatureField, parseQuantity } from '@hoopline/calc';
+import {
+  ALLOWABLE_BASES,
+  BAROMETERS,
+  COMMON_VOCABULARY,
+  designTemperatureField,
+  siteSchema,
+} from '@hoopline/calc';
 import { Form, Formik, useFormikContext } from 'formik';
 import { useState } from 'react';
 import * as yup from 'yup';
 import type { ProjectInput } from '../../api/projects';
-import type { DesignBasis, Project, SiteAsTyped, UnitSystem } from '@hoopline/contract';
+import {
+  UNIT_SYSTEMS,
+  createProjectBody,
+  type DesignBasis,
+  type Project,
+  type SiteAsTyped,
+  type UnitSystem,
+} from '@hoopline/contract';
 import { Button } from '../../components/button';
 import {
   FormError,
@@ -12,6 +25,10 @@ import {
   FormikTextField,
 } from '../../components/field';
 import { serverFieldErrors } from '../../components/server-errors';
+import { contractText, ruleOf } from '../../lib/contract-rules';
+
+/** The engine's site fields (units, the standard atmosphere's range). */
+const SITE_FIELDS = siteSchema.shape;
 
 export type SiteBasis = 'standard' | 'altitude' | 'ambient';
 
@@ -30,71 +47,31 @@ export interface ProjectFormValues {
   notes: string;
 }
 
-function readsAs(dimension: 'length' | 'pressure') {
-  return (text: string | undefined) => {
-    if (!text) return true;
-    try {
-      parseQuantity(text, { dimension });
-      return true;
-    } catch {
-      return false;
-    }
-  };
-}
-
 const TEMPERATURE = designTemperatureField();
 const TEMPERATURE_WORDS = COMMON_VOCABULARY['designTemperature']!;
 
-// Same bounds as the engine's site schema (packages/calc core/load-cases.ts): ISA range, 1–120 kPa.
 export const projectSchema = yup.object({
-  number: yup
-    .string()
-    .trim()
-    .required('Enter a project number')
-    .max(40, 'Use at most 40 characters'),
-  name: yup.string().trim().required('Enter a project name').max(160, 'Use at most 160 characters'),
-  client: yup.string().trim().max(160, 'Use at most 160 characters'),
+  number: contractText(createProjectBody.shape.number, 'Project number', 'Enter a project number'),
+  name: contractText(createProjectBody.shape.name, 'Project name', 'Enter a project name'),
+  client: contractText(createProjectBody.shape.client, 'Client'),
   siteBasis: yup.string().oneOf(['standard', 'altitude', 'ambient']).required(),
+  // The engine's site schema decides (units, the standard atmosphere's range), and its message is shown.
   altitude: yup.string().when('siteBasis', {
     is: 'altitude',
     then: (s) =>
       s
         .required('Enter the site altitude, e.g. "1500 m" or "5000 ft"')
-        .test(
-          'length',
-          'Give a length with its unit, e.g. "1500 m" or "5000 ft"',
-          readsAs('length'),
-        )
-        .test(
-          'range',
-          'Must be between −5 000 m and 80 000 m (standard atmosphere range)',
-          (text) => {
-            try {
-              const si = parseQuantity(text ?? '', { dimension: 'length' }).si;
-              return si >= -5000 && si <= 80000;
-            } catch {
-              return true;
-            }
-          },
-        ),
+        .test('engine', ruleOf(SITE_FIELDS.altitude, 'Site altitude')),
   }),
   ambientPressure: yup.string().when('siteBasis', {
     is: 'ambient',
     then: (s) =>
       s
         .required('Enter the ambient pressure, e.g. "95 kPa" or "13.8 psi"')
-        .test('pressure', 'Give a pressure with its unit, e.g. "95 kPa"', readsAs('pressure'))
-        .test('range', 'Must be between 1 kPa and 120 kPa', (text) => {
-          try {
-            const si = parseQuantity(text ?? '', { dimension: 'pressure' }).si;
-            return si >= 1000 && si <= 120_000;
-          } catch {
-            return true;
-          }
-        }),
+        .test('engine', ruleOf(SITE_FIELDS.ambientPressure, 'Ambient pressure')),
   }),
-  allowableBasis: yup.string().oneOf(['asme-viii-1', 'en-13445-3']).required(),
-  barometer: yup.string().oneOf(['standard', 'high']).required(),
+  allowableBasis: yup.string().oneOf(ALLOWABLE_BASES).required(),
+  barometer: yup.string().oneOf(BAROMETERS).required(),
   // The engine's own design-temperature field decides, and its message is shown.
   designTemperature: yup.string().test('temperature', (text, context) => {
     if (!text || text.trim() === '') return true;
@@ -105,8 +82,8 @@ export const projectSchema = yup.object({
           message: `Design temperature ${parsed.error.issues[0]?.message ?? 'cannot be read'}`,
         });
   }),
-  unitSystem: yup.string().oneOf(['si', 'us']).required(),
-  notes: yup.string().max(4000, 'Use at most 4000 characters'),
+  unitSystem: yup.string().oneOf(UNIT_SYSTEMS).required(),
+  notes: contractText(createProjectBody.shape.notes, 'Notes'),
 });
 
 export function projectFormValues(
