@@ -1,13 +1,12 @@
 import type { Request, RequestHandler } from 'express';
 import type { DataSource } from 'typeorm';
 import { pgPool } from '../db/pg-pool';
-import type { UnitSystem } from '../db/entities/user.entity';
-import type { UserProfile } from '../domain/users/user-views';
+import type { UnitSystem, UserProfile } from '../db/entities/user.entity';
 import { AppError, unauthorized } from '../http/errors';
 import type { Actor } from '../policy/policy';
 import { ACCESS_COOKIE, cookieText } from './cookies';
 import type { SessionCache, SessionFacts } from './session-cache';
-import type { AccessTokens } from './tokens';
+import type { AccessTokens } from '../credentials/tokens';
 
 /** The signed-in person, as the routes see them. */
 export interface SignedIn extends Actor {

@@ -14,7 +14,7 @@ import {
 import { findActiveContent } from '../../uploads/pdf-active-content';
 import { recordAudit } from '../audit/audit.service';
 import { requireComponent } from '../components/component-access';
-import { isoRequired } from '../sql';
+import { isoRequired } from '../../db/sql';
 
 function enforce(decision: Decision) {
   if (!decision.allowed) throw forbidden(decision.code, decision.reason);

@@ -5,7 +5,7 @@ import { AuditEventEntity } from '../../db/entities/audit-event.entity';
 import { toJson } from '../../db/entities/json';
 import { pageOf, type Page, type PageRequest } from '../../http/pagination';
 import { canReadProjectAudit, canReadWholeAudit, type Actor } from '../../policy/policy';
-import { Where, paged } from '../sql';
+import { Where, paged } from '../../db/sql';
 import { forbidden, validationFailed } from '../../http/errors';
 import { requireProjectStanding } from '../projects/project-access';
 

@@ -3,9 +3,13 @@ import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import { IsNull } from 'typeorm';
 import type { AuthConfig } from '../../config/config';
-import type { IssuedSession } from '../../auth/cookies';
-import type { Passwords } from '../../auth/passwords';
-import { hashToken, randomToken, type AccessTokens } from '../../auth/tokens';
+import type { Passwords } from '../../credentials/passwords';
+import {
+  hashToken,
+  randomToken,
+  type AccessTokens,
+  type IssuedSession,
+} from '../../credentials/tokens';
 import { InvitationEntity } from '../../db/entities/invitation.entity';
 import { PasswordResetEntity } from '../../db/entities/password-reset.entity';
 import { RefreshTokenEntity } from '../../db/entities/refresh-token.entity';
@@ -13,9 +17,9 @@ import { UserEntity } from '../../db/entities/user.entity';
 import { AppError, badRequest, conflict, notFound, unauthorized } from '../../http/errors';
 import type { Actor } from '../../policy/policy';
 import { recordAudit } from '../audit/audit.service';
-import { runInBackground } from '../background-work';
-import type { Notifier } from '../notifications/notifier';
-import { rows, run } from '../sql';
+import { runInBackground } from '../../http/background-work';
+import type { Notifier } from '../../mail/notifier';
+import { rows, run } from '../../db/sql';
 import { meView } from '../users/user-views';
 
 export interface SignedInResult {

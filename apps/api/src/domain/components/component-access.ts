@@ -11,7 +11,7 @@ import {
   type Role,
 } from '../../policy/policy';
 import { requireProjectStanding, type ProjectContext } from '../projects/project-access';
-import { rows } from '../sql';
+import { rows } from '../../db/sql';
 
 export interface ComponentContext {
   readonly component: ComponentEntity;

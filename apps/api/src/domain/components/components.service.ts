@@ -17,7 +17,7 @@ import {
   summaryColumnsAs,
   summaryFromColumns,
 } from '../revisions/revision-views';
-import { Where, containsPattern, isoRequired, rows } from '../sql';
+import { Where, containsPattern, isoRequired, rows } from '../../db/sql';
 import { requireComponent } from './component-access';
 
 function enforce(decision: Decision) {

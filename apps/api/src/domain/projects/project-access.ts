@@ -2,7 +2,7 @@ import type { EntityManager } from 'typeorm';
 import { ProjectEntity } from '../../db/entities/project.entity';
 import { notFound } from '../../http/errors';
 import { canSeeProject, type Actor, type ProjectStanding, type Role } from '../../policy/policy';
-import { rows } from '../sql';
+import { rows } from '../../db/sql';
 
 export interface ProjectContext extends ProjectStanding {
   readonly project: ProjectEntity;

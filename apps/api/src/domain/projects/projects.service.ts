@@ -29,7 +29,7 @@ import {
 } from '../../policy/policy';
 import { recordAudit } from '../audit/audit.service';
 import { projectCreationDecision } from '../settings/settings.service';
-import { Where, containsPattern, iso, isoRequired, paged, rows } from '../sql';
+import { Where, containsPattern, iso, isoRequired, paged, rows } from '../../db/sql';
 import { requireProjectStanding } from './project-access';
 
 /** A site in SI (m, Pa). */

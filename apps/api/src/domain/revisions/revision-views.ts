@@ -3,7 +3,7 @@ import type { Revision, RevisionSummary } from '@hoopline/contract';
 import type { EntityManager } from 'typeorm';
 import type { JsonObject } from '../../db/entities/json';
 import type { RevisionStatus } from '../../db/entities/revision.entity';
-import { iso, isoRequired, rows } from '../sql';
+import { iso, isoRequired, rows } from '../../db/sql';
 import { verifyCode } from './revision-content';
 
 /** Columns for a RevisionSummary, from `revisions r join users a on a.id = r.author_id`. */

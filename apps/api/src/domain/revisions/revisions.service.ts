@@ -45,9 +45,9 @@ import {
   requireRevision,
   type RevisionContext,
 } from '../components/component-access';
-import type { Notifier } from '../notifications/notifier';
+import type { Notifier } from '../../mail/notifier';
 import { projectDesignBasis, projectSite, staleVersion } from '../projects/projects.service';
-import { Where, containsPattern, isoRequired, paged, rows, run } from '../sql';
+import { Where, containsPattern, isoRequired, paged, rows, run } from '../../db/sql';
 import { diffInputs, diffResults } from './diff';
 import { computeContent, contentHash } from './revision-content';
 import { SUMMARY_COLUMNS, revisionView, summaryFromRow, type SummaryRow } from './revision-views';

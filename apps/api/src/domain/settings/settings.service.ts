@@ -9,7 +9,7 @@ import {
   type ProjectCreation,
 } from '../../policy/policy';
 import { recordAudit } from '../audit/audit.service';
-import { rows } from '../sql';
+import { rows } from '../../db/sql';
 
 /** The installation's setting on who starts projects (the one row of `deployment`). */
 export async function projectCreationSetting(manager: EntityManager): Promise<ProjectCreation> {

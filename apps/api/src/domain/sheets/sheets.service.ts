@@ -9,7 +9,7 @@ import type { AttachmentsService } from '../attachments/attachments.service';
 import { recordAudit } from '../audit/audit.service';
 import { requireRevision } from '../components/component-access';
 import type { Actor } from '../../policy/policy';
-import { iso, isoRequired, rows } from '../sql';
+import { iso, isoRequired, rows } from '../../db/sql';
 import { verifyCode } from '../revisions/revision-content';
 
 export type PaperSize = 'A4' | 'LETTER';

@@ -1,15 +1,11 @@
 import type { Me, User } from '@hoopline/contract';
 import type { EntityManager } from 'typeorm';
-import type { UserEntity } from '../../db/entities/user.entity';
+import type { UserProfile } from '../../db/entities/user.entity';
 import type { Role } from '../../policy/policy';
 import { projectCreationDecision } from '../settings/settings.service';
-import { rows } from '../sql';
+import { rows } from '../../db/sql';
 
-/** What the views read of a user row (no password hash: the signed-in request never loads it). */
-export type UserProfile = Pick<
-  UserEntity,
-  'id' | 'email' | 'name' | 'isAdmin' | 'active' | 'unitSystem' | 'mayCreateProjects' | 'createdAt'
->;
+export type { UserProfile };
 
 export function userView(u: UserProfile): User {
   return {

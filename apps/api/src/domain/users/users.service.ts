@@ -2,7 +2,7 @@ import type { Invitation, Me, User } from '@hoopline/contract';
 import { randomUUID } from 'node:crypto';
 import { In, type DataSource } from 'typeorm';
 import type { AuthConfig } from '../../config/config';
-import { hashToken, randomToken } from '../../auth/tokens';
+import { hashToken, randomToken } from '../../credentials/tokens';
 import { InvitationEntity } from '../../db/entities/invitation.entity';
 import { UserEntity, type UnitSystem } from '../../db/entities/user.entity';
 import { conflict, forbidden, notFound } from '../../http/errors';
@@ -11,8 +11,8 @@ import { canLookUpPerson, canManagePeople, type Actor } from '../../policy/polic
 import { recordAudit } from '../audit/audit.service';
 import type { AuthService } from '../auth/auth.service';
 import { normaliseEmail } from '../auth/auth.service';
-import type { Notifier } from '../notifications/notifier';
-import { Where, containsPattern, paged } from '../sql';
+import type { Notifier } from '../../mail/notifier';
+import { Where, containsPattern, paged } from '../../db/sql';
 import { meView, userView, type UserProfile } from './user-views';
 
 function requireAdmin(actor: Actor) {

@@ -1,20 +1,20 @@
 import type { DataSource } from 'typeorm';
-import { Passwords } from '../auth/passwords';
-import { accessTokens, type AccessTokens } from '../auth/tokens';
-import type { Config } from '../config/config';
-import type { BlobStorage } from '../storage/storage';
-import { workerSheetRenderer, type SheetRenderer } from '../sheets/sheet-renderer';
-import { AttachmentsService } from './attachments/attachments.service';
-import { AuditService } from './audit/audit.service';
-import { AuthService } from './auth/auth.service';
-import { ComponentsService } from './components/components.service';
-import { OutboxNotifier } from '../mail/outbox-notifier';
-import type { Notifier } from './notifications/notifier';
-import { ProjectsService } from './projects/projects.service';
-import { RevisionsService } from './revisions/revisions.service';
-import { SettingsService } from './settings/settings.service';
-import { SheetsService } from './sheets/sheets.service';
-import { UsersService } from './users/users.service';
+import { Passwords } from './credentials/passwords';
+import { accessTokens, type AccessTokens } from './credentials/tokens';
+import type { Config } from './config/config';
+import type { BlobStorage } from './storage/storage';
+import { workerSheetRenderer, type SheetRenderer } from './sheets/sheet-renderer';
+import { AttachmentsService } from './domain/attachments/attachments.service';
+import { AuditService } from './domain/audit/audit.service';
+import { AuthService } from './domain/auth/auth.service';
+import { ComponentsService } from './domain/components/components.service';
+import { OutboxNotifier } from './mail/outbox-notifier';
+import type { Notifier } from './mail/notifier';
+import { ProjectsService } from './domain/projects/projects.service';
+import { RevisionsService } from './domain/revisions/revisions.service';
+import { SettingsService } from './domain/settings/settings.service';
+import { SheetsService } from './domain/sheets/sheets.service';
+import { UsersService } from './domain/users/users.service';
 
 /** The services the routes call; each is given only what it uses. */
 export interface Services {

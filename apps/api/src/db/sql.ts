@@ -1,5 +1,5 @@
 import type { EntityManager } from 'typeorm';
-import { pgPool } from '../db/pg-pool';
+import { pgPool } from './pg-pool';
 
 /** A raw query's rows and affected-row count (TypeORM's structured result). */
 export async function run<Row>(
