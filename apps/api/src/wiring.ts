@@ -1,6 +1,7 @@
 import type { DataSource } from 'typeorm';
+import type { Services } from './domain';
 import { Passwords } from './credentials/passwords';
-import { accessTokens, type AccessTokens } from './credentials/tokens';
+import { accessTokens } from './credentials/tokens';
 import type { Config } from './config/config';
 import type { BlobStorage } from './storage/storage';
 import { workerSheetRenderer, type SheetRenderer } from './sheets/sheet-renderer';
@@ -16,24 +17,12 @@ import { SettingsService } from './domain/settings/settings.service';
 import { SheetsService } from './domain/sheets/sheets.service';
 import { UsersService } from './domain/users/users.service';
 
-/** The services the routes call; each is given only what it uses. */
-export interface Services {
-  readonly passwords: Passwords;
-  /** Signs and checks access tokens (one key object per process). */
-  readonly tokens: AccessTokens;
-  readonly auth: AuthService;
-  readonly users: UsersService;
-  readonly projects: ProjectsService;
-  readonly components: ComponentsService;
-  readonly revisions: RevisionsService;
-  readonly audit: AuditService;
-  readonly attachments: AttachmentsService;
-  readonly sheets: SheetsService;
-  readonly settings: SettingsService;
-  /** The worker threads that render sheets (close it when done). */
-  readonly sheetRenderer: SheetRenderer;
-}
+export type { Services };
 
+/**
+ * The app's wiring: every service built once per process from the config,
+ * the database and the adapters (storage, mail, sheet threads).
+ */
 export function createServices(
   dataSource: DataSource,
   config: Config,
