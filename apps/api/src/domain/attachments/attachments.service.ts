@@ -2,8 +2,9 @@ import type { Attachment } from '@hoopline/contract';
 import { createHash, randomUUID } from 'node:crypto';
 import { IsNull, type DataSource, type EntityManager } from 'typeorm';
 import { AttachmentEntity } from '../../db/entities/attachment.entity';
-import { AppError, forbidden, notFound, validationFailed } from '../../http/errors';
-import { canDesign, type Actor, type Decision } from '../../policy/policy';
+import { AppError, notFound, validationFailed } from '../../http/errors';
+import { canDesign, type Actor } from '../../policy/policy';
+import { enforce } from '../../policy/enforce';
 import type { BlobStorage } from '../../storage/storage';
 import {
   ALLOWED_TYPES,
@@ -15,10 +16,6 @@ import { findActiveContent } from '../../uploads/pdf-active-content';
 import { recordAudit } from '../audit/audit.service';
 import { requireComponent } from '../components/component-access';
 import { isoRequired } from '../../db/sql';
-
-function enforce(decision: Decision) {
-  if (!decision.allowed) throw forbidden(decision.code, decision.reason);
-}
 
 async function viewsOf(
   manager: EntityManager,

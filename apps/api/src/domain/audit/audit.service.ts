@@ -5,8 +5,9 @@ import { AuditEventEntity } from '../../db/entities/audit-event.entity';
 import { toJson } from '../../db/entities/json';
 import { pageOf, type Page, type PageRequest } from '../../http/pagination';
 import { canReadProjectAudit, canReadWholeAudit, type Actor } from '../../policy/policy';
+import { enforce } from '../../policy/enforce';
 import { Where, paged } from '../../db/sql';
-import { forbidden, validationFailed } from '../../http/errors';
+import { validationFailed } from '../../http/errors';
 import { requireProjectStanding } from '../projects/project-access';
 
 export interface AuditRecord {
@@ -74,8 +75,7 @@ export class AuditService {
         ]);
       }
       const standing = await requireProjectStanding(manager, actor, filter.projectId);
-      const decision = canReadProjectAudit(standing);
-      if (!decision.allowed) throw forbidden(decision.code, decision.reason);
+      enforce(canReadProjectAudit(standing));
     }
     const w = new Where();
     if (filter.projectId) w.add('e.project_id = ?', filter.projectId);

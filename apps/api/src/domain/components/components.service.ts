@@ -4,9 +4,9 @@ import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import { ComponentEntity } from '../../db/entities/component.entity';
 import { RevisionEntity } from '../../db/entities/revision.entity';
-import { forbidden } from '../../http/errors';
 import { offsetOf, pageOf, type Page, type PageRequest } from '../../http/pagination';
-import { canDesign, seesOnlyIssued, type Actor, type Decision } from '../../policy/policy';
+import { canDesign, seesOnlyIssued, type Actor } from '../../policy/policy';
+import { enforce } from '../../policy/enforce';
 import { recordAudit } from '../audit/audit.service';
 import { requireProjectStanding } from '../projects/project-access';
 import { projectDesignBasis, projectSite, staleVersion } from '../projects/projects.service';
@@ -19,10 +19,6 @@ import {
 } from '../revisions/revision-views';
 import { Where, containsPattern, isoRequired, rows } from '../../db/sql';
 import { requireComponent } from './component-access';
-
-function enforce(decision: Decision) {
-  if (!decision.allowed) throw forbidden(decision.code, decision.reason);
-}
 
 /** The components with these ids, in the order of the ids (a page's order). */
 export async function componentsInOrder(

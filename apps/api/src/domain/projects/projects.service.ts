@@ -17,16 +17,16 @@ import {
 } from '../../db/entities/project.entity';
 import { UserEntity, type UnitSystem } from '../../db/entities/user.entity';
 import { toJson } from '../../db/entities/json';
-import { conflict, forbidden, notFound } from '../../http/errors';
+import { conflict, notFound } from '../../http/errors';
 import { pageOf, type Page, type PageRequest } from '../../http/pagination';
 import {
   canEditProject,
   canManageMaterials,
   canManageMembers,
   type Actor,
-  type Decision,
   type Role,
 } from '../../policy/policy';
+import { enforce } from '../../policy/enforce';
 import { recordAudit } from '../audit/audit.service';
 import { projectCreationDecision } from '../settings/settings.service';
 import { Where, containsPattern, iso, isoRequired, paged, rows } from '../../db/sql';
@@ -131,10 +131,6 @@ export function projectView(p: ProjectEntity, myRole: Role | null): Project {
     updatedAt: isoRequired(p.updatedAt),
     myRole,
   };
-}
-
-function enforce(decision: Decision) {
-  if (!decision.allowed) throw forbidden(decision.code, decision.reason);
 }
 
 const SORTS = {

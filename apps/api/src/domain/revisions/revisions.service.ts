@@ -24,7 +24,7 @@ import {
   SignOffEntity,
   type SignOffDecision,
 } from '../../db/entities/revision.entity';
-import { conflict, forbidden, notFound, validationFailed } from '../../http/errors';
+import { conflict, notFound, validationFailed } from '../../http/errors';
 import { offsetOf, pageOf, type Page, type PageRequest } from '../../http/pagination';
 import {
   canDesign,
@@ -32,8 +32,8 @@ import {
   canWithdraw,
   seesOnlyIssued,
   type Actor,
-  type Decision,
 } from '../../policy/policy';
+import { enforce } from '../../policy/enforce';
 import { recordAudit } from '../audit/audit.service';
 import {
   componentViews,
@@ -51,10 +51,6 @@ import { Where, containsPattern, isoRequired, paged, rows, run } from '../../db/
 import { diffInputs, diffResults } from './diff';
 import { computeContent, contentHash } from './revision-content';
 import { SUMMARY_COLUMNS, revisionView, summaryFromRow, type SummaryRow } from './revision-views';
-
-function enforce(decision: Decision) {
-  if (!decision.allowed) throw forbidden(decision.code, decision.reason);
-}
 
 function storedHashOf(revision: RevisionEntity): string {
   try {

@@ -1,6 +1,5 @@
 import type { Settings } from '@hoopline/contract';
 import type { DataSource, EntityManager } from 'typeorm';
-import { forbidden } from '../../http/errors';
 import {
   canCreateProject,
   canManageSettings,
@@ -8,6 +7,7 @@ import {
   type Decision,
   type ProjectCreation,
 } from '../../policy/policy';
+import { enforce } from '../../policy/enforce';
 import { recordAudit } from '../audit/audit.service';
 import { rows } from '../../db/sql';
 
@@ -69,8 +69,4 @@ export class SettingsService {
       return { projectCreation: after };
     });
   }
-}
-
-function enforce(decision: Decision) {
-  if (!decision.allowed) throw forbidden(decision.code, decision.reason);
 }

@@ -5,20 +5,16 @@ import type { AuthConfig } from '../../config/config';
 import { hashToken, randomToken } from '../../credentials/tokens';
 import { InvitationEntity } from '../../db/entities/invitation.entity';
 import { UserEntity, type UnitSystem } from '../../db/entities/user.entity';
-import { conflict, forbidden, notFound } from '../../http/errors';
+import { conflict, notFound } from '../../http/errors';
 import { pageOf, type Page, type PageRequest } from '../../http/pagination';
 import { canLookUpPerson, canManagePeople, type Actor } from '../../policy/policy';
+import { enforce } from '../../policy/enforce';
 import { recordAudit } from '../audit/audit.service';
 import type { AuthService } from '../auth/auth.service';
 import { normaliseEmail } from '../auth/auth.service';
 import type { Notifier } from '../../mail/notifier';
 import { Where, containsPattern, paged } from '../../db/sql';
 import { meView, userView, type UserProfile } from './user-views';
-
-function requireAdmin(actor: Actor) {
-  const decision = canManagePeople(actor);
-  if (!decision.allowed) throw forbidden(decision.code, decision.reason);
-}
 
 /** How a one-time token reaches its owner: by mail, or shown to the admin who asked. */
 export type TokenDelivery =
@@ -70,8 +66,7 @@ export class UsersService {
       `select exists (select 1 from project_members where user_id = $1 and role = 'designer') as yes`,
       [actor.id],
     );
-    const decision = canLookUpPerson(actor, Boolean(leads?.yes));
-    if (!decision.allowed) throw forbidden(decision.code, decision.reason);
+    enforce(canLookUpPerson(actor, Boolean(leads?.yes)));
     const user = await manager.findOneBy(UserEntity, {
       email: normaliseEmail(email),
       active: true,
@@ -81,7 +76,7 @@ export class UsersService {
   }
 
   async list(actor: Actor, query: PageRequest & { q?: string | undefined }): Promise<Page<User>> {
-    requireAdmin(actor);
+    enforce(canManagePeople(actor));
     const w = new Where();
     if (query.q)
       w.add(
@@ -121,7 +116,7 @@ export class UsersService {
       mayCreateProjects?: boolean | undefined;
     },
   ): Promise<User> {
-    requireAdmin(actor);
+    enforce(canManagePeople(actor));
     return this.dataSource.transaction(async (manager) => {
       const before = await manager.findOne(UserEntity, {
         where: { id: userId },
@@ -175,7 +170,7 @@ export class UsersService {
     actor: Actor,
     userId: string,
   ): Promise<TokenDelivery & { expiresAt: string }> {
-    requireAdmin(actor);
+    enforce(canManagePeople(actor));
     return this.dataSource.transaction(async (manager) => {
       const user = await manager.findOneBy(UserEntity, { id: userId });
       if (!user) throw notFound('user');
@@ -198,7 +193,7 @@ export class UsersService {
   }
 
   async listInvitations(actor: Actor, page: PageRequest): Promise<Page<Invitation>> {
-    requireAdmin(actor);
+    enforce(canManagePeople(actor));
     const { rows: found, total } = await paged<{
       id: string;
       email: string;
@@ -242,7 +237,7 @@ export class UsersService {
     actor: Actor,
     input: { email: string; name: string; isAdmin?: boolean | undefined },
   ): Promise<{ invitation: Invitation } & TokenDelivery> {
-    requireAdmin(actor);
+    enforce(canManagePeople(actor));
     const email = normaliseEmail(input.email);
     const token = randomToken();
     const result = await this.dataSource.transaction(async (manager) => {
@@ -305,7 +300,7 @@ export class UsersService {
   }
 
   async revokeInvitation(actor: Actor, invitationId: string): Promise<void> {
-    requireAdmin(actor);
+    enforce(canManagePeople(actor));
     await this.dataSource.transaction(async (manager) => {
       const invitation = await manager.findOneBy(InvitationEntity, { id: invitationId });
       if (!invitation || invitation.revokedAt) throw notFound('invitation');
