@@ -13,6 +13,7 @@ import { OutboxNotifier } from './mail/outbox-notifier';
 import type { Notifier } from './mail/notifier';
 import { ProjectsService } from './domain/projects/projects.service';
 import { RevisionsService } from './domain/revisions/revisions.service';
+import { ScreenService } from './domain/screen/screen.service';
 import { SettingsService } from './domain/settings/settings.service';
 import { SheetsService } from './domain/sheets/sheets.service';
 import { UsersService } from './domain/users/users.service';
@@ -53,5 +54,6 @@ export function createServices(
     ),
     sheetRenderer,
     settings: new SettingsService(dataSource),
+    screen: new ScreenService(),
   };
 }

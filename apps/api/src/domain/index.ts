@@ -7,6 +7,7 @@ import type { AuthService } from './auth/auth.service';
 import type { ComponentsService } from './components/components.service';
 import type { ProjectsService } from './projects/projects.service';
 import type { RevisionsService } from './revisions/revisions.service';
+import type { ScreenService } from './screen/screen.service';
 import type { SettingsService } from './settings/settings.service';
 import type { SheetsService } from './sheets/sheets.service';
 import type { UsersService } from './users/users.service';
@@ -29,6 +30,8 @@ export interface Services {
   readonly attachments: AttachmentsService;
   readonly sheets: SheetsService;
   readonly settings: SettingsService;
+  /** Screening that saves nothing (POST /screen). */
+  readonly screen: ScreenService;
   /** The worker threads that render sheets (close it when done). */
   readonly sheetRenderer: SheetRenderer;
 }
