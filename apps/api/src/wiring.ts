@@ -1,6 +1,7 @@
 import type { DataSource } from 'typeorm';
 import type { Services } from './domain';
 import { Passwords } from './credentials/passwords';
+import { pgPool } from './db/pg-pool';
 import { accessTokens } from './credentials/tokens';
 import type { Config } from './config/config';
 import type { BlobStorage } from './storage/storage';
@@ -15,6 +16,7 @@ import { ProjectsService } from './domain/projects/projects.service';
 import { RevisionsService } from './domain/revisions/revisions.service';
 import { ScreenService } from './domain/screen/screen.service';
 import { SettingsService } from './domain/settings/settings.service';
+import { SheetCache } from './domain/sheets/sheet-cache';
 import { SheetsService } from './domain/sheets/sheets.service';
 import { UsersService } from './domain/users/users.service';
 
@@ -50,7 +52,7 @@ export function createServices(
       attachments,
       config.publicUrl,
       sheetRenderer,
-      config.sheets.cacheBytes,
+      new SheetCache(() => pgPool(dataSource), config.sheets.cacheBytes),
     ),
     sheetRenderer,
     settings: new SettingsService(dataSource),

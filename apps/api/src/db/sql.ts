@@ -34,11 +34,6 @@ export function containsPattern(text: string): string {
   return `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
 }
 
-export const iso = (d: Date | string | null | undefined): string | null =>
-  d == null ? null : new Date(d).toISOString();
-
-export const isoRequired = (d: Date | string): string => new Date(d).toISOString();
-
 export interface PagedQuery {
   /** Select list, without the total. */
   readonly columns: string;
