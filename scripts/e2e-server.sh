@@ -28,7 +28,7 @@ export HOOPLINE_SMTP_HOST=127.0.0.1 HOOPLINE_SMTP_PORT="${HOOPLINE_SMTP_TEST_POR
 export DATABASE_URL="$e2e_url" NODE_ENV=test HOOPLINE_PORT="$port" HOOPLINE_HOST=127.0.0.1 \
   HOOPLINE_WEB_DIST="$ROOT/apps/web/dist" HOOPLINE_LOG_LEVEL="${HOOPLINE_LOG_LEVEL:-warn}"
 node --import tsx src/db/migrate.ts >&2
-if [[ -f src/db/seed.ts ]]; then node --import tsx src/db/seed.ts >&2; fi
+if [[ -f src/seed/seed.ts ]]; then node --import tsx src/seed/seed.ts >&2; fi
 if [[ ! -f "$ROOT/apps/web/dist/index.html" ]]; then
   (cd "$ROOT/apps/web" && pnpm build >&2)
 fi

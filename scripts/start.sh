@@ -38,9 +38,9 @@ export NODE_ENV=production
 log "migrating the database"
 (cd apps/api && node --import tsx src/db/migrate.ts)
 demo_file="$HOOPLINE_ROOT/.data/demo-sign-in.txt"
-if [[ -f apps/api/src/db/seed.ts ]]; then
+if [[ -f apps/api/src/seed/seed.ts ]]; then
   log "loading the demo scenario"
-  (cd apps/api && node --import tsx src/db/seed.ts --write-sign-in "$demo_file")
+  (cd apps/api && node --import tsx src/seed/seed.ts --write-sign-in "$demo_file")
 fi
 
 log "building the web app"

@@ -14,7 +14,7 @@ export interface Person {
   readonly password: string;
 }
 
-// The seeded demo admin (apps/api/src/db/demo-scenario.ts; its development password applies when
+// The seeded demo admin (apps/api/src/seed/demo-scenario.ts; its development password applies when
 // the installation has no secret of its own, as on the e2e server).
 export const SEEDED_ADMIN = {
   email: 'theo.brandt@larchmont.example',

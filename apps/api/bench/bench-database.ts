@@ -11,8 +11,8 @@ import pg from 'pg';
 import { loadConfig } from '../src/config/config';
 import { createDataSource } from '../src/db/data-source';
 import { UserEntity } from '../src/db/entities/user.entity';
-import { createServices } from '../src/domain/services';
-import { rows, run } from '../src/domain/sql';
+import { createServices } from '../src/wiring';
+import { rows, run } from '../src/db/sql';
 import { createStorage } from '../src/storage/create-storage';
 
 export const BENCH_DATABASE = 'hoopline_bench';

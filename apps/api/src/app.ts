@@ -8,25 +8,28 @@ import type { DataSource } from 'typeorm';
 import type { Config } from './config/config';
 import { signInRequired } from './auth/authenticate';
 import { csrfProtection } from './auth/csrf';
-import type { Notifier } from './domain/notifications/notifier';
+import type { Notifier } from './mail/notifier';
 import { createStorage } from './storage/create-storage';
 import type { BlobStorage } from './storage/storage';
 import type { SheetRenderer } from './sheets/sheet-renderer';
 import type { SessionCache } from './auth/session-cache';
-import { createServices } from './domain/services';
+import { createServices } from './wiring';
 import { apiNotFound, errorMiddleware } from './http/error-middleware';
 import { requestLog } from './http/request-log';
 import { authRoutes } from './routes/auth.routes';
 import { componentsRoutes } from './routes/components.routes';
 import { healthRoutes } from './routes/health.routes';
 import { meRoutes } from './routes/me.routes';
-import { miscRoutes } from './routes/misc.routes';
 import { attachmentsRoutes } from './routes/attachments.routes';
+import { auditRoutes } from './routes/audit.routes';
+import { issuedRoutes } from './routes/issued.routes';
 import { projectsRoutes } from './routes/projects.routes';
 import { revisionsRoutes } from './routes/revisions.routes';
 import type { RouteDeps } from './routes/route-deps';
+import { screenRoutes } from './routes/screen.routes';
 import { sheetsRoutes } from './routes/sheets.routes';
 import { usersRoutes } from './routes/users.routes';
+import { verifyRoutes } from './routes/verify.routes';
 
 export interface AppDependencies {
   readonly config: Config;
@@ -100,7 +103,10 @@ export function createApp({
   api.use(revisionsRoutes(deps));
   api.use(attachmentsRoutes(deps));
   api.use(sheetsRoutes(deps));
-  api.use(miscRoutes(deps));
+  api.use(issuedRoutes(deps));
+  api.use(auditRoutes(deps));
+  api.use(screenRoutes(deps));
+  api.use(verifyRoutes(deps));
   api.use(apiNotFound);
   app.use('/api', api);
 

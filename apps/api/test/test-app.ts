@@ -8,7 +8,7 @@ import type { DataSource } from 'typeorm';
 import { createApp } from '../src/app';
 import { loadConfig, type Config } from '../src/config/config';
 import { createDataSource } from '../src/db/data-source';
-import { createServices, type Services } from '../src/domain/services';
+import { createServices, type Services } from '../src/wiring';
 import { createStorage } from '../src/storage/create-storage';
 import type { BlobStorage } from '../src/storage/storage';
 import { workerSheetRenderer, type SheetRenderer } from '../src/sheets/sheet-renderer';

@@ -1,6 +1,6 @@
 import jwt from 'jsonwebtoken';
 import request from 'supertest';
-import { backgroundSettled } from '../domain/background-work';
+import { backgroundSettled } from '../http/background-work';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { anonymous, count, makeUser, signIn, type TestUser } from '../../test/fixtures';
 import { startTestApp, type TestApp } from '../../test/test-app';

@@ -1,13 +1,12 @@
 import type { Request, RequestHandler } from 'express';
 import type { DataSource } from 'typeorm';
-import { pgPool } from '../db/pg-pool';
-import type { UnitSystem } from '../db/entities/user.entity';
-import type { UserProfile } from '../domain/users/user-views';
+import type { UserProfile } from '../db/entities/user.entity';
 import { AppError, unauthorized } from '../http/errors';
 import type { Actor } from '../policy/policy';
+import { sessionRepository } from '../repositories/sessions.repository';
 import { ACCESS_COOKIE, cookieText } from './cookies';
-import type { SessionCache, SessionFacts } from './session-cache';
-import type { AccessTokens } from './tokens';
+import type { SessionCache } from './session-cache';
+import type { AccessTokens } from '../credentials/tokens';
 
 /** The signed-in person, as the routes see them. */
 export interface SignedIn extends Actor {
@@ -22,59 +21,6 @@ export const tokenExpired = () =>
   new AppError(401, 'token_expired', 'your session has expired: refresh it and try again');
 
 const sessionEnded = () => unauthorized('your session has ended: sign in again');
-
-interface SessionRow {
-  id: string;
-  email: string;
-  name: string;
-  is_admin: boolean;
-  active: boolean;
-  unit_system: UnitSystem;
-  may_create_projects: boolean;
-  auth_epoch: number;
-  created_at: Date;
-  live_until: Date | null;
-}
-
-/**
- * One indexed read, as a named prepared statement on the pool (no query
- * builder): the user row and until when the session's refresh family has a
- * live token. Signing out, a detected reuse or an ended session revokes the
- * family, so the access token stops working at once.
- */
-const SESSION_QUERY = {
-  name: 'hoopline-session',
-  text: `select u.id, u.email, u.name, u.is_admin, u.active, u.unit_system, u.auth_epoch,
-                u.may_create_projects, u.created_at,
-                (select max(t.expires_at) from refresh_tokens t
-                  where t.family_id = $2 and t.user_id = u.id and t.revoked_at is null) as live_until
-           from users u where u.id = $1`,
-};
-
-async function readSession(
-  dataSource: DataSource,
-  sub: string,
-  sid: string,
-): Promise<SessionFacts | undefined> {
-  const result = await pgPool(dataSource).query<SessionRow>({
-    ...SESSION_QUERY,
-    values: [sub, sid],
-  });
-  const row = result.rows[0];
-  if (!row) return undefined;
-  return {
-    id: row.id,
-    email: row.email,
-    name: row.name,
-    isAdmin: row.is_admin,
-    active: row.active,
-    unitSystem: row.unit_system,
-    mayCreateProjects: row.may_create_projects,
-    authEpoch: row.auth_epoch,
-    createdAt: row.created_at,
-    liveUntil: row.live_until,
-  };
-}
 
 /**
  * Route middleware: the request must carry a valid access token of an active
@@ -98,7 +44,7 @@ export function signInRequired(
     let facts = cache?.get(sid);
     if (!facts || facts.id !== sub) {
       const startedAt = cache?.now ?? 0;
-      facts = await readSession(dataSource, sub, sid);
+      facts = await sessionRepository.sessionFacts(dataSource, sub, sid);
       if (facts && cache) cache.set(sid, facts, startedAt);
     }
     if (

@@ -1,16 +1,11 @@
 import type { CookieOptions, Response } from 'express';
 import type { AuthConfig } from '../config/config';
+import type { IssuedSession } from '../credentials/tokens';
 
 export const ACCESS_COOKIE = 'hl_access';
 export const REFRESH_COOKIE = 'hl_refresh';
 export const CSRF_COOKIE = 'hl_csrf';
 export const CSRF_HEADER = 'x-csrf-token';
-
-export interface IssuedSession {
-  readonly accessToken: string;
-  readonly refreshToken: string;
-  readonly csrfToken: string;
-}
 
 function options(auth: AuthConfig) {
   const base = { secure: auth.cookieSecure } as const;

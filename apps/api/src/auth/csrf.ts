@@ -1,7 +1,7 @@
 import type { RequestHandler } from 'express';
 import { forbidden } from '../http/errors';
 import { ACCESS_COOKIE, CSRF_COOKIE, CSRF_HEADER, REFRESH_COOKIE, cookieText } from './cookies';
-import { safeEqual } from './tokens';
+import { safeEqual } from '../credentials/tokens';
 
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
 

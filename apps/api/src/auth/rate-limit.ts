@@ -4,7 +4,7 @@ import type pg from 'pg';
 import type { DataSource } from 'typeorm';
 import type { AuthConfig } from '../config/config';
 import { pgPool } from '../db/pg-pool';
-import { afterAnswer } from '../domain/background-work';
+import { afterAnswer } from '../http/background-work';
 import { AppError } from '../http/errors';
 
 const tooMany = (retryAfterSeconds: number) =>

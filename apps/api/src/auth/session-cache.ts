@@ -1,23 +1,9 @@
-import type { UnitSystem } from '@hoopline/contract';
 import { randomUUID } from 'node:crypto';
 import pg from 'pg';
 import type { Logger } from 'pino';
+import type { SessionFacts } from '../repositories/sessions.repository';
 
-/** What the per-request session check reads for a (user, session) pair. */
-export interface SessionFacts {
-  readonly id: string;
-  readonly email: string;
-  readonly name: string;
-  readonly isAdmin: boolean;
-  readonly active: boolean;
-  readonly unitSystem: UnitSystem;
-  /** Named by an administrator as someone who may start projects. */
-  readonly mayCreateProjects: boolean;
-  readonly authEpoch: number;
-  readonly createdAt: Date;
-  /** The latest expiry among the family's live refresh tokens; null when none is live. */
-  readonly liveUntil: Date | null;
-}
+export type { SessionFacts };
 
 /** The channel the database triggers notify on (migration 1765100003000). */
 export const SESSION_CHANNEL = 'hoopline_sessions';

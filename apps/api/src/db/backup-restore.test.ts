@@ -5,13 +5,13 @@ import path from 'node:path';
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { contentHash, verifyCode } from '../domain/revisions/revision-content';
-import { createServices } from '../domain/services';
+import { createServices } from '../wiring';
 import { createStorage } from '../storage/create-storage';
 import { adminQuery, withDatabase } from '../../test/database';
 import { tableChecksums } from '../../test/table-checksums';
 import { startTestApp, type TestApp } from '../../test/test-app';
 import { createDataSource } from './data-source';
-import { seedDemo } from './seed-demo';
+import { seedDemo } from '../seed/seed-demo';
 
 const PG_SH = path.resolve(import.meta.dirname, '../../../../scripts/pg.sh');
 

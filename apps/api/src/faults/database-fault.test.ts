@@ -11,7 +11,7 @@ import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { createApp } from '../app';
 import { loadConfig } from '../config/config';
 import { createDataSource } from '../db/data-source';
-import { createServices } from '../domain/services';
+import { createServices } from '../wiring';
 import { workerSheetRenderer } from '../sheets/sheet-renderer';
 import { createStorage } from '../storage/create-storage';
 import { makeUser, signIn, type Session } from '../../test/fixtures';

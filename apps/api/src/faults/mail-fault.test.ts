@@ -5,7 +5,7 @@ import { pino } from 'pino';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startFakeSmtpServer, type FakeSmtpServer } from '../mail/fake-smtp-server';
 import { MailWorker } from '../mail/mail-worker';
-import { backgroundSettled } from '../domain/background-work';
+import { backgroundSettled } from '../http/background-work';
 import { anonymous, makeComponent, makeWorld, signIn, type World } from '../../test/fixtures';
 import { readMailbox } from '../../test/mailbox';
 import { startTestApp, type TestApp } from '../../test/test-app';

@@ -7,7 +7,7 @@ import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { loadConfig } from '../config/config';
 import { createDataSource } from '../db/data-source';
-import { createServices, type Services } from '../domain/services';
+import { createServices, type Services } from '../wiring';
 import { createStorage } from '../storage/create-storage';
 import {
   Session,

@@ -2,7 +2,7 @@ import nodemailer, { type Transporter } from 'nodemailer';
 import type { Logger } from 'pino';
 import type { DataSource } from 'typeorm';
 import type { MailConfig } from '../config/config';
-import { rows, run } from '../domain/sql';
+import { rows, run } from '../db/sql';
 
 interface OutboxRow {
   id: string;

@@ -8,7 +8,7 @@ import { anonymous, makeComponent, makeWorld, signIn, type World } from '../../t
 import { startTestApp, type TestApp } from '../../test/test-app';
 import { startFakeSmtpServer, type FakeSmtpServer } from './fake-smtp-server';
 import { MailWorker } from './mail-worker';
-import { backgroundSettled } from '../domain/background-work';
+import { backgroundSettled } from '../http/background-work';
 
 const silent = pino({ level: 'silent' });
 const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));

@@ -1,8 +1,8 @@
 import { randomUUID } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
 import { MailOutboxEntity } from '../db/entities/mail-outbox.entity';
-import type { Notifier } from '../domain/notifications/notifier';
-import { rows } from '../domain/sql';
+import type { Notifier } from './notifier';
+import { rows } from '../db/sql';
 import { mails, type MailMessage, type RevisionMailContext } from './templates';
 
 /** Puts a composed mail in the outbox, in the caller's transaction. */

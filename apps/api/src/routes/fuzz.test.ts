@@ -18,7 +18,7 @@ import {
 import { bodies, hostileText, hostileValue, type Payload } from '../../test/fuzz/payloads';
 import { changedTables, tableChecksums } from '../../test/table-checksums';
 import { startTestApp, type TestApp } from '../../test/test-app';
-import { backgroundSettled } from '../domain/background-work';
+import { backgroundSettled } from '../http/background-work';
 
 /**
  * Property-based fuzzing of every route that takes input (fast-check): each

@@ -1,7 +1,7 @@
 import type { RequestHandler } from 'express';
 import type { DataSource } from 'typeorm';
 import type { Config } from '../config/config';
-import type { Services } from '../domain/services';
+import type { Services } from '../domain';
 
 /** What every router factory is given. */
 export interface RouteDeps {

@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from 'vitest';
-import { Passwords } from '../auth/passwords';
-import { backgroundSettled } from '../domain/background-work';
+import { Passwords } from '../credentials/passwords';
+import { backgroundSettled } from '../http/background-work';
 import { AuthService } from '../domain/auth/auth.service';
 import { count, makeUser, signIn, type TestUser } from '../../test/fixtures';
 import { startTestApp, type TestApp } from '../../test/test-app';

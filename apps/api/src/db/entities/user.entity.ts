@@ -21,3 +21,9 @@ export class UserEntity {
   @Column('timestamptz', { name: 'created_at' }) createdAt: Date;
   @Column('timestamptz', { name: 'updated_at' }) updatedAt: Date;
 }
+
+/** What the views read of a user row (no password hash: the signed-in request never loads it). */
+export type UserProfile = Pick<
+  UserEntity,
+  'id' | 'email' | 'name' | 'isAdmin' | 'active' | 'unitSystem' | 'mayCreateProjects' | 'createdAt'
+>;

@@ -1,9 +1,10 @@
 import type { Attachment } from '@hoopline/contract';
 import { createHash, randomUUID } from 'node:crypto';
-import { IsNull, type DataSource, type EntityManager } from 'typeorm';
-import { AttachmentEntity } from '../../db/entities/attachment.entity';
-import { AppError, forbidden, notFound, validationFailed } from '../../http/errors';
-import { canDesign, type Actor, type Decision } from '../../policy/policy';
+import type { DataSource, EntityManager } from 'typeorm';
+import type { AttachmentEntity } from '../../db/entities/attachment.entity';
+import { AppError, notFound, validationFailed } from '../../http/errors';
+import { canDesign, type Actor } from '../../policy/policy';
+import { enforce } from '../../policy/enforce';
 import type { BlobStorage } from '../../storage/storage';
 import {
   ALLOWED_TYPES,
@@ -12,13 +13,11 @@ import {
   sniffFileType,
 } from '../../uploads/file-checks';
 import { findActiveContent } from '../../uploads/pdf-active-content';
+import { attachmentRepository } from '../../repositories/attachments.repository';
+import { userRepository } from '../../repositories/users.repository';
 import { recordAudit } from '../audit/audit.service';
 import { requireComponent } from '../components/component-access';
-import { isoRequired } from '../sql';
-
-function enforce(decision: Decision) {
-  if (!decision.allowed) throw forbidden(decision.code, decision.reason);
-}
+import { isoRequired } from '../iso-dates';
 
 async function viewsOf(
   manager: EntityManager,
@@ -27,14 +26,7 @@ async function viewsOf(
   const ids = [
     ...new Set(entities.map((a) => a.uploadedBy).filter((id): id is string => id !== null)),
   ];
-  const names = new Map<string, string>();
-  if (ids.length) {
-    const found: Array<{ id: string; name: string }> = await manager.query(
-      'select id, name from users where id = any($1::uuid[])',
-      [ids],
-    );
-    for (const u of found) names.set(u.id, u.name);
-  }
+  const names = await userRepository.namesByIds(manager, ids);
   return entities.map((a) => ({
     id: a.id,
     componentId: a.componentId,
@@ -61,13 +53,7 @@ export class AttachmentsService {
   async list(actor: Actor, componentId: string): Promise<Attachment[]> {
     const manager = this.dataSource.manager;
     await requireComponent(manager, actor, componentId);
-    return viewsOf(
-      manager,
-      await manager.find(AttachmentEntity, {
-        where: { componentId, removedAt: IsNull() },
-        order: { createdAt: 'DESC', id: 'ASC' },
-      }),
-    );
+    return viewsOf(manager, await attachmentRepository.ofComponent(manager, componentId));
   }
 
   /** Attachments of a component up to a moment (the sheet lists those as of the countersign). */
@@ -76,20 +62,7 @@ export class AttachmentsService {
     componentId: string,
     asOf: Date | null,
   ): Promise<Attachment[]> {
-    const query = manager
-      .getRepository(AttachmentEntity)
-      .createQueryBuilder('a')
-      .where('a.component_id = :componentId', { componentId })
-      .orderBy('a.created_at', 'ASC')
-      .addOrderBy('a.id', 'ASC');
-    if (asOf) {
-      query
-        .andWhere('a.created_at <= :asOf', { asOf })
-        .andWhere('(a.removed_at is null or a.removed_at > :asOf)', { asOf });
-    } else {
-      query.andWhere('a.removed_at is null');
-    }
-    return viewsOf(manager, await query.getMany());
+    return viewsOf(manager, await attachmentRepository.ofComponentAsOf(manager, componentId, asOf));
   }
 
   async upload(
@@ -123,7 +96,7 @@ export class AttachmentsService {
     await this.storage.put(sha256, file.bytes, sniffed.type);
     return this.dataSource.transaction(async (tx) => {
       const { component } = await requireComponent(tx, actor, componentId, { lock: true });
-      const entity: AttachmentEntity = Object.assign(new AttachmentEntity(), {
+      const entity = await attachmentRepository.insert(tx, {
         id: randomUUID(),
         componentId,
         projectId: component.projectId,
@@ -136,7 +109,6 @@ export class AttachmentsService {
         removedAt: null,
         removedBy: null,
       });
-      await tx.insert(AttachmentEntity, entity);
       await recordAudit(tx, {
         actorId: actor.id,
         action: 'attachment.uploaded',
@@ -162,10 +134,7 @@ export class AttachmentsService {
     attachmentId: string,
   ): Promise<{ attachment: Attachment; bytes: Buffer }> {
     const manager = this.dataSource.manager;
-    const entity = await manager.findOneBy(AttachmentEntity, {
-      id: attachmentId,
-      removedAt: IsNull(),
-    });
+    const entity = await attachmentRepository.findActive(manager, attachmentId);
     if (!entity) throw notFound('attachment');
     await requireComponent(manager, actor, entity.componentId).catch(() => {
       throw notFound('attachment');
@@ -178,21 +147,14 @@ export class AttachmentsService {
 
   async remove(actor: Actor, attachmentId: string): Promise<void> {
     await this.dataSource.transaction(async (manager) => {
-      const entity = await manager.findOneBy(AttachmentEntity, {
-        id: attachmentId,
-        removedAt: IsNull(),
-      });
+      const entity = await attachmentRepository.findActive(manager, attachmentId);
       if (!entity) throw notFound('attachment');
       const { standing } = await requireComponent(manager, actor, entity.componentId).catch(() => {
         throw notFound('attachment');
       });
       enforce(canDesign(standing));
       // Kept, marked removed: a sheet countersigned before still names it.
-      await manager.update(
-        AttachmentEntity,
-        { id: attachmentId },
-        { removedAt: new Date(), removedBy: actor.id },
-      );
+      await attachmentRepository.markRemoved(manager, attachmentId, actor.id, new Date());
       await recordAudit(manager, {
         actorId: actor.id,
         action: 'attachment.removed',

@@ -1,12 +1,12 @@
 import type { AuditEvent } from '@hoopline/contract';
 import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
-import { AuditEventEntity } from '../../db/entities/audit-event.entity';
 import { toJson } from '../../db/entities/json';
 import { pageOf, type Page, type PageRequest } from '../../http/pagination';
 import { canReadProjectAudit, canReadWholeAudit, type Actor } from '../../policy/policy';
-import { Where, paged } from '../sql';
-import { forbidden, validationFailed } from '../../http/errors';
+import { enforce } from '../../policy/enforce';
+import { auditRepository, type AuditEventFilter } from '../../repositories/audit.repository';
+import { validationFailed } from '../../http/errors';
 import { requireProjectStanding } from '../projects/project-access';
 
 export interface AuditRecord {
@@ -28,7 +28,7 @@ export async function recordAudit(manager: EntityManager, record: AuditRecord): 
   if (record.before !== undefined) summary.before = record.before;
   if (record.after !== undefined) summary.after = record.after;
 
-  await manager.insert(AuditEventEntity, {
+  await auditRepository.insert(manager, {
     id: randomUUID(),
     actorId: record.actorId,
     action: record.action,
@@ -40,26 +40,7 @@ export async function recordAudit(manager: EntityManager, record: AuditRecord): 
   });
 }
 
-export interface AuditFilter extends PageRequest {
-  readonly projectId?: string | undefined;
-  readonly actorId?: string | undefined;
-  readonly action?: string | undefined;
-  readonly entityType?: string | undefined;
-  readonly from?: Date | undefined;
-  readonly to?: Date | undefined;
-}
-
-interface AuditRow {
-  id: string;
-  actor_id: string | null;
-  actor_name: string | null;
-  action: string;
-  entity_type: string;
-  entity_id: string | null;
-  project_id: string | null;
-  summary: { before?: unknown; after?: unknown };
-  created_at: Date;
-}
+export type AuditFilter = PageRequest & AuditEventFilter;
 
 export class AuditService {
   constructor(private readonly dataSource: DataSource) {}
@@ -74,28 +55,9 @@ export class AuditService {
         ]);
       }
       const standing = await requireProjectStanding(manager, actor, filter.projectId);
-      const decision = canReadProjectAudit(standing);
-      if (!decision.allowed) throw forbidden(decision.code, decision.reason);
+      enforce(canReadProjectAudit(standing));
     }
-    const w = new Where();
-    if (filter.projectId) w.add('e.project_id = ?', filter.projectId);
-    if (filter.actorId) w.add('e.actor_id = ?', filter.actorId);
-    if (filter.action) w.add('e.action = ?', filter.action);
-    if (filter.entityType) w.add('e.entity_type = ?', filter.entityType);
-    if (filter.from) w.add('e.created_at >= ?', filter.from);
-    if (filter.to) w.add('e.created_at < ?', filter.to);
-    const { rows: found, total } = await paged<AuditRow>(
-      manager,
-      {
-        columns: `e.id, e.actor_id, u.name as actor_name, e.action, e.entity_type, e.entity_id,
-                  e.project_id, e.summary, e.created_at`,
-        from: 'audit_events e left join users u on u.id = e.actor_id',
-        where: w.where,
-        params: w.params,
-        orderBy: 'e.seq desc',
-      },
-      filter,
-    );
+    const { rows: found, total } = await auditRepository.page(manager, filter, filter);
     return pageOf(
       found.map((r) => ({
         id: r.id,

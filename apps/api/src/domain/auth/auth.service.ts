@@ -1,21 +1,24 @@
 import type { Me } from '@hoopline/contract';
 import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
-import { IsNull } from 'typeorm';
 import type { AuthConfig } from '../../config/config';
-import type { IssuedSession } from '../../auth/cookies';
-import type { Passwords } from '../../auth/passwords';
-import { hashToken, randomToken, type AccessTokens } from '../../auth/tokens';
-import { InvitationEntity } from '../../db/entities/invitation.entity';
-import { PasswordResetEntity } from '../../db/entities/password-reset.entity';
-import { RefreshTokenEntity } from '../../db/entities/refresh-token.entity';
-import { UserEntity } from '../../db/entities/user.entity';
+import type { Passwords } from '../../credentials/passwords';
+import {
+  hashToken,
+  randomToken,
+  type AccessTokens,
+  type IssuedSession,
+} from '../../credentials/tokens';
+import type { InvitationEntity } from '../../db/entities/invitation.entity';
+import type { UserEntity } from '../../db/entities/user.entity';
 import { AppError, badRequest, conflict, notFound, unauthorized } from '../../http/errors';
 import type { Actor } from '../../policy/policy';
 import { recordAudit } from '../audit/audit.service';
-import { runInBackground } from '../background-work';
-import type { Notifier } from '../notifications/notifier';
-import { rows, run } from '../sql';
+import { runInBackground } from '../../http/background-work';
+import type { Notifier } from '../../mail/notifier';
+import { databaseRepository } from '../../repositories/database.repository';
+import { sessionRepository } from '../../repositories/sessions.repository';
+import { userRepository } from '../../repositories/users.repository';
 import { meView } from '../users/user-views';
 
 export interface SignedInResult {
@@ -45,9 +48,7 @@ export class AuthService {
   ) {}
 
   async signIn(email: string, password: string): Promise<SignedInResult> {
-    const user = await this.dataSource
-      .getRepository(UserEntity)
-      .findOneBy({ email: normaliseEmail(email) });
+    const user = await userRepository.findByEmail(this.dataSource.manager, normaliseEmail(email));
     const ok = user
       ? await this.passwords.verify(user.passwordHash, password)
       : await this.passwords.verifyNothing(password);
@@ -68,10 +69,7 @@ export class AuthService {
   async refresh(refreshToken: string | undefined): Promise<SignedInResult> {
     if (!refreshToken) throw unauthorized('no session to refresh: sign in');
     const outcome = await this.dataSource.transaction(async (manager) => {
-      const token = await manager.findOne(RefreshTokenEntity, {
-        where: { tokenHash: hashToken(refreshToken) },
-        lock: { mode: 'pessimistic_write' },
-      });
+      const token = await sessionRepository.lockByTokenHash(manager, hashToken(refreshToken));
       if (!token) return { kind: 'invalid' as const };
       if (token.revokedAt) {
         const age = (Date.now() - token.revokedAt.getTime()) / 1000;
@@ -80,7 +78,7 @@ export class AuthService {
         }
         if (token.revokedReason === 'rotated') {
           // A spent token came back: someone holds a copy. End the whole family.
-          await this.revokeFamily(manager, token.familyId, 'reuse');
+          await sessionRepository.revokeFamily(manager, token.familyId, 'reuse');
           await recordAudit(manager, {
             actorId: token.userId,
             action: 'session.reuse_detected',
@@ -93,7 +91,7 @@ export class AuthService {
         return { kind: 'invalid' as const };
       }
       if (token.expiresAt.getTime() <= Date.now()) return { kind: 'expired' as const };
-      const user = await manager.findOneBy(UserEntity, { id: token.userId });
+      const user = await userRepository.findById(manager, token.userId);
       if (!user || !user.active) return { kind: 'invalid' as const };
       const session = await this.issueSession(manager, user, token.familyId, token.id);
       return { kind: 'ok' as const, result: { me: await meView(manager, user), session } };
@@ -129,13 +127,13 @@ export class AuthService {
     const access = accessToken ? this.tokens.verify(accessToken) : undefined;
     await this.dataSource.transaction(async (manager) => {
       const token = refreshToken
-        ? await manager.findOneBy(RefreshTokenEntity, { tokenHash: hashToken(refreshToken) })
+        ? await sessionRepository.findByTokenHash(manager, hashToken(refreshToken))
         : null;
       const live =
         token && !token.revokedAt && token.expiresAt.getTime() > Date.now() ? token : null;
       const userId = live?.userId ?? (access?.ok ? access.claims.sub : undefined);
       if (!userId) throw unauthorized();
-      if (live) await this.revokeFamily(manager, live.familyId, 'signed-out');
+      if (live) await sessionRepository.revokeFamily(manager, live.familyId, 'signed-out');
       await recordAudit(manager, {
         actorId: userId,
         action: 'session.signed_out',
@@ -156,10 +154,10 @@ export class AuthService {
     return this.dataSource.transaction(async (manager) => {
       const invitation = await this.openInvitation(manager, token, true);
       if (!invitation) throw invalidToken();
-      const taken = await manager.findOneBy(UserEntity, { email: invitation.email });
+      const taken = await userRepository.findByEmail(manager, invitation.email);
       if (taken) throw conflict('email_taken', 'an account with this e-mail address exists');
       const now = new Date();
-      const user: UserEntity = Object.assign(new UserEntity(), {
+      const user = await userRepository.insert(manager, {
         id: randomUUID(),
         email: invitation.email,
         name,
@@ -171,12 +169,7 @@ export class AuthService {
         createdAt: now,
         updatedAt: now,
       });
-      await manager.insert(UserEntity, user);
-      await manager.update(
-        InvitationEntity,
-        { id: invitation.id },
-        { acceptedAt: now, acceptedUserId: user.id },
-      );
+      await userRepository.markInvitationAccepted(manager, invitation.id, user.id, now);
       await recordAudit(manager, {
         actorId: user.id,
         action: 'invitation.accepted',
@@ -199,7 +192,7 @@ export class AuthService {
    * A process that dies in between loses the request; the person asks again.
    */
   async requestPasswordReset(email: string): Promise<void> {
-    await this.dataSource.query('select 1');
+    await databaseRepository.ping(this.dataSource.manager);
     runInBackground('password reset request not carried out', () =>
       this.issueRequestedReset(email),
     );
@@ -208,7 +201,7 @@ export class AuthService {
   /** After the 202: a reset and its mail for an active account, nothing for any other address. */
   async issueRequestedReset(email: string): Promise<void> {
     await this.dataSource.transaction(async (manager) => {
-      const user = await manager.findOneBy(UserEntity, { email: normaliseEmail(email) });
+      const user = await userRepository.findByEmail(manager, normaliseEmail(email));
       if (!user || !user.active) return;
       const { token, expiresAt } = await this.createPasswordReset(manager, user, null);
       await this.notifier.passwordResetRequested(manager, {
@@ -229,12 +222,8 @@ export class AuthService {
     const token = randomToken();
     const now = new Date();
     const expiresAt = new Date(now.getTime() + this.auth.passwordResetTtl * 1000);
-    await manager.update(
-      PasswordResetEntity,
-      { userId: user.id, usedAt: IsNull() },
-      { usedAt: now },
-    );
-    await manager.insert(PasswordResetEntity, {
+    await userRepository.retireUnusedResets(manager, user.id, now);
+    await userRepository.insertReset(manager, {
       id: randomUUID(),
       userId: user.id,
       tokenHash: hashToken(token),
@@ -256,14 +245,11 @@ export class AuthService {
   async completePasswordReset(token: string, password: string): Promise<void> {
     const passwordHash = await this.passwords.hash(password);
     await this.dataSource.transaction(async (manager) => {
-      const reset = await manager.findOne(PasswordResetEntity, {
-        where: { tokenHash: hashToken(token) },
-        lock: { mode: 'pessimistic_write' },
-      });
+      const reset = await userRepository.lockResetByTokenHash(manager, hashToken(token));
       if (!reset || reset.usedAt || reset.expiresAt.getTime() <= Date.now()) throw invalidToken();
-      const user = await manager.findOneBy(UserEntity, { id: reset.userId });
+      const user = await userRepository.findById(manager, reset.userId);
       if (!user || !user.active) throw invalidToken();
-      await manager.update(PasswordResetEntity, { id: reset.id }, { usedAt: new Date() });
+      await userRepository.markResetUsed(manager, reset.id, new Date());
       await this.setPassword(manager, user, passwordHash);
       await recordAudit(manager, {
         actorId: user.id,
@@ -280,7 +266,7 @@ export class AuthService {
     currentPassword: string,
     newPassword: string,
   ): Promise<IssuedSession> {
-    const user = await this.dataSource.getRepository(UserEntity).findOneByOrFail({ id: actor.id });
+    const user = await userRepository.get(this.dataSource.manager, actor.id);
     if (!(await this.passwords.verify(user.passwordHash, currentPassword))) {
       throw new AppError(400, 'wrong_password', 'the current password is wrong', [
         { path: 'currentPassword', message: 'is wrong' },
@@ -301,13 +287,8 @@ export class AuthService {
 
   /** Ends every session of a user at once: refresh tokens revoked, access tokens void. */
   async endAllSessions(manager: EntityManager, userId: string, reason: string): Promise<void> {
-    await run(
-      manager,
-      `update refresh_tokens set revoked_at = now(), revoked_reason = $2
-        where user_id = $1 and revoked_at is null`,
-      [userId, reason],
-    );
-    await run(manager, 'update users set auth_epoch = auth_epoch + 1 where id = $1', [userId]);
+    await sessionRepository.revokeAllOf(manager, userId, reason);
+    await userRepository.bumpAuthEpoch(manager, userId);
   }
 
   private async setPassword(
@@ -316,8 +297,8 @@ export class AuthService {
     passwordHash: string,
   ): Promise<UserEntity> {
     await this.endAllSessions(manager, user.id, 'password-changed');
-    await manager.update(UserEntity, { id: user.id }, { passwordHash, updatedAt: new Date() });
-    return manager.findOneByOrFail(UserEntity, { id: user.id });
+    await userRepository.update(manager, user.id, { passwordHash, updatedAt: new Date() });
+    return userRepository.get(manager, user.id);
   }
 
   private async openInvitation(
@@ -325,9 +306,8 @@ export class AuthService {
     token: string,
     lock = false,
   ): Promise<InvitationEntity | null> {
-    const invitation = await manager.findOne(InvitationEntity, {
-      where: { tokenHash: hashToken(token) },
-      ...(lock ? { lock: { mode: 'pessimistic_write' as const } } : {}),
+    const invitation = await userRepository.invitationByTokenHash(manager, hashToken(token), {
+      lock,
     });
     if (
       !invitation ||
@@ -340,15 +320,6 @@ export class AuthService {
     return invitation;
   }
 
-  private async revokeFamily(manager: EntityManager, familyId: string, reason: string) {
-    await run(
-      manager,
-      `update refresh_tokens set revoked_at = now(), revoked_reason = $2
-        where family_id = $1 and revoked_at is null`,
-      [familyId, reason],
-    );
-  }
-
   private async issueSession(
     manager: EntityManager,
     user: UserEntity,
@@ -358,7 +329,7 @@ export class AuthService {
     const refreshToken = randomToken();
     const id = randomUUID();
     const now = new Date();
-    await manager.insert(RefreshTokenEntity, {
+    await sessionRepository.insert(manager, {
       id,
       userId: user.id,
       familyId,
@@ -369,19 +340,9 @@ export class AuthService {
       revokedReason: null,
       replacedBy: null,
     });
-    if (replacing) {
-      await manager.update(
-        RefreshTokenEntity,
-        { id: replacing },
-        { revokedAt: now, revokedReason: 'rotated', replacedBy: id },
-      );
-    }
+    if (replacing) await sessionRepository.markRotated(manager, replacing, id, now);
     // Old, spent tokens of this user are of no further use: keep the table small.
-    await rows(
-      manager,
-      `delete from refresh_tokens where user_id = $1 and expires_at < now() - interval '1 day'`,
-      [user.id],
-    );
+    await sessionRepository.deleteLongExpired(manager, user.id);
     return {
       accessToken: this.tokens.sign({ sub: user.id, epoch: user.authEpoch, sid: familyId }),
       refreshToken,

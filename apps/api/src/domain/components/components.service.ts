@@ -2,42 +2,20 @@ import type { ComponentKind } from '@hoopline/calc';
 import type { Component, Revision } from '@hoopline/contract';
 import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
-import { ComponentEntity } from '../../db/entities/component.entity';
-import { RevisionEntity } from '../../db/entities/revision.entity';
-import { forbidden } from '../../http/errors';
-import { offsetOf, pageOf, type Page, type PageRequest } from '../../http/pagination';
-import { canDesign, seesOnlyIssued, type Actor, type Decision } from '../../policy/policy';
+import type { ComponentEntity } from '../../db/entities/component.entity';
+import type { RevisionEntity } from '../../db/entities/revision.entity';
+import { pageOf, type Page, type PageRequest } from '../../http/pagination';
+import { canDesign, seesOnlyIssued, type Actor } from '../../policy/policy';
+import { enforce } from '../../policy/enforce';
 import { recordAudit } from '../audit/audit.service';
 import { requireProjectStanding } from '../projects/project-access';
 import { projectDesignBasis, projectSite, staleVersion } from '../projects/projects.service';
 import { computeContent, contentHash, verdictOf } from '../revisions/revision-content';
-import {
-  revisionView,
-  summariesByIds,
-  summaryColumnsAs,
-  summaryFromColumns,
-} from '../revisions/revision-views';
-import { Where, containsPattern, isoRequired, rows } from '../sql';
+import { revisionView, summariesByIds, summaryFromColumns } from '../revisions/revision-views';
+import { componentRepository } from '../../repositories/components.repository';
+import { revisionRepository } from '../../repositories/revisions.repository';
+import { isoRequired } from '../iso-dates';
 import { requireComponent } from './component-access';
-
-function enforce(decision: Decision) {
-  if (!decision.allowed) throw forbidden(decision.code, decision.reason);
-}
-
-/** The components with these ids, in the order of the ids (a page's order). */
-export async function componentsInOrder(
-  manager: EntityManager,
-  ids: readonly string[],
-): Promise<ComponentEntity[]> {
-  if (ids.length === 0) return [];
-  const entities = await manager
-    .getRepository(ComponentEntity)
-    .createQueryBuilder('c')
-    .where('c.id in (:...ids)', { ids })
-    .getMany();
-  const byId = new Map(entities.map((c) => [c.id, c]));
-  return ids.map((id) => byId.get(id)!);
-}
 
 /** Builds component views; fabricators see the issued revision as the latest. */
 export async function componentViews(
@@ -71,17 +49,6 @@ export async function componentViews(
   });
 }
 
-interface ComponentRow extends Record<string, unknown> {
-  id: string;
-  project_id: string;
-  name: string;
-  kind: ComponentKind;
-  tag: string;
-  version: number;
-  created_at: Date;
-  updated_at: Date;
-}
-
 /** Components of a project: listing, creating (with revision 1), renaming. */
 export class ComponentsService {
   constructor(private readonly dataSource: DataSource) {}
@@ -94,44 +61,13 @@ export class ComponentsService {
     const manager = this.dataSource.manager;
     const standing = await requireProjectStanding(manager, actor, projectId);
     const onlyIssued = seesOnlyIssued(standing);
-    const w = new Where().add('c.project_id = ?', projectId);
-    if (onlyIssued) w.add('c.issued_revision_id is not null');
-    if (query.q)
-      w.add(
-        '(c.name ilike ? or c.tag ilike ?)',
-        containsPattern(query.q),
-        containsPattern(query.q),
-      );
-    if (query.kind) w.add('c.kind = ?', query.kind);
     // One round trip: the page of components, the total of the filtered set,
     // and each one's latest and issued revision summaries.
-    const n = w.params.length;
-    const found = await rows<ComponentRow & { total__: string }>(
+    const { rows: found, total } = await componentRepository.page(
       manager,
-      `with page as (
-         select c.*, count(*) over () as total__ from components c
-          where ${w.where.join(' and ')}
-          order by lower(c.name), c.id limit $${n + 1} offset $${n + 2})
-       select page.id, page.project_id, page.name, page.kind, page.tag, page.version,
-              page.created_at, page.updated_at, page.total__,
-              ${summaryColumnsAs('l', 'la', 'l')}, ${summaryColumnsAs('i', 'ia', 'i')}
-         from page
-         left join revisions l on l.id = page.latest_revision_id
-         left join users la on la.id = l.author_id
-         left join revisions i on i.id = page.issued_revision_id
-         left join users ia on ia.id = i.author_id
-        order by lower(page.name), page.id`,
-      [...w.params, query.pageSize, offsetOf(query)],
+      { projectId, onlyIssued, q: query.q, kind: query.kind },
+      query,
     );
-    let total = Number(found[0]?.total__ ?? 0);
-    if (!found[0] && query.page > 1) {
-      const [count] = await rows<{ n: string }>(
-        manager,
-        `select count(*) as n from components c where ${w.where.join(' and ')}`,
-        w.params,
-      );
-      total = Number(count?.n ?? 0);
-    }
     const items = found.map((c): Component => {
       const issued = summaryFromColumns(c, 'i');
       return {
@@ -166,7 +102,7 @@ export class ComponentsService {
         standing.project.designTemperature,
       );
       const now = new Date();
-      const component: ComponentEntity = Object.assign(new ComponentEntity(), {
+      const component = await componentRepository.insert(manager, {
         id: randomUUID(),
         projectId,
         name: input.name,
@@ -179,7 +115,6 @@ export class ComponentsService {
         createdAt: now,
         updatedAt: now,
       });
-      await manager.insert(ComponentEntity, component);
       const revision = await insertRevision(
         manager,
         actor,
@@ -188,11 +123,7 @@ export class ComponentsService {
         content,
         input.note ?? '',
       );
-      await manager.update(
-        ComponentEntity,
-        { id: component.id },
-        { latestRevisionId: revision.id },
-      );
+      await componentRepository.update(manager, component.id, { latestRevisionId: revision.id });
       component.latestRevisionId = revision.id;
       await recordAudit(manager, {
         actorId: actor.id,
@@ -231,8 +162,8 @@ export class ComponentsService {
       };
       if (patch.name !== undefined) changes.name = patch.name;
       if (patch.tag !== undefined) changes.tag = patch.tag;
-      await manager.update(ComponentEntity, { id: componentId }, changes);
-      const after = await manager.findOneByOrFail(ComponentEntity, { id: componentId });
+      await componentRepository.update(manager, componentId, changes);
+      const after = await componentRepository.get(manager, componentId);
       await recordAudit(manager, {
         actorId: actor.id,
         action: 'component.updated',
@@ -257,7 +188,7 @@ export async function insertRevision(
   content: ReturnType<typeof computeContent>,
   note: string,
 ): Promise<RevisionEntity> {
-  const revision: RevisionEntity = Object.assign(new RevisionEntity(), {
+  const revision = await revisionRepository.insert(manager, {
     id: randomUUID(),
     componentId: component.id,
     projectId: component.projectId,
@@ -276,7 +207,6 @@ export async function insertRevision(
     supersededAt: null,
     supersededBy: null,
   });
-  await manager.insert(RevisionEntity, revision);
   await recordAudit(manager, {
     actorId: actor.id,
     action: 'revision.created',

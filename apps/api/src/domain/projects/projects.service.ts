@@ -9,27 +9,28 @@ import {
   type AllowableBasis,
   type Barometer,
 } from '@hoopline/calc';
-import {
+import type {
   CustomMaterialEntity,
   ProjectEntity,
-  ProjectMemberEntity,
-  type SiteAsTyped,
+  SiteAsTyped,
 } from '../../db/entities/project.entity';
-import { UserEntity, type UnitSystem } from '../../db/entities/user.entity';
+import type { UnitSystem } from '../../db/entities/user.entity';
 import { toJson } from '../../db/entities/json';
-import { conflict, forbidden, notFound } from '../../http/errors';
+import { conflict, notFound } from '../../http/errors';
 import { pageOf, type Page, type PageRequest } from '../../http/pagination';
 import {
   canEditProject,
   canManageMaterials,
   canManageMembers,
   type Actor,
-  type Decision,
   type Role,
 } from '../../policy/policy';
+import { enforce } from '../../policy/enforce';
 import { recordAudit } from '../audit/audit.service';
 import { projectCreationDecision } from '../settings/settings.service';
-import { Where, containsPattern, iso, isoRequired, paged, rows } from '../sql';
+import { iso, isoRequired } from '../iso-dates';
+import { projectRepository, type ProjectSort } from '../../repositories/projects.repository';
+import { userRepository } from '../../repositories/users.repository';
 import { requireProjectStanding } from './project-access';
 
 /** A site in SI (m, Pa). */
@@ -133,18 +134,7 @@ export function projectView(p: ProjectEntity, myRole: Role | null): Project {
   };
 }
 
-function enforce(decision: Decision) {
-  if (!decision.allowed) throw forbidden(decision.code, decision.reason);
-}
-
-const SORTS = {
-  number: 'lower(p.number)',
-  name: 'lower(p.name)',
-  client: 'lower(p.client)',
-  updatedAt: 'p.updated_at',
-} as const;
-
-export type ProjectSort = keyof typeof SORTS;
+export type { ProjectSort };
 
 function isUniqueViolation(error: unknown): boolean {
   return (error as { code?: string } | null)?.code === '23505';
@@ -158,25 +148,16 @@ export class ProjectsService {
     actor: Actor,
     query: PageRequest & { q?: string | undefined; sort: ProjectSort; order: 'asc' | 'desc' },
   ): Promise<Page<Project>> {
-    const w = new Where();
-    w.params.push(actor.id); // $1, in the membership join
-    w.add('(? or m.user_id is not null)', actor.isAdmin);
-    if (query.q) {
-      const like = containsPattern(query.q);
-      w.add('(p.number ilike ? or p.name ilike ? or p.client ilike ?)', like, like, like);
-    }
-    const { rows: found, total } = await paged<{ id: string; role: Role | null }>(
-      this.dataSource.manager,
-      {
-        columns: 'p.id, m.role',
-        from: `projects p left join project_members m on m.project_id = p.id and m.user_id = $1`,
-        where: w.where,
-        params: w.params,
-        orderBy: `${SORTS[query.sort]} ${query.order}, p.id`,
-      },
-      query,
+    const manager = this.dataSource.manager;
+    const { rows: found, total } = await projectRepository.page(manager, {
+      ...query,
+      actorId: actor.id,
+      isAdmin: actor.isAdmin,
+    });
+    const projects = await projectRepository.byIds(
+      manager,
+      found.map((r) => r.id),
     );
-    const projects = await this.byIds(found.map((r) => r.id));
     return pageOf(
       found.map((r) => projectView(projects.get(r.id)!, r.role)),
       query,
@@ -189,7 +170,7 @@ export class ProjectsService {
     try {
       return await this.dataSource.transaction(async (manager) => {
         const now = new Date();
-        const project: ProjectEntity = Object.assign(new ProjectEntity(), {
+        const project = await projectRepository.insert(manager, {
           id: randomUUID(),
           number: input.number,
           name: input.name,
@@ -205,8 +186,7 @@ export class ProjectsService {
           createdAt: now,
           updatedAt: now,
         });
-        await manager.insert(ProjectEntity, project);
-        await manager.insert(ProjectMemberEntity, {
+        await projectRepository.insertMember(manager, {
           projectId: project.id,
           userId: actor.id,
           role: 'designer',
@@ -261,8 +241,8 @@ export class ProjectsService {
           changes.designBarometer = patch.designBasis.barometer;
         if (patch.designTemperature !== undefined)
           changes.designTemperature = patch.designTemperature;
-        await manager.update(ProjectEntity, { id: projectId }, changes);
-        const after = await manager.findOneByOrFail(ProjectEntity, { id: projectId });
+        await projectRepository.update(manager, projectId, changes);
+        const after = await projectRepository.get(manager, projectId);
         await recordAudit(manager, {
           actorId: actor.id,
           action: 'project.updated',
@@ -290,17 +270,17 @@ export class ProjectsService {
     return this.dataSource.transaction(async (manager) => {
       const standing = await requireProjectStanding(manager, actor, projectId, { lock: true });
       enforce(canManageMembers(standing));
-      const user = await manager.findOneBy(UserEntity, { id: userId });
+      const user = await userRepository.findById(manager, userId);
       if (!user || !user.active) throw notFound('user');
-      const existing = await manager.findOneBy(ProjectMemberEntity, { projectId, userId });
+      const existing = await projectRepository.findMember(manager, projectId, userId);
       if (existing?.role === 'designer' && role !== 'designer') {
         await this.keepADesigner(manager, projectId, userId);
       }
       const now = new Date();
       if (existing) {
-        await manager.update(ProjectMemberEntity, { projectId, userId }, { role });
+        await projectRepository.setMemberRole(manager, projectId, userId, role);
       } else {
-        await manager.insert(ProjectMemberEntity, {
+        await projectRepository.insertMember(manager, {
           projectId,
           userId,
           role,
@@ -329,10 +309,10 @@ export class ProjectsService {
     await this.dataSource.transaction(async (manager) => {
       const standing = await requireProjectStanding(manager, actor, projectId, { lock: true });
       enforce(canManageMembers(standing));
-      const existing = await manager.findOneBy(ProjectMemberEntity, { projectId, userId });
+      const existing = await projectRepository.findMember(manager, projectId, userId);
       if (!existing) throw notFound('member');
       if (existing.role === 'designer') await this.keepADesigner(manager, projectId, userId);
-      await manager.delete(ProjectMemberEntity, { projectId, userId });
+      await projectRepository.deleteMember(manager, projectId, userId);
       await recordAudit(manager, {
         actorId: actor.id,
         action: 'member.removed',
@@ -347,10 +327,7 @@ export class ProjectsService {
   async materials(actor: Actor, projectId: string): Promise<{ items: CustomMaterialItem[] }> {
     const manager = this.dataSource.manager;
     await requireProjectStanding(manager, actor, projectId);
-    const found = await manager.find(CustomMaterialEntity, {
-      where: { projectId },
-      order: { createdAt: 'ASC', id: 'ASC' },
-    });
+    const found = await projectRepository.materials(manager, projectId);
     return { items: found.map(materialView) };
   }
 
@@ -362,7 +339,7 @@ export class ProjectsService {
     return this.dataSource.transaction(async (manager) => {
       const standing = await requireProjectStanding(manager, actor, projectId);
       enforce(canManageMaterials(standing));
-      const entity: CustomMaterialEntity = Object.assign(new CustomMaterialEntity(), {
+      const entity = await projectRepository.insertMaterial(manager, {
         id: randomUUID(),
         projectId,
         name: material.name,
@@ -370,7 +347,6 @@ export class ProjectsService {
         createdBy: actor.id,
         createdAt: new Date(),
       });
-      await manager.insert(CustomMaterialEntity, entity);
       await recordAudit(manager, {
         actorId: actor.id,
         action: 'material.created',
@@ -387,9 +363,9 @@ export class ProjectsService {
     await this.dataSource.transaction(async (manager) => {
       const standing = await requireProjectStanding(manager, actor, projectId);
       enforce(canManageMaterials(standing));
-      const existing = await manager.findOneBy(CustomMaterialEntity, { id: materialId, projectId });
+      const existing = await projectRepository.findMaterial(manager, projectId, materialId);
       if (!existing) throw notFound('material');
-      await manager.delete(CustomMaterialEntity, { id: materialId });
+      await projectRepository.deleteMaterial(manager, materialId);
       await recordAudit(manager, {
         actorId: actor.id,
         action: 'material.deleted',
@@ -402,19 +378,7 @@ export class ProjectsService {
   }
 
   private async memberList(manager: EntityManager, projectId: string): Promise<Member[]> {
-    const found = await rows<{
-      id: string;
-      name: string;
-      email: string;
-      role: Role;
-      added_at: Date;
-    }>(
-      manager,
-      `select u.id, u.name, u.email, m.role, m.added_at from project_members m
-         join users u on u.id = m.user_id where m.project_id = $1
-        order by case m.role when 'designer' then 0 when 'checker' then 1 else 2 end, lower(u.name), u.id`,
-      [projectId],
-    );
+    const found = await projectRepository.members(manager, projectId);
     return found.map((r) => ({
       user: { id: r.id, name: r.name, email: r.email },
       role: r.role,
@@ -424,25 +388,9 @@ export class ProjectsService {
 
   /** A project keeps at least one designer: someone must be able to change it. */
   private async keepADesigner(manager: EntityManager, projectId: string, leavingUserId: string) {
-    const [row] = await rows<{ n: string }>(
-      manager,
-      `select count(*) as n from project_members
-        where project_id = $1 and role = 'designer' and user_id <> $2`,
-      [projectId, leavingUserId],
-    );
-    if (Number(row?.n ?? 0) === 0) {
+    if ((await projectRepository.otherDesigners(manager, projectId, leavingUserId)) === 0) {
       throw conflict('last_designer', 'a project keeps at least one designer: add another first');
     }
-  }
-
-  private async byIds(ids: string[]): Promise<Map<string, ProjectEntity>> {
-    if (ids.length === 0) return new Map();
-    const found = await this.dataSource
-      .getRepository(ProjectEntity)
-      .createQueryBuilder('p')
-      .where('p.id in (:...ids)', { ids })
-      .getMany();
-    return new Map(found.map((p) => [p.id, p]));
   }
 }
 

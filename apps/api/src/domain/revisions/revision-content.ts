@@ -6,6 +6,7 @@ import {
   computeReport,
   parseComponent,
   type Report,
+  type Verdict,
 } from '@hoopline/calc';
 import { toJson, type JsonObject } from '../../db/entities/json';
 import { AppError, validationFailed } from '../../http/errors';
@@ -120,8 +121,8 @@ export function computeContent(
   return content;
 }
 
-/** What a stored report says about itself, for list columns. */
-export function verdictOf(report: JsonObject): string {
+/** What a stored report says about itself, for list columns (the engine wrote it: one of its verdicts). */
+export function verdictOf(report: JsonObject): Verdict {
   const verdict = report['verdict'];
-  return typeof verdict === 'string' ? verdict : 'no-checks';
+  return typeof verdict === 'string' ? (verdict as Verdict) : 'no-checks';
 }

@@ -1,30 +1,15 @@
 import type { Report, Verdict } from '@hoopline/calc';
 import type { Revision, RevisionSummary } from '@hoopline/contract';
 import type { EntityManager } from 'typeorm';
-import type { JsonObject } from '../../db/entities/json';
 import type { RevisionStatus } from '../../db/entities/revision.entity';
-import { iso, isoRequired, rows } from '../sql';
+import {
+  revisionRepository,
+  type RevisionRow,
+  type SignOffRow,
+  type SummaryRow,
+} from '../../repositories/revisions.repository';
+import { iso, isoRequired } from '../iso-dates';
 import { verifyCode } from './revision-content';
-
-/** Columns for a RevisionSummary, from `revisions r join users a on a.id = r.author_id`. */
-export const SUMMARY_COLUMNS = `r.id as r_id, r.number as r_number, r.status as r_status,
-  r.verdict as r_verdict, r.content_hash as r_hash, r.author_id as r_author_id,
-  a.name as r_author_name, r.created_at as r_created_at, r.submitted_at as r_submitted_at,
-  r.decided_at as r_decided_at, r.superseded_at as r_superseded_at`;
-
-export interface SummaryRow {
-  r_id: string;
-  r_number: number;
-  r_status: RevisionStatus;
-  r_verdict: Verdict;
-  r_hash: string;
-  r_author_id: string;
-  r_author_name: string;
-  r_created_at: Date;
-  r_submitted_at: Date | null;
-  r_decided_at: Date | null;
-  r_superseded_at: Date | null;
-}
 
 export function summaryFromRow(r: SummaryRow): RevisionSummary {
   return {
@@ -41,20 +26,7 @@ export function summaryFromRow(r: SummaryRow): RevisionSummary {
   };
 }
 
-/**
- * The same columns as SUMMARY_COLUMNS for a revision joined as `r` with its
- * author as `a`, named `<p>_id`, `<p>_number`…: for a query that joins two
- * revisions to one row (a component's latest and issued).
- */
-export function summaryColumnsAs(r: string, a: string, p: string): string {
-  return `${r}.id as ${p}_id, ${r}.number as ${p}_number, ${r}.status as ${p}_status,
-    ${r}.verdict as ${p}_verdict, ${r}.content_hash as ${p}_hash, ${r}.author_id as ${p}_author_id,
-    ${a}.name as ${p}_author_name, ${r}.created_at as ${p}_created_at,
-    ${r}.submitted_at as ${p}_submitted_at, ${r}.decided_at as ${p}_decided_at,
-    ${r}.superseded_at as ${p}_superseded_at`;
-}
-
-/** The summary in a row of summaryColumnsAs(…, p); null when the join found none. */
+/** The summary in a row of summaryColumnsAs(…, p) (the repositories' two-revision rows); null when the join found none. */
 export function summaryFromColumns(
   row: Readonly<Record<string, unknown>>,
   p: string,
@@ -81,50 +53,12 @@ export async function summariesByIds(
   ids: readonly string[],
 ): Promise<Map<string, RevisionSummary>> {
   if (ids.length === 0) return new Map();
-  const found = await rows<SummaryRow>(
-    manager,
-    `select ${SUMMARY_COLUMNS} from revisions r join users a on a.id = r.author_id
-      where r.id = any($1::uuid[])`,
-    [ids],
-  );
+  const found = await revisionRepository.summariesByIds(manager, ids);
   return new Map(found.map((r) => [r.r_id, summaryFromRow(r)]));
 }
 
-interface FullRow extends SummaryRow {
-  r_component_id: string;
-  r_project_id: string;
-  r_note: string;
-  r_inputs: JsonObject;
-  r_engine_version: string;
-  r_report: JsonObject;
-}
-
-export async function revisionView(manager: EntityManager, id: string): Promise<Revision> {
-  const [row] = await rows<FullRow>(
-    manager,
-    `select ${SUMMARY_COLUMNS}, r.component_id as r_component_id, r.project_id as r_project_id,
-            r.note as r_note, r.inputs as r_inputs, r.engine_version as r_engine_version,
-            r.report as r_report
-       from revisions r join users a on a.id = r.author_id where r.id = $1`,
-    [id],
-  );
-  if (!row) throw new Error(`revision ${id} vanished`);
-  const signOffs = await rows<{
-    id: string;
-    checker_id: string;
-    checker_name: string;
-    decision: 'countersigned' | 'returned';
-    comment: string;
-    hash_signed: string;
-    created_at: Date;
-  }>(
-    manager,
-    `select s.id, s.checker_id, u.name as checker_name, s.decision, s.comment, s.hash_signed,
-            s.created_at
-       from sign_offs s join users u on u.id = s.checker_id
-      where s.revision_id = $1 order by s.created_at, s.id`,
-    [id],
-  );
+/** A whole revision as the API answers it: its row, its sign-offs and its verify code. */
+export function revisionFromRows(row: RevisionRow, signOffs: readonly SignOffRow[]): Revision {
   return {
     ...summaryFromRow(row),
     componentId: row.r_component_id,
@@ -143,4 +77,11 @@ export async function revisionView(manager: EntityManager, id: string): Promise<
     })),
     verifyCode: verifyCode(row.r_hash),
   };
+}
+
+export async function revisionView(manager: EntityManager, id: string): Promise<Revision> {
+  const row = await revisionRepository.row(manager, id);
+  if (!row) throw new Error(`revision ${id} vanished`);
+  const signOffs = await revisionRepository.signOffs(manager, id);
+  return revisionFromRows(row, signOffs);
 }

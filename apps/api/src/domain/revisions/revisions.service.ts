@@ -10,51 +10,34 @@ import type {
 } from '@hoopline/contract';
 import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
-import {
-  ENGINE_VERSION,
-  computeReport,
-  parseComponent,
-  type ComponentKind,
-  type Report,
-} from '@hoopline/calc';
-import { ComponentEntity } from '../../db/entities/component.entity';
+import { ENGINE_VERSION, computeReport, parseComponent, type Report } from '@hoopline/calc';
 import { toJson } from '../../db/entities/json';
-import {
-  RevisionEntity,
-  SignOffEntity,
-  type SignOffDecision,
-} from '../../db/entities/revision.entity';
-import { conflict, forbidden, notFound, validationFailed } from '../../http/errors';
-import { offsetOf, pageOf, type Page, type PageRequest } from '../../http/pagination';
+import type { RevisionEntity, SignOffDecision } from '../../db/entities/revision.entity';
+import { conflict, notFound, validationFailed } from '../../http/errors';
+import { pageOf, type Page, type PageRequest } from '../../http/pagination';
 import {
   canDesign,
   canSignOff,
   canWithdraw,
   seesOnlyIssued,
   type Actor,
-  type Decision,
 } from '../../policy/policy';
+import { enforce } from '../../policy/enforce';
 import { recordAudit } from '../audit/audit.service';
-import {
-  componentViews,
-  componentsInOrder,
-  insertRevision,
-} from '../components/components.service';
+import { componentViews, insertRevision } from '../components/components.service';
 import {
   requireComponent,
   requireRevision,
   type RevisionContext,
 } from '../components/component-access';
-import type { Notifier } from '../notifications/notifier';
+import type { Notifier } from '../../mail/notifier';
 import { projectDesignBasis, projectSite, staleVersion } from '../projects/projects.service';
-import { Where, containsPattern, isoRequired, paged, rows, run } from '../sql';
+import { componentRepository } from '../../repositories/components.repository';
+import { revisionRepository } from '../../repositories/revisions.repository';
+import { isoRequired } from '../iso-dates';
 import { diffInputs, diffResults } from './diff';
 import { computeContent, contentHash } from './revision-content';
-import { SUMMARY_COLUMNS, revisionView, summaryFromRow, type SummaryRow } from './revision-views';
-
-function enforce(decision: Decision) {
-  if (!decision.allowed) throw forbidden(decision.code, decision.reason);
-}
+import { revisionView, summaryFromRow } from './revision-views';
 
 function storedHashOf(revision: RevisionEntity): string {
   try {
@@ -79,47 +62,11 @@ export class RevisionsService {
   async list(actor: Actor, componentId: string, page: PageRequest): Promise<Page<RevisionSummary>> {
     const manager = this.dataSource.manager;
     const { standing } = await requireComponent(manager, actor, componentId);
-    if (seesOnlyIssued(standing)) {
-      // A fabricator sees the countersigned few (a partial index holds them).
-      const w = new Where()
-        .add('r.component_id = ?', componentId)
-        .add("r.status = 'countersigned'");
-      const { rows: found, total } = await paged<SummaryRow>(
-        manager,
-        {
-          columns: SUMMARY_COLUMNS,
-          from: 'revisions r join users a on a.id = r.author_id',
-          where: w.where,
-          params: w.params,
-          orderBy: 'r.number desc',
-        },
-        page,
-      );
-      return pageOf(found.map(summaryFromRow), page, total);
-    }
-    // Everyone else sees every revision. Their numbers run 1, 2, … n with no
-    // gap (each is the latest + 1 under the component's lock, and revisions
-    // are never deleted alone), so the total is the highest number: one
-    // index probe instead of counting a long history (issue 12: 99 501
-    // revisions took 300 ms to count per page).
-    const found = await rows<SummaryRow & { total__: number | null }>(
-      manager,
-      `select ${SUMMARY_COLUMNS},
-              (select max(t.number) from revisions t where t.component_id = $1) as total__
-         from revisions r join users a on a.id = r.author_id
-        where r.component_id = $1
-        order by r.number desc limit $2 offset $3`,
-      [componentId, page.pageSize, offsetOf(page)],
-    );
-    let total = found[0]?.total__ ?? 0;
-    if (!found[0] && page.page > 1) {
-      const [last] = await rows<{ n: number | null }>(
-        manager,
-        'select max(number) as n from revisions where component_id = $1',
-        [componentId],
-      );
-      total = last?.n ?? 0;
-    }
+    // A fabricator sees the countersigned few (a partial index holds them);
+    // everyone else every revision (its total the highest number: no count).
+    const { rows: found, total } = seesOnlyIssued(standing)
+      ? await revisionRepository.countersignedPage(manager, componentId, page)
+      : await revisionRepository.historyPage(manager, componentId, page);
     return pageOf(found.map(summaryFromRow), page, total);
   }
 
@@ -140,7 +87,7 @@ export class RevisionsService {
       enforce(canDesign(standing));
       if (component.version !== input.baseVersion) throw staleVersion(component.version);
       const latest = component.latestRevisionId
-        ? await manager.findOneByOrFail(RevisionEntity, { id: component.latestRevisionId })
+        ? await revisionRepository.get(manager, component.latestRevisionId)
         : null;
       if (latest?.status === 'submitted') {
         throw conflict(
@@ -167,14 +114,14 @@ export class RevisionsService {
         content,
         input.note ?? '',
       );
-      const { affected } = await run(
+      const affected = await componentRepository.advance(
         manager,
-        `update components set version = version + 1, latest_revision_id = $2, updated_at = now()
-          where id = $1 and version = $3`,
-        [componentId, revision.id, input.baseVersion],
+        componentId,
+        revision.id,
+        input.baseVersion,
       );
       if (affected !== 1) throw staleVersion(component.version);
-      const after = await manager.findOneByOrFail(ComponentEntity, { id: componentId });
+      const after = await componentRepository.get(manager, componentId);
       const [view] = await componentViews(manager, [after], false);
       return { component: view!, revision: await revisionView(manager, revision.id) };
     });
@@ -223,11 +170,7 @@ export class RevisionsService {
     const manager = this.dataSource.manager;
     const { revision } = await requireRevision(manager, actor, revisionId);
     const recomputedHash = storedHashOf(revision);
-    const signed = await rows<{ hash_signed: string }>(
-      manager,
-      'select hash_signed from sign_offs where revision_id = $1',
-      [revisionId],
-    );
+    const signed = await revisionRepository.hashesSigned(manager, revisionId);
     let reproduces: boolean | null = null;
     if (revision.engineVersion === ENGINE_VERSION) {
       try {
@@ -243,7 +186,7 @@ export class RevisionsService {
       matches: recomputedHash === revision.contentHash,
       storedHash: revision.contentHash,
       recomputedHash,
-      signOffsMatch: signed.length ? signed.every((s) => s.hash_signed === recomputedHash) : null,
+      signOffsMatch: signed.length ? signed.every((hash) => hash === recomputedHash) : null,
       reproduces,
     };
   }
@@ -264,11 +207,7 @@ export class RevisionsService {
           `this revision is ${ctx.revision.status}, not a draft`,
         );
       }
-      await run(
-        manager,
-        `update revisions set status = 'submitted', submitted_at = now() where id = $1 and status = 'draft'`,
-        [revisionId],
-      );
+      await revisionRepository.markSubmitted(manager, revisionId);
       await this.audit(manager, actor, ctx, 'revision.submitted', 'draft', 'submitted');
       await this.notifier.revisionSubmitted(manager, { revisionId });
       return revisionView(manager, revisionId);
@@ -285,11 +224,7 @@ export class RevisionsService {
           `this revision is ${ctx.revision.status}, not submitted`,
         );
       }
-      await run(
-        manager,
-        `update revisions set status = 'draft', submitted_at = null where id = $1 and status = 'submitted'`,
-        [revisionId],
-      );
+      await revisionRepository.markWithdrawn(manager, revisionId);
       await this.audit(manager, actor, ctx, 'revision.withdrawn', 'submitted', 'draft');
       return revisionView(manager, revisionId);
     });
@@ -334,7 +269,7 @@ export class RevisionsService {
         );
       }
       const now = new Date();
-      await manager.insert(SignOffEntity, {
+      await revisionRepository.insertSignOff(manager, {
         id: randomUUID(),
         revisionId,
         checkerId: actor.id,
@@ -343,25 +278,12 @@ export class RevisionsService {
         hashSigned: input.hash,
         createdAt: now,
       });
-      const { affected } = await run(
-        manager,
-        `update revisions set status = $2, decided_at = $3 where id = $1 and status = 'submitted'`,
-        [revisionId, decision, now],
-      );
+      const affected = await revisionRepository.markDecided(manager, revisionId, decision, now);
       if (affected !== 1)
         throw conflict('already_signed', 'this revision has been decided already');
       if (decision === 'countersigned') {
-        await run(
-          manager,
-          `update revisions set superseded_at = $3, superseded_by = $2
-            where component_id = $1 and status = 'countersigned' and id <> $2 and superseded_at is null`,
-          [revision.componentId, revisionId, now],
-        );
-        await run(
-          manager,
-          'update components set issued_revision_id = $2, updated_at = now() where id = $1',
-          [revision.componentId, revisionId],
-        );
+        await revisionRepository.supersedeOthers(manager, revision.componentId, revisionId, now);
+        await componentRepository.setIssued(manager, revision.componentId, revisionId);
       }
       await this.audit(
         manager,
@@ -383,35 +305,9 @@ export class RevisionsService {
 
   /** Submitted revisions in projects where I check, not mine, oldest first. Admins sign nothing. */
   async checkQueue(actor: Actor, page: PageRequest): Promise<Page<QueueItem>> {
-    const w = new Where()
-      .add("r.status = 'submitted'")
-      .add('r.author_id <> ?', actor.id)
-      .add('not ?', actor.isAdmin);
-    w.add(
-      `exists (select 1 from project_members m where m.project_id = r.project_id
-                    and m.user_id = ? and m.role = 'checker')`,
-      actor.id,
-    );
-    const { rows: found, total } = await paged<
-      SummaryRow & {
-        p_id: string;
-        p_number: string;
-        p_name: string;
-        c_id: string;
-        c_name: string;
-        c_kind: ComponentKind;
-      }
-    >(
+    const { rows: found, total } = await revisionRepository.checkQueuePage(
       this.dataSource.manager,
-      {
-        columns: `${SUMMARY_COLUMNS}, p.id as p_id, p.number as p_number, p.name as p_name,
-                  c.id as c_id, c.name as c_name, c.kind as c_kind`,
-        from: `revisions r join users a on a.id = r.author_id
-               join components c on c.id = r.component_id join projects p on p.id = r.project_id`,
-        where: w.where,
-        params: w.params,
-        orderBy: 'r.submitted_at, r.id',
-      },
+      actor,
       page,
     );
     return pageOf(
@@ -431,41 +327,14 @@ export class RevisionsService {
     query: PageRequest & { q?: string | undefined },
   ): Promise<Page<IssuedItem>> {
     const manager = this.dataSource.manager;
-    const w = new Where().add('c.issued_revision_id is not null');
-    w.add(
-      '(? or exists (select 1 from project_members m where m.project_id = c.project_id and m.user_id = ?))',
-      actor.isAdmin,
-      actor.id,
-    );
-    if (query.q) {
-      const like = containsPattern(query.q);
-      w.add(
-        '(p.number ilike ? or p.name ilike ? or c.name ilike ? or c.tag ilike ?)',
-        like,
-        like,
-        like,
-        like,
-      );
-    }
-    const { rows: found, total } = await paged<{
-      id: string;
-      p_id: string;
-      p_number: string;
-      p_name: string;
-    }>(
+    const { rows: found, total } = await componentRepository.issuedPage(
       manager,
-      {
-        columns: 'c.id, p.id as p_id, p.number as p_number, p.name as p_name',
-        from: 'components c join projects p on p.id = c.project_id',
-        where: w.where,
-        params: w.params,
-        orderBy: 'lower(p.number), lower(c.name), c.id',
-      },
+      { userId: actor.id, isAdmin: actor.isAdmin, q: query.q },
       query,
     );
     const views = await componentViews(
       manager,
-      await componentsInOrder(
+      await componentRepository.inOrder(
         manager,
         found.map((r) => r.id),
       ),
@@ -490,38 +359,13 @@ export class RevisionsService {
   async verify(normalisedCode: string): Promise<VerifyResult> {
     const manager = this.dataSource.manager;
     const candidates = (
-      await manager
-        .getRepository(RevisionEntity)
-        .createQueryBuilder('r')
-        .where("r.status = 'countersigned'")
-        .andWhere(
-          normalisedCode.length === 64 ? 'r.content_hash = :code' : 'r.content_hash like :prefix',
-          { code: normalisedCode, prefix: `${normalisedCode}%` },
-        )
-        .orderBy('r.decided_at', 'DESC')
-        .limit(50)
-        .getMany()
+      await revisionRepository.countersignedByHash(manager, normalisedCode)
     ).filter((r) => storedHashOf(r) === r.contentHash);
     // A verify code shared by two different hashes cannot tell them apart: no answer.
     // The same hash on several revisions (identical inputs screened twice) names the latest.
     if (new Set(candidates.map((r) => r.contentHash)).size !== 1) return { match: false };
     const revision = candidates[0]!;
-    const [names] = await rows<{
-      number: string;
-      name: string;
-      kind: ComponentKind;
-      author: string;
-      checker: string | null;
-    }>(
-      manager,
-      `select p.number, c.name, c.kind, a.name as author,
-              (select u.name from sign_offs s join users u on u.id = s.checker_id
-                where s.revision_id = $2 and s.decision = 'countersigned'
-                order by s.created_at desc limit 1) as checker
-         from components c join projects p on p.id = c.project_id, users a
-        where c.id = $1 and a.id = $3`,
-      [revision.componentId, revision.id, revision.authorId],
-    );
+    const names = await revisionRepository.verifyNames(manager, revision);
     if (!names || !revision.decidedAt) return { match: false };
     const report = revision.report as unknown as Report;
     const inputs = report.inputs as { thickness?: unknown; material?: { name?: unknown } };
@@ -552,7 +396,7 @@ export class RevisionsService {
     actor: Actor,
     revisionId: string,
   ): Promise<RevisionContext> {
-    const peek = await manager.findOneBy(RevisionEntity, { id: revisionId });
+    const peek = await revisionRepository.findById(manager, revisionId);
     if (!peek) throw notFound('revision');
     await requireComponent(manager, actor, peek.componentId, { lock: true }).catch(() => {
       throw notFound('revision');

@@ -1,6 +1,5 @@
 import type { Settings } from '@hoopline/contract';
 import type { DataSource, EntityManager } from 'typeorm';
-import { forbidden } from '../../http/errors';
 import {
   canCreateProject,
   canManageSettings,
@@ -8,16 +7,13 @@ import {
   type Decision,
   type ProjectCreation,
 } from '../../policy/policy';
+import { enforce } from '../../policy/enforce';
 import { recordAudit } from '../audit/audit.service';
-import { rows } from '../sql';
+import { settingsRepository } from '../../repositories/settings.repository';
 
 /** The installation's setting on who starts projects (the one row of `deployment`). */
 export async function projectCreationSetting(manager: EntityManager): Promise<ProjectCreation> {
-  const [row] = await rows<{ project_creation: ProjectCreation }>(
-    manager,
-    'select project_creation from deployment where id = 1',
-  );
-  return row?.project_creation ?? 'named';
+  return (await settingsRepository.projectCreation(manager)) ?? 'named';
 }
 
 /** Whether this person may start a project now (the policy, with the setting and their flag read). */
@@ -25,16 +21,11 @@ export async function projectCreationDecision(
   manager: EntityManager,
   actor: Actor,
 ): Promise<Decision> {
-  const [row] = await rows<{ project_creation: ProjectCreation; may_create_projects: boolean }>(
-    manager,
-    `select d.project_creation, coalesce(u.may_create_projects, false) as may_create_projects
-       from deployment d left join users u on u.id = $1 where d.id = 1`,
-    [actor.id],
-  );
+  const found = await settingsRepository.projectCreationFor(manager, actor.id);
   return canCreateProject(
     actor,
-    row?.project_creation ?? 'named',
-    row?.may_create_projects ?? false,
+    found?.projectCreation ?? 'named',
+    found?.mayCreateProjects ?? false,
   );
 }
 
@@ -56,7 +47,7 @@ export class SettingsService {
       const before = await projectCreationSetting(manager);
       const after = patch.projectCreation ?? before;
       if (after !== before) {
-        await manager.query('update deployment set project_creation = $1 where id = 1', [after]);
+        await settingsRepository.setProjectCreation(manager, after);
         await recordAudit(manager, {
           actorId: actor.id,
           action: 'settings.updated',
@@ -69,8 +60,4 @@ export class SettingsService {
       return { projectCreation: after };
     });
   }
-}
-
-function enforce(decision: Decision) {
-  if (!decision.allowed) throw forbidden(decision.code, decision.reason);
 }

@@ -4,6 +4,7 @@ import { readFileSync, readdirSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import path from 'node:path';
 import type pg from 'pg';
+import { sheetRenderRepository } from '../../repositories/sheet-renders.repository';
 import type { SheetData } from '../../sheets/sheet-data';
 
 /** A sheet as it is printed, less the time it was generated. */
@@ -75,16 +76,7 @@ export class SheetCache {
 
   async get(key: string): Promise<CachedSheet | null> {
     if (!this.enabled) return null;
-    const { rows } = await this.pool().query<{ pdf: Buffer; rendered_at: Date }>(
-      // Touch the row at most once a minute: a download is a read, not a write.
-      `with hit as (select key, pdf, rendered_at, last_served_at from sheet_renders where key = $1),
-            touch as (update sheet_renders s set last_served_at = now()
-                        from hit where s.key = hit.key
-                         and hit.last_served_at < now() - interval '1 minute')
-       select pdf, rendered_at from hit`,
-      [key],
-    );
-    return rows[0] ? { pdf: rows[0].pdf, renderedAt: rows[0].rendered_at } : null;
+    return sheetRenderRepository.get(this.pool(), key);
   }
 
   /**
@@ -93,24 +85,15 @@ export class SheetCache {
    */
   async put(key: string, revisionId: string, pdf: Buffer, renderedAt: Date): Promise<CachedSheet> {
     if (!this.enabled || pdf.length > this.maxBytes) return { pdf, renderedAt };
-    const inserted = await this.pool().query(
-      `insert into sheet_renders (key, revision_id, pdf, size, rendered_at, last_served_at)
-       values ($1, $2, $3, $4, $5, now()) on conflict (key) do nothing`,
-      [key, revisionId, pdf, pdf.length, renderedAt],
-    );
-    if (inserted.rowCount === 0) return (await this.get(key)) ?? { pdf, renderedAt };
-    await this.evict();
+    const kept = await sheetRenderRepository.insertIfNew(this.pool(), {
+      key,
+      revisionId,
+      pdf,
+      renderedAt,
+    });
+    if (!kept) return (await this.get(key)) ?? { pdf, renderedAt };
+    // Past the bound the least recently served go.
+    await sheetRenderRepository.keepWithin(this.pool(), this.maxBytes);
     return { pdf, renderedAt };
-  }
-
-  private async evict(): Promise<void> {
-    await this.pool().query(
-      `delete from sheet_renders where key in (
-         select key from (
-           select key, sum(size) over (order by last_served_at desc, key) as running
-             from sheet_renders) kept
-          where running > $1)`,
-      [this.maxBytes],
-    );
   }
 }

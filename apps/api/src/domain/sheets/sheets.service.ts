@@ -1,15 +1,14 @@
-import type { UnitSystem } from '@hoopline/contract';
 import type { Report } from '@hoopline/calc';
 import type { DataSource } from 'typeorm';
-import { pgPool } from '../../db/pg-pool';
 import type { SheetRenderer } from '../../sheets/sheet-renderer';
 import type { SheetData } from '../../sheets/sheet-data';
-import { SheetCache, sheetKey, type CachedSheet, type SheetContent } from './sheet-cache';
+import { sheetKey, type CachedSheet, type SheetCache, type SheetContent } from './sheet-cache';
 import type { AttachmentsService } from '../attachments/attachments.service';
 import { recordAudit } from '../audit/audit.service';
 import { requireRevision } from '../components/component-access';
 import type { Actor } from '../../policy/policy';
-import { iso, isoRequired, rows } from '../sql';
+import { revisionRepository } from '../../repositories/revisions.repository';
+import { iso, isoRequired } from '../iso-dates';
 import { verifyCode } from '../revisions/revision-content';
 
 export type PaperSize = 'A4' | 'LETTER';
@@ -29,7 +28,6 @@ export type SheetSource = 'cache' | 'rendered';
  * render's bytes, and its "generated" time is when that render ran.
  */
 export class SheetsService {
-  private readonly cache: SheetCache;
   /** Renders under way in this process, by key: a second request waits for the first. */
   private readonly inFlight = new Map<string, Promise<CachedSheet>>();
 
@@ -38,10 +36,9 @@ export class SheetsService {
     private readonly attachments: AttachmentsService,
     private readonly publicUrl: string,
     private readonly renderer: SheetRenderer,
-    cacheBytes: number,
-  ) {
-    this.cache = new SheetCache(() => pgPool(dataSource), cacheBytes);
-  }
+    /** Rendered sheets by content key (table sheet_renders). */
+    private readonly cache: SheetCache,
+  ) {}
 
   async sheet(
     actor: Actor,
@@ -56,32 +53,9 @@ export class SheetsService {
   }> {
     const manager = this.dataSource.manager;
     const { revision, component } = await requireRevision(manager, actor, revisionId);
-    const [facts] = await rows<{
-      number: string;
-      name: string;
-      client: string;
-      unit_system: UnitSystem;
-      author: string;
-    }>(
-      manager,
-      `select p.number, p.name, p.client, p.unit_system, u.name as author
-         from projects p, users u where p.id = $1 and u.id = $2`,
-      [revision.projectId, revision.authorId],
-    );
+    const facts = await revisionRepository.sheetFacts(manager, revision);
     if (!facts) throw new Error('revision without its project or author');
-    const [countersign] = await rows<{
-      checker: string;
-      created_at: Date;
-      comment: string;
-      hash_signed: string;
-    }>(
-      manager,
-      `select u.name as checker, s.created_at, s.comment, s.hash_signed
-         from sign_offs s join users u on u.id = s.checker_id
-        where s.revision_id = $1 and s.decision = 'countersigned'
-        order by s.created_at desc limit 1`,
-      [revisionId],
-    );
+    const countersign = await revisionRepository.latestCountersign(manager, revisionId);
     const countersigned = revision.status === 'countersigned';
     const code = verifyCode(revision.contentHash);
     const content: SheetContent = {

@@ -1,15 +1,10 @@
 import type { Me, User } from '@hoopline/contract';
 import type { EntityManager } from 'typeorm';
-import type { UserEntity } from '../../db/entities/user.entity';
-import type { Role } from '../../policy/policy';
+import type { UserProfile } from '../../db/entities/user.entity';
 import { projectCreationDecision } from '../settings/settings.service';
-import { rows } from '../sql';
+import { projectRepository } from '../../repositories/projects.repository';
 
-/** What the views read of a user row (no password hash: the signed-in request never loads it). */
-export type UserProfile = Pick<
-  UserEntity,
-  'id' | 'email' | 'name' | 'isAdmin' | 'active' | 'unitSystem' | 'mayCreateProjects' | 'createdAt'
->;
+export type { UserProfile };
 
 export function userView(u: UserProfile): User {
   return {
@@ -25,13 +20,7 @@ export function userView(u: UserProfile): User {
 }
 
 export async function meView(manager: EntityManager, user: UserProfile): Promise<Me> {
-  const memberships = await rows<{ project_id: string; number: string; role: Role }>(
-    manager,
-    `select m.project_id, p.number, m.role from project_members m
-       join projects p on p.id = m.project_id
-      where m.user_id = $1 order by p.number`,
-    [user.id],
-  );
+  const memberships = await projectRepository.membershipsOf(manager, user.id);
   const decision = await projectCreationDecision(manager, user);
   return {
     user: userView(user),

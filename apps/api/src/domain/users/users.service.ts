@@ -1,24 +1,20 @@
 import type { Invitation, Me, User } from '@hoopline/contract';
 import { randomUUID } from 'node:crypto';
-import { In, type DataSource } from 'typeorm';
+import type { DataSource } from 'typeorm';
 import type { AuthConfig } from '../../config/config';
-import { hashToken, randomToken } from '../../auth/tokens';
-import { InvitationEntity } from '../../db/entities/invitation.entity';
-import { UserEntity, type UnitSystem } from '../../db/entities/user.entity';
-import { conflict, forbidden, notFound } from '../../http/errors';
+import { hashToken, randomToken } from '../../credentials/tokens';
+import type { UnitSystem, UserEntity } from '../../db/entities/user.entity';
+import { conflict, notFound } from '../../http/errors';
 import { pageOf, type Page, type PageRequest } from '../../http/pagination';
 import { canLookUpPerson, canManagePeople, type Actor } from '../../policy/policy';
+import { enforce } from '../../policy/enforce';
 import { recordAudit } from '../audit/audit.service';
 import type { AuthService } from '../auth/auth.service';
 import { normaliseEmail } from '../auth/auth.service';
-import type { Notifier } from '../notifications/notifier';
-import { Where, containsPattern, paged } from '../sql';
+import type { Notifier } from '../../mail/notifier';
+import { projectRepository } from '../../repositories/projects.repository';
+import { userRepository } from '../../repositories/users.repository';
 import { meView, userView, type UserProfile } from './user-views';
-
-function requireAdmin(actor: Actor) {
-  const decision = canManagePeople(actor);
-  if (!decision.allowed) throw forbidden(decision.code, decision.reason);
-}
 
 /** How a one-time token reaches its owner: by mail, or shown to the admin who asked. */
 export type TokenDelivery =
@@ -44,12 +40,12 @@ export class UsersService {
     patch: { name?: string | undefined; unitSystem?: UnitSystem | undefined },
   ): Promise<Me> {
     return this.dataSource.transaction(async (manager) => {
-      const before = await manager.findOneByOrFail(UserEntity, { id: actor.id });
+      const before = await userRepository.get(manager, actor.id);
       const changes: Partial<UserEntity> = { updatedAt: new Date() };
       if (patch.name !== undefined) changes.name = patch.name;
       if (patch.unitSystem !== undefined) changes.unitSystem = patch.unitSystem;
-      await manager.update(UserEntity, { id: actor.id }, changes);
-      const after = await manager.findOneByOrFail(UserEntity, { id: actor.id });
+      await userRepository.update(manager, actor.id, changes);
+      const after = await userRepository.get(manager, actor.id);
       await recordAudit(manager, {
         actorId: actor.id,
         action: 'user.updated',
@@ -66,43 +62,20 @@ export class UsersService {
   async lookUp(actor: Actor, email: string): Promise<{ id: string; name: string; email: string }> {
     const manager = this.dataSource.manager;
     // Those who may add members to a project they lead: its designers (canManageMembers).
-    const [leads] = await manager.query(
-      `select exists (select 1 from project_members where user_id = $1 and role = 'designer') as yes`,
-      [actor.id],
-    );
-    const decision = canLookUpPerson(actor, Boolean(leads?.yes));
-    if (!decision.allowed) throw forbidden(decision.code, decision.reason);
-    const user = await manager.findOneBy(UserEntity, {
-      email: normaliseEmail(email),
-      active: true,
-    });
+    enforce(canLookUpPerson(actor, await projectRepository.designsAnyProject(manager, actor.id)));
+    const user = await userRepository.findActiveByEmail(manager, normaliseEmail(email));
     if (!user) throw notFound('person');
     return { id: user.id, name: user.name, email: user.email };
   }
 
   async list(actor: Actor, query: PageRequest & { q?: string | undefined }): Promise<Page<User>> {
-    requireAdmin(actor);
-    const w = new Where();
-    if (query.q)
-      w.add(
-        '(u.email ilike ? or u.name ilike ?)',
-        containsPattern(query.q),
-        containsPattern(query.q),
-      );
-    const { rows: found, total } = await paged<{ id: string }>(
-      this.dataSource.manager,
-      {
-        columns: 'u.id',
-        from: 'users u',
-        where: w.where,
-        params: w.params,
-        orderBy: 'lower(u.name), u.id',
-      },
-      query,
+    enforce(canManagePeople(actor));
+    const manager = this.dataSource.manager;
+    const { rows: found, total } = await userRepository.idPage(manager, query, query);
+    const users = await userRepository.byIds(
+      manager,
+      found.map((r) => r.id),
     );
-    const users = found.length
-      ? await this.dataSource.getRepository(UserEntity).findBy({ id: In(found.map((r) => r.id)) })
-      : [];
     const byId = new Map(users.map((u) => [u.id, u]));
     return pageOf(
       found.map((r) => userView(byId.get(r.id)!)),
@@ -121,12 +94,9 @@ export class UsersService {
       mayCreateProjects?: boolean | undefined;
     },
   ): Promise<User> {
-    requireAdmin(actor);
+    enforce(canManagePeople(actor));
     return this.dataSource.transaction(async (manager) => {
-      const before = await manager.findOne(UserEntity, {
-        where: { id: userId },
-        lock: { mode: 'pessimistic_write' },
-      });
+      const before = await userRepository.lockById(manager, userId);
       if (!before) throw notFound('user');
       if (userId === actor.id && (patch.isAdmin === false || patch.active === false)) {
         throw conflict(
@@ -140,11 +110,11 @@ export class UsersService {
       if (patch.active !== undefined) changes.active = patch.active;
       if (patch.mayCreateProjects !== undefined)
         changes.mayCreateProjects = patch.mayCreateProjects;
-      await manager.update(UserEntity, { id: userId }, changes);
+      await userRepository.update(manager, userId, changes);
       if (patch.active === false && before.active) {
         await this.authService.endAllSessions(manager, userId, 'deactivated');
       }
-      const after = await manager.findOneByOrFail(UserEntity, { id: userId });
+      const after = await userRepository.get(manager, userId);
       await recordAudit(manager, {
         actorId: actor.id,
         action: 'user.updated',
@@ -175,9 +145,9 @@ export class UsersService {
     actor: Actor,
     userId: string,
   ): Promise<TokenDelivery & { expiresAt: string }> {
-    requireAdmin(actor);
+    enforce(canManagePeople(actor));
     return this.dataSource.transaction(async (manager) => {
-      const user = await manager.findOneBy(UserEntity, { id: userId });
+      const user = await userRepository.findById(manager, userId);
       if (!user) throw notFound('user');
       const { token, expiresAt } = await this.authService.createPasswordReset(
         manager,
@@ -198,27 +168,9 @@ export class UsersService {
   }
 
   async listInvitations(actor: Actor, page: PageRequest): Promise<Page<Invitation>> {
-    requireAdmin(actor);
-    const { rows: found, total } = await paged<{
-      id: string;
-      email: string;
-      name: string;
-      is_admin: boolean;
-      invited_by: string | null;
-      inviter_name: string | null;
-      created_at: Date;
-      expires_at: Date;
-      accepted_at: Date | null;
-    }>(
+    enforce(canManagePeople(actor));
+    const { rows: found, total } = await userRepository.invitationPage(
       this.dataSource.manager,
-      {
-        columns: `i.id, i.email, i.name, i.is_admin, i.invited_by, u.name as inviter_name,
-                  i.created_at, i.expires_at, i.accepted_at`,
-        from: 'invitations i left join users u on u.id = i.invited_by',
-        where: ['i.revoked_at is null'],
-        params: [],
-        orderBy: 'i.created_at desc, i.id',
-      },
       page,
     );
     return pageOf(
@@ -242,21 +194,16 @@ export class UsersService {
     actor: Actor,
     input: { email: string; name: string; isAdmin?: boolean | undefined },
   ): Promise<{ invitation: Invitation } & TokenDelivery> {
-    requireAdmin(actor);
+    enforce(canManagePeople(actor));
     const email = normaliseEmail(input.email);
     const token = randomToken();
     const result = await this.dataSource.transaction(async (manager) => {
-      if (await manager.findOneBy(UserEntity, { email })) {
+      if (await userRepository.findByEmail(manager, email)) {
         throw conflict('email_taken', 'someone already has an account with this e-mail address');
       }
       const now = new Date();
-      await manager
-        .createQueryBuilder()
-        .update(InvitationEntity)
-        .set({ revokedAt: now })
-        .where('email = :email and accepted_at is null and revoked_at is null', { email })
-        .execute();
-      const invitation: InvitationEntity = Object.assign(new InvitationEntity(), {
+      await userRepository.revokeOpenInvitations(manager, email, now);
+      const invitation = await userRepository.insertInvitation(manager, {
         id: randomUUID(),
         email,
         name: input.name,
@@ -269,7 +216,6 @@ export class UsersService {
         acceptedUserId: null,
         revokedAt: null,
       });
-      await manager.insert(InvitationEntity, invitation);
       await recordAudit(manager, {
         actorId: actor.id,
         action: 'invitation.created',
@@ -277,7 +223,7 @@ export class UsersService {
         entityId: invitation.id,
         after: { email, name: input.name, isAdmin: invitation.isAdmin },
       });
-      const inviter = await manager.findOneByOrFail(UserEntity, { id: actor.id });
+      const inviter = await userRepository.get(manager, actor.id);
       await this.notifier.invitationCreated(manager, {
         email,
         name: input.name,
@@ -305,14 +251,14 @@ export class UsersService {
   }
 
   async revokeInvitation(actor: Actor, invitationId: string): Promise<void> {
-    requireAdmin(actor);
+    enforce(canManagePeople(actor));
     await this.dataSource.transaction(async (manager) => {
-      const invitation = await manager.findOneBy(InvitationEntity, { id: invitationId });
+      const invitation = await userRepository.findInvitation(manager, invitationId);
       if (!invitation || invitation.revokedAt) throw notFound('invitation');
       if (invitation.acceptedAt) {
         throw conflict('invitation_accepted', 'this invitation has been accepted already');
       }
-      await manager.update(InvitationEntity, { id: invitationId }, { revokedAt: new Date() });
+      await userRepository.markInvitationRevoked(manager, invitationId, new Date());
       await recordAudit(manager, {
         actorId: actor.id,
         action: 'invitation.revoked',

@@ -1,5 +1,5 @@
 import type { EntityManager } from 'typeorm';
-import { pgPool } from '../db/pg-pool';
+import { pgPool } from './pg-pool';
 
 /** A raw query's rows and affected-row count (TypeORM's structured result). */
 export async function run<Row>(
@@ -33,11 +33,6 @@ export async function rows<Row>(
 export function containsPattern(text: string): string {
   return `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
 }
-
-export const iso = (d: Date | string | null | undefined): string | null =>
-  d == null ? null : new Date(d).toISOString();
-
-export const isoRequired = (d: Date | string): string => new Date(d).toISOString();
 
 export interface PagedQuery {
   /** Select list, without the total. */

@@ -1,13 +1,13 @@
 /**
  * Loads the demo scenario into DATABASE_URL (migrated first):
- *   node --import tsx src/db/seed.ts [--write-sign-in <file>]
+ *   node --import tsx src/seed/seed.ts [--write-sign-in <file>]
  * Idempotent; scripts/start.sh and scripts/e2e-server.sh call it.
  */
 import { writeFileSync } from 'node:fs';
 import { ConfigError, loadConfig } from '../config/config';
-import { createServices } from '../domain/services';
+import { createServices } from '../wiring';
 import { createStorage } from '../storage/create-storage';
-import { createDataSource } from './data-source';
+import { createDataSource } from '../db/data-source';
 import { seedDemo, signInSheet } from './seed-demo';
 
 async function main() {

@@ -18,6 +18,13 @@ export function hashToken(token: string): string {
   return createHash('sha256').update(token, 'utf8').digest('hex');
 }
 
+/** What a session is given: the access JWT, the refresh token and the CSRF token (auth/cookies.ts sets them). */
+export interface IssuedSession {
+  readonly accessToken: string;
+  readonly refreshToken: string;
+  readonly csrfToken: string;
+}
+
 export function safeEqual(a: string, b: string): boolean {
   const left = Buffer.from(a, 'utf8');
   const right = Buffer.from(b, 'utf8');

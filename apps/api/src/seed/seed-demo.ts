@@ -2,12 +2,12 @@ import { createHmac, randomUUID } from 'node:crypto';
 import type { DataSource } from 'typeorm';
 import { COMPONENT_KINDS } from '@hoopline/calc';
 import type { Config } from '../config/config';
-import type { Services } from '../domain/services';
+import type { Services } from '../wiring';
 import { AppError } from '../http/errors';
 import type { Actor } from '../policy/policy';
-import { ComponentEntity } from './entities/component.entity';
-import { ProjectEntity } from './entities/project.entity';
-import { UserEntity } from './entities/user.entity';
+import { ComponentEntity } from '../db/entities/component.entity';
+import { ProjectEntity } from '../db/entities/project.entity';
+import { UserEntity } from '../db/entities/user.entity';
 import { DEMO_PROJECTS, DEMO_USERS, type DemoComponent, type DemoPerson } from './demo-scenario';
 
 export interface DemoSignIn {
