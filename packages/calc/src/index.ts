@@ -179,7 +179,8 @@ export type { EngineMethod } from './methods';
 
 // Thickness sweeps
 export { SWEEP_DEFAULT_POINTS, SWEEP_MAX_POINTS, sweepThickness } from './sweep';
-export type { SweepCase, SweepOptions, SweepPoint, SweepResult } from './sweep';
+export type { SweepCase, SweepOptions, SweepPoint, SweepResult, SweepValidityRange } from './sweep';
+export { isOutsideValidityWarning, reportOutsideValidity } from './core/validity';
 
 // Batch screening from CSV
 export { CHECKS_CSV_COLUMNS, casesToCsv, checksToCsv, csvField, readCsvCases } from './batch/csv';

@@ -12,7 +12,7 @@ import {
 } from '@hoopline/present';
 import { BucklingModeShape } from './buckling-mode';
 import { ComponentSketch, lobeCount } from './sketches';
-import { sweepForPlot } from './sweep';
+import { currentOf, sweepForPlot } from './sweep';
 import { SweepPlot } from './sweep-plot';
 import { TrailTable } from './trail-table';
 
@@ -230,10 +230,7 @@ export function ReportPictures({
 }) {
   const deferredInput = useDeferredValue(rawInput);
   const sweep = useMemo(
-    () =>
-      deferredInput === undefined
-        ? null
-        : sweepForPlot(deferredInput, report.governing?.utilisation ?? null),
+    () => (deferredInput === undefined ? null : sweepForPlot(deferredInput, currentOf(report))),
     [deferredInput, report],
   );
   const lobes = lobeCount(report);

@@ -7,7 +7,7 @@ import {
   printed as prettyUnit,
 } from '@hoopline/present';
 import { linearScale, niceCeil, niceTicks } from './chart-scale';
-import type { PlotSweep } from './sweep';
+import { curvePieces, type PlotSweep } from './sweep';
 
 const W = 560;
 const H = 250;
@@ -17,7 +17,8 @@ const M = { left: 50, right: 14, top: 14, bottom: 40 };
  * Governing utilisation against thickness: the curve, the 100 % line, the
  * current design and the smallest thickness that passes. Where the engine
  * flags the method as outside its validity range the curve is dashed over a
- * shaded band (a legend entry says so). Utilisations above the top of the
+ * shaded band (a legend entry says so), from limit to limit; a current design
+ * or a minimum in it says "outside validity", as the report does. Utilisations above the top of the
  * chart are drawn at the top (the caption has the numbers).
  */
 export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSystem }) {
@@ -33,20 +34,15 @@ export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSys
   const x = linearScale([toLen(sweep.from), toLen(sweep.to)], [M.left, W - M.right]);
   const y = linearScale([0, yTop], [H - M.bottom, M.top]);
   const yOf = (u: number) => y(Math.min(u * 100, yTop));
-  // Two paths: intervals with a flagged end go into the dashed one (sweep.ts, outsideRuns).
-  const at = (p: (typeof pts)[number]) =>
+  // Two paths, split where a stretch outside validity begins or ends (sweep.ts, curvePieces).
+  const at = (p: { thickness: number; utilisation: number }) =>
     `${x(toLen(p.thickness)).toFixed(1)},${yOf(p.utilisation).toFixed(1)}`;
   let inside = '';
   let outside = '';
-  for (let i = 0; i + 1 < pts.length; i++) {
-    const a = pts[i]!;
-    const b = pts[i + 1]!;
-    const flagged = a.outsideValidity || b.outsideValidity;
-    const previousFlagged = i > 0 && (pts[i - 1]!.outsideValidity || a.outsideValidity);
-    const continues = i > 0 && previousFlagged === flagged;
-    const segment = `${continues ? '' : `M${at(a)} `}L${at(b)} `;
-    if (flagged) outside += segment;
-    else inside += segment;
+  for (const piece of curvePieces(sweep)) {
+    const d = piece.points.map((p, i) => `${i === 0 ? 'M' : 'L'}${at(p)}`).join(' ') + ' ';
+    if (piece.outside) outside += d;
+    else inside += d;
   }
   const runs = sweep.outsideValidity;
   const xTicks = niceTicks(toLen(sweep.from), toLen(sweep.to), 6);
@@ -55,20 +51,38 @@ export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSys
   const min = sweep.minimumPassing;
   const lenText = (m: number) => `${formatSignificant(toLen(m))} ${prettyUnit(lengthUnit)}`;
 
+  const minOutside = typeof min === 'number' && sweep.minimumOutsideValidity;
+  const rangeText = (r: (typeof runs)[number]) =>
+    r.from <= sweep.from
+      ? `up to ${lenText(r.to)}`
+      : r.to >= sweep.to
+        ? `from ${lenText(r.from)}`
+        : `${lenText(r.from)} to ${lenText(r.to)}`;
+  // The current design's validity is the report's (its warnings), by the rule the sweep uses.
+  const currentValidity =
+    current.outsideValidity === null || runs.length === 0
+      ? ''
+      : current.outsideValidity
+        ? ' The current thickness is outside the validity range: see the validity warnings.'
+        : ' The current thickness is inside the validity range.';
+
   const summary =
     `Current thickness ${lenText(current.thickness)}` +
     (current.utilisation !== null
-      ? ` at ${percent(current.utilisation)} governing utilisation. `
+      ? ` at ${percent(current.utilisation)} governing utilisation` +
+        (current.outsideValidity ? ', outside the validity range. ' : '. ')
       : '. ') +
     (typeof min === 'number'
-      ? `Smallest thickness that passes: ${lenText(min)}.`
+      ? minOutside
+        ? `Smallest thickness that passes: ${lenText(min)}, outside the method's validity range: no basis for a decision.`
+        : `Smallest thickness that passes: ${lenText(min)}.`
       : min === 'below'
         ? `Every thickness from ${lenText(sweep.from)} passes.`
         : `No thickness up to ${lenText(sweep.to)} passes.`) +
     (runs.length > 0
       ? ` Outside the method's validity range (dashed, shaded): ${runs
-          .map((r) => `${lenText(r.from)} to ${lenText(r.to)}`)
-          .join(' and ')}; results there are not reliable.`
+          .map(rangeText)
+          .join(' and ')}; results there are not reliable.${currentValidity}`
       : '');
 
   return (
@@ -166,15 +180,19 @@ export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSys
               x2={x(toLen(min))}
               y1={M.top}
               y2={H - M.bottom}
-              className="stroke-pass"
+              className={minOutside ? 'stroke-warn' : 'stroke-pass'}
               strokeWidth={1.2}
+              {...(minOutside ? { strokeDasharray: '3 2' } : {})}
             />
             <text
-              x={x(toLen(min)) + 4}
+              data-testid="sweep-minimum"
+              x={x(toLen(min)) + (x(toLen(min)) > W - 150 ? -4 : 4)}
               y={M.top + 10}
-              className="fill-pass text-[10px] font-medium"
+              textAnchor={x(toLen(min)) > W - 150 ? 'end' : 'start'}
+              className={`${minOutside ? 'fill-warn' : 'fill-pass'} text-[10px] font-medium`}
             >
               min {lenText(min)}
+              {minOutside ? ', outside validity' : ''}
             </text>
           </g>
         ) : null}
@@ -196,11 +214,14 @@ export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSys
               strokeWidth={2}
             />
             <text
-              x={x(toLen(current.thickness)) + 7}
+              data-testid="sweep-current"
+              x={x(toLen(current.thickness)) + (x(toLen(current.thickness)) > W - 190 ? -7 : 7)}
               y={yOf(current.utilisation) - 7}
-              className="fill-ink text-[10px] font-medium"
+              textAnchor={x(toLen(current.thickness)) > W - 190 ? 'end' : 'start'}
+              className={`${current.outsideValidity ? 'fill-warn' : 'fill-ink'} text-[10px] font-medium`}
             >
               current {lenText(current.thickness)}, {percent(current.utilisation)}
+              {current.outsideValidity ? ', outside validity' : ''}
             </text>
           </g>
         ) : null}
