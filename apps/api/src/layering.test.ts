@@ -35,7 +35,12 @@ describe('the API layers', () => {
       typeOnly: false,
     });
     const problems = layerViolations(
-      [edge('domain', 'routes'), edge('mail', 'storage'), edge('nowhere', 'db'), edge('routes', 'domain')],
+      [
+        edge('domain', 'routes'),
+        edge('mail', 'storage'),
+        edge('nowhere', 'db'),
+        edge('routes', 'domain'),
+      ],
       API_LAYERS,
     );
     expect(problems).toHaveLength(3);

@@ -198,7 +198,15 @@ export type {
 
 // Thickness and spacing sweeps
 export { SWEEP_DEFAULT_POINTS, SWEEP_MAX_POINTS, sweepSpacing, sweepThickness } from './sweep';
-export type { SpacingSweepResult, SweepCase, SweepOptions, SweepPoint, SweepResult } from './sweep';
+export type {
+  SpacingSweepResult,
+  SweepCase,
+  SweepOptions,
+  SweepPoint,
+  SweepResult,
+  SweepValidityRange,
+} from './sweep';
+export { isOutsideValidityWarning, reportOutsideValidity } from './core/validity';
 
 // Batch screening from CSV
 export { CHECKS_CSV_COLUMNS, casesToCsv, checksToCsv, csvField, readCsvCases } from './batch/csv';

@@ -1,6 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { checkValue, relativeError } from '../test/check-values';
-import { CalcInputError, findMethod, screen, sweepThickness } from './index';
+import {
+  CalcInputError,
+  METHODS,
+  findMethod,
+  reportOutsideValidity,
+  screen,
+  sweepThickness,
+} from './index';
 
 const plate = (edge: 'clamped' | 'simply-supported', extra: Record<string, unknown> = {}) => ({
   kind: 'circular-plate',
@@ -193,5 +200,98 @@ describe('sweepThickness validity flags', () => {
         thickness: valid.minimumPassing.value!,
       }).verdict,
     ).toBe('pass');
+  });
+});
+
+describe('sweepThickness stretches outside validity (one rule with the report)', () => {
+  // The filer's case (issue 16.4): a 10 in acrylic viewport, 1 in thick, simply supported, at full
+  // vacuum. t/d = 0.1 exactly: at the thin-plate limit of the Hoopline method notes §c (t/d <= 0.1),
+  // so the report passes it without a validity warning.
+  const viewport = (extra: Record<string, unknown> = {}) => ({
+    kind: 'circular-plate',
+    diameter: '10 in',
+    thickness: '1 in',
+    edge: 'simply-supported',
+    material: 'cast-acrylic',
+    loadCases: [{ name: 'Full vacuum', internal: 'full vacuum' }],
+    ...extra,
+  });
+  const outsideAt = (input: Record<string, unknown>, thickness: number) =>
+    reportOutsideValidity(screen({ ...input, thickness }));
+
+  it('starts the thick-plate stretch at t/d = 0.1, so the current 1 in is not inside it', () => {
+    const result = sweepThickness(viewport(), { points: 60 });
+    const thick = result.outsideValidity.find((r) => r.codes.includes('thick-plate'))!;
+    // t/d = 0.1 with d = 10 in = 0.254 m (exact by the inch's definition): t = 0.0254 m.
+    expect(relativeError(thick.from, 0.0254)).toBeLessThan(1e-9);
+    expect(thick.from).toBeGreaterThan(result.current);
+    expect(thick.to).toBe(result.points.at(-1)!.value);
+    expect(outsideAt(viewport(), result.current)).toBe(false);
+    expect(screen(viewport()).verdict).toBe('pass');
+    // The old plot shaded the whole interval between the last valid point (24.1 mm) and the first
+    // flagged one (25.7 mm), with the passing 25.4 mm inside: the interval is no longer the band.
+    const sampledBefore = result.points.filter((p) => p.value < 0.0254).at(-1)!;
+    expect(sampledBefore.outsideValidity).toBe(false);
+    expect(thick.from - sampledBefore.value).toBeGreaterThan(0.001);
+  });
+
+  it('flags by the report’s rule at both ends of every stretch, and not just beyond them', () => {
+    const inputs = [
+      viewport(),
+      viewport({ loadCases: [{ name: 'Proof', internal: '3 bar(g)' }] }),
+      ...METHODS.filter((m) => m.sweep).flatMap((m) =>
+        m.examples.map((e) => e.input as Record<string, unknown>),
+      ),
+    ];
+    let stretches = 0;
+    for (const input of inputs) {
+      const result = sweepThickness(input, { points: 40 });
+      const first = result.points[0]!.value;
+      const last = result.points.at(-1)!.value;
+      for (const range of result.outsideValidity) {
+        stretches++;
+        const where = `${String(input['kind'])} ${range.codes.join(',')} ${range.from}–${range.to}`;
+        expect(outsideAt(input, range.from), where).toBe(true);
+        expect(outsideAt(input, range.to), where).toBe(true);
+        expect(outsideAt(input, (range.from + range.to) / 2), where).toBe(true);
+        if (range.from > first)
+          expect(outsideAt(input, range.from * (1 - 1e-9)), where).toBe(false);
+        if (range.to < last) expect(outsideAt(input, range.to * (1 + 1e-9)), where).toBe(false);
+      }
+      // Every sampled point agrees with the stretches.
+      for (const p of result.points) {
+        const inside = result.outsideValidity.some((r) => p.value >= r.from && p.value <= r.to);
+        expect(inside, `${String(input['kind'])} at ${p.value}`).toBe(p.outsideValidity);
+      }
+    }
+    expect(stretches).toBeGreaterThan(3);
+  });
+
+  it('puts the smallest passing thickness inside a stretch exactly when it says so', () => {
+    // At a 3 bar(g) proof pressure the 10 in acrylic window needs more than t/d = 0.1.
+    const proof = viewport({ loadCases: [{ name: 'Proof test', internal: '3 bar(g)' }] });
+    const result = sweepThickness(proof, { points: 60 });
+    const minimum = result.minimumPassing;
+    expect(minimum.value).not.toBeNull();
+    expect(minimum.outsideValidity).toBe(true);
+    expect(minimum.note).toContain('thick-plate');
+    expect(
+      result.outsideValidity.some((r) => minimum.value! >= r.from && minimum.value! <= r.to),
+    ).toBe(true);
+    expect(screen({ ...proof, thickness: minimum.value! }).verdict).toBe('outside-validity');
+    // At full vacuum the minimum (about 17 mm) lies between the two stretches, and says nothing.
+    const vacuum = sweepThickness(viewport(), { points: 60 });
+    expect(vacuum.minimumPassing.outsideValidity).toBe(false);
+    expect(
+      vacuum.outsideValidity.some(
+        (r) => vacuum.minimumPassing.value! >= r.from && vacuum.minimumPassing.value! <= r.to,
+      ),
+    ).toBe(false);
+  });
+
+  it('has no stretch where the whole range is valid', () => {
+    const result = sweepThickness(viewport(), { from: '15 mm', to: '25 mm', points: 10 });
+    expect(result.outsideValidity).toEqual([]);
+    expect(result.points.every((p) => !p.outsideValidity)).toBe(true);
   });
 });

@@ -40,7 +40,22 @@ export interface SweepPoint {
   readonly cases: readonly SweepCase[];
 }
 
-/** A thickness sweep: every point, and the thinnest value that passes. */
+/**
+ * A stretch of the swept range where a method is outside its validity range,
+ * by the report's own rule. Its ends are the sweep's ends or the limits found
+ * between two neighbouring points, narrowed to 1e-10 relative: `from` and `to`
+ * are flagged values, and a value just beyond either (within that tolerance)
+ * is not, so a thickness the report calls valid never lies inside.
+ */
+export interface SweepValidityRange {
+  /** SI (m). */
+  readonly from: number;
+  readonly to: number;
+  /** The codes of the 'outside-validity' warnings met in the stretch, in order of first appearance. */
+  readonly codes: readonly string[];
+}
+
+/** A thickness sweep: every point, the stretches outside validity and the thinnest value that passes. */
 export interface SweepResult {
   readonly parameter: 'thickness';
   readonly label: string;
@@ -48,6 +63,13 @@ export interface SweepResult {
   /** The value in the input, SI. */
   readonly current: number;
   readonly points: readonly SweepPoint[];
+  /**
+   * Where the method is outside its validity range, lowest value first; empty
+   * when the whole range is valid. Between two points that share a warning the
+   * engine takes it to hold throughout (a validity limit crossed and crossed
+   * back between two neighbouring points is not seen).
+   */
+  readonly outsideValidity: readonly SweepValidityRange[];
   /**
    * The thinnest value whose governing utilisation is at most 1, found within
    * the bracketing points by a safeguarded root search (utilisation assumed to
@@ -74,6 +96,13 @@ export interface SpacingSweepResult {
   readonly unit: 'm';
   readonly current: number;
   readonly points: readonly SweepPoint[];
+  /**
+   * Where the method is outside its validity range, lowest value first; empty
+   * when the whole range is valid. Between two points that share a warning the
+   * engine takes it to hold throughout (a validity limit crossed and crossed
+   * back between two neighbouring points is not seen).
+   */
+  readonly outsideValidity: readonly SweepValidityRange[];
   /**
    * The largest value whose governing utilisation is at most 1 (utilisation
    * assumed to rise with the value), or null when the range does not contain
@@ -149,6 +178,7 @@ export function sweepThickness(rawInput: unknown, options: SweepOptions = {}): S
     unit: 'm',
     current: run.current,
     points: run.points,
+    outsideValidity: run.outsideValidity,
     minimumPassing: run.limit,
   };
 }
@@ -168,6 +198,7 @@ export function sweepSpacing(rawInput: unknown, options: SweepOptions = {}): Spa
     unit: 'm',
     current: run.current,
     points: run.points,
+    outsideValidity: run.outsideValidity,
     largestPassing: run.limit,
   };
 }
@@ -180,6 +211,7 @@ function runSweep(
   label: string;
   current: number;
   points: SweepPoint[];
+  outsideValidity: SweepValidityRange[];
   limit: SweepResult['minimumPassing'];
 } {
   const component = parseComponent(rawInput);
@@ -249,7 +281,13 @@ function runSweep(
     values.push(i === points - 1 ? to : from + ((to - from) * i) / (points - 1));
   }
   let last: MethodResult | undefined;
-  const sweptPoints = values.map((value) => point(component, value, (last = evaluate(value))));
+  const codesAt: string[][] = [];
+  const sweptPoints = values.map((value) => {
+    const result = (last = evaluate(value));
+    codesAt.push(outsideCodes(component, result));
+    return point(component, value, result);
+  });
+  const ranges = validityRanges(values, codesAt, (v) => outsideCodes(component, evaluate(v)));
 
   const hasChecks = last!.cases.some((trail) => trail.checks.length > 0);
   let limit: SweepResult['minimumPassing'];
@@ -273,7 +311,7 @@ function runSweep(
     );
     limit = found({ value: inverse.value === null ? null : 1 / inverse.value, note: inverse.note });
   }
-  return { label: sweep.label, current, points: sweptPoints, limit };
+  return { label: sweep.label, current, points: sweptPoints, outsideValidity: ranges, limit };
 }
 
 /**
@@ -467,4 +505,66 @@ function minimumPassing(
     value: high,
     note: `where the governing utilisation reaches 1, bracketed and narrowed to 1e-12 relative${caveat}`,
   };
+}
+
+function outsideCodes(component: ParsedComponent, result: MethodResult): string[] {
+  const codes: string[] = [];
+  for (const w of outsideValidityWarnings(component.context, result))
+    if (!codes.includes(w.code)) codes.push(w.code);
+  return codes;
+}
+
+/** Relative width to which a validity limit between two points is narrowed. */
+const LIMIT_TOLERANCE = 1e-10;
+
+/**
+ * The stretches outside validity: for each warning code, every run of
+ * neighbouring points that carry it, its ends moved out to the limits
+ * between the run and the points either side (bisection on whether the code
+ * is raised, to 1e-10 relative); then the runs of all codes merged where they
+ * overlap. Bisecting code by code finds each limit even where another warning
+ * holds on both sides of it.
+ */
+function validityRanges(
+  values: readonly number[],
+  codesAt: readonly (readonly string[])[],
+  codesOf: (value: number) => readonly string[],
+): SweepValidityRange[] {
+  const limit = (valid: number, flagged: number, code: string): number => {
+    let good = valid;
+    let bad = flagged;
+    for (let i = 0; i < 200 && Math.abs(bad - good) > Math.abs(bad) * LIMIT_TOLERANCE; i++) {
+      const mid = (good + bad) / 2;
+      if (codesOf(mid).includes(code)) bad = mid;
+      else good = mid;
+    }
+    return bad;
+  };
+  const order: string[] = [];
+  for (const codes of codesAt)
+    for (const code of codes) if (!order.includes(code)) order.push(code);
+  const runs: { from: number; to: number; codes: string[] }[] = [];
+  for (const code of order) {
+    for (let i = 0; i < values.length; i++) {
+      if (!codesAt[i]!.includes(code)) continue;
+      let j = i;
+      while (j + 1 < values.length && codesAt[j + 1]!.includes(code)) j++;
+      runs.push({
+        from: i === 0 ? values[0]! : limit(values[i - 1]!, values[i]!, code),
+        to: j === values.length - 1 ? values[j]! : limit(values[j + 1]!, values[j]!, code),
+        codes: [code],
+      });
+      i = j;
+    }
+  }
+  runs.sort((a, b) => a.from - b.from);
+  const merged: { from: number; to: number; codes: string[] }[] = [];
+  for (const run of runs) {
+    const previous = merged[merged.length - 1];
+    if (previous && run.from <= previous.to) {
+      previous.to = Math.max(previous.to, run.to);
+      for (const code of run.codes) if (!previous.codes.includes(code)) previous.codes.push(code);
+    } else merged.push({ ...run, codes: [...run.codes] });
+  }
+  return merged;
 }

@@ -1,6 +1,6 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
-import { NavLink, Outlet, useNavigate } from 'react-router-dom';
+import { NavLink, Outlet, useLocation, useNavigate } from 'react-router-dom';
 import { onSessionLost } from '../api/client';
 import { useMe, useSignOut, useUpdateMe } from '../api/session';
 import type { UnitSystem } from '@hoopline/contract';
@@ -62,10 +62,18 @@ function UnitSwitch({ system }: { system: UnitSystem }) {
   );
 }
 
-/** The signed-in shell: skip link, navigation by role, display settings, the page. */
+/**
+ * The signed-in shell: skip link, navigation by role, display settings, the
+ * page. Below the md breakpoint (a phone, a narrow window) the navigation and
+ * settings fold behind a Menu button; the menu closes when the page changes.
+ */
 export function AppLayout() {
   const me = useMe();
   const navigate = useNavigate();
+  const { pathname } = useLocation();
+  // Open on the page where it was opened: a navigation closes it without an effect.
+  const [menuOpenAt, setMenuOpenAt] = useState<string | null>(null);
+  const menuOpen = menuOpenAt === pathname;
   const signOut = useSignOut();
   const client = useQueryClient();
   const isChecker = me.memberships.some((m) => m.role === 'checker');
@@ -97,51 +105,83 @@ export function AppLayout() {
             <img src="/favicon.svg" alt="" className="h-5 w-5" />
             Hoopline
           </NavLink>
-          <nav aria-label="Main" className="flex flex-wrap items-center gap-1">
-            <NavLink to="/projects" className={navClass}>
-              Projects
-            </NavLink>
-            {isChecker ? (
-              <NavLink to="/check-queue" className={navClass}>
-                Check queue
-                <QueueCount />
-              </NavLink>
-            ) : null}
-            <NavLink to="/issued" className={navClass}>
-              Issued
-            </NavLink>
-            {me.user.isAdmin ? (
-              <>
-                <NavLink to="/people" className={navClass}>
-                  People
-                </NavLink>
-                <NavLink to="/audit-log" className={navClass}>
-                  Audit log
-                </NavLink>
-              </>
-            ) : null}
-          </nav>
-          <div className="ml-auto flex flex-wrap items-center gap-3">
-            <UnitSwitch system={me.user.unitSystem} />
-            <ThemeSwitch />
-            <NavLink to="/account" className={navClass}>
-              {me.user.name}
-            </NavLink>
-            <button
-              type="button"
-              className="rounded px-2 py-1 text-sm text-muted hover:bg-sunken hover:text-ink"
-              onClick={() =>
-                signOut.mutate(undefined, {
-                  onSettled: () => navigate('/sign-in', { replace: true }),
-                })
-              }
+          <button
+            type="button"
+            aria-expanded={menuOpen}
+            aria-controls="app-menu"
+            className="ml-auto inline-flex items-center gap-1.5 rounded border border-line px-2.5 py-1 text-sm hover:bg-sunken md:hidden"
+            onClick={() => setMenuOpenAt(menuOpen ? null : pathname)}
+          >
+            <svg aria-hidden="true" width="14" height="12" viewBox="0 0 14 12">
+              {menuOpen ? (
+                <path d="M2 1 L12 11 M12 1 L2 11" className="stroke-ink" strokeWidth="1.6" />
+              ) : (
+                <path
+                  d="M1 1.5 H13 M1 6 H13 M1 10.5 H13"
+                  className="stroke-ink"
+                  strokeWidth="1.6"
+                />
+              )}
+            </svg>
+            Menu
+          </button>
+          <div
+            id="app-menu"
+            className={`${menuOpen ? 'flex' : 'hidden'} w-full flex-col gap-2 pb-1 md:flex md:w-auto md:flex-1 md:flex-row md:flex-wrap md:items-center md:gap-x-4 md:pb-0`}
+          >
+            <nav
+              aria-label="Main"
+              className="flex flex-col gap-1 md:flex-row md:flex-wrap md:items-center"
             >
-              Sign out
-            </button>
+              <NavLink to="/projects" className={navClass}>
+                Projects
+              </NavLink>
+              {isChecker ? (
+                <NavLink to="/check-queue" className={navClass}>
+                  Check queue
+                  <QueueCount />
+                </NavLink>
+              ) : null}
+              <NavLink to="/issued" className={navClass}>
+                Issued
+              </NavLink>
+              {me.user.isAdmin ? (
+                <>
+                  <NavLink to="/people" className={navClass}>
+                    People
+                  </NavLink>
+                  <NavLink to="/audit-log" className={navClass}>
+                    Audit log
+                  </NavLink>
+                </>
+              ) : null}
+            </nav>
+            <div className="flex flex-wrap items-center gap-3 border-t border-line pt-2 md:ml-auto md:border-t-0 md:pt-0">
+              <UnitSwitch system={me.user.unitSystem} />
+              <ThemeSwitch />
+              <NavLink to="/account" className={navClass}>
+                {me.user.name}
+              </NavLink>
+              <button
+                type="button"
+                className="rounded px-2 py-1 text-sm text-muted hover:bg-sunken hover:text-ink"
+                onClick={() =>
+                  signOut.mutate(undefined, {
+                    onSettled: () => navigate('/sign-in', { replace: true }),
+                  })
+                }
+              >
+                Sign out
+              </button>
+            </div>
           </div>
         </div>
       </header>
-      <main id="main" tabIndex={-1} className="mx-auto max-w-[1440px] px-4 py-5 outline-none">
+      <main
+        id="main"
+        tabIndex={-1}
+        className="mx-auto max-w-[1440px] min-w-0 px-3 py-5 outline-none sm:px-4"
+      >
         <Outlet />
       </main>
     </UnitSystemProvider>

@@ -76,7 +76,12 @@ export function plateLimits(trail: Trail, r: PlateResponse): void {
     });
     allowablePressure = Math.min(allowablePressure, limit / r.deflectionPerPressure);
   }
-  trail.output('allowable-pressure', 'Allowable pressure difference', allowablePressure, 'Pa');
+  trail.output(
+    'allowable-pressure',
+    'Allowable pressure difference (screening)',
+    allowablePressure,
+    'Pa',
+  );
   if (r.material.brittle && r.maxStress > 0) {
     trail.output(
       'strength-ratio',

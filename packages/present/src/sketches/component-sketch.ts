@@ -10,7 +10,7 @@ import {
   type HeadShape,
 } from './geometry';
 import { arrow, dimension, hatch, label } from './primitives';
-import type { Shape, Sketch } from './scene';
+import { textWidth, type Shape, type Sketch } from './scene';
 
 const W = 420;
 const H = 240;
@@ -77,13 +77,17 @@ function circularPlate(
 ): Sketch {
   const height = 200;
   const box = { width: W, height };
-  const span = 260;
+  const tText = `t ${show(thickness, 'm', system)}`;
+  const x0 = 40;
+  // The span leaves room on the right for the thickness label (a US "t 0.4724 in" is long).
+  const span = Math.min(270, W - 4 - textWidth(tText, 'label') - 8 - 40 - x0);
   const scale = span / diameter;
   const t = drawnThickness(thickness, scale, 6, 30);
-  const x0 = 50;
   const y0 = 96 - t.px / 2;
   const clamped = edge === 'clamped';
   const tx = x0 + span + 40;
+  // The span dimension goes on the side away from the pressure arrows.
+  const fromInside = direction === 'internal-over';
   const shapes: Shape[] = [
     {
       type: 'rect',
@@ -128,15 +132,17 @@ function circularPlate(
   }
   shapes.push(
     ...pressureArrows(x0, span, y0, y0 + t.px, direction, box),
-    ...dimension(
-      x0,
-      y0 + t.px,
-      x0 + span,
-      y0 + t.px,
-      clamped ? 30 : 36,
-      `span ${show(diameter, 'm', system)}`,
-      box,
-    ),
+    ...(fromInside
+      ? dimension(x0, y0, x0 + span, y0, -30, `span ${show(diameter, 'm', system)}`, box)
+      : dimension(
+          x0,
+          y0 + t.px,
+          x0 + span,
+          y0 + t.px,
+          clamped ? 30 : 36,
+          `span ${show(diameter, 'm', system)}`,
+          box,
+        )),
     {
       type: 'line',
       x1: x0 + span + 24,
@@ -157,7 +163,7 @@ function circularPlate(
     },
     ...arrow(tx, y0 - 14, tx, y0),
     ...arrow(tx, y0 + t.px + 14, tx, y0 + t.px),
-    label(tx + 8, y0 + t.px / 2 + 4, `t ${show(thickness, 'm', system)}`, box, { anchor: 'start' }),
+    label(tx + 8, y0 + t.px / 2 + 4, tText, box, { anchor: 'start' }),
     label(
       x0 + span / 2,
       height - 4,
@@ -189,9 +195,10 @@ function rectangularPlate(
   system: UnitSystem,
 ): Sketch {
   const box = { width: W, height: H };
-  // Front view between a left margin for the height dimension and the section on the right.
-  const left = 72;
-  const frontWidth = W - left - 112;
+  // Front view between a left margin for the height dimension (its label included) and the
+  // section on the right (whose pressure label reaches some 55 units left of it).
+  const left = Math.max(72, textWidth(show(height, 'm', system), 'label') + 36);
+  const frontWidth = W - left - 130;
   const frontHeight = H - 84;
   const fit = fitToBox(width, height, frontWidth, frontHeight, 0);
   const w = width * fit.scale;
@@ -368,12 +375,13 @@ function closure(
         show(width, 'm', system),
         box,
       ),
+      // Inside the seal line, clear of the fasteners and the edge of the cover.
       ...dimension(
         cx + w / 2,
         cy - h / 2,
         cx + w / 2,
         cy + h / 2,
-        -12,
+        12,
         show(height, 'm', system),
         box,
       ),
@@ -522,11 +530,16 @@ function cylinder(
   ring: SectionDrawing | null,
 ): Sketch {
   const box = { width: W, height: H };
-  const fit = fitToBox(length, diameter, W, H, ring ? 56 : 46);
+  const dText = `D ${show(diameter, 'm', system)}`;
+  // Room on the left for the diameter and its label, above for the wall's (and the rings'), below for the length's.
+  const area = { x: textWidth(dText, 'label') + 30, y: ring ? 52 : 30 };
+  const areaW = W - area.x - 24;
+  const areaH = H - area.y - (ring ? 64 : 44);
+  const fit = fitToBox(length, diameter, areaW, areaH, 0);
   const l = length * fit.scale;
   const d = diameter * fit.scale;
-  const x0 = (W - l) / 2;
-  const y0 = (H - d) / 2;
+  const x0 = area.x + (areaW - l) / 2;
+  const y0 = area.y + (areaH - d) / 2;
   const t = drawnThickness(thickness, fit.scale, 4, 20);
   const shapes: Shape[] = [
     { type: 'rect', x: x0, y: y0, width: l, height: t.px, fill: 'body', stroke: 'ink' },
@@ -536,9 +549,9 @@ function cylinder(
     {
       type: 'line',
       x1: x0 - 10,
-      y1: H / 2,
+      y1: y0 + d / 2,
       x2: x0 + l + 10,
-      y2: H / 2,
+      y2: y0 + d / 2,
       stroke: 'muted',
       pattern: 'centre',
     },
@@ -547,11 +560,11 @@ function cylinder(
       y0 + d,
       x0 + l,
       y0 + d,
-      -18,
+      ring ? 34 : 18,
       `${ring ? 'L between rings' : 'L'} ${show(length, 'm', system)}`,
       box,
     ),
-    ...dimension(x0, y0, x0, y0 + d, 18, `D ${show(diameter, 'm', system)}`, box),
+    ...dimension(x0, y0, x0, y0 + d, 18, dText, box),
   ];
   if (ring) {
     // A ring at each end of the length, standing out from the shell (not to scale when small).
@@ -602,8 +615,9 @@ function stiffenedWall(
 ): Sketch {
   const box = { width: W, height: H };
   // Front view: three bays, stiffeners at their middles' boundaries.
-  const left = 70;
-  const frontWidth = 190;
+  const spanText = `L ${show(span, 'm', system)}`;
+  const left = Math.max(70, textWidth(spanText, 'label') + 40);
+  const frontWidth = 260 - left;
   const frontHeight = H - 86;
   const fit = fitToBox(3 * spacing, span, frontWidth, frontHeight, 0);
   const w = 3 * spacing * fit.scale;
@@ -655,7 +669,7 @@ function stiffenedWall(
   const xs2 = x0 + 1.5 * spacing * fit.scale;
   shapes.push(
     ...dimension(xs1, y0 + h, xs2, y0 + h, 22, `s ${show(spacing, 'm', system)}`, box),
-    ...dimension(x0, y0, x0, y0 + h, 22, `L ${show(span, 'm', system)}`, box),
+    ...dimension(x0, y0, x0, y0 + h, 22, spanText, box),
     label(x0 + w / 2, 12, 'stiffeners (front view)', box, { size: 'note', role: 'muted' }),
   );
 
@@ -769,14 +783,23 @@ function head(
   const profile = headProfile(shape, diameter, crownRadius, knuckleRadius);
   const depth = Math.max(...profile.map((p) => p.y));
   const fullSphere = shape === 'sphere';
-  const fit = fitToBox(diameter, fullSphere ? diameter : depth + diameter * 0.12, W, H, 40);
+  const radii = shape === 'torispherical' && crownRadius && knuckleRadius;
+  const tangentText = 'tangent line';
+  // Room above for the thickness label, below for the skirt, the diameter and (torispherical)
+  // the radii, at the sides for the tangent-line label.
+  const side = fullSphere ? 40 : textWidth(tangentText, 'note') + 20;
+  const top = 28;
+  const bottom = fullSphere ? 28 : radii ? 70 : 56;
+  const areaH = H - top - bottom;
+  const fit = fitToBox(diameter, fullSphere ? diameter : depth, W - 2 * side, areaH, 0);
   const cx = W / 2;
-  const base = fullSphere ? H / 2 : H - 50;
+  const base = fullSphere ? top + areaH / 2 : top + (areaH + depth * fit.scale) / 2;
   const at = (p: { x: number; y: number }, mirror = false) => ({
     x: cx + p.x * fit.scale,
     y: mirror ? base + p.y * fit.scale : base - p.y * fit.scale,
   });
   const d = diameter * fit.scale;
+  const apex = base - depth * fit.scale;
   const t = drawnThickness(thickness, fit.scale, 3, 14);
   const points = profile.map((p) => at(p));
   const shapes: Shape[] = [
@@ -804,7 +827,8 @@ function head(
         stroke: 'muted',
         pattern: 'dash',
       },
-      label(cx + d / 2 + 14, base - 4, 'tangent line', box, {
+      // Below the line's end, outside the skirt: clear of the wall.
+      label(cx + d / 2 + 6, base + 12, tangentText, box, {
         anchor: 'start',
         size: 'note',
         role: 'muted',
@@ -821,63 +845,45 @@ function head(
       `D ${show(diameter, 'm', system)}`,
       box,
     ),
-    label(cx, base - depth * fit.scale - 8, `t ${show(thickness, 'm', system)}`, box),
+    // Above the crown, clear of the wall drawn up to 14 units thick.
+    label(cx, apex - 10, `t ${show(thickness, 'm', system)}`, box),
   );
-  if (shape === 'torispherical' && crownRadius && knuckleRadius) {
-    // Crown radius from its centre on the axis to the crown; knuckle radius from its centre to the knuckle.
+  if (radii) {
+    // The radii are marked L and r on the drawing, and named with their values below it: a
+    // shallow head has no room for the words inside, and its crown centre lies far below.
     const R = diameter / 2;
     const kx = R - knuckleRadius;
     const dist = crownRadius - knuckleRadius;
     const cyCrown = -Math.sqrt(Math.max(dist * dist - kx * kx, 0));
-    const crownCentre = at({ x: 0, y: cyCrown });
     const beta = Math.atan2(-cyCrown, kx);
     const knuckleCentre = at({ x: kx, y: 0 });
+    // One line under the diameter's.
+    const legendY = Math.min(H - 4, base + 58);
     const knucklePoint = at({
       x: kx + knuckleRadius * Math.cos(beta / 2),
       y: knuckleRadius * Math.sin(beta / 2),
     });
-    // The crown radius to a point on the crown at 75° (between the knuckle and the axis), drawn
-    // from where its centre line enters the sketch (the centre lies far below the tangent line).
-    const angle = Math.max(beta, (75 * Math.PI) / 180);
-    const onCrown = at({
-      x: -crownRadius * Math.cos(angle),
-      y: cyCrown + crownRadius * Math.sin(angle),
-    });
-    const along = (H - 4 - crownCentre.y) / (onCrown.y - crownCentre.y);
-    const entry = {
-      x: crownCentre.x + (onCrown.x - crownCentre.x) * Math.max(0, along),
-      y: crownCentre.y + (onCrown.y - crownCentre.y) * Math.max(0, along),
-    };
     shapes.push(
-      ...arrow(entry.x, entry.y, onCrown.x, onCrown.y, 'muted'),
-      label(
-        onCrown.x - 8,
-        (entry.y + onCrown.y) / 2,
-        `crown radius ${show(crownRadius, 'm', system)}`,
-        box,
-        {
-          anchor: 'end',
-          size: 'note',
-        },
-      ),
+      // The crown radius on the axis, from below the tangent line (its centre lies further down).
+      ...arrow(cx, base + 16, cx, apex, 'muted'),
+      label(cx + 5, Math.min(apex + 16, base - 4), 'L', box, { anchor: 'start', size: 'note' }),
       ...arrow(knuckleCentre.x, knuckleCentre.y, knucklePoint.x, knucklePoint.y, 'muted'),
-      label(
-        knucklePoint.x + 6,
-        knucklePoint.y - 10,
-        `knuckle radius ${show(knuckleRadius, 'm', system)}`,
-        box,
-        {
-          anchor: 'start',
-          size: 'note',
-        },
-      ),
+      label(knuckleCentre.x - 4, base + 12, 'r', box, { anchor: 'end', size: 'note' }),
+      label(4, legendY, `L: crown radius ${show(crownRadius, 'm', system)}`, box, {
+        anchor: 'start',
+        size: 'note',
+      }),
+      label(W - 4, legendY, `r: knuckle radius ${show(knuckleRadius, 'm', system)}`, box, {
+        anchor: 'end',
+        size: 'note',
+      }),
     );
   }
   return {
     width: W,
     height: H,
     title: `${HEAD_NAMES[shape]}, diameter ${show(diameter, 'm', system)}, thickness ${show(thickness, 'm', system)}${
-      shape === 'torispherical' && crownRadius && knuckleRadius
+      radii
         ? `, crown radius ${show(crownRadius, 'm', system)}, knuckle radius ${show(knuckleRadius, 'm', system)}`
         : ''
     }.`,
@@ -1009,15 +1015,15 @@ function openingSection(o: OpeningDrawing, system: UnitSystem): Sketch {
       });
     }
   }
-  shapes.push({
-    type: 'line',
-    x1: cx,
-    y1: top - rise - 8,
-    x2: cx,
-    y2: bottom + drop + 14,
-    stroke: 'muted',
-    pattern: 'centre',
-  });
+  // The axis, broken where the bore's dimension writes its value across it.
+  const boreLabelY = top - rise + 14 + 12;
+  for (const [y1, y2] of [
+    [top - rise - 8, boreLabelY - 12],
+    [boreLabelY + 5, bottom + drop + 14],
+  ] as const) {
+    if (y2 > y1)
+      shapes.push({ type: 'line', x1: cx, y1, x2: cx, y2, stroke: 'muted', pattern: 'centre' });
+  }
   // The reinforcement zone.
   const zx = o.limits.parallel * scale;
   const zTop = top - o.limits.outward * normal;
@@ -1043,15 +1049,24 @@ function openingSection(o: OpeningDrawing, system: UnitSystem): Sketch {
       `X ${show(o.limits.parallel, 'm', system)}`,
       box,
     ),
-    ...dimension(
-      cx + zx,
-      zTop,
-      cx + zx,
-      top,
-      -14,
-      `h_o ${show(o.limits.outward, 'm', system)}`,
-      box,
-    ),
+    ...(top - zTop >= 30
+      ? dimension(
+          cx + zx,
+          zTop,
+          cx + zx,
+          top,
+          -14,
+          `h_o ${show(o.limits.outward, 'm', system)}`,
+          box,
+        )
+      : [
+          ...dimension(cx + zx, zTop, cx + zx, top, -14, '', box).filter(
+            (sh) => sh.type !== 'text',
+          ),
+          label(cx + zx + 4, zTop - 18, `h_o ${show(o.limits.outward, 'm', system)}`, box, {
+            anchor: 'start',
+          }),
+        ]),
     ...dimension(
       cx - bore,
       top - rise,
@@ -1071,7 +1086,16 @@ function openingSection(o: OpeningDrawing, system: UnitSystem): Sketch {
       role: 'accent',
     }),
     label(16, bottom + 16, 'inside', box, { anchor: 'start', size: 'note', role: 'muted' }),
-    label(16, top - 24, 'outside', box, { anchor: 'start', size: 'note', role: 'muted' }),
+  );
+  const padText = o.pad
+    ? `pad ${show(o.pad.outsideDiameter, 'm', system)} × ${show(o.pad.thickness, 'm', system)}`
+    : '';
+  // The word "outside" above the wall, lifted over the pad's label where that reaches it.
+  const padReach = o.pad ? cx - outer - 6 - textWidth(padText, 'note') : W;
+  const outsideY =
+    padReach < 16 + textWidth('outside', 'note') + 8 ? Math.min(zTop, padTop) - 22 : top - 24;
+  shapes.push(
+    label(16, outsideY, 'outside', box, { anchor: 'start', size: 'note', role: 'muted' }),
   );
   if (o.limits.inward > 0) {
     shapes.push(
@@ -1089,13 +1113,10 @@ function openingSection(o: OpeningDrawing, system: UnitSystem): Sketch {
   if (o.pad) {
     shapes.push(
       // Above the zone, left of the nozzle: clear of the zone's lines and of the wall's label.
-      label(
-        cx - outer - 6,
-        Math.min(zTop, padTop) - 6,
-        `pad ${show(o.pad.outsideDiameter, 'm', system)} × ${show(o.pad.thickness, 'm', system)}`,
-        box,
-        { anchor: 'end', size: 'note' },
-      ),
+      label(cx - outer - 6, Math.min(zTop, padTop) - 6, padText, box, {
+        anchor: 'end',
+        size: 'note',
+      }),
     );
   }
   const host = OPENING_HOSTS[o.shellShape] ?? 'shell';
@@ -1114,13 +1135,191 @@ function openingSection(o: OpeningDrawing, system: UnitSystem): Sketch {
   };
 }
 
+/** The governing (else first) load case of a report. */
+function governingCase(report: Report): Report['cases'][number] | undefined {
+  return report.cases[report.governing?.caseIndex ?? 0] ?? report.cases[0];
+}
+
+/** Short arrows across a closed outline, outwards (inside higher) or inwards (outside higher). */
+function wallArrows(
+  points: readonly { x: number; y: number; nx: number; ny: number }[],
+  outwards: boolean,
+): Shape[] {
+  return points.flatMap((p) =>
+    outwards
+      ? arrow(p.x - p.nx * 14, p.y - p.ny * 14, p.x + p.nx * 8, p.y + p.ny * 8, 'accent')
+      : arrow(p.x + p.nx * 22, p.y + p.ny * 22, p.x + p.nx * 2, p.y + p.ny * 2, 'accent'),
+  );
+}
+
+/**
+ * A vessel holding gas: a capsule (not to scale: the method takes a volume,
+ * not a shape), its volume and the pressures of the governing case, with
+ * arrows on the side of the higher pressure.
+ */
+function vessel(report: Report, volume: number, system: UnitSystem): Sketch {
+  const height = 200;
+  const box = { width: W, height };
+  const c = governingCase(report);
+  const cx = W / 2;
+  const cy = 92;
+  const halfLength = 110;
+  const r = 48;
+  const outline: { x: number; y: number }[] = [];
+  for (let i = 0; i <= 24; i++) {
+    const a = -Math.PI / 2 + (Math.PI * i) / 24;
+    outline.push({ x: cx + halfLength + r * Math.cos(a), y: cy + r * Math.sin(a) });
+  }
+  for (let i = 0; i <= 24; i++) {
+    const a = Math.PI / 2 + (Math.PI * i) / 24;
+    outline.push({ x: cx - halfLength + r * Math.cos(a), y: cy + r * Math.sin(a) });
+  }
+  const shapes: Shape[] = [
+    { type: 'path', points: outline, closed: true, fill: 'body', stroke: 'ink', strokeWidth: 1.4 },
+    label(cx, cy - 6, `V ${show(volume, 'm3', system)}`, box),
+  ];
+  if (c) {
+    shapes.push(
+      label(cx, cy + 14, `inside ${show(c.loadCase.internal, 'Pa', system)} (abs)`, box, {
+        size: 'note',
+      }),
+    );
+    const direction = c.loadCase.direction;
+    if (direction !== 'balanced') {
+      // On the straight walls, top and bottom, and at both ends.
+      const at = [-70, 0, 70].flatMap((dx) => [
+        { x: cx + dx, y: cy - r, nx: 0, ny: -1 },
+        { x: cx + dx, y: cy + r, nx: 0, ny: 1 },
+      ]);
+      at.push(
+        { x: cx - halfLength - r, y: cy, nx: -1, ny: 0 },
+        { x: cx + halfLength + r, y: cy, nx: 1, ny: 0 },
+      );
+      shapes.push(...wallArrows(at, direction === 'internal-over'));
+    }
+    shapes.push(
+      label(
+        cx,
+        cy + r + 40,
+        `outside ${show(c.loadCase.external, 'Pa', system)} (abs)${
+          direction === 'balanced'
+            ? ''
+            : direction === 'internal-over'
+              ? ': higher pressure inside'
+              : ': higher pressure outside'
+        }`,
+        box,
+        { size: 'note', role: direction === 'balanced' ? 'muted' : 'accent' },
+      ),
+      label(cx, height - 4, `load case: ${c.loadCase.name}`, box, { size: 'note', role: 'muted' }),
+    );
+  }
+  return {
+    width: W,
+    height,
+    title: `Vessel holding ${show(volume, 'm3', system)} of gas${
+      c
+        ? `, load case ${c.loadCase.name}: inside ${show(c.loadCase.internal, 'Pa', system)} (abs), outside ${show(c.loadCase.external, 'Pa', system)} (abs)`
+        : ''
+    }.`,
+    note: '(shape not to scale)',
+    shapes,
+  };
+}
+
+/** A chamber pumped down through a line by a pump, with what the method takes of each. */
+function pumpDown(
+  volume: number,
+  speed: number,
+  conductance: number | undefined,
+  start: number,
+  target: number,
+  system: UnitSystem,
+): Sketch {
+  const height = 170;
+  const box = { width: W, height };
+  const chamber = { x: 24, y: 30, w: 120, h: 90 };
+  const pump = { cx: W - 64, cy: 75, r: 26 };
+  const lineY = pump.cy;
+  const lineFrom = chamber.x + chamber.w;
+  const lineTo = pump.cx - pump.r;
+  const shapes: Shape[] = [
+    {
+      type: 'rect',
+      x: chamber.x,
+      y: chamber.y,
+      width: chamber.w,
+      height: chamber.h,
+      fill: 'body',
+      stroke: 'ink',
+      strokeWidth: 1.4,
+    },
+    label(chamber.x + chamber.w / 2, chamber.y + 34, 'chamber', box, {
+      size: 'note',
+      role: 'muted',
+    }),
+    label(chamber.x + chamber.w / 2, chamber.y + 54, `V ${show(volume, 'm3', system)}`, box),
+    // The line: two walls, the flow along it towards the pump.
+    { type: 'line', x1: lineFrom, y1: lineY - 5, x2: lineTo, y2: lineY - 5, stroke: 'ink' },
+    { type: 'line', x1: lineFrom, y1: lineY + 5, x2: lineTo, y2: lineY + 5, stroke: 'ink' },
+    ...arrow(lineFrom + 14, lineY, lineTo - 10, lineY, 'accent'),
+    label(
+      (lineFrom + lineTo) / 2,
+      lineY - 14,
+      conductance !== undefined ? `line C ${show(conductance, 'm3/s', system)}` : 'line',
+      box,
+      { size: 'note' },
+    ),
+    {
+      type: 'circle',
+      cx: pump.cx,
+      cy: pump.cy,
+      r: pump.r,
+      fill: 'support',
+      stroke: 'ink',
+      strokeWidth: 1.4,
+    },
+    // The pump's usual symbol: a circle with a wedge towards its outlet.
+    {
+      type: 'path',
+      points: [
+        { x: pump.cx - pump.r * 0.6, y: pump.cy - pump.r * 0.8 },
+        { x: pump.cx + pump.r * 0.9, y: pump.cy },
+        { x: pump.cx - pump.r * 0.6, y: pump.cy + pump.r * 0.8 },
+      ],
+      fill: 'none',
+      stroke: 'ink',
+    },
+    label(pump.cx, pump.cy + pump.r + 16, `pump S ${show(speed, 'm3/s', system)}`, box, {
+      size: 'note',
+    }),
+    label(
+      W / 2,
+      height - 6,
+      `from ${show(start, 'Pa', system)} to ${show(target, 'Pa', system)} (abs)`,
+      box,
+      { size: 'note', role: 'accent' },
+    ),
+  ];
+  return {
+    width: W,
+    height,
+    title: `Chamber of ${show(volume, 'm3', system)} pumped${
+      conductance !== undefined ? ` through a line of ${show(conductance, 'm3/s', system)}` : ''
+    } by a pump of ${show(speed, 'm3/s', system)}, from ${show(start, 'Pa', system)} to ${show(target, 'Pa', system)} (abs).`,
+    note: null,
+    shapes,
+  };
+}
+
 function stepValue(report: Report, id: string): number | undefined {
   return num(report.steps.find((s) => s.id === id)?.value);
 }
 
 /**
  * The dimensioned sketch of a report's component, drawn from its normalised
- * (SI) inputs, in the reader's units; null for a kind with nothing to draw.
+ * (SI) inputs, in the reader's units; null for a kind with nothing to draw
+ * (or inputs that give nothing to draw by).
  * The web app and the sheet both draw this one sketch.
  */
 export function sketchOf(report: Report, system: UnitSystem): Sketch | null {
@@ -1255,6 +1454,18 @@ export function sketchOf(report: Report, system: UnitSystem): Sketch | null {
         },
         system,
       );
+    }
+    case 'stored-energy': {
+      const v = num(inputs['volume']);
+      return v ? vessel(report, v, system) : null;
+    }
+    case 'pump-down': {
+      const v = num(inputs['volume']);
+      const speed = num(inputs['pumpingSpeed']);
+      const start = num(inputs['startPressure']);
+      const target = num(inputs['targetPressure']);
+      if (!v || !speed || !start || !target) return null;
+      return pumpDown(v, speed, num(inputs['conductance']), start, target, system);
     }
     default:
       return null;

@@ -3,6 +3,7 @@ import { useDeferredValue, useMemo, type ReactNode } from 'react';
 import type { UnitSystem } from '@hoopline/contract';
 import { VerdictBadge } from '../../components/badges';
 import { ScreeningCaution } from '../../components/screening-caution';
+import { ScrollArea } from '../../components/scroll-area';
 import { UtilisationBar } from '../../components/utilisation-bar';
 import {
   presentReport,
@@ -12,7 +13,7 @@ import {
 } from '@hoopline/present';
 import { BucklingModeShape } from './buckling-mode';
 import { ComponentSketch, lobeCount } from './sketches';
-import { sweepForPlot } from './sweep';
+import { currentOf, sweepForPlot } from './sweep';
 import { SweepPlot } from './sweep-plot';
 import { TrailTable } from './trail-table';
 
@@ -130,7 +131,8 @@ export function CautionsList({ report }: { report: Report }) {
 export function ChecksByCase({ report, system }: { report: Report; system: UnitSystem }) {
   const shown = usePresented(report, system);
   return (
-    <section aria-labelledby="checks-title" className="flex flex-col gap-3">
+    // min-w-0: a grid item (the workbench's, the review page's) may shrink below its table's width; the table scrolls.
+    <section aria-labelledby="checks-title" className="flex min-w-0 flex-col gap-3">
       <h3 id="checks-title" className="text-sm font-semibold">
         Checks by load case
       </h3>
@@ -158,47 +160,49 @@ export function ChecksByCase({ report, system }: { report: Report; system: UnitS
             Inside {c.inside} (abs), outside {c.outside} (abs): {c.description}
           </p>
           {c.checks.length > 0 ? (
-            <table className="mt-1 w-full text-sm">
-              <caption className="sr-only">Checks for {c.name}</caption>
-              <thead>
-                <tr className="text-left text-xs text-muted">
-                  <th scope="col" className="px-3 py-1 font-medium">
-                    Check
-                  </th>
-                  <th scope="col" className="px-3 py-1 text-right font-medium">
-                    Demand
-                  </th>
-                  <th scope="col" className="px-3 py-1 text-right font-medium">
-                    Capacity
-                  </th>
-                  <th scope="col" className="px-3 py-1 font-medium">
-                    Utilisation
-                  </th>
-                </tr>
-              </thead>
-              <tbody>
-                {c.checks.map((k) => (
-                  <tr
-                    key={k.id}
-                    className={`border-t border-line ${k.governing ? 'bg-accent-soft/50' : ''}`}
-                  >
-                    <th scope="row" className="px-3 py-1.5 text-left font-normal">
-                      {k.label}
-                      <span className="block font-mono text-xs text-muted">{k.basis}</span>
+            <ScrollArea label={`Checks for ${c.name}`} framed={false} className="mt-1">
+              <table className="w-full text-sm">
+                <caption className="sr-only">Checks for {c.name}</caption>
+                <thead>
+                  <tr className="text-left text-xs text-muted">
+                    <th scope="col" className="px-3 py-1 font-medium">
+                      Check
                     </th>
-                    <td className="num px-3 py-1.5 text-right whitespace-nowrap">{k.demand}</td>
-                    <td className="num px-3 py-1.5 text-right whitespace-nowrap">{k.capacity}</td>
-                    <td className="px-3 py-1.5">
-                      <UtilisationBar
-                        utilisation={k.utilisationRatio}
-                        pass={k.pass}
-                        label={`${k.label}, ${c.name}`}
-                      />
-                    </td>
+                    <th scope="col" className="px-3 py-1 text-right font-medium">
+                      Demand
+                    </th>
+                    <th scope="col" className="px-3 py-1 text-right font-medium">
+                      Capacity
+                    </th>
+                    <th scope="col" className="px-3 py-1 font-medium">
+                      Utilisation
+                    </th>
                   </tr>
-                ))}
-              </tbody>
-            </table>
+                </thead>
+                <tbody>
+                  {c.checks.map((k) => (
+                    <tr
+                      key={k.id}
+                      className={`border-t border-line ${k.governing ? 'bg-accent-soft/50' : ''}`}
+                    >
+                      <th scope="row" className="min-w-[9rem] px-3 py-1.5 text-left font-normal">
+                        {k.label}
+                        <span className="block font-mono text-xs text-muted">{k.basis}</span>
+                      </th>
+                      <td className="num px-3 py-1.5 text-right whitespace-nowrap">{k.demand}</td>
+                      <td className="num px-3 py-1.5 text-right whitespace-nowrap">{k.capacity}</td>
+                      <td className="px-3 py-1.5">
+                        <UtilisationBar
+                          utilisation={k.utilisationRatio}
+                          pass={k.pass}
+                          label={`${k.label}, ${c.name}`}
+                        />
+                      </td>
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+            </ScrollArea>
           ) : (
             <p className="px-3 py-1.5 text-xs text-muted">No checks in this load case.</p>
           )}
@@ -230,10 +234,7 @@ export function ReportPictures({
 }) {
   const deferredInput = useDeferredValue(rawInput);
   const sweep = useMemo(
-    () =>
-      deferredInput === undefined
-        ? null
-        : sweepForPlot(deferredInput, report.governing?.utilisation ?? null),
+    () => (deferredInput === undefined ? null : sweepForPlot(deferredInput, currentOf(report))),
     [deferredInput, report],
   );
   // A stiffened wall has a spacing to sweep too (null for every other kind).
@@ -241,14 +242,14 @@ export function ReportPictures({
     () =>
       deferredInput === undefined
         ? null
-        : sweepForPlot(deferredInput, report.governing?.utilisation ?? null, {}, 'spacing'),
+        : sweepForPlot(deferredInput, currentOf(report), {}, 'spacing'),
     [deferredInput, report],
   );
   const lobes = lobeCount(report);
   // No heading over nothing: stored energy and pump-down have no sketch.
   const hasSketch = useMemo(() => sketchOf(report, system) !== null, [report, system]);
   return (
-    <div className="flex flex-col gap-4">
+    <div className="flex min-w-0 flex-col gap-4">
       {hasSketch ? (
         <section aria-labelledby="sketch-title">
           <h3 id="sketch-title" className="mb-1 text-sm font-semibold">
@@ -302,7 +303,7 @@ export function ReportView({
       <ReportSummary report={report} source={source} system={system} />
       <CautionsList report={report} />
       <WarningsList report={report} />
-      <div className="grid gap-4 xl:grid-cols-[minmax(0,1fr)_minmax(0,480px)]">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-4 xl:grid-cols-[minmax(0,1fr)_minmax(0,480px)]">
         <ChecksByCase report={report} system={system} />
         <ReportPictures
           report={report}

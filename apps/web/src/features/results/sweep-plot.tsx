@@ -7,7 +7,7 @@ import {
   printed as prettyUnit,
 } from '@hoopline/present';
 import { linearScale, niceCeil, niceTicks } from './chart-scale';
-import type { PlotSweep } from './sweep';
+import { curvePieces, type PlotSweep } from './sweep';
 
 const W = 560;
 const H = 250;
@@ -34,20 +34,15 @@ export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSys
   const x = linearScale([toLen(sweep.from), toLen(sweep.to)], [M.left, W - M.right]);
   const y = linearScale([0, yTop], [H - M.bottom, M.top]);
   const yOf = (u: number) => y(Math.min(u * 100, yTop));
-  // Two paths: intervals with a flagged end go into the dashed one (sweep.ts, outsideRuns).
-  const at = (p: (typeof pts)[number]) =>
+  // Two paths, split where a stretch outside validity begins or ends (sweep.ts, curvePieces).
+  const at = (p: { value: number; utilisation: number }) =>
     `${x(toLen(p.value)).toFixed(1)},${yOf(p.utilisation).toFixed(1)}`;
   let inside = '';
   let outside = '';
-  for (let i = 0; i + 1 < pts.length; i++) {
-    const a = pts[i]!;
-    const b = pts[i + 1]!;
-    const flagged = a.outsideValidity || b.outsideValidity;
-    const previousFlagged = i > 0 && (pts[i - 1]!.outsideValidity || a.outsideValidity);
-    const continues = i > 0 && previousFlagged === flagged;
-    const segment = `${continues ? '' : `M${at(a)} `}L${at(b)} `;
-    if (flagged) outside += segment;
-    else inside += segment;
+  for (const piece of curvePieces(sweep)) {
+    const d = piece.points.map((p, i) => `${i === 0 ? 'M' : 'L'}${at(p)}`).join(' ') + ' ';
+    if (piece.outside) outside += d;
+    else inside += d;
   }
   const runs = sweep.outsideValidity;
   const xTicks = niceTicks(toLen(sweep.from), toLen(sweep.to), 6);
@@ -57,16 +52,34 @@ export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSys
   const lenText = (m: number) => `${formatSignificant(toLen(m))} ${prettyUnit(lengthUnit)}`;
   const spacing = sweep.parameter === 'spacing';
   const what = spacing ? 'spacing' : 'thickness';
+  const limitOutside = typeof min === 'number' && sweep.limitOutsideValidity;
+  const rangeText = (r: (typeof runs)[number]) =>
+    r.from <= sweep.from
+      ? `up to ${lenText(r.to)}`
+      : r.to >= sweep.to
+        ? `from ${lenText(r.from)}`
+        : `${lenText(r.from)} to ${lenText(r.to)}`;
+  // The current design's validity is the report's (its warnings), by the rule the sweep uses.
+  const currentValidity =
+    current.outsideValidity === null || runs.length === 0
+      ? ''
+      : current.outsideValidity
+        ? ` The current ${what} is outside the validity range: see the validity warnings.`
+        : ` The current ${what} is inside the validity range.`;
+  const outsideWords = limitOutside
+    ? ", outside the method's validity range: no basis for a decision."
+    : '.';
 
   const summary =
     `Current ${what} ${lenText(current.value)}` +
     (current.utilisation !== null
-      ? ` at ${percent(current.utilisation)} governing utilisation. `
+      ? ` at ${percent(current.utilisation)} governing utilisation` +
+        (current.outsideValidity ? ', outside the validity range. ' : '. ')
       : '. ') +
     (typeof min === 'number'
       ? spacing
-        ? `Largest spacing that passes: ${lenText(min)}.`
-        : `Smallest thickness that passes: ${lenText(min)}.`
+        ? `Largest spacing that passes: ${lenText(min)}${outsideWords}`
+        : `Smallest thickness that passes: ${lenText(min)}${outsideWords}`
       : min === 'all-pass'
         ? spacing
           ? `Every spacing up to ${lenText(sweep.to)} passes.`
@@ -76,8 +89,8 @@ export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSys
           : `No thickness up to ${lenText(sweep.to)} passes.`) +
     (runs.length > 0
       ? ` Outside the method's validity range (dashed, shaded): ${runs
-          .map((r) => `${lenText(r.from)} to ${lenText(r.to)}`)
-          .join(' and ')}; results there are not reliable.`
+          .map(rangeText)
+          .join(' and ')}; results there are not reliable.${currentValidity}`
       : '');
 
   return (
@@ -177,15 +190,19 @@ export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSys
               x2={x(toLen(min))}
               y1={M.top}
               y2={H - M.bottom}
-              className="stroke-pass"
+              className={limitOutside ? 'stroke-warn' : 'stroke-pass'}
               strokeWidth={1.2}
+              {...(limitOutside ? { strokeDasharray: '3 2' } : {})}
             />
             <text
-              x={x(toLen(min)) + 4}
+              data-testid="sweep-minimum"
+              x={x(toLen(min)) + (x(toLen(min)) > W - 150 ? -4 : 4)}
               y={M.top + 10}
-              className="fill-pass text-[10px] font-medium"
+              textAnchor={x(toLen(min)) > W - 150 ? 'end' : 'start'}
+              className={`${limitOutside ? 'fill-warn' : 'fill-pass'} text-[10px] font-medium`}
             >
               {spacing ? 'max' : 'min'} {lenText(min)}
+              {limitOutside ? ', outside validity' : ''}
             </text>
           </g>
         ) : null}
@@ -207,11 +224,14 @@ export function SweepPlot({ sweep, system }: { sweep: PlotSweep; system: UnitSys
               strokeWidth={2}
             />
             <text
-              x={x(toLen(current.value)) + 7}
+              data-testid="sweep-current"
+              x={x(toLen(current.value)) + (x(toLen(current.value)) > W - 190 ? -7 : 7)}
               y={yOf(current.utilisation) - 7}
-              className="fill-ink text-[10px] font-medium"
+              textAnchor={x(toLen(current.value)) > W - 190 ? 'end' : 'start'}
+              className={`${current.outsideValidity ? 'fill-warn' : 'fill-ink'} text-[10px] font-medium`}
             >
               current {lenText(current.value)}, {percent(current.utilisation)}
+              {current.outsideValidity ? ', outside validity' : ''}
             </text>
           </g>
         ) : null}

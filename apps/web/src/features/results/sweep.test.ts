@@ -1,7 +1,7 @@
 import { findMaterial, screen as screenComponent } from '@hoopline/calc';
 import { describe, expect, it } from 'vitest';
 import { niceCeil, niceTicks } from './chart-scale';
-import { outsideRuns, sweepForPlot } from './sweep';
+import { currentOf, curvePieces, sweepForPlot } from './sweep';
 
 // A 500 mm clamped stainless-304 door at full vacuum (PRODUCT.md's drying cabinet), stress check only.
 const door = {
@@ -29,9 +29,10 @@ describe('sweepForPlot (the engine’s sweepThickness, shaped for the chart)', (
 
   it('marks the current design with the engine’s own governing utilisation', () => {
     const report = screenComponent(door);
-    const sweep = sweepForPlot(door, report.governing!.utilisation)!;
+    const sweep = sweepForPlot(door, currentOf(report))!;
     expect(sweep.current.value).toBeCloseTo(0.012, 12);
     expect(sweep.current.utilisation).toBe(report.governing!.utilisation);
+    expect(sweep.current.outsideValidity).toBe(false);
     // The engine's own point at the current thickness agrees with its report.
     const at = sweepForPlot(door, null, { from: 0.006, to: 0.012, points: 2 })!;
     expect(at.points[1]!.utilisation).toBeCloseTo(report.governing!.utilisation, 12);
@@ -127,31 +128,36 @@ describe('the sweep outside the method’s validity range', () => {
       const expected = p.value < thinnestSmallDeflection || p.value > thickestThinPlate;
       expect(p.outsideValidity, `t = ${p.value} m`).toBe(expected);
     }
-    // Two stretches, one at each end, each reaching to the first point known to be inside.
+    // Two stretches, one at each end, each ending at its limit (the engine's, to 1e-10).
     expect(sweep.outsideValidity).toHaveLength(2);
     const [thin, thick] = sweep.outsideValidity;
     expect(thin!.from).toBe(sweep.from);
-    expect(thin!.to).toBeGreaterThan(thinnestSmallDeflection);
-    expect(sweep.points.find((p) => p.value === thin!.to)!.outsideValidity).toBe(false);
+    expect(Math.abs(thin!.to / thinnestSmallDeflection - 1)).toBeLessThan(1e-8);
+    expect(thin!.to).toBeLessThan(thinnestSmallDeflection);
+    expect(thin!.codes).toEqual(['large-deflection']);
     expect(thick!.to).toBe(sweep.to);
-    expect(thick!.from).toBeLessThan(thickestThinPlate);
+    expect(Math.abs(thick!.from / thickestThinPlate - 1)).toBeLessThan(1e-8);
+    expect(thick!.codes).toEqual(['thick-plate']);
   });
 
-  it('merges neighbouring flagged intervals and leaves a fully valid sweep without any', () => {
-    const pt = (value: number, outsideValidity: boolean) => ({
-      value,
-      utilisation: 1,
-      pass: true,
-      outsideValidity,
-    });
-    expect(
-      outsideRuns([pt(1, true), pt(2, true), pt(3, false), pt(4, false), pt(5, true)]),
-    ).toEqual([
-      { from: 1, to: 3 },
-      { from: 4, to: 5 },
-    ]);
-    expect(outsideRuns([pt(1, false), pt(2, true), pt(3, false)])).toEqual([{ from: 1, to: 3 }]);
-    expect(outsideRuns([pt(1, false), pt(2, false)])).toEqual([]);
+  it('splits the curve at the limits, so no piece is half inside and half outside', () => {
+    const sweep = sweepForPlot(door, null, { from: 0.002, to: 0.1, points: 50 })!;
+    const pieces = curvePieces(sweep);
+    expect(pieces.map((p) => p.outside)).toEqual([true, false, true]);
+    const [thin, thick] = sweep.outsideValidity;
+    expect(pieces[0]!.points.at(-1)!.value).toBe(thin!.to);
+    expect(pieces[1]!.points[0]!.value).toBe(thin!.to);
+    expect(pieces[1]!.points.at(-1)!.value).toBe(thick!.from);
+    expect(pieces[2]!.points[0]!.value).toBe(thick!.from);
+    // Every sampled point is in a piece of its own kind (a point on a limit ends one piece and starts the next).
+    for (const p of sweep.points) {
+      const holder = pieces.some(
+        (piece) =>
+          piece.outside === p.outsideValidity && piece.points.some((q) => q.value === p.value),
+      );
+      expect(holder, `t = ${p.value} m`).toBe(true);
+    }
     expect(sweepForPlot(door, null, { from: 0.012, to: 0.03 })!.outsideValidity).toEqual([]);
+    expect(curvePieces(sweepForPlot(door, null, { from: 0.012, to: 0.03 })!)).toHaveLength(1);
   });
 });

@@ -11,6 +11,7 @@ import {
 } from '../results/report-view';
 import { TrailTable } from '../results/trail-table';
 import { presentInputs, type UnitSystem } from '@hoopline/present';
+import { ScrollArea } from '../../components/scroll-area';
 
 export function RevisionMeta({ revision }: { revision: Revision }) {
   return (
@@ -67,33 +68,35 @@ export function SignOffHistory({ revision }: { revision: Revision }) {
 export function InputsTable({ inputs, system }: { inputs: unknown; system: UnitSystem }) {
   const rows = presentInputs(inputs, system);
   return (
-    <table className="w-full text-sm">
-      <caption className="sr-only">Inputs as entered</caption>
-      <thead>
-        <tr className="text-left text-xs text-muted">
-          <th scope="col" className="py-1 pr-3 font-medium">
-            Field
-          </th>
-          <th scope="col" className="py-1 pr-3 font-medium">
-            As entered
-          </th>
-          <th scope="col" className="py-1 font-medium">
-            {system === 'us' ? 'US customary' : 'SI'}
-          </th>
-        </tr>
-      </thead>
-      <tbody>
-        {rows.map((row) => (
-          <tr key={row.path} className="border-b border-line align-top last:border-b-0">
-            <th scope="row" className="py-1 pr-3 text-left font-normal text-muted">
-              {row.label}
+    <ScrollArea label="Inputs as entered (table)" framed={false}>
+      <table className="w-full text-sm">
+        <caption className="sr-only">Inputs as entered</caption>
+        <thead>
+          <tr className="text-left text-xs text-muted">
+            <th scope="col" className="py-1 pr-3 font-medium">
+              Field
             </th>
-            <td className="num py-1 pr-3 font-mono text-xs">{row.asTyped}</td>
-            <td className="num py-1 font-mono text-xs">{row.inSystem}</td>
+            <th scope="col" className="py-1 pr-3 font-medium">
+              As entered
+            </th>
+            <th scope="col" className="py-1 font-medium">
+              {system === 'us' ? 'US customary' : 'SI'}
+            </th>
           </tr>
-        ))}
-      </tbody>
-    </table>
+        </thead>
+        <tbody>
+          {rows.map((row) => (
+            <tr key={row.path} className="border-b border-line align-top last:border-b-0">
+              <th scope="row" className="py-1 pr-3 text-left font-normal text-muted">
+                {row.label}
+              </th>
+              <td className="num py-1 pr-3 font-mono text-xs">{row.asTyped}</td>
+              <td className="num py-1 font-mono text-xs">{row.inSystem}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </ScrollArea>
   );
 }
 

@@ -386,7 +386,7 @@ function internalCaseTrail(
   const tCircumferential = ug27CircumferentialThickness(p, R, S, Ej);
   trail.step({
     id: 'ug27-thickness-circumferential',
-    label: 'Required thickness, circumferential stress (longitudinal joints)',
+    label: 'Thickness needed for hoop stress (longitudinal joints)',
     expression: 't_c = p·R/(S·E_j − 0.6·p)',
     substituted:
       tCircumferential === null
@@ -398,7 +398,7 @@ function internalCaseTrail(
   });
   const tLongitudinal = trail.step({
     id: 'ug27-thickness-longitudinal',
-    label: 'Required thickness, longitudinal stress (circumferential joints)',
+    label: 'Thickness needed for longitudinal stress (circumferential joints)',
     expression: 't_l = p·R/(2·S·E_j + 0.4·p)',
     substituted: `t_l = ${pText}·${RText}/(2·${seText} + 0.4·${pText})`,
     value: ug27LongitudinalThickness(p, R, S, Ej),
@@ -409,7 +409,7 @@ function internalCaseTrail(
   if (tCircumferential !== null) {
     const tRequired = trail.step({
       id: 'ug27-required-thickness',
-      label: 'Required thickness (governing of the two) plus corrosion allowance',
+      label: 'Thickness needed (the larger of the two) plus the corrosion allowance',
       expression: 't_req = max(t_c, t_l) + c',
       substituted: `t_req = max(${withUnit(tCircumferential, 'm')}, ${withUnit(tLongitudinal, 'm')}) + ${withUnit(allowance, 'm')}`,
       value: Math.max(tCircumferential, tLongitudinal) + allowance,
@@ -418,13 +418,13 @@ function internalCaseTrail(
     });
     trail.output(
       'required-thickness',
-      'Required thickness, UG-27 (with allowance)',
+      'Thickness needed for hoop and longitudinal stress (with allowance)',
       tRequired,
       'm',
     );
     trail.check({
       id: 'ug27-thickness',
-      label: 'Required thickness (UG-27) against the nominal thickness',
+      label: 'Thickness needed for hoop and longitudinal stress against the nominal thickness',
       demand: tRequired,
       capacity: input.thickness,
       unit: 'm',
@@ -444,7 +444,7 @@ function internalCaseTrail(
     capacity: SE,
     unit: 'Pa',
     basis:
-      'σ_θ,i <= S·E_j: the hoop stress acts across the longitudinal seams, so the joint efficiency applies as in UG-27',
+      'σ_θ,i <= S·E_j: the hoop stress acts across the longitudinal seams, so the joint efficiency applies',
   });
 
   trail.output('hoop-stress-thin', 'Hoop stress (thin wall)', hoopThin, 'Pa');
@@ -455,9 +455,19 @@ function internalCaseTrail(
     'Pa',
   );
   trail.output('lame-hoop-inner', 'Hoop stress at the bore (Lamé)', hoopInner, 'Pa');
-  trail.output('mawp', 'MAWP, UG-27', capacity.mawpCircumferential, 'Pa');
+  trail.output(
+    'mawp',
+    'Allowable pressure difference for hoop stress (screening)',
+    capacity.mawpCircumferential,
+    'Pa',
+  );
   // Each check reaches 1 at its own pressure (UG-27: the MAWP); the smallest is the allowable.
-  trail.output('allowable-pressure', 'Allowable pressure difference', capacity.allowable, 'Pa');
+  trail.output(
+    'allowable-pressure',
+    'Allowable pressure difference (screening)',
+    capacity.allowable,
+    'Pa',
+  );
 
   // UG-27 applicability (from memory, Hoopline method notes §e): circumferential p <= 0.385·S·E_j; the
   // longitudinal limit 1.25·S·E_j is the looser one, so the first warning covers both.
@@ -499,7 +509,7 @@ function externalCaseTrail(
   trail.output('critical-length', 'Critical length', summary.criticalLength, 'm');
   trail.output(
     'allowable-pressure',
-    'Allowable pressure difference',
+    'Allowable pressure difference (screening)',
     Math.min(summary.allowable, ringLimit),
     'Pa',
   );
@@ -566,7 +576,7 @@ function internalCapacity(
   const seText = `${withUnit(S, 'Pa')}·${formatNumber(jointEfficiency)}`;
   const mawpCircumferential = common.step({
     id: 'mawp-circumferential',
-    label: 'MAWP, circumferential stress (longitudinal joints)',
+    label: 'Pressure difference allowed by hoop stress (longitudinal joints)',
     expression: 'P_c = S·E_j·t/(R + 0.6·t)',
     substituted: `P_c = ${seText}·${withUnit(t, 'm')}/(${withUnit(R, 'm')} + 0.6·${withUnit(t, 'm')})`,
     value: ug27CircumferentialMawp(t, R, S, jointEfficiency),
@@ -576,7 +586,7 @@ function internalCapacity(
   const longitudinal = ug27LongitudinalMawp(t, R, S, jointEfficiency);
   const mawpLongitudinal = common.step({
     id: 'mawp-longitudinal',
-    label: 'MAWP, longitudinal stress (circumferential joints)',
+    label: 'Pressure difference allowed by longitudinal stress (circumferential joints)',
     expression: 'P_l = 2·S·E_j·t/(R − 0.4·t)',
     substituted:
       longitudinal === null
@@ -929,7 +939,7 @@ function ringSteps(
     common.step({
       id: 'ring-check',
       label: 'Stiffening rings (ASME VIII-1 UG-29)',
-      expression: 'I_s or I′_s against UG-29’s required',
+      expression: 'I_s or I′_s against the required one',
       substituted: why,
       value: null,
       unit: 'm^4',
@@ -966,7 +976,7 @@ export const cylindricalShell = defineMethod({
   name: 'Cylindrical shell',
   summary: 'Chamber or drum: internal pressure, buckling under vacuum, ring spacing.',
   description:
-    'Cylindrical shell (vessel, chamber, drum) for every load case: inside higher, thin-wall and Lamé stresses and the ASME VIII-1 UG-27 thickness and MAWP; outside higher (vacuum), elastic buckling (Bresse, von Mises with its lobe number, Windenburg–Trilling), plastic collapse, their interaction with a knock-down and a design factor, the critical length, the stiffening-ring spacing for a target thickness, and the rings’ moment of inertia against ASME VIII-1 UG-29 for a ring section. The length is the unsupported length between rings or heads; between dished heads add about 1/3 of each head depth (ASME UG-28, from memory).',
+    'Cylindrical shell (vessel, chamber, drum) for every load case: inside higher, thin-wall and Lamé stresses, the thickness needed for hoop and longitudinal stress and the pressure difference they allow (code-form formulas); outside higher (vacuum), elastic buckling (Bresse, von Mises with its lobe number, Windenburg–Trilling), plastic collapse, their interaction with a knock-down and a design factor, the critical length, the stiffening-ring spacing for a target thickness, and the rings’ moment of inertia against the required one for a ring section (the UG-29 form, from memory). The length is the unsupported length between rings or heads; between dished heads add about 1/3 of each head depth (from memory).',
   schema: cylindricalShellSchema,
   vocabulary: cylindricalShellVocabulary,
   compute(input, context) {

@@ -222,21 +222,21 @@ export function ringCaseSteps(trail: Trail, r: RingCommon, p: number): number {
     useShell
       ? {
           id: 'ring-inertia',
-          label: 'Moment of inertia of the ring with its shell against UG-29’s required I′_s',
+          label: 'Moment of inertia of the ring with its shell against the required I′_s',
           demand: withShell,
           capacity: r.combinedInertia,
           unit: 'm^4',
           basis:
-            'I′_s,req <= I′ (ring with 1.10·sqrt(D_o·t) of shell); UG-29 allows this form or the ring alone, whichever passes',
+            'I′_s,req <= I′ (ring with 1.10·sqrt(D_o·t) of shell); the code form allows this or the ring alone, whichever passes',
         }
       : {
           id: 'ring-inertia',
-          label: 'Moment of inertia of the ring alone against UG-29’s required I_s',
+          label: 'Moment of inertia of the ring alone against the required I_s',
           demand: alone,
           capacity: r.ringInertia,
           unit: 'm^4',
           basis:
-            'I_s,req <= I (the ring alone); UG-29 allows this form or the ring with its shell, whichever passes',
+            'I_s,req <= I (the ring alone); the code form allows this or the ring with its shell, whichever passes',
         },
   );
   if (inertia.utilisation > 0) limit = Math.min(limit, p / inertia.utilisation);

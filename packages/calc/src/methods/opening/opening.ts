@@ -668,7 +668,7 @@ function areaSteps(
       demand: a.required,
       capacity: a.available,
       unit: 'm²',
-      basis: 'A <= A1 + A2 + A3 + A41 + A42 + A43 + A5 (UG-37, area replacement)',
+      basis: 'A <= A1 + A2 + A3 + A41 + A42 + A43 + A5 (area replacement)',
     });
   } else {
     trail.step({
@@ -843,7 +843,7 @@ function internalCase(
     allowance: s.shellAllowance,
     nominal: s.shellNominal,
     basis:
-      't_r + c <= t (nominal); UG-37 reinforces an opening in a wall that holds the pressure by itself',
+      't_r + c <= t (nominal); area replacement reinforces an opening in a wall that holds the pressure by itself',
   });
   thicknessCheck(trail, {
     id: 'nozzle-thickness',
@@ -851,14 +851,19 @@ function internalCase(
     required: trn,
     allowance: s.nozzleAllowance,
     nominal: s.nozzleNominal,
-    basis: 't_rn + c_n <= t_n (nominal); the UG-45 minimum neck thickness is not checked',
+    basis: 't_rn + c_n <= t_n (nominal); the code minimum neck thickness is not checked',
   });
   exemptionNote(trail, s, tr);
   const sizing = areaSteps(trail, s, tr, trn, 1, loadCase);
   trail.output('shell-required-thickness', 'Required shell thickness t_r', tr, 'm');
   trail.output('nozzle-required-thickness', 'Required nozzle thickness t_rn', trn, 'm');
   if (s.allowableInternal !== null)
-    trail.output('allowable-pressure', 'Allowable pressure difference', s.allowableInternal, 'Pa');
+    trail.output(
+      'allowable-pressure',
+      'Allowable pressure difference (screening)',
+      s.allowableInternal,
+      'Pa',
+    );
   return { trail, sizing };
 }
 

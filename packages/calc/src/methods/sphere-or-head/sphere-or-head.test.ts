@@ -341,7 +341,7 @@ describe('sphere and heads under internal pressure', () => {
     expect(codes).toEqual(expect.arrayContaining(['crown-radius-large', 'knuckle-radius-small']));
   });
 
-  it('a pressure beyond 10·S·E_j leaves no code thickness: a pressure check against the MAWP, outside validity', () => {
+  it('a pressure beyond 10·S·E_j leaves no code thickness: a pressure check against the pressure the thickness allows, outside validity', () => {
     const report = screen(
       head({
         ...base,
@@ -355,7 +355,7 @@ describe('sphere and heads under internal pressure', () => {
     expect(report.warnings.map((w) => w.code)).toContain('internal-formula-range');
   });
 
-  it('the internal allowable-pressure output is the MAWP, where the thickness check reaches 1', () => {
+  it('the internal allowable-pressure output is where the thickness check reaches 1', () => {
     const input = head({ ...base, shape: 'ellipsoidal-2-1', corrosionAllowance: 0.001 });
     const mawp = output(screen(input).cases[0], 'allowable-pressure');
     const atLimit = screen({

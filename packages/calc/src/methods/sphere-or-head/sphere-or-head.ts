@@ -387,26 +387,26 @@ function describeMawp(
   switch (formula.kind) {
     case 'sphere':
       return {
-        expression: 'MAWP = 2·S·E_j·t/(R + 0.2·t)',
-        substituted: `MAWP = 2·${seText}·${t}/(${withUnit(formula.radius, 'm')} + 0.2·${t})`,
+        expression: 'P_max = 2·S·E_j·t/(R + 0.2·t)',
+        substituted: `P_max = 2·${seText}·${t}/(${withUnit(formula.radius, 'm')} + 0.2·${t})`,
         source: SOURCE_UG27 + inverse,
       };
     case 'ellipsoidal':
       return {
-        expression: 'MAWP = 2·S·E_j·t/(D + 0.2·t)',
-        substituted: `MAWP = 2·${seText}·${t}/(${withUnit(formula.diameter, 'm')} + 0.2·${t})`,
+        expression: 'P_max = 2·S·E_j·t/(D + 0.2·t)',
+        substituted: `P_max = 2·${seText}·${t}/(${withUnit(formula.diameter, 'm')} + 0.2·${t})`,
         source: SOURCE_UG32D + inverse,
       };
     case 'torispherical-standard':
       return {
-        expression: 'MAWP = S·E_j·t/(0.885·L + 0.1·t)',
-        substituted: `MAWP = ${seText}·${t}/(0.885·${withUnit(formula.crownRadius, 'm')} + 0.1·${t})`,
+        expression: 'P_max = S·E_j·t/(0.885·L + 0.1·t)',
+        substituted: `P_max = ${seText}·${t}/(0.885·${withUnit(formula.crownRadius, 'm')} + 0.1·${t})`,
         source: SOURCE_UG32E + inverse,
       };
     case 'torispherical-general':
       return {
-        expression: 'MAWP = 2·S·E_j·t/(L·M + 0.2·t)',
-        substituted: `MAWP = 2·${seText}·${t}/(${withUnit(formula.crownRadius, 'm')}·${formatNumber(formula.m)} + 0.2·${t})`,
+        expression: 'P_max = 2·S·E_j·t/(L·M + 0.2·t)',
+        substituted: `P_max = 2·${seText}·${t}/(${withUnit(formula.crownRadius, 'm')}·${formatNumber(formula.m)} + 0.2·${t})`,
         source: SOURCE_APPENDIX_1_4 + inverse,
       };
   }
@@ -481,11 +481,11 @@ function thicknessCheck(
     );
     trail.check({
       id: options.id,
-      label: `${options.label} (as pressure against the MAWP)`,
+      label: `${options.label} (as the pressure against the pressure the thickness allows)`,
       demand: pressure,
       capacity: c.mawp,
       unit: 'Pa',
-      basis: 'P <= MAWP (the code form gives no thickness at this pressure)',
+      basis: 'P <= P_max (the thickness formula gives no thickness at this pressure)',
     });
     return limitPressure;
   }
@@ -501,7 +501,7 @@ function thicknessCheck(
   });
   trail.step({
     id: `${options.stepId}-with-allowance`,
-    label: 'Required thickness with the corrosion allowance',
+    label: 'Thickness needed plus the corrosion allowance',
     expression: 't_r + c',
     substituted: `${withUnit(required, 'm')} + ${withUnit(c.allowance, 'm')}`,
     value: withAllowance,
@@ -524,16 +524,16 @@ function internalCase(c: Common, loadCase: ResolvedLoadCase): Trail {
   const p = pressureStep(trail, loadCase);
   const limit = thicknessCheck(trail, c, p, {
     id: 'internal-thickness',
-    label: 'Required thickness for internal pressure against the thickness',
+    label: 'Thickness needed for internal pressure against the nominal thickness',
     stepId: 'required-thickness',
-    stepLabel: 'Required thickness for internal pressure',
+    stepLabel: 'Thickness needed for internal pressure',
     scale: 1,
   });
   const required = requiredThickness(c.formula, p, c.stressTimesEfficiency);
   if (required !== null) {
     trail.output(
       'required-thickness',
-      'Required thickness (with allowance)',
+      'Thickness needed for internal pressure (with allowance)',
       required + c.allowance,
       'm',
     );
@@ -559,8 +559,13 @@ function internalCase(c: Common, loadCase: ResolvedLoadCase): Trail {
     }
   }
   trail.output('pressure-difference', 'Pressure difference', p, 'Pa');
-  trail.output('mawp', 'MAWP (corroded thickness)', c.mawp, 'Pa');
-  trail.output('allowable-pressure', 'Allowable pressure difference', limit, 'Pa');
+  trail.output(
+    'mawp',
+    'Allowable internal pressure difference, corroded thickness (screening)',
+    c.mawp,
+    'Pa',
+  );
+  trail.output('allowable-pressure', 'Allowable pressure difference (screening)', limit, 'Pa');
   return trail;
 }
 
@@ -576,13 +581,13 @@ function externalCase(input: Parsed, c: Common, loadCase: ResolvedLoadCase): Tra
     capacity: ext.allowable,
     unit: 'Pa',
     basis:
-      'P <= p_allow = min(p_c/n_b, P_a) (knocked-down Zoelly with plastic interaction, capped by UG-28(d))',
+      'P <= p_allow = min(p_c/n_b, P_a) (knocked-down Zoelly with plastic interaction, capped by the chart route)',
   });
   let limit = ext.allowable;
   if (input.shape === 'ellipsoidal-2-1' || input.shape === 'torispherical') {
     const pInternal = trail.step({
       id: 'ug33-internal-pressure',
-      label: 'Internal-pressure equivalent of the external pressure (UG-33(a)(1))',
+      label: 'Internal pressure equivalent to the external pressure',
       expression: `P_i = ${UG33_INTERNAL_FACTOR}·P`,
       substituted: `P_i = ${UG33_INTERNAL_FACTOR}·${withUnit(p, 'Pa')}`,
       value: UG33_INTERNAL_FACTOR * p,
@@ -592,25 +597,26 @@ function externalCase(input: Parsed, c: Common, loadCase: ResolvedLoadCase): Tra
     });
     thicknessCheck(trail, c, pInternal, {
       id: 'ug33-internal-rule',
-      label: 'Head thickness by the internal rule at 1.67 × the external pressure',
+      label:
+        'Thickness needed for internal pressure of 1.67 × the external pressure, against the nominal thickness',
       stepId: 'ug33-required-thickness',
-      stepLabel: 'Required thickness by the internal rule at P_i',
+      stepLabel: 'Thickness needed for the equivalent internal pressure P_i',
       scale: UG33_INTERNAL_FACTOR,
     });
     const ug33 = trail.step({
       id: 'ug33-allowable-pressure',
-      label: 'External pressure the internal rule allows (UG-33(a)(1))',
-      expression: `P_33 = MAWP/${UG33_INTERNAL_FACTOR}`,
-      substituted: `P_33 = ${withUnit(c.mawp, 'Pa')}/${UG33_INTERNAL_FACTOR}`,
+      label: 'External pressure the equivalent internal pressure allows',
+      expression: `P_ir = P_max/${UG33_INTERNAL_FACTOR}`,
+      substituted: `P_ir = ${withUnit(c.mawp, 'Pa')}/${UG33_INTERNAL_FACTOR}`,
       value: c.mawp / UG33_INTERNAL_FACTOR,
       unit: 'Pa',
       source:
-        'the MAWP of the common steps, the internal rule at 1.67 × the external pressure solved for it',
+        'the allowable internal pressure difference of the common steps (P_max), the internal rule at 1.67 × the external pressure solved for it',
     });
     limit = trail.step({
       id: 'allowable-pressure',
       label: 'Allowable external pressure difference (the lower of buckling and the internal rule)',
-      expression: 'min(p_allow, P_33)',
+      expression: 'min(p_allow, P_ir)',
       substituted: `min(${withUnit(ext.allowable, 'Pa')}, ${withUnit(ug33, 'Pa')})`,
       value: Math.min(ext.allowable, ug33),
       unit: 'Pa',
@@ -638,17 +644,17 @@ function externalCase(input: Parsed, c: Common, loadCase: ResolvedLoadCase): Tra
   );
   trail.output(
     'screening-external-pressure',
-    'Screening external pressure (before the UG-28(d) cap)',
+    'External pressure from collapse over the design factor (before the chart-route cap)',
     ext.screening,
     'Pa',
   );
   trail.output(
     'ug28-allowable',
-    'UG-28(d) allowable (cross-check and cap)',
+    'Allowable external pressure by the chart route (cross-check and cap)',
     ext.ug28Allowable,
     'Pa',
   );
-  trail.output('allowable-pressure', 'Allowable pressure difference', limit, 'Pa');
+  trail.output('allowable-pressure', 'Allowable pressure difference (screening)', limit, 'Pa');
   return trail;
 }
 
@@ -798,7 +804,7 @@ function externalCapacity(
         }
       : {
           id: 'collapse-pressure',
-          label: 'Collapse pressure, elastic–plastic interaction (API STD 2RD form)',
+          label: 'Collapse pressure, pipeline-code interaction of elastic buckling and yield',
           expression: 'p_c = p_e·p_y/sqrt(p_e² + p_y²)',
           substituted: `p_c = ${withUnit(elastic, 'Pa')}·${withUnit(plastic, 'Pa')}/sqrt((${withUnit(elastic, 'Pa')})² + (${withUnit(plastic, 'Pa')})²)`,
           value: (elastic * plastic) / Math.hypot(elastic, plastic),
@@ -839,7 +845,7 @@ function externalCapacity(
   });
   const factorA = common.step({
     id: 'ug28-factor-a',
-    label: 'UG-28(d) factor A',
+    label: 'Chart-route strain factor A',
     expression: 'A = 0.125/(R_o/t)',
     substituted: `A = 0.125/${formatNumber(ratio)}`,
     value: 0.125 / ratio,
@@ -852,8 +858,8 @@ function externalCapacity(
   const factorB = common.step({
     id: 'ug28-factor-b',
     label: capped
-      ? 'UG-28(d) factor B, capped at half the yield strength (plastic range)'
-      : 'UG-28(d) factor B, elastic range',
+      ? 'Chart-route stress factor B, capped at half the yield strength (plastic range)'
+      : 'Chart-route stress factor B, elastic range',
     expression: `B = min(A·E/2, ${symbol}/2)`,
     substituted: `B = min(${formatNumber(factorA)}·${withUnit(E, 'Pa')}/2, ${withUnit(material.strength, 'Pa')}/2)`,
     value: Math.min(elasticB, capB),
@@ -862,7 +868,7 @@ function externalCapacity(
   });
   const ug28Allowable = common.step({
     id: 'ug28-allowable',
-    label: 'UG-28(d) allowable external pressure (cross-check, caps the allowable)',
+    label: 'Allowable external pressure by the chart route (cross-check, caps the allowable)',
     expression: 'P_a = B/(R_o/t)',
     substituted: `P_a = ${withUnit(factorB, 'Pa')}/${formatNumber(ratio)}`,
     value: factorB / ratio,
@@ -871,7 +877,7 @@ function externalCapacity(
   });
   const allowable = common.step({
     id: 'allowable-external-pressure',
-    label: 'Allowable external pressure (the lower of the screening value and UG-28(d))',
+    label: 'Allowable external pressure (the lower of the screening value and the chart route)',
     expression: 'p_allow = min(p_s, P_a)',
     substituted: `p_allow = min(${withUnit(screening, 'Pa')}, ${withUnit(ug28Allowable, 'Pa')})`,
     value: Math.min(screening, ug28Allowable),
@@ -905,7 +911,7 @@ export const sphereOrHead = defineMethod({
   name: 'Sphere or dished head',
   summary: 'Hemispherical, 2:1 ellipsoidal or torispherical head, or a sphere.',
   description:
-    'Sphere, hemispherical, 2:1 ellipsoidal or torispherical head under internal pressure (ASME VIII-1 UG-27/UG-32 code-form thickness and MAWP, membrane stress) and external pressure (equivalent sphere, Zoelly buckling with a knock-down, plastic interaction and a design factor; UG-28(d) elastic allowable as a cross-check).',
+    'Sphere, hemispherical, 2:1 ellipsoidal or torispherical head under internal pressure (code-form thickness and the pressure difference it allows, membrane stress) and external pressure (equivalent sphere, Zoelly buckling with a knock-down, plastic interaction and a design factor; the code’s chart-route elastic allowable as a cross-check).',
   schema: sphereOrHeadSchema,
   vocabulary: sphereOrHeadVocabulary,
   compute(input, context) {
@@ -1113,7 +1119,7 @@ export const sphereOrHead = defineMethod({
       const text = describeMawp(formula, t, se);
       mawp = common.step({
         id: 'mawp',
-        label: 'Maximum allowable working pressure (corroded thickness)',
+        label: 'Allowable internal pressure difference of the corroded thickness (screening)',
         expression: text.expression,
         substituted: text.substituted,
         value: mawp,

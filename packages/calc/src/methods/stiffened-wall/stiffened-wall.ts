@@ -675,12 +675,17 @@ function caseTrail(c: Shared, loadCase: ResolvedLoadCase): Trail {
     if (combined !== null) perPressure.push(combined / q / c.S);
     trail.output(
       'allowable-pressure',
-      'Allowable pressure difference',
+      'Allowable pressure difference (screening)',
       Math.min(panelAllowable, 1 / Math.max(...perPressure)),
       'Pa',
     );
   } else {
-    trail.output('allowable-pressure', 'Allowable pressure difference', panelAllowable, 'Pa');
+    trail.output(
+      'allowable-pressure',
+      'Allowable pressure difference (screening)',
+      panelAllowable,
+      'Pa',
+    );
   }
 
   // Validity: compressed plating beyond its buckling stress sheds load, which the effective width
