@@ -6,9 +6,10 @@
  *
  * ROOT defaults to apps/api/src. A file directly under ROOT is its own group
  * (`main`, `app`, `wiring`). Test and bench files are left out: a test may
- * build the whole app to check one corner of it. `--check` (apps/api/src
- * only) prints the arrows that break API_LAYERS and exits 1 when there are
- * any; src/layering.test.ts runs the same check.
+ * build the whole app to check one corner of it. `--check` prints the arrows
+ * that break the tree's layer order (API_LAYERS for apps/api/src, CALC_LAYERS
+ * for packages/calc/src) and exits 1 when there are any; src/layering.test.ts
+ * runs the same checks.
  */
 import { readFileSync, readdirSync, statSync } from 'node:fs';
 import path from 'node:path';
@@ -177,6 +178,32 @@ export const API_LAYERS: readonly (readonly string[])[] = [
   ['config', 'http'],
 ];
 
+/**
+ * The layers of packages/calc/src, the engine, top to bottom: the command
+ * line over the public index; the batch (CSV) and sweep runners over
+ * screening; screening over the method list; the methods over materials and
+ * sections; all of them over the core (reports, trails, fields, load cases),
+ * which knows no method; units, physics and the version at the bottom.
+ */
+export const CALC_LAYERS: readonly (readonly string[])[] = [
+  ['cli'],
+  ['index'],
+  ['batch', 'sweep'],
+  ['screen'],
+  ['methods'],
+  ['materials', 'sections'],
+  ['core'],
+  ['physics', 'units', 'version'],
+];
+
+/** The layer order a tree is held to, by its path; undefined for a tree with none. */
+export function layersFor(root: string): readonly (readonly string[])[] | undefined {
+  const normal = path.resolve(root).split(path.sep).join('/');
+  if (normal.endsWith('apps/api/src')) return API_LAYERS;
+  if (normal.endsWith('packages/calc/src')) return CALC_LAYERS;
+  return undefined;
+}
+
 /** Arrows that break the layer order: upwards, sideways, or from or to a group the order does not name. */
 export function layerViolations(
   edges: readonly ImportEdge[],
@@ -240,7 +267,13 @@ function main() {
   );
   if (alone.length) console.log(`\n  importing no other folder: ${alone.sort().join(', ')}`);
   if (check) {
-    const problems = layerViolations(edges, API_LAYERS);
+    const layers = layersFor(root);
+    if (!layers) {
+      console.error(`\nno layer order is set for ${root} (apps/api/src and packages/calc/src have one)`);
+      process.exitCode = 2;
+      return;
+    }
+    const problems = layerViolations(edges, layers);
     console.log(
       problems.length
         ? `\n${problems.length} arrows against the layer order:\n  ${problems.join('\n  ')}`

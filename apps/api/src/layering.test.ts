@@ -4,14 +4,17 @@ import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
 import {
   API_LAYERS,
+  CALC_LAYERS,
   type ImportEdge,
   importEdges,
   layerViolations,
 } from '../scripts/import-picture.js';
 
-// The layer order of apps/api/src is a decision of this project
-// (DEVELOPERS.md, "Layers"); the test holds the tree to it.
+// The layer orders of apps/api/src and of the engine (packages/calc/src) are
+// decisions of this project (DEVELOPERS.md, "Layers"); the tests hold the
+// trees to them.
 const SRC = path.dirname(fileURLToPath(import.meta.url));
+const CALC_SRC = path.resolve(SRC, '../../../packages/calc/src');
 
 function filesUnder(dir: string): string[] {
   return readdirSync(dir).flatMap((name) => {
@@ -63,5 +66,32 @@ describe('the API layers', () => {
       (e) => e.fromGroup === 'routes' && ['repositories', 'db'].includes(e.toGroup),
     );
     expect(edges).toEqual([]);
+  });
+});
+
+describe('the engine layers', () => {
+  it('no import in packages/calc/src points up or sideways: the core knows no method', () => {
+    const edges = importEdges(CALC_SRC);
+    // The tree is really there (a wrong path would pass with no edges).
+    expect(edges.some((e) => e.fromGroup === 'methods' && e.toGroup === 'core')).toBe(true);
+    expect(layerViolations(edges, CALC_LAYERS)).toEqual([]);
+  });
+
+  it('an import from the core into the methods is caught', () => {
+    const problems = layerViolations(
+      [
+        {
+          from: 'core/report.ts',
+          to: 'methods/index.ts',
+          fromGroup: 'core',
+          toGroup: 'methods',
+          typeOnly: true,
+        },
+      ],
+      CALC_LAYERS,
+    );
+    expect(problems).toEqual([
+      'core/report.ts → methods/index.ts: core (layer 7) may not import methods (layer 5)',
+    ]);
   });
 });

@@ -53,11 +53,9 @@ export type {
   CaseReport,
   Caution,
   Check,
-  ComponentKind,
   Governing,
   Output,
   PressureDirection,
-  Report,
   ResolvedLoadCase,
   Step,
   ValidityWarning,
@@ -183,7 +181,7 @@ export {
   screenMany,
 } from './screen';
 export type { ParsedComponent, ScreenOutcome } from './screen';
-export type { EngineMethod } from './methods';
+export type { ComponentKind, EngineMethod, InputsOf, KindReport, Report } from './methods';
 
 // Stiffener and ring sections
 export { sectionSchema } from './sections/section-schema';

@@ -5,9 +5,9 @@ import { resolveDesignBasis } from './core/design-basis';
 import { resolveAmbient, resolveLoadCases } from './core/load-cases';
 import { computeMethod, type CaseTemperature } from './core/compute';
 import type { MethodContext, MethodDefinition, MethodResult } from './core/method';
-import type { ComponentKind, Report, ResolvedLoadCase } from './core/report';
+import type { ResolvedLoadCase } from './core/report';
 import { ROOM_TEMPERATURE, celsiusText, roomTemperatureContext } from './core/temperature';
-import { METHODS, type EngineMethod } from './methods';
+import { METHODS, type ComponentKind, type EngineMethod, type Report } from './methods';
 
 export { METHODS };
 
@@ -162,12 +162,14 @@ export function computeResult(component: ParsedComponent, input = component.inpu
 
 /** Computes the report of a parsed component. */
 export function computeReport(component: ParsedComponent): Report {
+  // The method was found by the input's kind and returned its own inputs, so
+  // the report is that kind's member of the union.
   return assembleReport(component.method, component.context, computeResult(component), {
     temperatureGiven: component.temperatures !== null,
     ...(component.designTemperature !== undefined
       ? { designTemperature: component.designTemperature }
       : {}),
-  });
+  }) as Report;
 }
 
 /**

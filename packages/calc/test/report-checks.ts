@@ -1,5 +1,12 @@
 import { CalcInputError, type InputIssue } from '../src/core/errors';
 import { screen } from '../src/screen';
+import type { ComponentKind, InputsOf, Report } from '../src/methods';
+
+/** A report's inputs as its kind's method returns them; throws when the report is of another kind. */
+export function inputsOf<K extends ComponentKind>(report: Report, kind: K): InputsOf<K> {
+  if (report.kind !== kind) throw new Error(`expected a ${kind} report, got ${report.kind}`);
+  return report.inputs as InputsOf<K>;
+}
 
 /** The field issues a bad input is refused with; fails the test when the input screens. */
 export function issuesOf(raw: unknown): InputIssue[] {

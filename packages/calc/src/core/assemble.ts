@@ -5,7 +5,6 @@ import type { MethodContext, MethodDefinition, MethodResult } from './method';
 import type { z } from 'zod';
 import type {
   CaseReport,
-  ComponentKind,
   Governing,
   Report,
   ValidityWarning,
@@ -28,7 +27,7 @@ export interface ReportTemperature {
  * pressure is the first common step of every report.
  */
 export function assembleReport(
-  method: Pick<MethodDefinition<z.ZodType, ComponentKind>, 'kind'>,
+  method: Pick<MethodDefinition, 'kind'>,
   context: MethodContext,
   result: MethodResult,
   temperature: ReportTemperature = { temperatureGiven: false },

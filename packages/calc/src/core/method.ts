@@ -3,7 +3,7 @@ import type { CautionCode } from './cautions';
 import { designBasisSchema, type DesignBasis } from './design-basis';
 import { loadCasesSchema, siteSchema, type Ambient } from './load-cases';
 import { designTemperatureField, type TemperatureContext } from './temperature';
-import type { ResolvedLoadCase, Step, ValidityWarning } from './report';
+import type { AnyInputs, ResolvedLoadCase, Step, ValidityWarning } from './report';
 import type { Trail } from './trail';
 import type { Vocabulary } from './vocabulary';
 
@@ -34,11 +34,11 @@ export interface MethodContext {
 }
 
 /** What a method computes; the engine adds the engine stamp, governing case, verdict and cautions. */
-export interface MethodResult {
+export interface MethodResult<Inputs extends object = AnyInputs> {
   /** Title of what was screened, e.g. "Circular flat plate, clamped edge". */
   readonly title: string;
-  /** Normalised inputs, SI. */
-  readonly inputs: Readonly<Record<string, unknown>>;
+  /** Normalised inputs, SI, in the method's own structure (the report's `inputs`). */
+  readonly inputs: Inputs;
   /** Steps common to all load cases. */
   readonly steps: readonly Step[];
   /** One trail per load case, in the order of the input's load cases. */
@@ -66,6 +66,7 @@ export interface SweepParameter<Parsed> {
 export interface MethodDefinition<
   Schema extends z.ZodType = z.ZodType,
   Kind extends string = string,
+  Inputs extends object = AnyInputs,
 > {
   /** The component kind it screens; the list of kinds is the list of methods (ComponentKind). */
   readonly kind: Kind;
@@ -83,7 +84,7 @@ export interface MethodDefinition<
    * checks every field of the schema has words.
    */
   readonly vocabulary: Vocabulary;
-  readonly compute: (input: z.output<Schema>, context: MethodContext) => MethodResult;
+  readonly compute: (input: z.output<Schema>, context: MethodContext) => MethodResult<Inputs>;
   /** The thickness to sweep (utilisation falls as it rises). */
   readonly sweep?: SweepParameter<z.output<Schema>>;
   /** A spacing to sweep (utilisation rises with it): the stiffened wall's stiffener spacing. */
@@ -98,9 +99,11 @@ export interface MethodDefinition<
 }
 
 /** Keeps a method's types tied together where it is defined. */
-export function defineMethod<Schema extends z.ZodType, const Kind extends string>(
-  method: MethodDefinition<Schema, Kind>,
-): MethodDefinition<Schema, Kind> {
+export function defineMethod<
+  Schema extends z.ZodType,
+  const Kind extends string,
+  Inputs extends object,
+>(method: MethodDefinition<Schema, Kind, Inputs>): MethodDefinition<Schema, Kind, Inputs> {
   return method;
 }
 

@@ -3,10 +3,6 @@
  * input and engine version. All values are SI (Pa, m, N, J, s, K…).
  */
 
-import type { ComponentKind } from '../methods';
-
-export type { ComponentKind };
-
 /** One line of the trail a checker reads: formula, numbers in it, result, source. */
 export interface Step {
   /** Stable id within its list, e.g. "flexural-rigidity". */
@@ -113,12 +109,21 @@ export interface Governing {
  */
 export type Verdict = 'pass' | 'fail' | 'outside-validity' | 'no-checks';
 
-export interface Report {
+/** What a method's normalised inputs are when nothing more is known of them. */
+export type AnyInputs = Readonly<Record<string, unknown>>;
+
+/**
+ * The report of one method: `Kind` is its component kind and `Inputs` the
+ * normalised inputs it returns. The engine's public `Report` (methods/index.ts)
+ * is the union of these over every method, so a switch on `kind` narrows
+ * `inputs`; the core, which knows no method, works with the defaults.
+ */
+export interface Report<Kind extends string = string, Inputs extends object = AnyInputs> {
   readonly engine: { readonly name: string; readonly version: string };
-  readonly kind: ComponentKind;
+  readonly kind: Kind;
   readonly title: string;
   /** Normalised inputs in SI, in the method's own structure. */
-  readonly inputs: Readonly<Record<string, unknown>>;
+  readonly inputs: Inputs;
   readonly ambient: {
     readonly pressure: number;
     /** 'given' also for a high-barometer design ambient, which then carries `barometer` and `standardPressure`. */

@@ -1,5 +1,6 @@
 import type { z } from 'zod';
 import type { MethodDefinition } from '../core/method';
+import type { Report as ReportOf } from '../core/report';
 import { circularPlate } from './circular-plate/circular-plate';
 import { cylindricalShell } from './cylindrical-shell/cylindrical-shell';
 import { flatAreaLoad } from './flat-area-load/flat-area-load';
@@ -29,6 +30,21 @@ const ALL = [
 
 /** What a component is; one method per kind. */
 export type ComponentKind = (typeof ALL)[number]['kind'];
+
+type AnyMethod = (typeof ALL)[number];
+
+/** The normalised inputs a method of this kind puts in its report. */
+export type InputsOf<K extends ComponentKind> =
+  Extract<AnyMethod, { kind: K }> extends MethodDefinition<z.ZodType, K, infer I> ? I : never;
+
+/** The report of one kind: its `inputs` typed as that method returns them. */
+export type KindReport<K extends ComponentKind> = ReportOf<K, InputsOf<K>>;
+
+/**
+ * A report of this engine: the union over every kind, so a switch on
+ * `report.kind` narrows `report.inputs` to that method's own structure.
+ */
+export type Report = { [K in ComponentKind]: KindReport<K> }[ComponentKind];
 
 /** A method of this engine, its input type erased (the list's element type). */
 export type EngineMethod = MethodDefinition<z.ZodType, ComponentKind>;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { issuesOf } from '../../../test/report-checks';
+import { inputsOf, issuesOf } from '../../../test/report-checks';
 import { checkValue, relativeError } from '../../../test/check-values';
 import { screen, screenMany, type CaseReport, type Report } from '../../index';
 
@@ -70,7 +70,7 @@ describe('circular-plate: check values (Roark Table 11.2, uniform load over the 
       }),
     );
     const c = report.cases[0]!;
-    const material = report.inputs.material as { elasticModulus: number; poissonRatio: number };
+    const material = inputsOf(report, 'circular-plate').material;
     expect(material.elasticModulus).toBe(cv.inputs.youngs_modulus_Pa);
     expect(material.poissonRatio).toBe(cv.inputs.poisson);
     expect(value(c.steps, 'pressure')).toBe(q);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { issuesOf, textProblems } from '../../../test/report-checks';
+import { inputsOf, issuesOf, textProblems } from '../../../test/report-checks';
 import { checkValue, relativeError } from '../../../test/check-values';
 import type { Report } from '../../core/report';
 import { screen } from '../../screen';
@@ -274,7 +274,9 @@ describe('external pressure through screen()', () => {
       /^default 3: .*UG-28.*from memory/,
     );
     expect(stepOf(report, 'collapse-pressure').source).toMatch(/Rankine.*default/);
-    expect(report.inputs.externalPressure).toEqual(EXTERNAL_PRESSURE_DEFAULTS);
+    expect(inputsOf(report, 'cylindrical-shell').externalPressure).toEqual(
+      EXTERNAL_PRESSURE_DEFAULTS,
+    );
     const check = report.cases[0]!.checks[0]!;
     expect(check.id).toBe('external-pressure');
     expect(check.utilisation).toBeCloseTo(101325 / (c.expected.rankine_Pa! / 3), 6);
