@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { given } from '../../core/given';
 import { length } from '../../core/fields';
 import { formatNumber, withUnit } from '../../core/format';
 import { componentShape, defineMethod } from '../../core/method';
@@ -281,12 +282,7 @@ export const circularPlate = defineMethod({
         thickness: input.thickness,
         edge: input.edge,
         material,
-        ...(input.allowableStress !== undefined ? { allowableStress: input.allowableStress } : {}),
-        ...(input.designFactor !== undefined ? { designFactor: input.designFactor } : {}),
-        ...(input.deflectionLimit !== undefined ? { deflectionLimit: input.deflectionLimit } : {}),
-        ...(input.corrosionAllowance !== undefined
-          ? { corrosionAllowance: input.corrosionAllowance }
-          : {}),
+        ...given(input, 'allowableStress', 'designFactor', 'deflectionLimit', 'corrosionAllowance'),
       },
       steps: common.steps,
       cases,

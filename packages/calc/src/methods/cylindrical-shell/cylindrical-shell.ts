@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { given } from '../../core/given';
 import type { CautionCode } from '../../core/cautions';
 import { factor, length } from '../../core/fields';
 import { formatNumber, withUnit } from '../../core/format';
@@ -1153,12 +1154,9 @@ export const cylindricalShell = defineMethod({
         length: input.length,
         ends: input.ends,
         material,
-        ...(input.allowableStress !== undefined ? { allowableStress: input.allowableStress } : {}),
-        ...(input.designFactor !== undefined ? { designFactor: input.designFactor } : {}),
+        ...given(input, 'allowableStress', 'designFactor'),
         jointEfficiency: input.jointEfficiency ?? 1,
-        ...(input.corrosionAllowance !== undefined
-          ? { corrosionAllowance: input.corrosionAllowance }
-          : {}),
+        ...given(input, 'corrosionAllowance'),
         externalPressure: {
           knockdown:
             basis?.knockdown ??
@@ -1173,8 +1171,7 @@ export const cylindricalShell = defineMethod({
             input.externalPressure?.interaction ??
             EXTERNAL_PRESSURE_DEFAULTS.interaction,
         },
-        ...(input.ringSpacingFor !== undefined ? { ringSpacingFor: input.ringSpacingFor } : {}),
-        ...(input.ringSection !== undefined ? { ringSection: input.ringSection } : {}),
+        ...given(input, 'ringSpacingFor', 'ringSection'),
       },
       steps: common.steps,
       cases,

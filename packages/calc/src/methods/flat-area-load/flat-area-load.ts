@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { given } from '../../core/given';
 import { count, force, length } from '../../core/fields';
 import { withUnit } from '../../core/format';
 import { componentShape, defineMethod } from '../../core/method';
@@ -237,10 +238,7 @@ export const flatAreaLoad = defineMethod({
       inputs: {
         outline: input.outline,
         seating: input.seating,
-        ...(input.fastenerCount !== undefined ? { fastenerCount: input.fastenerCount } : {}),
-        ...(input.fastenerCapacity !== undefined
-          ? { fastenerCapacity: input.fastenerCapacity }
-          : {}),
+        ...given(input, 'fastenerCount', 'fastenerCapacity'),
       },
       steps: common.steps,
       cases,

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { given } from '../../core/given';
 import type { CautionCode } from '../../core/cautions';
 import { factor, length } from '../../core/fields';
 import { formatNumber, withUnit } from '../../core/format';
@@ -195,11 +196,7 @@ function shellHostRaw(shell: ShellInput, external: ExternalOptions | undefined) 
     diameterBasis: shell.diameterBasis,
     thickness: shell.thickness,
     material: shell.material,
-    ...(shell.allowableStress !== undefined ? { allowableStress: shell.allowableStress } : {}),
-    ...(shell.designFactor !== undefined ? { designFactor: shell.designFactor } : {}),
-    ...(shell.corrosionAllowance !== undefined
-      ? { corrosionAllowance: shell.corrosionAllowance }
-      : {}),
+    ...given(shell, 'allowableStress', 'designFactor', 'corrosionAllowance'),
     // UG-37 takes t_r of a seamless shell; under external pressure E_j enters only a head's UG-33 internal rule.
     jointEfficiency: 1,
     ...(external !== undefined ? { externalPressure: external } : {}),
@@ -217,8 +214,7 @@ function shellHostRaw(shell: ShellInput, external: ExternalOptions | undefined) 
     kind: 'sphere-or-head',
     shape: shell.shape,
     ...common,
-    ...(shell.crownRadius !== undefined ? { crownRadius: shell.crownRadius } : {}),
-    ...(shell.knuckleRadius !== undefined ? { knuckleRadius: shell.knuckleRadius } : {}),
+    ...given(shell, 'crownRadius', 'knuckleRadius'),
   };
 }
 
@@ -232,11 +228,7 @@ function nozzleHostRaw(nozzle: NozzleInput) {
     length: nozzle.projection,
     ends: 'closed',
     material: nozzle.material,
-    ...(nozzle.allowableStress !== undefined ? { allowableStress: nozzle.allowableStress } : {}),
-    ...(nozzle.designFactor !== undefined ? { designFactor: nozzle.designFactor } : {}),
-    ...(nozzle.corrosionAllowance !== undefined
-      ? { corrosionAllowance: nozzle.corrosionAllowance }
-      : {}),
+    ...given(nozzle, 'allowableStress', 'designFactor', 'corrosionAllowance'),
     jointEfficiency: 1,
     loadCases: PLACEHOLDER_CASES,
   };
@@ -1757,14 +1749,9 @@ export const opening = defineMethod({
           diameter: shell.diameter,
           diameterBasis: shell.diameterBasis,
           thickness: shell.thickness,
-          ...(shell.length !== undefined ? { length: shell.length } : {}),
-          ...(shell.crownRadius !== undefined ? { crownRadius: shell.crownRadius } : {}),
-          ...(shell.knuckleRadius !== undefined ? { knuckleRadius: shell.knuckleRadius } : {}),
+          ...given(shell, 'length', 'crownRadius', 'knuckleRadius'),
           material: shellMaterial,
-          ...(shell.allowableStress !== undefined
-            ? { allowableStress: shell.allowableStress }
-            : {}),
-          ...(shell.designFactor !== undefined ? { designFactor: shell.designFactor } : {}),
+          ...given(shell, 'allowableStress', 'designFactor'),
           corrosionAllowance: c,
           jointEfficiency: e1,
         },
@@ -1775,10 +1762,7 @@ export const opening = defineMethod({
           projection: nozzle.projection,
           inwardProjection: projectionInside,
           material: nozzleMaterial,
-          ...(nozzle.allowableStress !== undefined
-            ? { allowableStress: nozzle.allowableStress }
-            : {}),
-          ...(nozzle.designFactor !== undefined ? { designFactor: nozzle.designFactor } : {}),
+          ...given(nozzle, 'allowableStress', 'designFactor'),
           corrosionAllowance: cn,
           weldLeg: nozzle.weldLeg ?? 0,
           inwardWeldLeg: nozzle.inwardWeldLeg ?? 0,
@@ -1800,9 +1784,7 @@ export const opening = defineMethod({
             }
           : {}),
         ...(shell.shape !== 'cylinder' ? { offset: input.offset ?? 0 } : {}),
-        ...(input.externalPressure !== undefined
-          ? { externalPressure: input.externalPressure }
-          : {}),
+        ...given(input, 'externalPressure'),
       },
       steps: common.steps,
       cases,

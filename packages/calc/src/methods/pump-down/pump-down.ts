@@ -7,6 +7,7 @@ import {
   volume,
   volumeFlow,
 } from '../../core/fields';
+import { given } from '../../core/given';
 import { formatNumber, withUnit } from '../../core/format';
 import { resolveAmbient } from '../../core/load-cases';
 import { componentShapeWithoutLoadCases, defineMethod } from '../../core/method';
@@ -472,15 +473,10 @@ export const pumpDown = defineMethod({
       inputs: {
         volume: input.volume,
         pumpingSpeed: input.pumpingSpeed,
-        ...(input.conductance !== undefined ? { conductance: input.conductance } : {}),
+        ...given(input, 'conductance'),
         startPressure: startPressureOf(input, ambient),
         targetPressure: input.targetPressure,
-        ...(input.gasLoad !== undefined ? { gasLoad: input.gasLoad } : {}),
-        ...(input.basePressure !== undefined ? { basePressure: input.basePressure } : {}),
-        ...(input.targetTime !== undefined ? { targetTime: input.targetTime } : {}),
-        ...(input.waterTemperature !== undefined
-          ? { waterTemperature: input.waterTemperature }
-          : {}),
+        ...given(input, 'gasLoad', 'basePressure', 'targetTime', 'waterTemperature'),
       },
       steps: common.steps,
       cases,

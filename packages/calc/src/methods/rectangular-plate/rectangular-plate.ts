@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { given } from '../../core/given';
 import type { CautionCode } from '../../core/cautions';
 import { length } from '../../core/fields';
 import { formatNumber } from '../../core/format';
@@ -141,12 +142,7 @@ export const rectangularPlate = defineMethod({
         thickness: input.thickness,
         edge: input.edge,
         material,
-        ...(input.allowableStress !== undefined ? { allowableStress: input.allowableStress } : {}),
-        ...(input.designFactor !== undefined ? { designFactor: input.designFactor } : {}),
-        ...(input.deflectionLimit !== undefined ? { deflectionLimit: input.deflectionLimit } : {}),
-        ...(input.corrosionAllowance !== undefined
-          ? { corrosionAllowance: input.corrosionAllowance }
-          : {}),
+        ...given(input, 'allowableStress', 'designFactor', 'deflectionLimit', 'corrosionAllowance'),
       },
       steps: common.steps,
       cases,

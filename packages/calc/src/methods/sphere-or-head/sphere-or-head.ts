@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { given } from '../../core/given';
 import type { CautionCode } from '../../core/cautions';
 import { factor, length } from '../../core/fields';
 import { formatNumber, withUnit } from '../../core/format';
@@ -1191,12 +1192,9 @@ export const sphereOrHead = defineMethod({
         ...(crownRadius !== null ? { crownRadius } : {}),
         ...(knuckleRadius !== null ? { knuckleRadius } : {}),
         material,
-        ...(input.allowableStress !== undefined ? { allowableStress: input.allowableStress } : {}),
-        ...(input.designFactor !== undefined ? { designFactor: input.designFactor } : {}),
+        ...given(input, 'allowableStress', 'designFactor'),
         jointEfficiency,
-        ...(input.corrosionAllowance !== undefined
-          ? { corrosionAllowance: input.corrosionAllowance }
-          : {}),
+        ...given(input, 'corrosionAllowance'),
         externalPressure: {
           knockdown: input.externalPressure?.knockdown ?? DEFAULT_KNOCKDOWN,
           designFactor:

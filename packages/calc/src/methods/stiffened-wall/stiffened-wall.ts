@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { given } from '../../core/given';
 import type { CautionCode } from '../../core/cautions';
 import { factor, length } from '../../core/fields';
 import { formatNumber, withUnit, withoutTrailText } from '../../core/format';
@@ -904,15 +905,9 @@ export const stiffenedWall = defineMethod({
         stiffenerSide: input.stiffenerSide,
         stiffener: input.stiffener,
         material,
-        ...(input.allowableStress !== undefined ? { allowableStress: input.allowableStress } : {}),
-        ...(input.designFactor !== undefined ? { designFactor: input.designFactor } : {}),
+        ...given(input, 'allowableStress', 'designFactor'),
         deflectionRatio: input.deflectionRatio ?? DEFAULT_DEFLECTION_RATIO,
-        ...(input.panelDeflectionLimit !== undefined
-          ? { panelDeflectionLimit: input.panelDeflectionLimit }
-          : {}),
-        ...(input.corrosionAllowance !== undefined
-          ? { corrosionAllowance: input.corrosionAllowance }
-          : {}),
+        ...given(input, 'panelDeflectionLimit', 'corrosionAllowance'),
       },
       steps: common.steps,
       cases,

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { given } from '../../core/given';
 import { energy, factor, volume } from '../../core/fields';
 import { formatNumber, withUnit } from '../../core/format';
 import { componentShape, defineMethod } from '../../core/method';
@@ -340,7 +341,7 @@ export const storedEnergy = defineMethod({
         volume: input.volume,
         gas: input.gas,
         heatCapacityRatio: gamma,
-        ...(input.energyLimit !== undefined ? { energyLimit: input.energyLimit } : {}),
+        ...given(input, 'energyLimit'),
       },
       steps: common.steps,
       cases,
