@@ -49,7 +49,8 @@ export type {
 export { inputLabel, presentInputs } from './inputs';
 export type { PresentedInput } from './inputs';
 export { sketchOf } from './sketches/component-sketch';
-export { TEXT_SIZE, textWidth } from './sketches/scene';
+export { TEXT_SIZE, fontOf, pointsOf, strokeOf, textWidth } from './sketches/scene';
+export type { StrokeAttributes } from './sketches/scene';
 export type { Role as SketchRole, Shape as SketchShape, Sketch } from './sketches/scene';
 export { headProfile } from './sketches/geometry';
 export type { HeadShape } from './sketches/geometry';

@@ -1,5 +1,12 @@
 import { Circle, Line, Polygon, Polyline, Rect, Svg, Text } from '@react-pdf/renderer';
-import { TEXT_SIZE, type Sketch, type SketchRole, type SketchShape } from '@hoopline/present';
+import {
+  fontOf,
+  pointsOf,
+  strokeOf,
+  type Sketch,
+  type SketchRole,
+  type SketchShape,
+} from '@hoopline/present';
 import type { ReactNode } from 'react';
 import { FONT_FAMILY } from './fonts';
 
@@ -26,8 +33,7 @@ function draw(shape: SketchShape, key: number): ReactNode {
           height={shape.height}
           fill={colour(shape.fill)}
           stroke={colour(shape.stroke)}
-          strokeWidth={shape.strokeWidth ?? 1}
-          {...(shape.dashed ? { strokeDasharray: '6 3' } : {})}
+          {...strokeOf(shape)}
         />
       );
     case 'circle':
@@ -39,8 +45,7 @@ function draw(shape: SketchShape, key: number): ReactNode {
           r={shape.r}
           fill={colour(shape.fill)}
           stroke={colour(shape.stroke)}
-          strokeWidth={shape.strokeWidth ?? 1}
-          {...(shape.dashed ? { strokeDasharray: '6 3' } : {})}
+          {...strokeOf(shape)}
         />
       );
     case 'line':
@@ -52,22 +57,15 @@ function draw(shape: SketchShape, key: number): ReactNode {
           x2={shape.x2}
           y2={shape.y2}
           stroke={COLOUR[shape.stroke]}
-          strokeWidth={shape.strokeWidth ?? 1}
-          {...(shape.pattern === 'dash'
-            ? { strokeDasharray: '6 3' }
-            : shape.pattern === 'centre'
-              ? { strokeDasharray: '10 3 2 3' }
-              : {})}
+          {...strokeOf(shape)}
         />
       );
     case 'path': {
-      const points = shape.points.map((p) => `${p.x.toFixed(1)},${p.y.toFixed(1)}`).join(' ');
       const common = {
-        points,
+        points: pointsOf(shape),
         fill: colour(shape.fill),
         stroke: colour(shape.stroke),
-        strokeWidth: shape.strokeWidth ?? 1,
-        ...(shape.opacity !== undefined ? { strokeOpacity: shape.opacity } : {}),
+        ...strokeOf(shape),
       };
       return shape.closed ? <Polygon key={key} {...common} /> : <Polyline key={key} {...common} />;
     }
@@ -79,11 +77,7 @@ function draw(shape: SketchShape, key: number): ReactNode {
           y={shape.y}
           textAnchor={shape.anchor}
           fill={COLOUR[shape.role]}
-          style={{
-            fontFamily: FONT_FAMILY,
-            fontSize: TEXT_SIZE[shape.size],
-            fontWeight: shape.size === 'label' ? 500 : 400,
-          }}
+          style={{ fontFamily: FONT_FAMILY, ...fontOf(shape) }}
         >
           {shape.text}
         </Text>

@@ -92,3 +92,43 @@ export const TEXT_SIZE = { label: 11, note: 10 } as const;
 export function textWidth(text: string, size: 'label' | 'note'): number {
   return text.length * TEXT_SIZE[size] * 0.62;
 }
+
+/** How a shape's outline is stroked, as SVG attributes both renderers pass on as they are. */
+export interface StrokeAttributes {
+  readonly strokeWidth: number;
+  readonly strokeDasharray?: string;
+  readonly strokeOpacity?: number;
+}
+
+const DASH = { dash: '6 3', centre: '10 3 2 3' } as const;
+
+/** The stroke of a shape: its width (1 unless given), its dash pattern and opacity where it has them. */
+export function strokeOf(shape: Exclude<Shape, { type: 'text' }>): StrokeAttributes {
+  const strokeWidth = shape.strokeWidth ?? 1;
+  switch (shape.type) {
+    case 'rect':
+    case 'circle':
+      return shape.dashed ? { strokeWidth, strokeDasharray: DASH.dash } : { strokeWidth };
+    case 'line':
+      return shape.pattern
+        ? { strokeWidth, strokeDasharray: DASH[shape.pattern] }
+        : { strokeWidth };
+    case 'path':
+      return shape.opacity !== undefined
+        ? { strokeWidth, strokeOpacity: shape.opacity }
+        : { strokeWidth };
+  }
+}
+
+/** A path's points as an SVG `points` attribute, to 0.1 view unit. */
+export function pointsOf(shape: Extract<Shape, { type: 'path' }>): string {
+  return shape.points.map((p) => `${p.x.toFixed(1)},${p.y.toFixed(1)}`).join(' ');
+}
+
+/** A text's font size (view units) and weight: labels medium, notes regular. */
+export function fontOf(shape: Extract<Shape, { type: 'text' }>): {
+  readonly fontSize: number;
+  readonly fontWeight: 400 | 500;
+} {
+  return { fontSize: TEXT_SIZE[shape.size], fontWeight: shape.size === 'label' ? 500 : 400 };
+}

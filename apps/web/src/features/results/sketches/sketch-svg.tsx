@@ -1,4 +1,11 @@
-import type { Sketch, SketchRole, SketchShape } from '@hoopline/present';
+import {
+  fontOf,
+  pointsOf,
+  strokeOf,
+  type Sketch,
+  type SketchRole,
+  type SketchShape,
+} from '@hoopline/present';
 import type { ReactNode } from 'react';
 
 /** Theme classes for each role (they follow light and dark mode). */
@@ -30,10 +37,6 @@ function paint(
   return fill === 'none' ? { className: classes, fill: 'none' } : { className: classes };
 }
 
-function points(shape: Extract<SketchShape, { type: 'path' }>): string {
-  return shape.points.map((p) => `${p.x.toFixed(1)},${p.y.toFixed(1)}`).join(' ');
-}
-
 function draw(shape: SketchShape, key: number): ReactNode {
   switch (shape.type) {
     case 'rect':
@@ -44,8 +47,7 @@ function draw(shape: SketchShape, key: number): ReactNode {
           y={shape.y}
           width={shape.width}
           height={shape.height}
-          strokeWidth={shape.strokeWidth ?? 1}
-          {...(shape.dashed ? { strokeDasharray: '6 3' } : {})}
+          {...strokeOf(shape)}
           {...paint(shape.fill, shape.stroke)}
         />
       );
@@ -56,8 +58,7 @@ function draw(shape: SketchShape, key: number): ReactNode {
           cx={shape.cx}
           cy={shape.cy}
           r={shape.r}
-          strokeWidth={shape.strokeWidth ?? 1}
-          {...(shape.dashed ? { strokeDasharray: '6 3' } : {})}
+          {...strokeOf(shape)}
           {...paint(shape.fill, shape.stroke)}
         />
       );
@@ -70,29 +71,22 @@ function draw(shape: SketchShape, key: number): ReactNode {
           x2={shape.x2}
           y2={shape.y2}
           className={STROKE[shape.stroke]}
-          strokeWidth={shape.strokeWidth ?? 1}
-          {...(shape.pattern === 'dash'
-            ? { strokeDasharray: '6 3' }
-            : shape.pattern === 'centre'
-              ? { strokeDasharray: '10 3 2 3' }
-              : {})}
+          {...strokeOf(shape)}
         />
       );
     case 'path':
       return shape.closed ? (
         <polygon
           key={key}
-          points={points(shape)}
-          strokeWidth={shape.strokeWidth ?? 1}
-          {...(shape.opacity !== undefined ? { strokeOpacity: shape.opacity } : {})}
+          points={pointsOf(shape)}
+          {...strokeOf(shape)}
           {...paint(shape.fill, shape.stroke)}
         />
       ) : (
         <polyline
           key={key}
-          points={points(shape)}
-          strokeWidth={shape.strokeWidth ?? 1}
-          {...(shape.opacity !== undefined ? { strokeOpacity: shape.opacity } : {})}
+          points={pointsOf(shape)}
+          {...strokeOf(shape)}
           {...paint(shape.fill, shape.stroke)}
         />
       );
@@ -103,7 +97,8 @@ function draw(shape: SketchShape, key: number): ReactNode {
           x={shape.x}
           y={shape.y}
           textAnchor={shape.anchor}
-          className={`${FILL[shape.role]} ${shape.size === 'label' ? 'text-[11px] font-medium' : 'text-[10px]'}`}
+          className={FILL[shape.role]}
+          {...fontOf(shape)}
         >
           {shape.text}
         </text>
