@@ -49,6 +49,23 @@ export class Trail {
     });
   }
 
+  /**
+   * What a balanced case (no pressure difference) records after its
+   * differential step: a statement that there is nothing to check, with the
+   * two absolute pressures that balance.
+   */
+  balanced(loadCase: ResolvedLoadCase): void {
+    this.step({
+      id: 'balanced',
+      label: 'No pressure difference',
+      expression: 'p_inside = p_outside',
+      substituted: `${formatNumber(loadCase.internal)} Pa = ${formatNumber(loadCase.external)} Pa`,
+      value: null,
+      unit: 'Pa',
+      source: 'nothing to check in this case',
+    });
+  }
+
   /** Records demand ≤ capacity. A capacity must be positive and finite. */
   check(check: Omit<Check, 'utilisation' | 'pass'>): Check {
     if (!(check.capacity > 0) || !Number.isFinite(check.capacity)) {

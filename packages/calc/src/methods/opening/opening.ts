@@ -978,15 +978,7 @@ function externalCase(
 function balancedCase(loadCase: ResolvedLoadCase): Trail {
   const trail = new Trail();
   pressureStep(trail, loadCase);
-  trail.step({
-    id: 'balanced',
-    label: 'No pressure difference',
-    expression: 'p_inside = p_outside',
-    substituted: `${formatNumber(loadCase.internal)} Pa = ${formatNumber(loadCase.external)} Pa`,
-    value: null,
-    unit: 'Pa',
-    source: 'nothing to check in this case',
-  });
+  trail.balanced(loadCase);
   return trail;
 }
 
