@@ -269,7 +269,9 @@ function main() {
   if (check) {
     const layers = layersFor(root);
     if (!layers) {
-      console.error(`\nno layer order is set for ${root} (apps/api/src and packages/calc/src have one)`);
+      console.error(
+        `\nno layer order is set for ${root} (apps/api/src and packages/calc/src have one)`,
+      );
       process.exitCode = 2;
       return;
     }

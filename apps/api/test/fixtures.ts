@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 type TestAgent = ReturnType<typeof request.agent>;
 import { UserEntity } from '../src/db/entities/user.entity';
+import type { RevisionStatus } from '@hoopline/contract';
 import type { Actor, Role } from '../src/policy/policy';
 import type { TestApp } from './test-app';
 
@@ -220,7 +221,7 @@ export function personaUser(world: World, persona: Persona): TestUser | undefine
 export async function makeComponent(
   t: TestApp,
   world: World,
-  state: 'draft' | 'submitted' | 'countersigned' | 'returned' = 'draft',
+  state: RevisionStatus = 'draft',
   name = `Plate ${randomUUID().slice(0, 6)}`,
   thickness = '12 mm',
 ) {

@@ -6,7 +6,7 @@
  * Nothing registers itself: a rule not written here does not exist.
  */
 
-import type { ProjectCreation, Role } from '@hoopline/contract';
+import type { ProjectCreation, RevisionStatus, Role } from '@hoopline/contract';
 
 export type { ProjectCreation, Role };
 
@@ -24,7 +24,7 @@ export interface ProjectStanding {
 
 export interface RevisionFacts {
   readonly authorId: string;
-  readonly status: 'draft' | 'submitted' | 'countersigned' | 'returned';
+  readonly status: RevisionStatus;
 }
 
 export type Refusal = { readonly allowed: false; readonly code: string; readonly reason: string };

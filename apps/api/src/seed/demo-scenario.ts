@@ -5,7 +5,7 @@
  * every report is computed by the engine and every revision hashed.
  */
 import type { ComponentKind } from '@hoopline/calc';
-import type { Role } from '../policy/policy';
+import type { RevisionStatus, Role } from '@hoopline/contract';
 
 export type DemoPerson = 'theo' | 'dana' | 'ravi' | 'mara';
 
@@ -67,7 +67,7 @@ export interface DemoStep {
   readonly inputs: Record<string, unknown>;
   readonly note: string;
   /** Where this revision ends: left a draft, submitted, or decided by the checker. */
-  readonly outcome: 'draft' | 'submitted' | 'countersigned' | 'returned';
+  readonly outcome: RevisionStatus;
   readonly comment?: string;
 }
 

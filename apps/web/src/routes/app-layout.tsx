@@ -3,7 +3,7 @@ import { useEffect, useState } from 'react';
 import { NavLink, Outlet, useLocation, useNavigate } from 'react-router-dom';
 import { onSessionLost } from '../api/client';
 import { useMe, useSignOut, useUpdateMe } from '../api/session';
-import type { UnitSystem } from '@hoopline/contract';
+import { UNIT_SYSTEMS, type UnitSystem } from '@hoopline/contract';
 import { useCheckQueue } from '../api/work';
 import { ProgressBar } from '../components/progress-bar';
 import { ThemeSwitch } from '../components/theme-switch';
@@ -37,7 +37,7 @@ function UnitSwitch({ system }: { system: UnitSystem }) {
     <fieldset className="flex items-center gap-1 text-xs text-muted">
       <legend className="sr-only">Display units</legend>
       <span aria-hidden="true">Units</span>
-      {(['si', 'us'] as const).map((s) => (
+      {UNIT_SYSTEMS.map((s) => (
         <label
           key={s}
           className={`cursor-pointer rounded border px-1.5 py-0.5 ${

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { useProjectComponents } from '../api/components';
 import { useProject } from '../api/projects';
-import type { Component } from '@hoopline/contract';
+import type { Component, UnitSystem } from '@hoopline/contract';
 import { StatusBadge, RoleBadge, VerdictBadge } from '../components/badges';
 import { ButtonLink } from '../components/button';
 import { DataTable, Pagination, type Column } from '../components/data-table';
@@ -15,7 +15,7 @@ import { show } from '@hoopline/present';
 import { useUnitSystem } from '../lib/unit-system';
 import { useMe } from '../api/session';
 
-function siteText(site: unknown, system: 'si' | 'us'): string {
+function siteText(site: unknown, system: UnitSystem): string {
   const s = (site ?? {}) as { altitude?: number; ambientPressure?: number };
   if (s.altitude !== undefined) return `standard atmosphere at ${show(s.altitude, 'm', system)}`;
   if (s.ambientPressure !== undefined) return 'given';

@@ -2,14 +2,7 @@ import { ENGINE_NAME, ENGINE_VERSION } from '../version';
 import { caution, type CautionCode } from './cautions';
 import { ambientStep } from './load-cases';
 import type { MethodContext, MethodDefinition, MethodResult } from './method';
-import type { z } from 'zod';
-import type {
-  CaseReport,
-  Governing,
-  Report,
-  ValidityWarning,
-  Verdict,
-} from './report';
+import type { CaseReport, Governing, Report, ValidityWarning, Verdict } from './report';
 import { outsideValidityWarnings } from './validity';
 
 /** Whether the component gives a temperature anywhere, and its own design temperature. */
