@@ -82,6 +82,7 @@ const styles = StyleSheet.create({
   row: { flexDirection: 'row' },
   cell: { paddingRight: 4 },
   small: { fontSize: 7, color: MUTED },
+  date: { fontFamily: MONO_FAMILY, fontSize: 6.5 },
   stamp: {
     position: 'absolute',
     top: 360,
@@ -109,12 +110,15 @@ const styles = StyleSheet.create({
 const WIDTHS = {
   component: '24%',
   revision: '6%',
-  prepared: '17%',
-  countersigned: '17%',
-  governing: '22%',
+  prepared: '18%',
+  countersigned: '18%',
+  governing: '20%',
   verdict: '8%',
   pages: '6%',
 } as const;
+
+// The line breaker's "infinite" penalty (as on the sheet): an ISO date is never split with a hyphen.
+const NEVER_HYPHENATE = 10_000;
 
 function Cell({
   width,
@@ -126,7 +130,10 @@ function Cell({
   bold?: boolean;
 }) {
   return (
-    <Text style={[styles.cell, { width }, ...(bold ? [{ fontWeight: 600 }] : [])]}>
+    <Text
+      style={[styles.cell, { width }, ...(bold ? [{ fontWeight: 600 }] : [])]}
+      hyphenationPenalty={NEVER_HYPHENATE}
+    >
       {children}
     </Text>
   );
@@ -237,12 +244,12 @@ export function PackageIndexDocument({
                     <Cell width={WIDTHS.prepared}>
                       {r.preparedBy}
                       {'\n'}
-                      {when(r.submittedAt)}
+                      <Text style={styles.date}>{when(r.submittedAt)}</Text>
                     </Cell>
                     <Cell width={WIDTHS.countersigned}>
                       {r.countersignedBy}
                       {'\n'}
-                      {when(r.countersignedAt)}
+                      <Text style={styles.date}>{when(r.countersignedAt)}</Text>
                     </Cell>
                     <Cell width={WIDTHS.governing}>
                       {r.governing
