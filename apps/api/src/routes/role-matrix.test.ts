@@ -491,6 +491,25 @@ describe('role × route matrix (every route, every persona)', () => {
         ),
     },
     {
+      route: 'GET /api/projects/:id/components/table',
+      expect: membersRead,
+      call: (s) => s.get(`${P()}/components/table`),
+    },
+    {
+      route: 'GET /api/projects/:id/components.csv',
+      expect: membersRead,
+      call: (s) => s.get(`${P()}/components.csv`),
+    },
+    {
+      // Whoever may download a countersigned sheet: every member and admins.
+      route: 'GET /api/projects/:id/package.pdf',
+      expect: membersRead,
+      call: async (s) => {
+        await makeComponent(t, w, 'countersigned');
+        return s.get(`${P()}/package.pdf`);
+      },
+    },
+    {
       route: 'GET /api/check-queue',
       expect: signedIn(200),
       call: (s) => s.get('/api/check-queue'),
@@ -522,6 +541,15 @@ describe('role × route matrix (every route, every persona)', () => {
       route: 'GET /api/verify/:code',
       expect: all(200),
       call: async (s) => s.get(`/api/verify/${(await makeComponent(t, w, 'countersigned')).hash}`),
+    },
+    {
+      route: 'GET /api/verify/packages/:code',
+      expect: all(200),
+      call: async (s) => {
+        await makeComponent(t, w, 'countersigned');
+        const { packageCode } = await t.services.sheets.issuePackage(w.designer, w.projectId, 'A4');
+        return s.get(`/api/verify/packages/${packageCode}`);
+      },
     },
   ];
 
