@@ -192,7 +192,9 @@ test('the project table, its CSV and the issue package agree, and the package co
       await expect(row).toContainText('Countersigned');
       const cell = (await row.getByRole('cell').nth(4).textContent()) ?? '';
       expect(cell).toMatch(/^\d+(\.\d+)? %$/);
-      expect(Math.abs(Number(cell.replace(' %', '')) - r.governing!.utilisation * 100)).toBeLessThanOrEqual(0.1);
+      expect(
+        Math.abs(Number(cell.replace(' %', '')) - r.governing!.utilisation * 100),
+      ).toBeLessThanOrEqual(0.1);
       shown.set(r.component.name, cell.replace(' %', ''));
     }
     // Sorted by utilisation, highest first: the order of the stored figures.

@@ -63,9 +63,9 @@ describe('the project table in words', () => {
     expect(presentTableRow(row(0.5, '0.9.0'), '1.0.0').engineNote).toMatch(
       /engine 0\.9\.0 .*1\.0\.0.*not screened again/,
     );
-    expect(presentTableRow({ ...row(0.5), revision: null, governing: null }, '1.0.0')).toMatchObject(
-      { revision: '–', utilisation: '–', engineNote: null },
-    );
+    expect(
+      presentTableRow({ ...row(0.5), revision: null, governing: null }, '1.0.0'),
+    ).toMatchObject({ revision: '–', utilisation: '–', engineNote: null });
   });
 
   it('prints a package code from the first 12 digits of the package hash', () => {

@@ -182,7 +182,9 @@ describe('answers match the contract (@hoopline/contract response schemas)', () 
       contract.componentTable,
       (await fabricator.get(`/api/projects/${w.projectId}/components/table`).expect(200)).body,
     );
-    const issued = await fabricator.download(`/api/projects/${w.projectId}/package.pdf`).expect(200);
+    const issued = await fabricator
+      .download(`/api/projects/${w.projectId}/package.pdf`)
+      .expect(200);
     const packageCode = issued.headers['x-hoopline-package-code'] as string;
     const known = (await anonymous(t).get(`/api/verify/packages/${packageCode}`).expect(200)).body;
     expect(known.match).toBe(true);

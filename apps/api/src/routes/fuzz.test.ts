@@ -408,7 +408,10 @@ function targets(c: () => Context): Target[] {
       route: 'GET /api/projects/:id/package.pdf',
       as: 'designer',
       path: fc
-        .tuple(id(() => c().project), queryOf(['paper']))
+        .tuple(
+          id(() => c().project),
+          queryOf(['paper']),
+        )
         .map(([p, q]) => `/api/projects/${p}/package.pdf${q}`),
       payload: none,
     },

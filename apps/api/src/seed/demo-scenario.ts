@@ -560,7 +560,8 @@ export const DEMO_PROJECTS: readonly DemoProject[] = [
             },
             note: 'Rear wall, 8 mm 304 on 80 × 10 mm flat bars at 200 mm, screened at the 200 °C cure.',
             outcome: 'countersigned',
-            comment: 'Properties at 200 °C from the derating tables; the cold vent case does not govern.',
+            comment:
+              'Properties at 200 °C from the derating tables; the cold vent case does not govern.',
           },
         ],
       },

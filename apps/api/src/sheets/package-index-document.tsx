@@ -174,8 +174,8 @@ export function PackageIndexDocument({
         </Text>
         <View style={styles.footer} fixed>
           <Text>
-            {stamp}. Screening only; defer to the applicable code and a qualified engineer. Index
-            of package {data.packageCode}, generated {when(data.generatedAt)}.
+            {stamp}. Screening only; defer to the applicable code and a qualified engineer. Index of
+            package {data.packageCode}, generated {when(data.generatedAt)}.
           </Text>
         </View>
 

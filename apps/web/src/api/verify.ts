@@ -17,8 +17,7 @@ export function useVerify(code: string) {
 export function useVerifyPackage(code: string) {
   return useQuery({
     queryKey: ['verify', 'package', code],
-    queryFn: () =>
-      apiFetch<PackageVerifyResult>(`/verify/packages/${encodeURIComponent(code)}`),
+    queryFn: () => apiFetch<PackageVerifyResult>(`/verify/packages/${encodeURIComponent(code)}`),
     enabled: code !== '',
     staleTime: 0,
   });

@@ -85,7 +85,8 @@ export function DataTable<Row>({
   const inBrowser = !onSort;
   const [localSort, setLocalSort] = useState<SortState | undefined>(initialSort);
   const sort = inBrowser ? localSort : serverSort;
-  const keyOf = (column: Column<Row>) => (inBrowser ? (column.sortValue ? column.key : undefined) : column.sortKey);
+  const keyOf = (column: Column<Row>) =>
+    inBrowser ? (column.sortValue ? column.key : undefined) : column.sortKey;
   const changeSort = inBrowser ? setLocalSort : onSort;
   const shown = useMemo(() => {
     if (!inBrowser || !localSort) return rows;

@@ -211,7 +211,10 @@ describe('readVerifyCode', () => {
   });
 
   it('reads package codes as typed', () => {
-    expect(readVerifyCode(' pkg 3F9A-0c11-7be2 ')).toEqual({ ok: true, code: 'PKG-3f9a-0c11-7be2' });
+    expect(readVerifyCode(' pkg 3F9A-0c11-7be2 ')).toEqual({
+      ok: true,
+      code: 'PKG-3f9a-0c11-7be2',
+    });
     expect(readVerifyCode('PKG-3f9a')).toMatchObject({ ok: false });
   });
 });

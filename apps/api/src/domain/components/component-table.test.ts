@@ -95,9 +95,9 @@ describe('the project table and its CSV', () => {
   it('shows a fabricator the issued components and their issued revisions only', async () => {
     const table = (await fabricator.get(`${P()}/components/table`).expect(200))
       .body as ComponentTable;
-    expect(table.rows.map((r) => [r.component.name, r.revision?.number, r.revision?.status])).toEqual(
-      [['B door plate', 1, 'countersigned']],
-    );
+    expect(
+      table.rows.map((r) => [r.component.name, r.revision?.number, r.revision?.status]),
+    ).toEqual([['B door plate', 1, 'countersigned']]);
   });
 
   it('reads the stored report, and says when another engine version wrote it', async () => {
@@ -125,9 +125,7 @@ describe('the project table and its CSV', () => {
   it('writes RFC 4180 CSV with the table’s numbers, ISO dates, quoting and no formulas', async () => {
     const res = await designer.get(`${P()}/components.csv`).expect(200);
     expect(res.headers['content-type']).toMatch(/^text\/csv; charset=utf-8/);
-    expect(res.headers['content-disposition']).toBe(
-      'attachment; filename=CH-1_components.csv',
-    );
+    expect(res.headers['content-disposition']).toBe('attachment; filename=CH-1_components.csv');
     const text = res.text;
     expect(text.charCodeAt(0)).toBe(0xfeff);
     // RFC 4180 §2: records end in CRLF; a field with a quote or comma is quoted, quotes doubled.

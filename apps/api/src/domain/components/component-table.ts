@@ -65,11 +65,7 @@ export class ComponentTableService {
   async table(actor: Actor, projectId: string): Promise<ComponentTable> {
     const manager = this.dataSource.manager;
     const standing = await requireProjectStanding(manager, actor, projectId);
-    const found = await componentRepository.tableRows(
-      manager,
-      projectId,
-      seesOnlyIssued(standing),
-    );
+    const found = await componentRepository.tableRows(manager, projectId, seesOnlyIssued(standing));
     return { projectId, engineVersion: ENGINE_VERSION, rows: found.map(tableRow) };
   }
 

@@ -14,7 +14,7 @@ import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import { ENGINE_VERSION, computeReport, parseComponent, type Report } from '@hoopline/calc';
 import { toJson } from '../../db/entities/json';
-import type { RevisionEntity, SignOffDecision } from '../../db/entities/revision.entity';
+import type { SignOffDecision } from '../../db/entities/revision.entity';
 import { conflict, notFound, validationFailed } from '../../http/errors';
 import { pageOf, type Page, type PageRequest } from '../../http/pagination';
 import {

@@ -166,9 +166,7 @@ describe('the issue package (index + countersigned sheets, one PDF)', () => {
 
   it('verifies its code publicly: project, revisions, hashes, verdicts and sign-offs, current', async () => {
     const answer = (
-      await anonymous(t)
-        .get(`/api/verify/packages/${firstCode.toLowerCase()}`)
-        .expect(200)
+      await anonymous(t).get(`/api/verify/packages/${firstCode.toLowerCase()}`).expect(200)
     ).body as PackageVerifyResult;
     if (!answer.match) throw new Error('no match');
     expect(answer).toMatchObject({
@@ -199,9 +197,7 @@ describe('the issue package (index + countersigned sheets, one PDF)', () => {
       .get(`/api/verify/packages/${encodeURIComponent(`pkg ${answer.packageHash.toUpperCase()}`)}`)
       .expect(200)
       .expect((r) => expect(r.body.match).toBe(true));
-    await anonymous(t)
-      .get('/api/verify/packages/PKG-0000-0000-0000')
-      .expect(200, { match: false });
+    await anonymous(t).get('/api/verify/packages/PKG-0000-0000-0000').expect(200, { match: false });
     const bad = await anonymous(t).get('/api/verify/packages/abcd-ef01-2345').expect(400);
     expect(bad.body.error.fields[0].path).toBe('code');
   });

@@ -171,8 +171,8 @@ export class SheetsService {
   }> {
     const manager = this.dataSource.manager;
     const standing = await requireProjectStanding(manager, actor, projectId);
-    const components = (await componentRepository.issuedOfProject(manager, projectId)).filter(
-      (c) => canSeeComponent(standing, { hasIssuedRevision: c.issued_revision_id !== null }),
+    const components = (await componentRepository.issuedOfProject(manager, projectId)).filter((c) =>
+      canSeeComponent(standing, { hasIssuedRevision: c.issued_revision_id !== null }),
     );
     const issued = components.filter((c) => c.issued_revision_id !== null);
     if (issued.length === 0) {

@@ -15,13 +15,7 @@ const VERDICT_RANK = { 'no-checks': 0, pass: 1, 'outside-validity': 2, fail: 3 }
  * presentTableRow, as the CSV prints them). Sorted in the browser by any
  * column; a report from another engine version says so in its row.
  */
-export function ComponentTableView({
-  table,
-  empty,
-}: {
-  table: ComponentTable;
-  empty: string;
-}) {
+export function ComponentTableView({ table, empty }: { table: ComponentTable; empty: string }) {
   const shown = (row: ComponentTableRow) => presentTableRow(row, table.engineVersion);
   const columns: Column<ComponentTableRow>[] = [
     {

@@ -33,9 +33,9 @@ export function PackageVerifyAnswer({
           {code} does not match any issue package
         </h2>
         <p className="mt-1 text-sm">
-          No issue package of countersigned Hoopline revisions has this code, or a revision in it
-          no longer matches its hash. Do not quote or build from it; ask its sender for the
-          current package.
+          No issue package of countersigned Hoopline revisions has this code, or a revision in it no
+          longer matches its hash. Do not quote or build from it; ask its sender for the current
+          package.
         </p>
       </section>
     );
@@ -108,7 +108,9 @@ export function PackageVerifyAnswer({
                   <dt className="text-muted">Governing check</dt>
                   <dd>
                     {c.governing.checkLabel}, load case {c.governing.loadCase}, at{' '}
-                    <span className="num font-medium">{formatPercent(c.governing.utilisation)}</span>
+                    <span className="num font-medium">
+                      {formatPercent(c.governing.utilisation)}
+                    </span>
                   </dd>
                 </>
               ) : null}

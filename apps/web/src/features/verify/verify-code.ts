@@ -21,8 +21,7 @@ export function readVerifyCode(
     if (/^[0-9a-f]{64}$/.test(digits)) return { ok: true, code: `PKG-${digits}` };
     return {
       ok: false,
-      reason:
-        'A package code is PKG and 12 digits 0–9 or letters a–f, such as PKG-3f9a-0c11-7be2.',
+      reason: 'A package code is PKG and 12 digits 0–9 or letters a–f, such as PKG-3f9a-0c11-7be2.',
     };
   }
   if (/^[0-9a-f]{12}$/.test(hex)) {
