@@ -100,6 +100,27 @@ describe('role × route matrix (every route, every persona)', () => {
 
   const P = () => `/api/projects/${w.projectId}`;
   const freshUser = () => makeUser(t);
+  // The package rows: a second project with the same people and one countersigned component (a
+  // package renders every countersigned sheet of its project: the shared one has many by then).
+  let small: Promise<string> | undefined;
+  let packageCode: Promise<string> | undefined;
+  const smallProject = () =>
+    (small ??= (async () => {
+      const project = await t.services.projects.create(w.designer, {
+        number: `PK-${randomUUID().slice(0, 8)}`,
+        name: 'Package project',
+        unitSystem: 'si',
+      });
+      for (const [user, role] of [
+        [w.checker, 'checker'],
+        [w.checker2, 'checker'],
+        [w.fabricator, 'fabricator'],
+      ] as const) {
+        await t.services.projects.setMember(w.admin, project.id, user.id, role);
+      }
+      await makeComponent(t, { ...w, projectId: project.id }, 'countersigned');
+      return project.id;
+    })());
   const rows: Row[] = [
     { route: 'GET /api/health', expect: all(200), call: (s) => s.get('/api/health') },
     {
@@ -505,8 +526,7 @@ describe('role × route matrix (every route, every persona)', () => {
       route: 'GET /api/projects/:id/package.pdf',
       expect: membersRead,
       call: async (s) => {
-        await makeComponent(t, w, 'countersigned');
-        return s.get(`${P()}/package.pdf`);
+        return s.get(`/api/projects/${await smallProject()}/package.pdf`);
       },
     },
     {
@@ -546,9 +566,11 @@ describe('role × route matrix (every route, every persona)', () => {
       route: 'GET /api/verify/packages/:code',
       expect: all(200),
       call: async (s) => {
-        await makeComponent(t, w, 'countersigned');
-        const { packageCode } = await t.services.sheets.issuePackage(w.designer, w.projectId, 'A4');
-        return s.get(`/api/verify/packages/${packageCode}`);
+        const projectId = await smallProject();
+        packageCode ??= t.services.sheets
+          .issuePackage(w.designer, projectId, 'A4')
+          .then((p) => p.packageCode);
+        return s.get(`/api/verify/packages/${await packageCode}`);
       },
     },
   ];

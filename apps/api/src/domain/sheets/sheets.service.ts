@@ -235,13 +235,12 @@ export class SheetsService {
       included.map((i) => i.revision.contentHash),
     );
     const code = packageCode(packageHash);
-    const sheets: Buffer[] = [];
-    const sources: SheetSource[] = [];
-    for (const { revision, content } of included) {
-      const { sheet, source } = await this.cachedOrRendered(revision.id, content);
-      sheets.push(sheet.pdf);
-      sources.push(source);
-    }
+    // Side by side: each goes to a sheet thread (or comes from the cache) on its own.
+    const rendered = await Promise.all(
+      included.map(({ revision, content }) => this.cachedOrRendered(revision.id, content)),
+    );
+    const sheets = rendered.map((r) => r.sheet.pdf);
+    const sources: SheetSource[] = rendered.map((r) => r.source);
     const generatedAt = new Date();
     const { project } = standing;
     const { pdf, totalPages, indexPages } = await this.renderer.renderPackage({
