@@ -46,6 +46,21 @@ export type {
   PresentedStep,
   PresentedWarning,
 } from './report';
+export {
+  NO_VALUE,
+  PACKAGE_WORDS,
+  TABLE_CSV_HEADER,
+  countersignedSince,
+  engineNote,
+  isoInstant,
+  packageCode,
+  packageStaleness,
+  percentFigure,
+  presentTableRow,
+  supersededFor,
+  tableCsvRecord,
+} from './project-table';
+export type { PresentedTableRow } from './project-table';
 export { inputLabel, presentInputs } from './inputs';
 export type { PresentedInput } from './inputs';
 export { sketchOf } from './sketches/component-sketch';

@@ -348,6 +348,31 @@ describe('bad input on every route: 400 with the fields, nothing written, never 
       fields: ['cases'],
     },
     {
+      name: 'GET /api/projects/:id/components/table',
+      as: 'designer',
+      call: (s) => s.get('/api/projects/not-a-uuid/components/table'),
+      fields: ['id'],
+    },
+    {
+      name: 'GET /api/projects/:id/components.csv',
+      as: 'designer',
+      call: (s) => s.get('/api/projects/not-a-uuid/components.csv'),
+      fields: ['id'],
+    },
+    {
+      name: 'GET /api/projects/:id/package.pdf',
+      as: 'designer',
+      call: (s) => s.get(`${P()}/package.pdf?paper=a3&colour=red`),
+      fields: ['', 'paper'],
+    },
+    {
+      name: 'GET /api/verify/packages/:code',
+      as: 'anonymous',
+      // A sheet's verify code is not a package code.
+      call: (s) => s.get('/api/verify/packages/abcd-ef01-2345'),
+      fields: ['code'],
+    },
+    {
       name: 'GET /api/verify/:code',
       as: 'anonymous',
       call: (s) => s.get('/api/verify/not-a-code'),

@@ -174,6 +174,25 @@ describe('answers match the contract (@hoopline/contract response schemas)', () 
       contract.verifyResult,
       (await anonymous(t).get('/api/verify/0000-0000-0000').expect(200)).body,
     );
+    shape(
+      contract.componentTable,
+      (await designer.get(`/api/projects/${w.projectId}/components/table`).expect(200)).body,
+    );
+    shape(
+      contract.componentTable,
+      (await fabricator.get(`/api/projects/${w.projectId}/components/table`).expect(200)).body,
+    );
+    const issued = await fabricator
+      .download(`/api/projects/${w.projectId}/package.pdf`)
+      .expect(200);
+    const packageCode = issued.headers['x-hoopline-package-code'] as string;
+    const known = (await anonymous(t).get(`/api/verify/packages/${packageCode}`).expect(200)).body;
+    expect(known.match).toBe(true);
+    shape(contract.packageVerifyResult, known);
+    shape(
+      contract.packageVerifyResult,
+      (await anonymous(t).get('/api/verify/packages/PKG-0000-0000-0000').expect(200)).body,
+    );
     shape(contract.pageOf(contract.auditEvent), (await admin.get('/api/audit').expect(200)).body);
   });
 

@@ -100,6 +100,27 @@ describe('role × route matrix (every route, every persona)', () => {
 
   const P = () => `/api/projects/${w.projectId}`;
   const freshUser = () => makeUser(t);
+  // The package rows: a second project with the same people and one countersigned component (a
+  // package renders every countersigned sheet of its project: the shared one has many by then).
+  let small: Promise<string> | undefined;
+  let packageCode: Promise<string> | undefined;
+  const smallProject = () =>
+    (small ??= (async () => {
+      const project = await t.services.projects.create(w.designer, {
+        number: `PK-${randomUUID().slice(0, 8)}`,
+        name: 'Package project',
+        unitSystem: 'si',
+      });
+      for (const [user, role] of [
+        [w.checker, 'checker'],
+        [w.checker2, 'checker'],
+        [w.fabricator, 'fabricator'],
+      ] as const) {
+        await t.services.projects.setMember(w.admin, project.id, user.id, role);
+      }
+      await makeComponent(t, { ...w, projectId: project.id }, 'countersigned');
+      return project.id;
+    })());
   const rows: Row[] = [
     { route: 'GET /api/health', expect: all(200), call: (s) => s.get('/api/health') },
     {
@@ -491,6 +512,24 @@ describe('role × route matrix (every route, every persona)', () => {
         ),
     },
     {
+      route: 'GET /api/projects/:id/components/table',
+      expect: membersRead,
+      call: (s) => s.get(`${P()}/components/table`),
+    },
+    {
+      route: 'GET /api/projects/:id/components.csv',
+      expect: membersRead,
+      call: (s) => s.get(`${P()}/components.csv`),
+    },
+    {
+      // Whoever may download a countersigned sheet: every member and admins.
+      route: 'GET /api/projects/:id/package.pdf',
+      expect: membersRead,
+      call: async (s) => {
+        return s.get(`/api/projects/${await smallProject()}/package.pdf`);
+      },
+    },
+    {
       route: 'GET /api/check-queue',
       expect: signedIn(200),
       call: (s) => s.get('/api/check-queue'),
@@ -522,6 +561,17 @@ describe('role × route matrix (every route, every persona)', () => {
       route: 'GET /api/verify/:code',
       expect: all(200),
       call: async (s) => s.get(`/api/verify/${(await makeComponent(t, w, 'countersigned')).hash}`),
+    },
+    {
+      route: 'GET /api/verify/packages/:code',
+      expect: all(200),
+      call: async (s) => {
+        const projectId = await smallProject();
+        packageCode ??= t.services.sheets
+          .issuePackage(w.designer, projectId, 'A4')
+          .then((p) => p.packageCode);
+        return s.get(`/api/verify/packages/${await packageCode}`);
+      },
     },
   ];
 

@@ -7,12 +7,14 @@ import type {
   Revision,
   RevisionSummary,
   VerifyResult,
+  PackageVerifyResult,
 } from '@hoopline/contract';
+import { packageCode } from '@hoopline/present';
 import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import { ENGINE_VERSION, computeReport, parseComponent, type Report } from '@hoopline/calc';
 import { toJson } from '../../db/entities/json';
-import type { RevisionEntity, SignOffDecision } from '../../db/entities/revision.entity';
+import type { SignOffDecision } from '../../db/entities/revision.entity';
 import { conflict, notFound, validationFailed } from '../../http/errors';
 import { pageOf, type Page, type PageRequest } from '../../http/pagination';
 import {
@@ -34,23 +36,12 @@ import type { Notifier } from '../../mail/notifier';
 import { projectDesignBasis, projectSite, staleVersion } from '../projects/projects.service';
 import { componentRepository } from '../../repositories/components.repository';
 import { revisionRepository } from '../../repositories/revisions.repository';
-import { isoRequired } from '../iso-dates';
+import { iso, isoRequired } from '../iso-dates';
 import { diffInputs, diffResults } from './diff';
-import { computeContent, contentHash } from './revision-content';
+import { computeContent, contentHash, packageHashOf, storedHashOf } from './revision-content';
+import { storedGoverning } from '../components/component-table';
+import { issuePackageRepository } from '../../repositories/issue-packages.repository';
 import { revisionView, summaryFromRow } from './revision-views';
-
-function storedHashOf(revision: RevisionEntity): string {
-  try {
-    return contentHash({
-      inputs: revision.inputs,
-      engineVersion: revision.engineVersion,
-      report: revision.report,
-    });
-  } catch {
-    // Stored data that cannot even be serialised has been tampered with.
-    return '';
-  }
-}
 
 /** Revisions: history, new revisions, the sign-off workflow, diff, integrity, verify. */
 export class RevisionsService {
@@ -387,6 +378,84 @@ export class RevisionsService {
         : null,
       preparedBy: names.author,
       countersignedBy: names.checker ?? '',
+    };
+  }
+
+  /**
+   * Public: does a package code (its 12 digits, or the 64 of the package
+   * hash) belong to an issue package whose revisions are all countersigned,
+   * their stored data still giving their hashes and the set still giving the
+   * package hash? Answers what the index prints, each revision's status
+   * (superseded where its component has a later countersigned revision), and
+   * the components countersigned since that the package does not hold.
+   */
+  async verifyPackage(hex: string): Promise<PackageVerifyResult> {
+    const manager = this.dataSource.manager;
+    const found = await issuePackageRepository.byCode(manager, hex);
+    // Two packages that share a code cannot be told apart: no answer.
+    if (found.length !== 1) return { match: false };
+    const pkg = found[0]!;
+    const held = await issuePackageRepository.revisions(manager, pkg.revision_ids);
+    if (held.length !== pkg.revision_ids.length) return { match: false };
+    const sound = held.every(
+      (r) =>
+        r.status === 'countersigned' &&
+        r.countersigned_at !== null &&
+        storedHashOf({ inputs: r.inputs, engineVersion: r.engine_version, report: r.report }) ===
+          r.content_hash,
+    );
+    if (!sound) return { match: false };
+    if (
+      packageHashOf(
+        pkg.project_id,
+        held.map((r) => r.content_hash),
+      ) !== pkg.hash
+    ) {
+      return { match: false };
+    }
+    const components = held.map((r) => {
+      const current = r.issued_id === r.id;
+      const g = storedGoverning((r.report as { governing?: unknown }).governing);
+      return {
+        componentName: r.c_name,
+        tag: r.c_tag,
+        kind: r.c_kind,
+        revisionNumber: r.number,
+        contentHash: r.content_hash,
+        verdict: r.verdict,
+        governing: g
+          ? { checkLabel: g.checkLabel, loadCase: g.loadCase, utilisation: g.utilisation }
+          : null,
+        preparedBy: r.author,
+        submittedAt: iso(r.submitted_at),
+        countersignedBy: r.checker ?? '',
+        countersignedAt: isoRequired(r.countersigned_at!),
+        status: current ? ('current' as const) : ('superseded' as const),
+        supersededBy: current ? null : r.issued_number,
+      };
+    });
+    const since = await issuePackageRepository.issuedOutside(
+      manager,
+      pkg.project_id,
+      pkg.revision_ids,
+    );
+    return {
+      match: true,
+      packageCode: packageCode(pkg.hash),
+      packageHash: pkg.hash,
+      status:
+        components.some((c) => c.status === 'superseded') || since.length > 0
+          ? 'superseded'
+          : 'current',
+      projectNumber: pkg.p_number,
+      projectName: pkg.p_name,
+      issuedAt: isoRequired(pkg.created_at),
+      components,
+      countersignedSince: since.map((c) => ({
+        componentName: c.name,
+        tag: c.tag,
+        revisionNumber: c.number,
+      })),
     };
   }
 
