@@ -420,14 +420,18 @@ export class RevisionsService {
     actor: Actor,
   ): Promise<WorkflowWarning | null> {
     const projectId = ctx.revision.projectId;
-    if ((await projectRepository.otherCheckers(manager, projectId, actor.id)) > 0) return null;
+    // Checkers other than the author: the author never countersigns their own work.
+    if ((await projectRepository.otherCheckers(manager, projectId, ctx.revision.authorId)) > 0)
+      return null;
     const whoCanAdd = (await projectRepository.whoManagesMembers(manager, projectId)).map(
       (m) => m.name,
     );
     return {
       code: 'no_checker',
       message:
-        'This project has no checker other than you, so nobody can countersign this revision yet. ' +
+        (ctx.revision.authorId === actor.id
+          ? 'This project has no checker other than you, so nobody can countersign this revision yet. '
+          : 'This project has no checker other than the author, so nobody can countersign this revision yet. ') +
         (whoCanAdd.length
           ? `${whoCanAdd.join(', ')} can add a checker on the members page.`
           : 'An administrator can add a checker on the members page.'),
