@@ -217,6 +217,28 @@ describe('who checks whom (issue 16.3)', () => {
     expect(list.hasChecker).toBe(false);
   });
 
+  it('another designer submitting the draft is told there is no checker other than its author', async () => {
+    const owner = await makeUser(t, { name: 'Pair Owner', mayCreateProjects: true });
+    const helper = await makeUser(t, { name: 'Pair Helper' });
+    const p = await t.services.projects.create(owner, {
+      number: `P-PAIR-${owner.id.slice(0, 6)}`,
+      name: 'Pair',
+      unitSystem: 'si',
+    });
+    await t.services.projects.setMember(owner, p.id, helper.id, 'designer');
+    const made = await t.services.components.create(owner, p.id, {
+      name: 'Flange',
+      inputs: plateInputs(),
+    });
+    const res = await (
+      await signIn(t, helper)
+    ).post(`/api/revisions/${made.revision.id}/submit`, {});
+    expect(res.status).toBe(200);
+    const [warning] = submittedRevision.parse(res.body).warnings ?? [];
+    expect(warning?.message).toMatch(/no checker other than the author/);
+    expect(warning?.whoCanAdd).not.toContain('Pair Helper');
+  });
+
   it('submitting on a project with a checker carries no warning', async () => {
     const c = await makeComponent(t, w, 'draft');
     const res = await (
