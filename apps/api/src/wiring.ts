@@ -43,7 +43,7 @@ export function createServices(
     tokens,
     auth,
     users: new UsersService(dataSource, config.auth, auth, notifier, config.mail.smtp !== null),
-    projects: new ProjectsService(dataSource),
+    projects: new ProjectsService(dataSource, notifier),
     components: new ComponentsService(dataSource),
     componentTable: new ComponentTableService(dataSource),
     revisions: new RevisionsService(dataSource, notifier),

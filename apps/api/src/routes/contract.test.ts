@@ -89,7 +89,7 @@ describe('answers match the contract (@hoopline/contract response schemas)', () 
     const project = shape(contract.project, created.body);
     expect(project.siteAsTyped).toEqual({ altitude: '5280 ft' });
     const members = (await designer.get(`/api/projects/${w.projectId}/members`).expect(200)).body;
-    shape(contract.member.array(), members.items);
+    shape(contract.memberList, members);
     const materials = (await designer.get(`/api/projects/${w.projectId}/materials`).expect(200))
       .body;
     shape(contract.customMaterialItem.array(), materials.items);
@@ -147,7 +147,10 @@ describe('answers match the contract (@hoopline/contract response schemas)', () 
           .expect(200)
       ).body,
     );
-    await designer.post(`/api/revisions/${second.revision.id}/submit`, {}).expect(200);
+    shape(
+      contract.submittedRevision,
+      (await designer.post(`/api/revisions/${second.revision.id}/submit`, {}).expect(200)).body,
+    );
     shape(
       contract.pageOf(contract.queueItem),
       (await checker.get('/api/check-queue').expect(200)).body,

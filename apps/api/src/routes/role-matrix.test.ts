@@ -53,6 +53,12 @@ const designerOrAdmin = (ok: number): Expect => ({
   'non-member': 404,
   'signed-out': 401,
 });
+/**
+ * The project's owner and admins change its members (issue 16.3). The world's
+ * designer started the project, so is its owner; a designer who is not the
+ * owner is refused (403), as who-checks.test.ts shows.
+ */
+const ownerOrAdmin = designerOrAdmin;
 /** Designers only (admins do not design). */
 const designerOnly = (ok: number, fabricator = 403): Expect => ({
   admin: 403,
@@ -285,12 +291,12 @@ describe('role × route matrix (every route, every persona)', () => {
     },
     {
       route: 'PUT /api/projects/:id/members/:userId',
-      expect: designerOrAdmin(200),
+      expect: ownerOrAdmin(200),
       call: async (s) => s.put(`${P()}/members/${(await freshUser()).id}`, { role: 'checker' }),
     },
     {
       route: 'DELETE /api/projects/:id/members/:userId',
-      expect: designerOrAdmin(204),
+      expect: ownerOrAdmin(204),
       call: async (s) => {
         const u = await freshUser();
         await t.services.projects.setMember(w.admin, w.projectId, u.id, 'fabricator');

@@ -6,8 +6,10 @@ import type {
   QueueItem,
   Revision,
   RevisionSummary,
+  SubmittedRevision,
   VerifyResult,
   PackageVerifyResult,
+  WorkflowWarning,
 } from '@hoopline/contract';
 import { packageCode } from '@hoopline/present';
 import { randomUUID } from 'node:crypto';
@@ -35,6 +37,7 @@ import {
 import type { Notifier } from '../../mail/notifier';
 import { projectDesignBasis, projectSite, staleVersion } from '../projects/projects.service';
 import { componentRepository } from '../../repositories/components.repository';
+import { projectRepository } from '../../repositories/projects.repository';
 import { revisionRepository } from '../../repositories/revisions.repository';
 import { iso, isoRequired } from '../iso-dates';
 import { diffInputs, diffResults } from './diff';
@@ -182,7 +185,12 @@ export class RevisionsService {
     };
   }
 
-  async submit(actor: Actor, revisionId: string): Promise<Revision> {
+  /**
+   * Submits a draft for check. On a project with no checker but the author,
+   * it still submits, and the answer warns that nobody can countersign it yet
+   * and names who can add a checker (the owner, administrators).
+   */
+  async submit(actor: Actor, revisionId: string): Promise<SubmittedRevision> {
     return this.dataSource.transaction(async (manager) => {
       const ctx = await this.lockForWorkflow(manager, actor, revisionId);
       enforce(canDesign(ctx.standing));
@@ -201,7 +209,9 @@ export class RevisionsService {
       await revisionRepository.markSubmitted(manager, revisionId);
       await this.audit(manager, actor, ctx, 'revision.submitted', 'draft', 'submitted');
       await this.notifier.revisionSubmitted(manager, { revisionId });
-      return revisionView(manager, revisionId);
+      const view = await revisionView(manager, revisionId);
+      const warning = await this.noCheckerWarning(manager, ctx, actor);
+      return warning ? { ...view, warnings: [warning] } : view;
     });
   }
 
@@ -471,6 +481,31 @@ export class RevisionsService {
       throw notFound('revision');
     });
     return requireRevision(manager, actor, revisionId, { lock: true });
+  }
+
+  private async noCheckerWarning(
+    manager: EntityManager,
+    ctx: RevisionContext,
+    actor: Actor,
+  ): Promise<WorkflowWarning | null> {
+    const projectId = ctx.revision.projectId;
+    // Checkers other than the author: the author never countersigns their own work.
+    if ((await projectRepository.otherCheckers(manager, projectId, ctx.revision.authorId)) > 0)
+      return null;
+    const whoCanAdd = (await projectRepository.whoManagesMembers(manager, projectId)).map(
+      (m) => m.name,
+    );
+    return {
+      code: 'no_checker',
+      message:
+        (ctx.revision.authorId === actor.id
+          ? 'This project has no checker other than you, so nobody can countersign this revision yet. '
+          : 'This project has no checker other than the author, so nobody can countersign this revision yet. ') +
+        (whoCanAdd.length
+          ? `${whoCanAdd.join(', ')} can add a checker on the members page.`
+          : 'An administrator can add a checker on the members page.'),
+      whoCanAdd,
+    };
   }
 
   private async audit(
