@@ -24,7 +24,43 @@ export interface AuditEventRow {
   project_id: string | null;
   summary: { before?: unknown; after?: unknown };
   created_at: Date;
+  project_number: string | null;
+  project_name: string | null;
+  component_id: string | null;
+  component_tag: string | null;
+  component_name: string | null;
+  revision_id: string | null;
+  revision_number: number | null;
+  person_id: string | null;
+  person_name: string | null;
+  file_name: string | null;
 }
+
+/**
+ * The event with the names of what it is about: its project, the component of a
+ * component, revision or attachment event, the revision's number, the person of a
+ * user, member or invitation event, the attachment's file name.
+ */
+const COLUMNS = `e.id, e.actor_id, u.name as actor_name, e.action, e.entity_type, e.entity_id,
+  e.project_id, e.summary, e.created_at,
+  p.number as project_number, p.name as project_name,
+  c.id as component_id, c.tag as component_tag, c.name as component_name,
+  r.id as revision_id, r.number as revision_number,
+  coalesce(tu.id, iu.id) as person_id, coalesce(tu.name, i.name) as person_name,
+  a.name as file_name`;
+
+const FROM = `audit_events e
+  left join users u on u.id = e.actor_id
+  left join projects p on p.id = e.project_id
+  left join revisions r on e.entity_type = 'revision' and r.id = e.entity_id
+  left join attachments a on e.entity_type = 'attachment' and a.id = e.entity_id
+  left join components c on c.id = case e.entity_type
+    when 'component' then e.entity_id
+    when 'revision' then r.component_id
+    when 'attachment' then a.component_id end
+  left join users tu on e.entity_type in ('user', 'member') and tu.id = e.entity_id
+  left join invitations i on e.entity_type = 'invitation' and i.id = e.entity_id
+  left join users iu on iu.id = i.accepted_user_id`;
 
 /** Table audit_events: written in the action's transaction, read newest first. */
 export const auditRepository = {
@@ -48,9 +84,8 @@ export const auditRepository = {
     return paged<AuditEventRow>(
       manager,
       {
-        columns: `e.id, e.actor_id, u.name as actor_name, e.action, e.entity_type, e.entity_id,
-                  e.project_id, e.summary, e.created_at`,
-        from: 'audit_events e left join users u on u.id = e.actor_id',
+        columns: COLUMNS,
+        from: FROM,
         where: w.where,
         params: w.params,
         orderBy: 'e.seq desc',

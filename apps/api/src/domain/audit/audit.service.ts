@@ -1,4 +1,4 @@
-import type { AuditEvent } from '@hoopline/contract';
+import type { AuditAction, AuditEvent } from '@hoopline/contract';
 import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import { toJson } from '../../db/entities/json';
@@ -11,7 +11,7 @@ import { requireProjectStanding } from '../projects/project-access';
 
 export interface AuditRecord {
   readonly actorId: string | null;
-  readonly action: string;
+  readonly action: AuditAction;
   readonly entityType: string;
   readonly entityId: string | null;
   readonly projectId?: string | null;
@@ -66,6 +66,21 @@ export class AuditService {
         entityType: r.entity_type,
         entityId: r.entity_id,
         projectId: r.project_id,
+        target: {
+          project:
+            r.project_id && r.project_name !== null
+              ? { id: r.project_id, number: r.project_number ?? '', name: r.project_name }
+              : null,
+          component: r.component_id
+            ? { id: r.component_id, tag: r.component_tag ?? '', name: r.component_name ?? '' }
+            : null,
+          revision:
+            r.revision_id && r.revision_number !== null
+              ? { id: r.revision_id, number: Number(r.revision_number) }
+              : null,
+          person: r.person_name !== null ? { id: r.person_id, name: r.person_name } : null,
+          fileName: r.file_name,
+        },
         summary: r.summary,
         createdAt: new Date(r.created_at).toISOString(),
       })),
