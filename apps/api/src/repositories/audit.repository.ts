@@ -1,6 +1,6 @@
 import type { EntityManager } from 'typeorm';
 import { AuditEventEntity } from '../db/entities/audit-event.entity';
-import { Where, paged } from '../db/sql';
+import { Where, paged, rows } from '../db/sql';
 import type { PageRequest } from '../http/pagination';
 
 /** Which events a page of the log holds; every key optional. */
@@ -74,13 +74,7 @@ export const auditRepository = {
     filter: AuditEventFilter,
     page: PageRequest,
   ): Promise<{ rows: AuditEventRow[]; total: number }> {
-    const w = new Where();
-    if (filter.projectId) w.add('e.project_id = ?', filter.projectId);
-    if (filter.actorId) w.add('e.actor_id = ?', filter.actorId);
-    if (filter.action) w.add('e.action = ?', filter.action);
-    if (filter.entityType) w.add('e.entity_type = ?', filter.entityType);
-    if (filter.from) w.add('e.created_at >= ?', filter.from);
-    if (filter.to) w.add('e.created_at < ?', filter.to);
+    const w = whereOf(filter);
     return paged<AuditEventRow>(
       manager,
       {
@@ -93,4 +87,26 @@ export const auditRepository = {
       page,
     );
   },
+
+  /** The filtered log, newest first, at most `limit` events (the CSV export). */
+  all(manager: EntityManager, filter: AuditEventFilter, limit: number): Promise<AuditEventRow[]> {
+    const w = whereOf(filter);
+    const where = w.where.length ? `where ${w.where.join(' and ')}` : '';
+    return rows<AuditEventRow>(
+      manager,
+      `select ${COLUMNS} from ${FROM} ${where} order by e.seq desc limit $${w.params.length + 1}`,
+      [...w.params, limit],
+    );
+  },
 };
+
+function whereOf(filter: AuditEventFilter): Where {
+  const w = new Where();
+  if (filter.projectId) w.add('e.project_id = ?', filter.projectId);
+  if (filter.actorId) w.add('e.actor_id = ?', filter.actorId);
+  if (filter.action) w.add('e.action = ?', filter.action);
+  if (filter.entityType) w.add('e.entity_type = ?', filter.entityType);
+  if (filter.from) w.add('e.created_at >= ?', filter.from);
+  if (filter.to) w.add('e.created_at < ?', filter.to);
+  return w;
+}
