@@ -53,7 +53,7 @@ function EventWords({ event }: { event: AuditEvent }) {
           <Link
             key={i}
             to={hrefOf(s.link)}
-            className="text-accent hover:underline"
+            className="text-accent underline"
             title={s.link.kind === 'person' ? `Events by ${s.text}` : undefined}
           >
             {s.text}
