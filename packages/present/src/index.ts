@@ -69,3 +69,6 @@ export type { StrokeAttributes } from './sketches/scene';
 export type { Role as SketchRole, Shape as SketchShape, Sketch } from './sketches/scene';
 export { headProfile } from './sketches/geometry';
 export type { HeadShape } from './sketches/geometry';
+export { AUDIT_ACTION_LABELS, auditActionLabel, auditSegments, auditSentence } from './audit-words';
+export type { AuditLink, AuditSegment, AuditWordsEvent } from './audit-words';
+export { isoDateTime } from './dates';

@@ -336,6 +336,12 @@ describe('bad input on every route: 400 with the fields, nothing written, never 
       fields: ['from', 'projectId'],
     },
     {
+      name: 'GET /api/audit.csv',
+      as: 'admin',
+      call: (s) => s.get('/api/audit.csv?to=soon&projectId=7&page=2'),
+      fields: ['', 'to', 'projectId'],
+    },
+    {
       name: 'POST /api/screen',
       as: 'designer',
       call: (s) => s.post('/api/screen', { kind: 'teapot' }),

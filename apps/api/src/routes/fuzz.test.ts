@@ -371,6 +371,14 @@ function targets(c: () => Context): Target[] {
       payload: none,
     },
     {
+      route: 'GET /api/audit.csv',
+      as: 'admin',
+      path: queryOf(['projectId', 'actorId', 'action', 'entityType', 'from', 'to', 'page']).map(
+        (q) => `/api/audit.csv${q}`,
+      ),
+      payload: none,
+    },
+    {
       route: 'POST /api/screen',
       as: 'designer',
       path: fc.constant('/api/screen'),

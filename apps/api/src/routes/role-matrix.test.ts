@@ -559,6 +559,23 @@ describe('role × route matrix (every route, every persona)', () => {
       call: (s) => s.get(`/api/audit?projectId=${w.projectId}`),
     },
     {
+      route: 'GET /api/audit.csv',
+      expect: { ...signedIn(400), admin: 200 },
+      call: (s) => s.get('/api/audit.csv'),
+    },
+    {
+      route: 'GET /api/audit.csv?projectId',
+      expect: {
+        admin: 200,
+        designer: 200,
+        checker: 200,
+        fabricator: 403,
+        'non-member': 404,
+        'signed-out': 401,
+      },
+      call: (s) => s.get(`/api/audit.csv?projectId=${w.projectId}`),
+    },
+    {
       route: 'POST /api/screen',
       expect: signedIn(200),
       call: (s) => s.post('/api/screen', plateInputs()),

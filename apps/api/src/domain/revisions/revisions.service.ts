@@ -1,4 +1,5 @@
 import type {
+  AuditAction,
   Change,
   Component,
   Integrity,
@@ -512,7 +513,7 @@ export class RevisionsService {
     manager: EntityManager,
     actor: Actor,
     ctx: RevisionContext,
-    action: string,
+    action: AuditAction,
     before: string,
     after: string,
     extra: Record<string, unknown> = {},
