@@ -69,6 +69,8 @@ export type { StrokeAttributes } from './sketches/scene';
 export type { Role as SketchRole, Shape as SketchShape, Sketch } from './sketches/scene';
 export { headProfile } from './sketches/geometry';
 export type { HeadShape } from './sketches/geometry';
+export { OWN_CHECKER_ROLE, membersNotice, nameList, whoManages } from './member-words';
+export type { MemberManager, MembersNotice } from './member-words';
 export { AUDIT_ACTION_LABELS, auditActionLabel, auditSegments, auditSentence } from './audit-words';
 export type { AuditLink, AuditSegment, AuditWordsEvent } from './audit-words';
 export { isoDateTime } from './dates';

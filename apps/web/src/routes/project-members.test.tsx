@@ -4,7 +4,7 @@ import { Route, Routes } from 'react-router-dom';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { MemberList, Project } from '@hoopline/contract';
 import { fakeApi, ME, renderApp } from '../test/render';
-import { ProjectMembersRoute, whoManages } from './project-members';
+import { ProjectMembersRoute } from './project-members';
 
 const project: Project = {
   id: 'p1',
@@ -101,19 +101,5 @@ describe('Members page: who changes roles (issue 16.3)', () => {
     const put = calls.find((c) => c.method === 'PUT')!;
     expect(put.path).toBe('/projects/p1/members/u-finn');
     expect(JSON.parse(String(put.init?.body))).toEqual({ role: 'checker' });
-  });
-
-  it('names who manages when the project has no owner on record', () => {
-    expect(whoManages([{ id: 'a', name: 'Ada Admin', owner: false }])).toBe(
-      'the administrator Ada Admin',
-    );
-    expect(whoManages([])).toBe('an administrator');
-    expect(
-      whoManages([
-        { id: 'o', name: 'Olga', owner: true },
-        { id: 'a', name: 'Ada', owner: false },
-        { id: 'b', name: 'Bo', owner: false },
-      ]),
-    ).toBe('Olga (the project’s owner) and the administrators Ada and Bo');
   });
 });

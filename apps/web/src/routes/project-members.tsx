@@ -14,43 +14,19 @@ import { messageFor } from '../components/server-errors';
 import { PageSkeleton, TableSkeleton } from '../components/skeleton';
 import { formatDate } from '../lib/dates';
 import { AddMemberForm, AdminAddMemberForm } from '../features/projects/add-member-form';
+import { membersNotice } from '@hoopline/present';
 
-/** "Dana Designer (the owner) and the administrators Ada Admin and Ari Admin". */
-export function whoManages(managers: MemberList['managers']): string {
-  const owner = managers.find((m) => m.owner);
-  const admins = managers.filter((m) => !m.owner).map((m) => m.name);
-  const list = (names: string[]) =>
-    names.length <= 1 ? names.join('') : `${names.slice(0, -1).join(', ')} and ${names.at(-1)}`;
-  const adminPart =
-    admins.length === 0
-      ? 'an administrator'
-      : `${admins.length === 1 ? 'the administrator' : 'the administrators'} ${list(admins)}`;
-  return owner ? `${owner.name} (the project’s owner) and ${adminPart}` : adminPart;
-}
-
-/** Who changes the members, and whether anyone can check: said above the table. */
+/** Who changes the members, and whether anyone can check: said above the table (words from present). */
 function WhoChecksNotice({ list, myId }: { list: MemberList; myId: string }) {
-  const who = whoManages(list.managers);
+  const notice = membersNotice({ ...list, readerId: myId });
   return (
     <div className="space-y-2 text-sm" aria-label="Who changes members">
-      {list.hasChecker ? null : (
+      {notice.noChecker ? (
         <p role="status" className="rounded border border-warn bg-warn-soft px-3 py-2">
-          <strong>This project has no checker:</strong> nobody can countersign its revisions yet.{' '}
-          {list.canManage
-            ? 'Add a checker below (someone other than you: nobody makes themselves a checker).'
-            : `${who[0]!.toUpperCase()}${who.slice(1)} can add one.`}
+          <strong>{notice.noChecker.headline}</strong> {notice.noChecker.advice}
         </p>
-      )}
-      {list.canManage ? (
-        <p className="text-muted">
-          You may add members and change roles here; nobody makes themselves a checker.
-        </p>
-      ) : (
-        <p className="text-muted">
-          Only {who} add members and change roles.
-          {list.managers.some((m) => m.id === myId) ? null : ' Ask them for a change.'}
-        </p>
-      )}
+      ) : null}
+      <p className="text-muted">{notice.who}</p>
     </div>
   );
 }

@@ -92,4 +92,36 @@ describe('AddMemberForm (a designer adds someone by e-mail)', () => {
       'only a designer of the project can do this',
     );
   });
+
+  it('refuses to make the signed-in person their own checker, before asking the server', async () => {
+    // ME is dana@example.test; here an administrator who is not yet a member.
+    const api = fakeApi({});
+    renderApp(<AddMemberForm projectId="p1" members={[]} />);
+    await userEvent.type(await screen.findByLabelText('E-mail address'), 'Dana@example.test');
+    const role = screen.getByLabelText('Role');
+    await userEvent.selectOptions(role, 'Checker');
+    await userEvent.click(screen.getByRole('button', { name: 'Add member' }));
+    await vi.waitFor(() =>
+      expect(role).toHaveAccessibleDescription(/Nobody makes themselves a checker/),
+    );
+    expect(api.calls).toHaveLength(0);
+  });
+
+  it('puts the server’s own_checker_role refusal on the role field', async () => {
+    fakeApi({
+      'GET /users/lookup': { body: { user: carl } },
+      'PUT /projects/p1/members/u-carl': {
+        status: 403,
+        body: { error: { code: 'own_checker_role', message: 'nobody makes themselves a checker' } },
+      },
+    });
+    renderApp(<AddMemberForm projectId="p1" members={members} />);
+    await userEvent.type(await screen.findByLabelText('E-mail address'), 'carl@example.test');
+    const role = screen.getByLabelText('Role');
+    await userEvent.selectOptions(role, 'Checker');
+    await userEvent.click(screen.getByRole('button', { name: 'Add member' }));
+    await vi.waitFor(() =>
+      expect(role).toHaveAccessibleDescription(/Nobody makes themselves a checker/),
+    );
+  });
 });

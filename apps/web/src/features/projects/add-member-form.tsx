@@ -5,6 +5,8 @@ import { ROLES } from '@hoopline/contract';
 import { useUsers } from '../../api/admin';
 import { ApiError } from '../../api/client';
 import { lookUpUser, useSetMember } from '../../api/projects';
+import { useMe } from '../../api/session';
+import { OWN_CHECKER_ROLE } from '@hoopline/present';
 import type { Member, Role } from '@hoopline/contract';
 import { ROLE_LABEL } from '../../components/badges';
 import { Button } from '../../components/button';
@@ -40,6 +42,7 @@ export function AddMemberForm({
   /** Addresses offered while typing (an admin's list of people); a designer gets none. */
   suggestions?: readonly PersonSuggestion[];
 }) {
+  const me = useMe();
   const setMember = useSetMember(projectId);
   const listId = useId();
   const [formError, setFormError] = useState<string | null>(null);
@@ -52,6 +55,11 @@ export function AddMemberForm({
         setFormError(null);
         setAdded(null);
         const email = values.email.trim();
+        // Nobody makes themselves a checker (the server refuses it too: 403 own_checker_role).
+        if (values.role === 'checker' && email.toLowerCase() === me.user.email.toLowerCase()) {
+          helpers.setFieldError('role', OWN_CHECKER_ROLE);
+          return;
+        }
         const existing = members.find((m) => m.user.email.toLowerCase() === email.toLowerCase());
         if (existing) {
           helpers.setFieldError(
@@ -81,6 +89,10 @@ export function AddMemberForm({
           helpers.resetForm();
           setAdded(`${user.name} (${user.email}) added as ${ROLE_LABEL[values.role]}.`);
         } catch (error) {
+          if (error instanceof ApiError && error.code === 'own_checker_role') {
+            helpers.setFieldError('role', OWN_CHECKER_ROLE);
+            return;
+          }
           const mapped = serverFieldErrors(error, ['role']);
           helpers.setErrors(mapped.fields);
           setFormError(mapped.message);
@@ -110,9 +122,11 @@ export function AddMemberForm({
               </datalist>
             ) : null}
             <FormikSelectField name="role" label="Role">
-              <option value="designer">Designer</option>
-              <option value="checker">Checker</option>
-              <option value="fabricator">Fabricator</option>
+              {ROLES.map((r) => (
+                <option key={r} value={r}>
+                  {ROLE_LABEL[r]}
+                </option>
+              ))}
             </FormikSelectField>
             <Button type="submit" variant="primary" busy={isSubmitting} className="mt-5">
               Add member
