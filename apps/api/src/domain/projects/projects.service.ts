@@ -73,6 +73,7 @@ export interface ProjectPatch {
   readonly designTemperature?: string | number | null | undefined;
   readonly unitSystem?: UnitSystem | undefined;
   readonly notes?: string | undefined;
+  readonly signOffPassword?: boolean | undefined;
   readonly version: number;
 }
 
@@ -127,6 +128,7 @@ export function projectView(p: ProjectEntity, myRole: Role | null): Project {
     designTemperature: p.designTemperature,
     unitSystem: p.unitSystem,
     notes: p.notes,
+    signOffPassword: p.signOffPassword,
     version: p.version,
     createdAt: isoRequired(p.createdAt),
     updatedAt: isoRequired(p.updatedAt),
@@ -181,6 +183,7 @@ export class ProjectsService {
           designTemperature: input.designTemperature ?? null,
           unitSystem: input.unitSystem,
           notes: input.notes ?? '',
+          signOffPassword: false,
           version: 1,
           createdBy: actor.id,
           createdAt: now,
@@ -234,6 +237,7 @@ export class ProjectsService {
         if (patch.client !== undefined) changes.client = patch.client;
         if (patch.unitSystem !== undefined) changes.unitSystem = patch.unitSystem;
         if (patch.notes !== undefined) changes.notes = patch.notes;
+        if (patch.signOffPassword !== undefined) changes.signOffPassword = patch.signOffPassword;
         if (patch.site !== undefined) Object.assign(changes, siteColumns(patch.site));
         if (patch.designBasis?.allowableStress !== undefined)
           changes.allowableBasis = patch.designBasis.allowableStress;
@@ -407,6 +411,7 @@ function projectSummary(p: ProjectEntity) {
     designBasis: projectDesignBasis(p),
     designTemperature: p.designTemperature,
     unitSystem: p.unitSystem,
+    signOffPassword: p.signOffPassword,
     version: p.version,
   };
 }
