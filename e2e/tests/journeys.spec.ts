@@ -436,6 +436,8 @@ test('an admin sees people and the audit log', async ({ page }) => {
   await screenshot(page, 'audit-log');
   // The seeded demo's acrylic viewport has a returned revision 1 and a revision 2: compare them.
   await page.getByRole('link', { name: 'Projects' }).click();
+  // The audit log links projects too: wait for the list before picking one.
+  await expect(page.getByRole('heading', { name: 'Projects' })).toBeVisible();
   await page.getByRole('link', { name: 'LAM-2026-014' }).click();
   await page.getByRole('link', { name: 'VDC-3 acrylic viewport' }).click();
   await page.getByRole('link', { name: 'Revisions' }).click();

@@ -9,6 +9,7 @@ import { workerSheetRenderer, type SheetRenderer } from './sheets/sheet-renderer
 import { AttachmentsService } from './domain/attachments/attachments.service';
 import { AuditService } from './domain/audit/audit.service';
 import { AuthService } from './domain/auth/auth.service';
+import { ComponentTableService } from './domain/components/component-table';
 import { ComponentsService } from './domain/components/components.service';
 import { OutboxNotifier } from './mail/outbox-notifier';
 import type { Notifier } from './mail/notifier';
@@ -42,8 +43,9 @@ export function createServices(
     tokens,
     auth,
     users: new UsersService(dataSource, config.auth, auth, notifier, config.mail.smtp !== null),
-    projects: new ProjectsService(dataSource),
+    projects: new ProjectsService(dataSource, notifier),
     components: new ComponentsService(dataSource),
+    componentTable: new ComponentTableService(dataSource),
     revisions: new RevisionsService(dataSource, notifier),
     audit: new AuditService(dataSource),
     attachments,

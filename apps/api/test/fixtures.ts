@@ -266,6 +266,7 @@ const TABLES = [
   'audit_events',
   'mail_outbox',
   'attachments',
+  'issue_packages',
 ] as const;
 
 const digest = (table: string, columns: string) =>

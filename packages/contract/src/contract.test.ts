@@ -5,6 +5,7 @@ import {
   componentKind,
   countersignBody,
   createProjectBody,
+  packageVerifyParams,
   sheetQuery,
   verifyParams,
 } from './index';
@@ -21,6 +22,14 @@ describe('the contract', () => {
       'must be "a4" or "letter"',
     );
     expect(verifyParams.parse({ code: 'ABCD-ef01-2345' })).toEqual({ code: 'abcdef012345' });
+    // A package code keeps its "PKG" apart from a sheet's code; the digits after it are the lookup.
+    expect(packageVerifyParams.parse({ code: ' pkg-3F9A-0c11-7be2' })).toEqual({
+      code: '3f9a0c117be2',
+    });
+    expect(packageVerifyParams.safeParse({ code: 'abcd-ef01-2345' }).success).toBe(false);
+    expect(packageVerifyParams.parse({ code: `PKG-${'a'.repeat(64)}` })).toEqual({
+      code: 'a'.repeat(64),
+    });
     expect(countersignBody.safeParse({ hash: 'x' }).error?.issues[0]?.message).toMatch(/64-digit/);
     // The site is checked by the engine's siteSchema and kept as typed.
     expect(

@@ -47,3 +47,45 @@ export const projectCreation = z.enum(PROJECT_CREATION, {
 export const componentKind = z.enum(COMPONENT_KINDS as [ComponentKind, ...ComponentKind[]], {
   error: 'is not a component kind',
 });
+
+/**
+ * Every action code the API writes to the audit log (audit_events.action). The
+ * writer takes only these; the log reads any string, so codes written before
+ * this list still parse (the words fall back to the code).
+ */
+export const AUDIT_ACTIONS = [
+  'session.signed_in',
+  'session.signed_out',
+  'session.reuse_detected',
+  'password.changed',
+  'password_reset.issued',
+  'password_reset.completed',
+  'invitation.created',
+  'invitation.revoked',
+  'invitation.accepted',
+  'user.updated',
+  'settings.updated',
+  'project.created',
+  'project.updated',
+  'member.set',
+  'member.removed',
+  'material.created',
+  'material.deleted',
+  'component.created',
+  'component.updated',
+  'attachment.uploaded',
+  'attachment.removed',
+  'revision.created',
+  'revision.submitted',
+  'revision.withdrawn',
+  'revision.countersigned',
+  'revision.returned',
+  'sheet.downloaded',
+  'package.downloaded',
+] as const;
+export type AuditAction = (typeof AUDIT_ACTIONS)[number];
+export const auditAction = z.enum(AUDIT_ACTIONS);
+/** True when a stored code is one this version of the API writes. */
+export function isAuditAction(code: string): code is AuditAction {
+  return (AUDIT_ACTIONS as readonly string[]).includes(code);
+}

@@ -35,6 +35,7 @@ export * from './requests/audit';
 export * from './requests/issued';
 export * from './requests/screen';
 export * from './requests/verify';
+export * from './requests/issue-package';
 
 // Responses
 export * from './responses/people';
@@ -43,6 +44,8 @@ export * from './responses/revisions';
 export * from './responses/attachments';
 export * from './responses/audit';
 export * from './responses/errors';
+export * from './responses/project-table';
+export * from './responses/issue-package';
 
 /** A page of a list, as every list route answers. */
 export interface Page<T> {

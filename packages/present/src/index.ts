@@ -46,6 +46,21 @@ export type {
   PresentedStep,
   PresentedWarning,
 } from './report';
+export {
+  NO_VALUE,
+  PACKAGE_WORDS,
+  TABLE_CSV_HEADER,
+  countersignedSince,
+  engineNote,
+  isoInstant,
+  packageCode,
+  packageStaleness,
+  percentFigure,
+  presentTableRow,
+  supersededFor,
+  tableCsvRecord,
+} from './project-table';
+export type { PresentedTableRow } from './project-table';
 export { inputLabel, presentInputs } from './inputs';
 export type { PresentedInput } from './inputs';
 export { sketchOf } from './sketches/component-sketch';
@@ -54,3 +69,6 @@ export type { StrokeAttributes } from './sketches/scene';
 export type { Role as SketchRole, Shape as SketchShape, Sketch } from './sketches/scene';
 export { headProfile } from './sketches/geometry';
 export type { HeadShape } from './sketches/geometry';
+export { AUDIT_ACTION_LABELS, auditActionLabel, auditSegments, auditSentence } from './audit-words';
+export type { AuditLink, AuditSegment, AuditWordsEvent } from './audit-words';
+export { isoDateTime } from './dates';

@@ -4,6 +4,7 @@ import type { SheetRenderer } from '../sheets/sheet-renderer';
 import type { AttachmentsService } from './attachments/attachments.service';
 import type { AuditService } from './audit/audit.service';
 import type { AuthService } from './auth/auth.service';
+import type { ComponentTableService } from './components/component-table';
 import type { ComponentsService } from './components/components.service';
 import type { ProjectsService } from './projects/projects.service';
 import type { RevisionsService } from './revisions/revisions.service';
@@ -25,6 +26,8 @@ export interface Services {
   readonly users: UsersService;
   readonly projects: ProjectsService;
   readonly components: ComponentsService;
+  /** The project's component table and its CSV. */
+  readonly componentTable: ComponentTableService;
   readonly revisions: RevisionsService;
   readonly audit: AuditService;
   readonly attachments: AttachmentsService;

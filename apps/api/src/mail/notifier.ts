@@ -20,6 +20,11 @@ export interface Notifier {
     manager: EntityManager,
     event: { revisionId: string; decision: 'countersigned' | 'returned'; comment: string },
   ): Promise<void>;
+  /** Someone became a checker of a project (added, or their role changed): the work waiting on them. */
+  checkerAdded(
+    manager: EntityManager,
+    event: { projectId: string; userId: string; addedBy: string },
+  ): Promise<void>;
 }
 
 /** Tells nobody (for callers that want no mail at all). */
@@ -28,4 +33,5 @@ export const silentNotifier: Notifier = {
   passwordResetRequested: async () => undefined,
   revisionSubmitted: async () => undefined,
   revisionDecided: async () => undefined,
+  checkerAdded: async () => undefined,
 };

@@ -126,6 +126,44 @@ export class OutboxNotifier implements Notifier {
     }
   }
 
+  async checkerAdded(
+    manager: EntityManager,
+    e: { projectId: string; userId: string; addedBy: string },
+  ): Promise<void> {
+    const [who] = await rows<{ email: string; number: string; name: string; by: string }>(
+      manager,
+      `select u.email, p.number, p.name, b.name as by from users u, projects p, users b
+        where u.id = $1 and p.id = $2 and b.id = $3 and u.active`,
+      [e.userId, e.projectId, e.addedBy],
+    );
+    if (!who) return;
+    // Their own submissions are not theirs to check (four-eyes).
+    const waiting = await rows<{ id: string; number: number; component: string; author: string }>(
+      manager,
+      `select r.id, r.number, c.name as component, a.name as author from revisions r
+         join components c on c.id = r.component_id join users a on a.id = r.author_id
+        where r.project_id = $1 and r.status = 'submitted' and r.author_id <> $2
+        order by r.submitted_at, r.id`,
+      [e.projectId, e.userId],
+    );
+    await enqueueMail(
+      manager,
+      'checker-added',
+      mails.checkerAdded(
+        who.email,
+        { number: who.number, name: who.name },
+        who.by,
+        waiting.map((r) => ({
+          componentName: r.component,
+          revisionNumber: Number(r.number),
+          author: r.author,
+          url: this.link(`/revisions/${r.id}`),
+        })),
+        this.link('/check-queue'),
+      ),
+    );
+  }
+
   private async facts(manager: EntityManager, revisionId: string): Promise<RevisionFacts> {
     const [row] = await rows<{
       project_id: string;

@@ -41,4 +41,32 @@ describe('mail templates', () => {
       expect(mail.text).toMatch(/qualified engineer/);
     }
   });
+
+  it('tell a new checker how many revisions wait, with a link to each, or that none does', () => {
+    const waiting = [
+      {
+        componentName: 'Door plate',
+        revisionNumber: 3,
+        author: 'Dana',
+        url: 'http://h/revisions/a',
+      },
+      { componentName: 'Lid', revisionNumber: 1, author: 'Ravi', url: 'http://h/revisions/b' },
+    ];
+    const project = { number: 'LAM-2026-014', name: 'Drying cabinet' };
+    const mail = mails.checkerAdded(
+      'c@lab.example',
+      project,
+      'Theo',
+      waiting,
+      'http://h/check-queue',
+    );
+    expect(mail.subject).toBe('You are a checker of LAM-2026-014: 2 waiting for a check');
+    expect(mail.text).toContain('2 revisions are already waiting for a check:');
+    expect(mail.text).toContain('LAM-2026-014 Door plate rev 3, by Dana: http://h/revisions/a');
+    expect(mail.text).toContain('LAM-2026-014 Lid rev 1, by Ravi: http://h/revisions/b');
+    const none = mails.checkerAdded('c@lab.example', project, 'Theo', [], 'http://h/check-queue');
+    expect(none.subject).toBe('You are a checker of LAM-2026-014');
+    expect(none.text).toContain('Nothing is waiting for a check yet');
+    expect(none.text).not.toContain('/revisions/');
+  });
 });

@@ -50,6 +50,14 @@ function revisionLabel(c: RevisionMailContext): string {
   return `${c.projectNumber} ${c.componentName} rev ${c.revisionNumber}`;
 }
 
+/** One revision waiting on a check, for the mail to a new checker. */
+export interface WaitingRevision {
+  readonly componentName: string;
+  readonly revisionNumber: number;
+  readonly author: string;
+  readonly url: string;
+}
+
 export const mails = {
   invitation(to: string, invitedBy: string, url: string, expiresAt: string): MailMessage {
     return compose(
@@ -96,6 +104,43 @@ export const mails = {
         'Its stamped-for-review sheet can now be downloaded by the project’s fabricators. It is for review, not for construction.',
       ],
       { label: 'Open the revision', url: c.url },
+    );
+  },
+
+  /**
+   * To a person who has just become a checker of a project: who made them one
+   * and the revisions already waiting (a count and a link to each), or that
+   * nothing waits yet.
+   */
+  checkerAdded(
+    to: string,
+    project: { number: string; name: string },
+    addedBy: string,
+    waiting: readonly WaitingRevision[],
+    queueUrl: string,
+  ): MailMessage {
+    const where = `${project.number} (${project.name})`;
+    const count =
+      waiting.length === 0
+        ? 'Nothing is waiting for a check yet: you will get a mail when a revision is submitted.'
+        : waiting.length === 1
+          ? '1 revision is already waiting for a check:'
+          : `${waiting.length} revisions are already waiting for a check:`;
+    const list = waiting.map(
+      (w) =>
+        `${project.number} ${w.componentName} rev ${w.revisionNumber}, by ${w.author}: ${w.url}`,
+    );
+    return compose(
+      [to],
+      waiting.length === 0
+        ? `You are a checker of ${project.number}`
+        : `You are a checker of ${project.number}: ${waiting.length} waiting for a check`,
+      [
+        `${addedBy} has made you a checker of ${where}. Checkers countersign or return the revisions the project’s designers submit; nobody checks their own work.`,
+        count,
+        ...list,
+      ],
+      { label: 'Open your check queue', url: queueUrl },
     );
   },
 

@@ -5,6 +5,7 @@ import {
   canManageSettings,
   canDesign,
   canEditProject,
+  canGiveRole,
   canManageMaterials,
   canManageMembers,
   canManagePeople,
@@ -36,6 +37,10 @@ const byMe = (status: RevisionFacts['status'] = 'submitted'): RevisionFacts => (
 const issued = { hasIssuedRevision: true };
 const unissued = { hasIssuedRevision: false };
 const allowed = (d: { allowed: boolean }) => d.allowed;
+/** A project started by me, by someone else, and one whose owner is not on record. */
+const mine = { ownerId: 'me' };
+const theirs = { ownerId: 'someone-else' };
+const ownerless = { ownerId: null };
 const code = (d: { allowed: boolean; code?: string }) => (d.allowed ? 'allowed' : d.code);
 
 describe('policy: admin (not a member)', () => {
@@ -44,7 +49,8 @@ describe('policy: admin (not a member)', () => {
     expect(allowed(canManagePeople(admin))).toBe(true);
     expect(canSeeProject(s)).toBe(true);
     expect(allowed(canEditProject(s))).toBe(true);
-    expect(allowed(canManageMembers(s))).toBe(true);
+    expect(allowed(canManageMembers(s, theirs))).toBe(true);
+    expect(allowed(canManageMembers(s, ownerless))).toBe(true);
     expect(canSeeComponent(s, unissued)).toBe(true);
     expect(canSeeRevision(s, byOther('draft'))).toBe(true);
     expect(canReadWholeAudit(admin)).toBe(true);
@@ -55,16 +61,34 @@ describe('policy: admin (not a member)', () => {
     expect(code(canSignOff(s, byOther()))).toBe('admin_cannot_sign');
     expect(code(canSignOff(as('checker', admin), byOther()))).toBe('admin_cannot_sign');
   });
+  it('gives any role to others, but never makes themselves a checker', () => {
+    expect(allowed(canGiveRole(admin, { userId: 'someone-else', role: 'checker' }))).toBe(true);
+    expect(allowed(canGiveRole(admin, { userId: 'admin', role: 'designer' }))).toBe(true);
+    expect(code(canGiveRole(admin, { userId: 'admin', role: 'checker' }))).toBe('own_checker_role');
+  });
 });
 
 describe('policy: designer', () => {
   const s = as('designer');
-  it('creates and edits components and revisions, submits, manages materials and members', () => {
+  it('creates and edits components and revisions, submits, manages materials', () => {
     expect(allowed(canDesign(s))).toBe(true);
     expect(allowed(canManageMaterials(s))).toBe(true);
-    expect(allowed(canManageMembers(s))).toBe(true);
     expect(allowed(canEditProject(s))).toBe(true);
     expect(seesOnlyIssued(s)).toBe(false);
+  });
+  it('changes members and roles only of a project they own (issue 16.3)', () => {
+    expect(allowed(canManageMembers(s, mine))).toBe(true);
+    expect(code(canManageMembers(s, theirs))).toBe('not_the_owner');
+    // A project with no owner on record: administrators only.
+    expect(code(canManageMembers(s, ownerless))).toBe('not_the_owner');
+    expect(canManageMembers(s, ownerless)).toMatchObject({
+      reason: expect.stringContaining('no owner on record'),
+    });
+  });
+  it('the owner makes others checkers, never themselves', () => {
+    expect(allowed(canGiveRole(me, { userId: 'someone-else', role: 'checker' }))).toBe(true);
+    expect(code(canGiveRole(me, { userId: 'me', role: 'checker' }))).toBe('own_checker_role');
+    expect(allowed(canGiveRole(me, { userId: 'me', role: 'fabricator' }))).toBe(true);
   });
   it('withdraws only their own revision', () => {
     expect(allowed(canWithdraw(s, byMe()))).toBe(true);
@@ -91,7 +115,9 @@ describe('policy: checker', () => {
     expect(canSeeRevision(s, byOther('draft'))).toBe(true);
     expect(canSeeComponent(s, unissued)).toBe(true);
     expect(code(canDesign(s))).toBe('not_a_designer');
-    expect(code(canManageMembers(s))).toBe('not_a_designer');
+    expect(code(canManageMembers(s, theirs))).toBe('not_the_owner');
+    // Owning a project (having started it) is what counts, not the role held now.
+    expect(allowed(canManageMembers(s, mine))).toBe(true);
     expect(code(canManageMaterials(s))).toBe('not_a_designer');
     expect(code(canWithdraw(s, byMe()))).toBe('not_a_designer');
     expect(allowed(canReadProjectAudit(s))).toBe(true);
@@ -115,6 +141,7 @@ describe('policy: fabricator', () => {
     expect(code(canSignOff(s, byOther()))).toBe('not_a_checker');
     expect(code(canEditProject(s))).toBe('not_a_designer');
     expect(code(canReadProjectAudit(s))).toBe('audit_not_permitted');
+    expect(code(canManageMembers(s, theirs))).toBe('not_the_owner');
   });
 });
 
@@ -128,6 +155,9 @@ describe('policy: signed-in non-member', () => {
   it('manages no people and no settings', () => {
     expect(code(canManagePeople(me))).toBe('not_an_admin');
     expect(code(canManageSettings(me))).toBe('not_an_admin');
+  });
+  it('does not manage members, even of a project recorded as theirs', () => {
+    expect(code(canManageMembers(s, mine))).toBe('not_the_owner');
   });
 });
 
@@ -144,11 +174,11 @@ describe('policy: who starts projects and who looks people up (issue 17.1)', () 
     expect(allowed(canManageSettings(admin))).toBe(true);
     expect(code(canManageSettings(me))).toBe('not_an_admin');
   });
-  it('looking people up: administrators and those who lead a project (may add its members), nobody else', () => {
+  it('looking people up: administrators and those who own a project (may add its members), nobody else', () => {
     expect(allowed(canLookUpPerson(admin, false))).toBe(true);
     expect(allowed(canLookUpPerson(me, true))).toBe(true);
-    expect(code(canLookUpPerson(me, false))).toBe('not_a_designer');
-    // Leading a project is what lets one add members to it.
-    expect(allowed(canManageMembers(as('designer')))).toBe(true);
+    expect(code(canLookUpPerson(me, false))).toBe('not_a_project_owner');
+    // Owning a project is what lets one add members to it.
+    expect(allowed(canManageMembers(as('designer'), mine))).toBe(true);
   });
 });

@@ -43,7 +43,7 @@ export function canManagePeople(actor: Actor): Decision {
 /**
  * Finding one person by their exact e-mail address, to add them to a
  * project: admins, and those who may add members to a project they already
- * lead (a designer of it: canManageMembers). An exact address only, so nobody
+ * lead (its owner: canManageMembers). An exact address only, so nobody
  * can list who has an account; and since starting a project is itself limited
  * (canCreateProject), an account alone does not make one a designer. The
  * refusal is the same whether the address is known or not.
@@ -51,7 +51,7 @@ export function canManagePeople(actor: Actor): Decision {
 export function canLookUpPerson(actor: Actor, leadsAProject: boolean): Decision {
   return actor.isAdmin || leadsAProject
     ? allow
-    : deny('not_a_designer', 'only administrators and project designers look people up');
+    : deny('not_a_project_owner', 'only administrators and project owners look people up');
 }
 
 /** The installation's setting: who may start projects. */
@@ -92,13 +92,42 @@ export function canEditProject(s: ProjectStanding): Decision {
     : deny('not_a_designer', 'only a designer of this project or an administrator edits it');
 }
 
-export function canManageMembers(s: ProjectStanding): Decision {
-  return s.actor.isAdmin || s.role === 'designer'
-    ? allow
-    : deny(
-        'not_a_designer',
-        'only a designer of this project or an administrator manages its members',
-      );
+/**
+ * Who checks whom (issue 16.3): only an administrator or the project's owner
+ * (the person who started it, projects.created_by) changes its members:
+ * adding one, changing a role, removing one. A project whose owner is unknown
+ * (created_by null: the owner's account was removed, or the project is older
+ * than owners) is managed by administrators only. Designers who are not the
+ * owner design; they do not choose who checks them.
+ */
+export function canManageMembers(
+  s: ProjectStanding,
+  project: { ownerId: string | null },
+): Decision {
+  if (s.actor.isAdmin) return allow;
+  if (project.ownerId !== null && project.ownerId === s.actor.id && s.role !== null) return allow;
+  return deny(
+    'not_the_owner',
+    project.ownerId === null
+      ? 'this project has no owner on record: only an administrator changes its members'
+      : 'only the project’s owner or an administrator changes its members',
+  );
+}
+
+/**
+ * Giving someone a role (adding them, or changing their role), once the actor
+ * may manage members: nobody makes themselves a checker of a project, not
+ * even its owner or an administrator, so that nobody picks themselves to
+ * countersign the work. Another person must give them that role.
+ */
+export function canGiveRole(actor: Actor, target: { userId: string; role: Role }): Decision {
+  if (target.role === 'checker' && target.userId === actor.id) {
+    return deny(
+      'own_checker_role',
+      'nobody makes themselves a checker: the project’s owner or an administrator must give that role to you',
+    );
+  }
+  return allow;
 }
 
 /** Custom materials are design inputs: designers only (admins do not design). */

@@ -1,4 +1,4 @@
-import type { ComponentKind } from '@hoopline/calc';
+import type { ComponentKind, Verdict } from '@hoopline/calc';
 import type { EntityManager } from 'typeorm';
 import { ComponentEntity } from '../db/entities/component.entity';
 import { ProjectEntity } from '../db/entities/project.entity';
@@ -20,6 +20,26 @@ export interface ComponentRow extends Record<string, unknown> {
   version: number;
   created_at: Date;
   updated_at: Date;
+}
+
+/** A component with the revision its table row shows (`r_…`) and its issued number. */
+export interface ComponentTableDbRow {
+  id: string;
+  name: string;
+  kind: ComponentKind;
+  tag: string;
+  r_id: string | null;
+  r_number: number | null;
+  r_status: 'draft' | 'submitted' | 'countersigned' | 'returned' | null;
+  r_verdict: Verdict | null;
+  r_engine_version: string | null;
+  r_created_at: Date | null;
+  r_submitted_at: Date | null;
+  r_decided_at: Date | null;
+  r_superseded_at: Date | null;
+  /** The stored report's `governing`, as jsonb gives it back. */
+  r_governing: unknown;
+  i_number: number | null;
 }
 
 interface ComponentStandingRow {
@@ -236,6 +256,56 @@ export const componentRepository = {
       total = Number(count?.n ?? 0);
     }
     return { rows: found, total };
+  },
+
+  /**
+   * Every component of a project (by name) with the revision its table row
+   * shows (the latest, or the issued one for a fabricator's view), that
+   * revision's engine version and its stored report's governing entry, and
+   * the issued revision's number: one statement.
+   */
+  tableRows(
+    manager: EntityManager,
+    projectId: string,
+    onlyIssued: boolean,
+  ): Promise<ComponentTableDbRow[]> {
+    return rows<ComponentTableDbRow>(
+      manager,
+      `select c.id, c.name, c.kind, c.tag,
+              r.id as r_id, r.number as r_number, r.status as r_status, r.verdict as r_verdict,
+              r.engine_version as r_engine_version, r.created_at as r_created_at,
+              r.submitted_at as r_submitted_at, r.decided_at as r_decided_at,
+              r.superseded_at as r_superseded_at, r.report -> 'governing' as r_governing,
+              i.number as i_number
+         from components c
+         left join revisions r on r.id = case when $2::boolean then c.issued_revision_id
+                                              else c.latest_revision_id end
+         left join revisions i on i.id = c.issued_revision_id
+        where c.project_id = $1 and (not $2::boolean or c.issued_revision_id is not null)
+        order by lower(c.name), lower(c.tag), c.id`,
+      [projectId, onlyIssued],
+    );
+  },
+
+  /** The issued (latest countersigned) revision of every component of a project, by name. */
+  issuedOfProject(
+    manager: EntityManager,
+    projectId: string,
+  ): Promise<
+    Array<{
+      id: string;
+      name: string;
+      kind: ComponentKind;
+      tag: string;
+      issued_revision_id: string | null;
+    }>
+  > {
+    return rows(
+      manager,
+      `select c.id, c.name, c.kind, c.tag, c.issued_revision_id from components c
+        where c.project_id = $1 order by lower(c.name), lower(c.tag), c.id`,
+      [projectId],
+    );
   },
 
   /**

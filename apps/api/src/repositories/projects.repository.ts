@@ -181,13 +181,61 @@ export const projectRepository = {
     return Number(row?.n ?? 0);
   },
 
-  /** Whether the person is a designer of any project. */
-  async designsAnyProject(manager: EntityManager, userId: string): Promise<boolean> {
+  /** Whether the person owns (started, and is still a member of) any project. */
+  async ownsAnyProject(manager: EntityManager, userId: string): Promise<boolean> {
     const [leads] = await manager.query(
-      `select exists (select 1 from project_members where user_id = $1 and role = 'designer') as yes`,
+      `select exists (select 1 from projects p join project_members m
+                        on m.project_id = p.id and m.user_id = p.created_by
+                       where p.created_by = $1) as yes`,
       [userId],
     );
     return Boolean(leads?.yes);
+  },
+
+  /** How many active checkers the project has besides this person. */
+  async otherCheckers(manager: EntityManager, projectId: string, userId: string): Promise<number> {
+    const [row] = await rows<{ n: string }>(
+      manager,
+      `select count(*) as n from project_members m join users u on u.id = m.user_id
+        where m.project_id = $1 and m.role = 'checker' and u.active and m.user_id <> $2`,
+      [projectId, userId],
+    );
+    return Number(row?.n ?? 0);
+  },
+
+  /**
+   * The people who may change the project's members (policy canManageMembers):
+   * its owner while an active member, and every active administrator; owner first, then by name.
+   */
+  whoManagesMembers(
+    manager: EntityManager,
+    projectId: string,
+  ): Promise<Array<{ id: string; name: string; is_owner: boolean }>> {
+    return rows(
+      manager,
+      `select u.id, u.name, coalesce(u.id = p.created_by, false) as is_owner
+         from projects p join users u
+           on u.active and (u.is_admin or (u.id = p.created_by and exists
+                (select 1 from project_members m where m.project_id = p.id and m.user_id = u.id)))
+        where p.id = $1
+        order by coalesce(u.id = p.created_by, false) desc, lower(u.name), u.id`,
+      [projectId],
+    );
+  },
+
+  /** The project's revisions waiting on a check, oldest submission first. */
+  submittedRevisions(
+    manager: EntityManager,
+    projectId: string,
+  ): Promise<Array<{ id: string; number: number; component: string; author_id: string }>> {
+    return rows(
+      manager,
+      `select r.id, r.number, c.name as component, r.author_id from revisions r
+         join components c on c.id = r.component_id
+        where r.project_id = $1 and r.status = 'submitted'
+        order by r.submitted_at, r.id`,
+      [projectId],
+    );
   },
 
   /** Every project a person is a member of, by number. */

@@ -336,6 +336,12 @@ describe('bad input on every route: 400 with the fields, nothing written, never 
       fields: ['from', 'projectId'],
     },
     {
+      name: 'GET /api/audit.csv',
+      as: 'admin',
+      call: (s) => s.get('/api/audit.csv?to=soon&projectId=7&page=2'),
+      fields: ['', 'to', 'projectId'],
+    },
+    {
       name: 'POST /api/screen',
       as: 'designer',
       call: (s) => s.post('/api/screen', { kind: 'teapot' }),
@@ -346,6 +352,31 @@ describe('bad input on every route: 400 with the fields, nothing written, never 
       as: 'designer',
       call: (s) => s.post('/api/screen', { cases: [] }),
       fields: ['cases'],
+    },
+    {
+      name: 'GET /api/projects/:id/components/table',
+      as: 'designer',
+      call: (s) => s.get('/api/projects/not-a-uuid/components/table'),
+      fields: ['id'],
+    },
+    {
+      name: 'GET /api/projects/:id/components.csv',
+      as: 'designer',
+      call: (s) => s.get('/api/projects/not-a-uuid/components.csv'),
+      fields: ['id'],
+    },
+    {
+      name: 'GET /api/projects/:id/package.pdf',
+      as: 'designer',
+      call: (s) => s.get(`${P()}/package.pdf?paper=a3&colour=red`),
+      fields: ['', 'paper'],
+    },
+    {
+      name: 'GET /api/verify/packages/:code',
+      as: 'anonymous',
+      // A sheet's verify code is not a package code.
+      call: (s) => s.get('/api/verify/packages/abcd-ef01-2345'),
+      fields: ['code'],
     },
     {
       name: 'GET /api/verify/:code',

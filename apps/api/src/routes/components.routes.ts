@@ -6,10 +6,11 @@ import {
 } from '@hoopline/contract';
 import { Router } from 'express';
 import { actorOf } from '../auth/authenticate';
+import { contentDisposition } from '../http/content-disposition';
 import { valid, validate } from '../http/validate';
 import type { RouteDeps } from './route-deps';
 
-/** /projects/:id/components and /components/:id. */
+/** /projects/:id/components (with the project's table and its CSV) and /components/:id. */
 export function componentsRoutes({ services, signedIn }: RouteDeps): Router {
   const router = Router();
 
@@ -23,6 +24,25 @@ export function componentsRoutes({ services, signedIn }: RouteDeps): Router {
   router.post('/projects/:id/components', signedIn, create, async (req, res) => {
     const { params, body } = valid(req, create);
     res.status(201).json(await services.components.create(actorOf(req), params.id, body));
+  });
+
+  const ofProject = validate({ params: idParams });
+  router.get('/projects/:id/components/table', signedIn, ofProject, async (req, res) => {
+    const { params } = valid(req, ofProject);
+    res.json(await services.componentTable.table(actorOf(req), params.id));
+  });
+
+  router.get('/projects/:id/components.csv', signedIn, ofProject, async (req, res) => {
+    const { params } = valid(req, ofProject);
+    const { csv, fileName } = await services.componentTable.csv(actorOf(req), params.id);
+    res
+      .status(200)
+      .set({
+        'content-type': 'text/csv; charset=utf-8; header=present',
+        'content-disposition': contentDisposition('attachment', fileName),
+        'cache-control': 'private, no-store',
+      })
+      .send(csv);
   });
 
   const get = validate({ params: idParams });

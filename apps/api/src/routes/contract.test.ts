@@ -89,7 +89,7 @@ describe('answers match the contract (@hoopline/contract response schemas)', () 
     const project = shape(contract.project, created.body);
     expect(project.siteAsTyped).toEqual({ altitude: '5280 ft' });
     const members = (await designer.get(`/api/projects/${w.projectId}/members`).expect(200)).body;
-    shape(contract.member.array(), members.items);
+    shape(contract.memberList, members);
     const materials = (await designer.get(`/api/projects/${w.projectId}/materials`).expect(200))
       .body;
     shape(contract.customMaterialItem.array(), materials.items);
@@ -147,7 +147,10 @@ describe('answers match the contract (@hoopline/contract response schemas)', () 
           .expect(200)
       ).body,
     );
-    await designer.post(`/api/revisions/${second.revision.id}/submit`, {}).expect(200);
+    shape(
+      contract.submittedRevision,
+      (await designer.post(`/api/revisions/${second.revision.id}/submit`, {}).expect(200)).body,
+    );
     shape(
       contract.pageOf(contract.queueItem),
       (await checker.get('/api/check-queue').expect(200)).body,
@@ -173,6 +176,25 @@ describe('answers match the contract (@hoopline/contract response schemas)', () 
     shape(
       contract.verifyResult,
       (await anonymous(t).get('/api/verify/0000-0000-0000').expect(200)).body,
+    );
+    shape(
+      contract.componentTable,
+      (await designer.get(`/api/projects/${w.projectId}/components/table`).expect(200)).body,
+    );
+    shape(
+      contract.componentTable,
+      (await fabricator.get(`/api/projects/${w.projectId}/components/table`).expect(200)).body,
+    );
+    const issued = await fabricator
+      .download(`/api/projects/${w.projectId}/package.pdf`)
+      .expect(200);
+    const packageCode = issued.headers['x-hoopline-package-code'] as string;
+    const known = (await anonymous(t).get(`/api/verify/packages/${packageCode}`).expect(200)).body;
+    expect(known.match).toBe(true);
+    shape(contract.packageVerifyResult, known);
+    shape(
+      contract.packageVerifyResult,
+      (await anonymous(t).get('/api/verify/packages/PKG-0000-0000-0000').expect(200)).body,
     );
     shape(contract.pageOf(contract.auditEvent), (await admin.get('/api/audit').expect(200)).body);
   });

@@ -371,6 +371,14 @@ function targets(c: () => Context): Target[] {
       payload: none,
     },
     {
+      route: 'GET /api/audit.csv',
+      as: 'admin',
+      path: queryOf(['projectId', 'actorId', 'action', 'entityType', 'from', 'to', 'page']).map(
+        (q) => `/api/audit.csv${q}`,
+      ),
+      payload: none,
+    },
+    {
       route: 'POST /api/screen',
       as: 'designer',
       path: fc.constant('/api/screen'),
@@ -403,6 +411,25 @@ function targets(c: () => Context): Target[] {
             ...rows.map((r) => r.join(',')),
           ].join('\n'),
         })),
+    },
+    {
+      route: 'GET /api/projects/:id/package.pdf',
+      as: 'designer',
+      path: fc
+        .tuple(
+          id(() => c().project),
+          queryOf(['paper']),
+        )
+        .map(([p, q]) => `/api/projects/${p}/package.pdf${q}`),
+      payload: none,
+    },
+    {
+      route: 'GET /api/verify/packages/:code',
+      as: 'anonymous',
+      path: id(() => `PKG-${c().submitted.hash.slice(0, 12)}`).map(
+        (v) => `/api/verify/packages/${v}`,
+      ),
+      payload: none,
     },
     {
       route: 'GET /api/verify/:code',
@@ -500,6 +527,8 @@ describe(`fuzz (fast-check): ${RUNS} payloads, seed ${SEED}`, () => {
       'GET /api/revisions/:id',
       'GET /api/revisions/:id/integrity',
       'GET /api/revisions/:id/sheet.pdf',
+      'GET /api/projects/:id/components/table',
+      'GET /api/projects/:id/components.csv',
     ]);
     expect(takesInput.filter((r) => !covered.has(r) && !reads.has(r))).toEqual([]);
   });

@@ -53,6 +53,12 @@ const designerOrAdmin = (ok: number): Expect => ({
   'non-member': 404,
   'signed-out': 401,
 });
+/**
+ * The project's owner and admins change its members (issue 16.3). The world's
+ * designer started the project, so is its owner; a designer who is not the
+ * owner is refused (403), as who-checks.test.ts shows.
+ */
+const ownerOrAdmin = designerOrAdmin;
 /** Designers only (admins do not design). */
 const designerOnly = (ok: number, fabricator = 403): Expect => ({
   admin: 403,
@@ -100,6 +106,27 @@ describe('role × route matrix (every route, every persona)', () => {
 
   const P = () => `/api/projects/${w.projectId}`;
   const freshUser = () => makeUser(t);
+  // The package rows: a second project with the same people and one countersigned component (a
+  // package renders every countersigned sheet of its project: the shared one has many by then).
+  let small: Promise<string> | undefined;
+  let packageCode: Promise<string> | undefined;
+  const smallProject = () =>
+    (small ??= (async () => {
+      const project = await t.services.projects.create(w.designer, {
+        number: `PK-${randomUUID().slice(0, 8)}`,
+        name: 'Package project',
+        unitSystem: 'si',
+      });
+      for (const [user, role] of [
+        [w.checker, 'checker'],
+        [w.checker2, 'checker'],
+        [w.fabricator, 'fabricator'],
+      ] as const) {
+        await t.services.projects.setMember(w.admin, project.id, user.id, role);
+      }
+      await makeComponent(t, { ...w, projectId: project.id }, 'countersigned');
+      return project.id;
+    })());
   const rows: Row[] = [
     { route: 'GET /api/health', expect: all(200), call: (s) => s.get('/api/health') },
     {
@@ -264,12 +291,12 @@ describe('role × route matrix (every route, every persona)', () => {
     },
     {
       route: 'PUT /api/projects/:id/members/:userId',
-      expect: designerOrAdmin(200),
+      expect: ownerOrAdmin(200),
       call: async (s) => s.put(`${P()}/members/${(await freshUser()).id}`, { role: 'checker' }),
     },
     {
       route: 'DELETE /api/projects/:id/members/:userId',
-      expect: designerOrAdmin(204),
+      expect: ownerOrAdmin(204),
       call: async (s) => {
         const u = await freshUser();
         await t.services.projects.setMember(w.admin, w.projectId, u.id, 'fabricator');
@@ -491,6 +518,24 @@ describe('role × route matrix (every route, every persona)', () => {
         ),
     },
     {
+      route: 'GET /api/projects/:id/components/table',
+      expect: membersRead,
+      call: (s) => s.get(`${P()}/components/table`),
+    },
+    {
+      route: 'GET /api/projects/:id/components.csv',
+      expect: membersRead,
+      call: (s) => s.get(`${P()}/components.csv`),
+    },
+    {
+      // Whoever may download a countersigned sheet: every member and admins.
+      route: 'GET /api/projects/:id/package.pdf',
+      expect: membersRead,
+      call: async (s) => {
+        return s.get(`/api/projects/${await smallProject()}/package.pdf`);
+      },
+    },
+    {
       route: 'GET /api/check-queue',
       expect: signedIn(200),
       call: (s) => s.get('/api/check-queue'),
@@ -514,6 +559,23 @@ describe('role × route matrix (every route, every persona)', () => {
       call: (s) => s.get(`/api/audit?projectId=${w.projectId}`),
     },
     {
+      route: 'GET /api/audit.csv',
+      expect: { ...signedIn(400), admin: 200 },
+      call: (s) => s.get('/api/audit.csv'),
+    },
+    {
+      route: 'GET /api/audit.csv?projectId',
+      expect: {
+        admin: 200,
+        designer: 200,
+        checker: 200,
+        fabricator: 403,
+        'non-member': 404,
+        'signed-out': 401,
+      },
+      call: (s) => s.get(`/api/audit.csv?projectId=${w.projectId}`),
+    },
+    {
       route: 'POST /api/screen',
       expect: signedIn(200),
       call: (s) => s.post('/api/screen', plateInputs()),
@@ -522,6 +584,17 @@ describe('role × route matrix (every route, every persona)', () => {
       route: 'GET /api/verify/:code',
       expect: all(200),
       call: async (s) => s.get(`/api/verify/${(await makeComponent(t, w, 'countersigned')).hash}`),
+    },
+    {
+      route: 'GET /api/verify/packages/:code',
+      expect: all(200),
+      call: async (s) => {
+        const projectId = await smallProject();
+        packageCode ??= t.services.sheets
+          .issuePackage(w.designer, projectId, 'A4')
+          .then((p) => p.packageCode);
+        return s.get(`/api/verify/packages/${await packageCode}`);
+      },
     },
   ];
 

@@ -94,7 +94,7 @@ describe('GET /api/users/lookup (find one person to add to a project)', () => {
       `/api/users/lookup?email=${encodeURIComponent(w.designer.email)}`,
     );
     expect(refused.status).toBe(403);
-    expect(refused.body.error.code).toBe('not_a_designer');
+    expect(refused.body.error.code).toBe('not_a_project_owner');
     const designer = await signIn(t, w.designer);
     const bad = await designer.get('/api/users/lookup?email=not-an-address');
     expect(bad.status).toBe(400);

@@ -1,9 +1,12 @@
-import { verifyParams } from '@hoopline/contract';
+import { packageVerifyParams, verifyParams } from '@hoopline/contract';
 import { Router } from 'express';
 import { valid, validate } from '../http/validate';
 import type { RouteDeps } from './route-deps';
 
-/** GET /verify/:code, public: does a printed sheet's code belong to a countersigned revision? */
+/**
+ * Public: GET /verify/:code, does a printed sheet's code belong to a countersigned revision?
+ * GET /verify/packages/:code, does a package code belong to an issue package, and is it current?
+ */
 export function verifyRoutes({ services }: RouteDeps): Router {
   const router = Router();
 
@@ -11,6 +14,12 @@ export function verifyRoutes({ services }: RouteDeps): Router {
   router.get('/verify/:code', verify, async (req, res) => {
     const { params } = valid(req, verify);
     res.json(await services.revisions.verify(params.code));
+  });
+
+  const verifyPackage = validate({ params: packageVerifyParams });
+  router.get('/verify/packages/:code', verifyPackage, async (req, res) => {
+    const { params } = valid(req, verifyPackage);
+    res.json(await services.revisions.verifyPackage(params.code));
   });
 
   return router;

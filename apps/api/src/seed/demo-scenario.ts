@@ -41,7 +41,7 @@ export const DEMO_USERS: readonly DemoUser[] = [
     name: 'Dana Okafor',
     isAdmin: false,
     devPassword: 'dana-designer-demo-2026',
-    can: 'designer on LAM-2026-014 (enters and submits revisions); checker on LAM-2026-021',
+    can: 'designer on LAM-2026-014 and LAM-2026-031 (enters and submits revisions); checker on LAM-2026-021 and LAM-2026-034',
   },
   {
     key: 'ravi',
@@ -50,7 +50,7 @@ export const DEMO_USERS: readonly DemoUser[] = [
     name: 'Ravi Lindqvist',
     isAdmin: false,
     devPassword: 'ravi-checker-demo-2026',
-    can: 'checker on LAM-2026-014 (countersigns or returns); designer on LAM-2026-021',
+    can: 'checker on LAM-2026-014 and LAM-2026-031 (countersigns or returns); designer on LAM-2026-021 and LAM-2026-034',
   },
   {
     key: 'mara',
@@ -59,7 +59,7 @@ export const DEMO_USERS: readonly DemoUser[] = [
     name: 'Mara Castell (Castell Fabrication)',
     isAdmin: false,
     devPassword: 'mara-fabricator-demo-2026',
-    can: 'fabricator on LAM-2026-014: sees countersigned revisions only',
+    can: 'fabricator on LAM-2026-014, LAM-2026-031 and LAM-2026-034: sees countersigned revisions only',
   },
 ];
 
@@ -91,6 +91,20 @@ export interface DemoProject {
 
 const fullVacuum = { name: 'Operating: full vacuum', internal: 'full vacuum' };
 const ventBackFill = { name: 'Vent back-fill: +0.2 bar', internal: '0.2 bar(g)' };
+/** Glovebox GB-3 runs at ±25 mbar(g) about the room. */
+const glovebox = {
+  under: { name: 'Design underpressure: −25 mbar(g)', internal: '-25 mbar(g)' },
+  over: { name: 'Design overpressure: +25 mbar(g)', internal: '25 mbar(g)' },
+};
+/** Vacuum oven VO-7 cures at 200 °C under full vacuum and is vented cold. */
+const oven = {
+  cure: { name: 'Cure: full vacuum at 200 °C', internal: 'full vacuum' },
+  vent: {
+    name: 'Cold vent back-fill: +0.2 bar at 20 °C',
+    internal: '0.2 bar(g)',
+    temperature: '20 degC',
+  },
+};
 /** The process chamber's wall (PC-1-S1) as the shell its ports sit in. */
 const processChamberWall = {
   shape: 'cylinder',
@@ -426,6 +440,200 @@ export const DEMO_PROJECTS: readonly DemoProject[] = [
             },
             note: 'Glovebox side wall, 316L sheet on 50 × 6 mm flat bars, for the box’s ±25 mbar design pressures.',
             outcome: 'draft',
+          },
+        ],
+      },
+    ],
+  },
+  {
+    number: 'LAM-2026-031',
+    name: 'Glovebox GB-3, cell assembly line',
+    client: 'Larchmont Applied Materials',
+    site: { altitude: 340 },
+    notes:
+      'Argon glovebox GB-3 for the cell assembly line: 316L side walls on flat bars, a polycarbonate viewport, the antechamber door. The box runs at ±25 mbar(g); the antechamber pumps to full vacuum.',
+    designer: 'dana',
+    members: [
+      { person: 'ravi', role: 'checker' },
+      { person: 'mara', role: 'fabricator' },
+    ],
+    components: [
+      {
+        name: 'GB-3 side wall',
+        tag: 'GB-3-W1',
+        kind: 'stiffened-wall',
+        steps: [
+          {
+            inputs: {
+              kind: 'stiffened-wall',
+              span: '900 mm',
+              spacing: '350 mm',
+              thickness: '3 mm',
+              panelEdge: 'clamped',
+              stiffenerEnds: 'simply-supported',
+              stiffenerSide: 'outside',
+              stiffener: { shape: 'flat-bar', depth: '50 mm', thickness: '6 mm' },
+              material: 'stainless-316l',
+              loadCases: [glovebox.under, glovebox.over],
+            },
+            note: '3 mm 316L sheet on 50 × 6 mm flat bars at 350 mm, between the frame rails 900 mm apart.',
+            outcome: 'countersigned',
+            comment: 'Panel and stiffener both well inside their allowables at ±25 mbar(g).',
+          },
+        ],
+      },
+      {
+        name: 'GB-3 polycarbonate viewport',
+        tag: 'GB-3-V1',
+        kind: 'rectangular-plate',
+        steps: [
+          {
+            inputs: {
+              kind: 'rectangular-plate',
+              width: '400 mm',
+              height: '300 mm',
+              thickness: '6 mm',
+              edge: 'simply-supported',
+              material: 'polycarbonate',
+              loadCases: [glovebox.under, glovebox.over],
+            },
+            note: 'Front viewport, 6 mm polycarbonate on a gasket in a bolted frame: simply supported.',
+            outcome: 'countersigned',
+            comment:
+              'Brittle-material factor applied; keep solvent wipes off it (crazing caution on the sheet).',
+          },
+        ],
+      },
+      {
+        name: 'GB-3 antechamber door',
+        tag: 'GB-3-A1',
+        kind: 'circular-plate',
+        steps: [
+          {
+            inputs: {
+              kind: 'circular-plate',
+              diameter: '400 mm',
+              thickness: '12 mm',
+              edge: 'clamped',
+              material: 'stainless-316l',
+              deflectionLimit: '1 mm',
+              loadCases: [fullVacuum],
+            },
+            note: 'Antechamber door, pumped to full vacuum for each transfer.',
+            outcome: 'submitted',
+          },
+        ],
+      },
+    ],
+  },
+  {
+    number: 'LAM-2026-034',
+    name: 'Vacuum oven VO-7, resin cure',
+    client: 'Larchmont Applied Materials',
+    site: { altitude: 340 },
+    notes:
+      'Cylindrical vacuum oven VO-7 for resin cure at 200 °C: its stiffened rear wall, the pump port in the shell, the door. Ravi designs, Dana checks.',
+    designer: 'ravi',
+    members: [
+      { person: 'dana', role: 'checker' },
+      { person: 'mara', role: 'fabricator' },
+    ],
+    components: [
+      {
+        name: 'VO-7 rear wall',
+        tag: 'VO-7-W1',
+        kind: 'stiffened-wall',
+        steps: [
+          {
+            inputs: {
+              kind: 'stiffened-wall',
+              span: '700 mm',
+              spacing: '200 mm',
+              thickness: '8 mm',
+              panelEdge: 'clamped',
+              stiffenerEnds: 'simply-supported',
+              stiffenerSide: 'outside',
+              stiffener: { shape: 'flat-bar', depth: '80 mm', thickness: '10 mm' },
+              material: 'stainless-304',
+              designTemperature: '200 degC',
+              loadCases: [oven.cure, oven.vent],
+            },
+            note: 'Rear wall, 8 mm 304 on 80 × 10 mm flat bars at 200 mm, screened at the 200 °C cure.',
+            outcome: 'countersigned',
+            comment:
+              'Properties at 200 °C from the derating tables; the cold vent case does not govern.',
+          },
+        ],
+      },
+      {
+        name: 'VO-7 pump port',
+        tag: 'VO-7-N1',
+        kind: 'opening',
+        steps: [
+          {
+            inputs: {
+              kind: 'opening',
+              shell: {
+                shape: 'cylinder',
+                diameter: '600 mm',
+                diameterBasis: 'outside',
+                thickness: '6 mm',
+                length: '800 mm',
+                material: 'stainless-304',
+              },
+              nozzle: {
+                outsideDiameter: '114.3 mm',
+                thickness: '3.05 mm',
+                attachment: 'set-in',
+                projection: '100 mm',
+                material: 'stainless-304',
+                weldLeg: '4 mm',
+              },
+              designTemperature: '200 degC',
+              loadCases: [oven.cure],
+            },
+            note: 'Pump port, NPS 4 Sch 10S set into the 6 mm shell, at the cure temperature.',
+            outcome: 'countersigned',
+            comment: 'Area replacement holds at 200 °C without a pad.',
+          },
+        ],
+      },
+      {
+        name: 'VO-7 door',
+        tag: 'VO-7-D1',
+        kind: 'rectangular-plate',
+        steps: [
+          {
+            inputs: {
+              kind: 'rectangular-plate',
+              width: '500 mm',
+              height: '500 mm',
+              thickness: '16 mm',
+              edge: 'simply-supported',
+              material: 'stainless-304',
+              deflectionLimit: '1.5 mm',
+              designTemperature: '200 degC',
+              loadCases: [oven.cure],
+            },
+            note: 'Square door on its gasket, 16 mm 304, at 200 °C.',
+            outcome: 'countersigned',
+            comment: 'Fine for the cure case.',
+          },
+          {
+            inputs: {
+              kind: 'rectangular-plate',
+              width: '500 mm',
+              height: '500 mm',
+              thickness: '20 mm',
+              edge: 'simply-supported',
+              material: 'stainless-304',
+              deflectionLimit: '1.5 mm',
+              designTemperature: '200 degC',
+              loadCases: [oven.cure, oven.vent],
+            },
+            note: 'Thickened to 20 mm and the cold vent back-fill added.',
+            outcome: 'countersigned',
+            comment: 'Vent case added; supersedes revision 1.',
           },
         ],
       },

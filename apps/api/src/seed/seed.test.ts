@@ -38,7 +38,7 @@ describe('demo seed (real PostgreSQL)', () => {
     expect(sheet).toContain('dana.okafor@larchmont.example');
     // The start command prints the same text on every start.
     expect(sheet).toBe(signInSheet(first, 'http://127.0.0.1:8080'));
-    expect(first.created.projects).toBe(2);
+    expect(first.created.projects).toBe(4);
   });
 
   it('has a revision in every status, and a countersigned one superseded by a later countersign', async () => {
@@ -103,6 +103,39 @@ describe('demo seed (real PostgreSQL)', () => {
     expect(hot.steps.map((st) => st.id)).toContain('yield-strength-at-temperature');
   });
 
+  it('the glovebox and the vacuum oven each have a table and an issue package', async () => {
+    await seedDemo(t.dataSource, t.config, t.services);
+    const [dana] = (await t.dataSource.query(
+      `select id from users where email = 'dana.okafor@larchmont.example'`,
+    )) as { id: string }[];
+    const actor = { id: dana!.id, isAdmin: false };
+    for (const number of ['LAM-2026-031', 'LAM-2026-034']) {
+      const [project] = (await t.dataSource.query('select id from projects where number = $1', [
+        number,
+      ])) as { id: string }[];
+      const table = await t.services.componentTable.table(actor, project!.id);
+      expect(table.rows.length, number).toBe(3);
+      // Every demo row passes: a screening the checker countersigned, from the stored report.
+      for (const row of table.rows) {
+        expect(row.governing, row.component.name).not.toBeNull();
+        expect(row.revision?.verdict, row.component.name).toBe('pass');
+      }
+      const issued = await t.services.sheets.issuePackage(actor, project!.id, 'A4');
+      expect(issued.packageCode).toMatch(/^PKG-/);
+      const answer = await t.services.revisions.verifyPackage(issued.packageHash);
+      expect(answer.match && answer.status).toBe('current');
+    }
+    // The oven's door was countersigned twice: the package holds revision 2.
+    const oven = (await t.dataSource.query(
+      `select r.number, r.status, r.superseded_at is not null as superseded from revisions r
+         join components c on c.id = r.component_id where c.tag = 'VO-7-D1' order by r.number`,
+    )) as { number: number; status: string; superseded: boolean }[];
+    expect(oven).toEqual([
+      { number: 1, status: 'countersigned', superseded: true },
+      { number: 2, status: 'countersigned', superseded: false },
+    ]);
+  });
+
   it('the printed passwords sign the demo people in, with their per-project roles', async () => {
     const result = await seedDemo(t.dataSource, t.config, t.services);
     const ravi = result.signIns.find((s) => s.email.startsWith('ravi'))!;
@@ -116,7 +149,12 @@ describe('demo seed (real PostgreSQL)', () => {
         m.role,
       ]),
     );
-    expect(roles).toEqual({ 'LAM-2026-014': 'checker', 'LAM-2026-021': 'designer' });
+    expect(roles).toEqual({
+      'LAM-2026-014': 'checker',
+      'LAM-2026-021': 'designer',
+      'LAM-2026-031': 'checker',
+      'LAM-2026-034': 'designer',
+    });
     expect(result.signIns).toHaveLength(DEMO_USERS.length);
   });
 

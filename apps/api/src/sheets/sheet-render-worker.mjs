@@ -6,9 +6,21 @@ import { threadId } from 'node:worker_threads';
 import { tsImport } from 'tsx/esm/api';
 
 const { renderSheet } = await tsImport('./render-sheet.tsx', import.meta.url);
+const { renderPackage: putTogether } = await tsImport('./render-package.tsx', import.meta.url);
 
 /** Renders one sheet; answers the bytes and which thread rendered them. */
 export default async function render(data) {
   const pdf = await renderSheet(data);
   return { pdf: new Uint8Array(pdf.buffer, pdf.byteOffset, pdf.byteLength), threadId };
+}
+
+/** Puts an issue package together: its index, then the sheets it is given (piscina task `renderPackage`). */
+export async function renderPackage(job) {
+  const { pdf, indexPages, totalPages } = await putTogether(job);
+  return {
+    pdf: new Uint8Array(pdf.buffer, pdf.byteOffset, pdf.byteLength),
+    indexPages,
+    totalPages,
+    threadId,
+  };
 }

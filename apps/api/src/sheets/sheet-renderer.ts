@@ -1,6 +1,7 @@
 import { availableParallelism } from 'node:os';
 import { Piscina } from 'piscina';
 import { AppError } from '../http/errors';
+import type { PackageJob } from './package-data';
 import type { SheetData } from './sheet-data';
 
 /** Sheets waiting for a thread, at most, per process. */
@@ -18,6 +19,8 @@ const sheetsBusy = () =>
 export interface SheetRenderer {
   /** Renders a sheet to PDF bytes, off the event loop. */
   render(data: SheetData): Promise<{ pdf: Buffer; threadId: number }>;
+  /** Puts an issue package together (its index, then the sheets given), off the event loop. */
+  renderPackage(job: PackageJob): Promise<{ pdf: Buffer; indexPages: number; totalPages: number }>;
   /** Sheets rendered so far by this process's pool, and the pool's threads. */
   stats(): { readonly rendered: number; readonly threads: number };
   close(): Promise<void>;
@@ -53,6 +56,20 @@ export function workerSheetRenderer(threads: number): SheetRenderer {
       return {
         pdf: Buffer.from(result.pdf.buffer, result.pdf.byteOffset, result.pdf.byteLength),
         threadId: result.threadId,
+      };
+    },
+    async renderPackage(job) {
+      const p = poolOf();
+      if (p.queueSize >= MAX_QUEUE) throw sheetsBusy();
+      const result = (await p.run(job, { name: 'renderPackage' })) as {
+        pdf: Uint8Array;
+        indexPages: number;
+        totalPages: number;
+      };
+      return {
+        pdf: Buffer.from(result.pdf.buffer, result.pdf.byteOffset, result.pdf.byteLength),
+        indexPages: result.indexPages,
+        totalPages: result.totalPages,
       };
     },
     stats: () => ({ rendered, threads: pool?.threads.length ?? 0 }),

@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiFetch, json, query, type Page } from './client';
-import type { Component, Revision } from '@hoopline/contract';
+import type { Component, ComponentTable, Revision } from '@hoopline/contract';
 
 export const componentKeys = {
   ofProject: (projectId: string) => ['projects', projectId, 'components'] as const,
@@ -18,6 +18,19 @@ export function projectComponentsQuery(projectId: string, params: { q?: string; 
 
 export function useProjectComponents(projectId: string, params: { q?: string; page?: number }) {
   return useQuery(projectComponentsQuery(projectId, params));
+}
+
+/** Every component of a project with its latest revision's stored governing check (the project table). */
+export function componentTableQuery(projectId: string) {
+  return queryOptions({
+    // Under ofProject: whatever invalidates a project's components refreshes its table.
+    queryKey: [...componentKeys.ofProject(projectId), 'table'],
+    queryFn: () => apiFetch<ComponentTable>(`/projects/${projectId}/components/table`),
+  });
+}
+
+export function useComponentTable(projectId: string) {
+  return useQuery(componentTableQuery(projectId));
 }
 
 export function componentQuery(id: string) {

@@ -10,6 +10,7 @@ import type {
   CustomMaterialItem,
   DesignBasis,
   Member,
+  MemberList,
   Project,
   SiteAsTyped,
   Role,
@@ -103,7 +104,7 @@ export function useUpdateProject(id: string) {
 export function useMembers(projectId: string) {
   return useQuery({
     queryKey: projectKeys.members(projectId),
-    queryFn: () => apiFetch<{ items: Member[] }>(`/projects/${projectId}/members`),
+    queryFn: () => apiFetch<MemberList>(`/projects/${projectId}/members`),
   });
 }
 

@@ -1,7 +1,12 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiFetch, json, query, type Page } from './client';
 import { componentKeys } from './components';
-import type { Revision, RevisionDiff, RevisionSummary } from '@hoopline/contract';
+import type {
+  Revision,
+  RevisionDiff,
+  RevisionSummary,
+  SubmittedRevision,
+} from '@hoopline/contract';
 
 export const revisionKeys = {
   one: (id: string) => ['revisions', id] as const,
@@ -42,12 +47,16 @@ export function useRevisionDiff(id: string, against: string) {
 }
 
 /** After a workflow action every list that shows statuses is stale. */
-function useWorkflowMutation<Body>(action: 'submit' | 'withdraw' | 'countersign' | 'return') {
+function useWorkflowMutation<Body, Result extends Revision = Revision>(
+  action: 'submit' | 'withdraw' | 'countersign' | 'return',
+) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: ({ id, body }: { id: string; body?: Body }) =>
-      apiFetch<Revision>(`/revisions/${id}/${action}`, json('POST', body ?? {})),
-    onSuccess: (revision) => {
+      apiFetch<Result>(`/revisions/${id}/${action}`, json('POST', body ?? {})),
+    onSuccess: (answer) => {
+      // The cache keeps the revision, not the warnings that came with this answer.
+      const { warnings: _warnings, ...revision } = answer as Result & { warnings?: unknown };
       client.setQueryData(revisionKeys.one(revision.id), revision);
       return Promise.all([
         client.invalidateQueries({ queryKey: ['check-queue'] }),
@@ -60,7 +69,8 @@ function useWorkflowMutation<Body>(action: 'submit' | 'withdraw' | 'countersign'
   });
 }
 
-export const useSubmitRevision = () => useWorkflowMutation<never>('submit');
+/** Submits for check; the answer may warn (no checker on the project: issue 16.3). */
+export const useSubmitRevision = () => useWorkflowMutation<never, SubmittedRevision>('submit');
 export const useWithdrawRevision = () => useWorkflowMutation<never>('withdraw');
 export const useCountersign = () =>
   useWorkflowMutation<{ hash: string; comment?: string }>('countersign');

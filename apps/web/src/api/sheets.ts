@@ -15,3 +15,22 @@ export async function downloadSheet(
   const stamp = file.headers.get('x-hoopline-stamp');
   return stamp === 'review' || stamp === 'draft' ? stamp : null;
 }
+
+/** Downloads the project's component table as CSV, under the server's name. */
+export async function downloadComponentsCsv(projectId: string): Promise<void> {
+  const file = await apiDownload(`/projects/${projectId}/components.csv`);
+  saveFile(file, 'components.csv');
+}
+
+/**
+ * Downloads the project's issue package (the index, then every countersigned
+ * sheet) and saves it; returns its package code as the server reports it.
+ */
+export async function downloadIssuePackage(
+  projectId: string,
+  paper: PaperSize,
+): Promise<string | null> {
+  const file = await apiDownload(`/projects/${projectId}/package.pdf${query({ paper })}`);
+  saveFile(file, 'issue-package.pdf');
+  return file.headers.get('x-hoopline-package-code');
+}

@@ -1,5 +1,5 @@
+import { useMemo, useState, type ReactNode } from 'react';
 import { ScrollArea } from './scroll-area';
-import type { ReactNode } from 'react';
 
 export interface Column<Row> {
   readonly key: string;
@@ -9,6 +9,12 @@ export interface Column<Row> {
   readonly numeric?: boolean;
   /** When set, the header is a sort button for this server sort key. */
   readonly sortKey?: string;
+  /**
+   * For a table sorted in the browser (no `onSort`): the value this column
+   * sorts by; the header becomes a sort button (its key is the column's).
+   * Null sorts last in either order.
+   */
+  readonly sortValue?: (row: Row) => string | number | null;
   readonly className?: string;
 }
 
@@ -18,16 +24,50 @@ export interface SortState {
 }
 
 /**
- * A dense data table. Sorting is the server's (the header buttons report the
- * wanted order); `aria-sort` tells screen readers the current one.
+ * Rows in the order of one column's `sortValue`: numbers by value, text by
+ * the locale with digits as numbers ("Rev 2" before "Rev 10"), nulls last in
+ * either order, ties in the order given (a stable sort).
+ */
+export function sortRows<Row>(
+  rows: readonly Row[],
+  column: Pick<Column<Row>, 'sortValue'>,
+  order: SortState['order'],
+): Row[] {
+  const value = column.sortValue;
+  if (!value) return [...rows];
+  const sign = order === 'asc' ? 1 : -1;
+  return rows
+    .map((row, index) => ({ row, index, v: value(row) }))
+    .sort((a, b) => {
+      if (a.v === null || b.v === null) {
+        return a.v === b.v ? a.index - b.index : a.v === null ? 1 : -1;
+      }
+      const c =
+        typeof a.v === 'number' && typeof b.v === 'number'
+          ? a.v - b.v
+          : String(a.v).localeCompare(String(b.v), undefined, {
+              numeric: true,
+              sensitivity: 'base',
+            });
+      return sign * c || a.index - b.index;
+    })
+    .map((d) => d.row);
+}
+
+/**
+ * A dense data table. Sorting is the server's when `onSort` is given (the
+ * header buttons report the wanted order, on columns with a `sortKey`), else
+ * the browser's over the rows given (columns with a `sortValue`, starting
+ * from `initialSort`); `aria-sort` tells screen readers the current one.
  */
 export function DataTable<Row>({
   caption,
   columns,
   rows,
   rowKey,
-  sort,
+  sort: serverSort,
   onSort,
+  initialSort,
   empty,
   rowClassName,
 }: {
@@ -37,9 +77,22 @@ export function DataTable<Row>({
   rowKey: (row: Row) => string;
   sort?: SortState;
   onSort?: (next: SortState) => void;
+  /** For a table sorted in the browser: the order it opens in (else the rows' own). */
+  initialSort?: SortState;
   empty?: ReactNode;
   rowClassName?: (row: Row) => string;
 }) {
+  const inBrowser = !onSort;
+  const [localSort, setLocalSort] = useState<SortState | undefined>(initialSort);
+  const sort = inBrowser ? localSort : serverSort;
+  const keyOf = (column: Column<Row>) =>
+    inBrowser ? (column.sortValue ? column.key : undefined) : column.sortKey;
+  const changeSort = inBrowser ? setLocalSort : onSort;
+  const shown = useMemo(() => {
+    if (!inBrowser || !localSort) return rows;
+    const column = columns.find((c) => c.key === localSort.key);
+    return column ? sortRows(rows, column, localSort.order) : rows;
+  }, [inBrowser, localSort, rows, columns]);
   return (
     <ScrollArea label={caption}>
       <table className="w-full border-collapse text-sm">
@@ -47,7 +100,8 @@ export function DataTable<Row>({
         <thead>
           <tr className="border-b border-line bg-sunken text-left text-xs text-muted">
             {columns.map((column) => {
-              const active = sort && column.sortKey === sort.key;
+              const sortKey = keyOf(column);
+              const active = sort && sortKey !== undefined && sortKey === sort.key;
               const ariaSort = active
                 ? sort.order === 'asc'
                   ? 'ascending'
@@ -57,16 +111,16 @@ export function DataTable<Row>({
                 <th
                   key={column.key}
                   scope="col"
-                  aria-sort={column.sortKey ? (ariaSort ?? 'none') : undefined}
+                  aria-sort={sortKey ? (ariaSort ?? 'none') : undefined}
                   className={`px-3 py-2 font-medium ${column.numeric ? 'text-right' : ''} ${column.className ?? ''}`}
                 >
-                  {column.sortKey && onSort ? (
+                  {sortKey && changeSort ? (
                     <button
                       type="button"
                       className="inline-flex items-center gap-1 font-medium hover:text-ink"
                       onClick={() =>
-                        onSort({
-                          key: column.sortKey!,
+                        changeSort({
+                          key: sortKey,
                           order: active && sort.order === 'asc' ? 'desc' : 'asc',
                         })
                       }
@@ -85,14 +139,14 @@ export function DataTable<Row>({
           </tr>
         </thead>
         <tbody>
-          {rows.length === 0 ? (
+          {shown.length === 0 ? (
             <tr>
               <td colSpan={columns.length} className="px-3 py-6 text-center text-muted">
                 {empty ?? 'Nothing here yet.'}
               </td>
             </tr>
           ) : (
-            rows.map((row) => (
+            shown.map((row) => (
               <tr
                 key={rowKey(row)}
                 className={`border-b border-line last:border-b-0 hover:bg-sunken/60 ${rowClassName?.(row) ?? ''}`}

@@ -1,14 +1,22 @@
-import { useSearchParams } from 'react-router-dom';
+import { Link, useSearchParams } from 'react-router-dom';
 import { useAudit, type AuditFilter } from '../api/admin';
+import { query } from '../api/client';
+import { useProjects } from '../api/projects';
 import { useMe } from '../api/session';
-import type { AuditEvent } from '@hoopline/contract';
-import { Button } from '../components/button';
+import { AUDIT_ACTIONS, type AuditEvent } from '@hoopline/contract';
+import {
+  AUDIT_ACTION_LABELS,
+  auditActionLabel,
+  auditSegments,
+  isoDateTime,
+  type AuditLink,
+} from '@hoopline/present';
+import { Button, buttonClass } from '../components/button';
 import { DataTable, Pagination, type Column } from '../components/data-table';
 import { ErrorView, NotFoundView } from '../components/error-view';
 import { SelectField, TextField } from '../components/field';
 import { PageHeader } from '../components/page';
 import { TableSkeleton } from '../components/skeleton';
-import { formatDateTime } from '../lib/dates';
 
 const ENTITY_TYPES = [
   'user',
@@ -18,7 +26,45 @@ const ENTITY_TYPES = [
   'material',
   'component',
   'revision',
+  'attachment',
+  'settings',
 ];
+
+/** Where a record of an event's sentence links: its page, or for a person their events. */
+function hrefOf(link: AuditLink): string {
+  switch (link.kind) {
+    case 'project':
+      return `/projects/${link.id}`;
+    case 'component':
+      return `/components/${link.id}`;
+    case 'revision':
+      return `/revisions/${link.id}`;
+    case 'person':
+      return `/audit-log?actorId=${encodeURIComponent(link.id)}`;
+  }
+}
+
+/** The event in words (packages/present), each record's name a link. */
+function EventWords({ event }: { event: AuditEvent }) {
+  return (
+    <span>
+      {auditSegments(event).map((s, i) =>
+        s.link ? (
+          <Link
+            key={i}
+            to={hrefOf(s.link)}
+            className="text-accent underline"
+            title={s.link.kind === 'person' ? `Events by ${s.text}` : undefined}
+          >
+            {s.text}
+          </Link>
+        ) : (
+          <span key={i}>{s.text}</span>
+        ),
+      )}
+    </span>
+  );
+}
 
 function summaryText(summary: AuditEvent['summary']): string {
   const parts: string[] = [];
@@ -42,26 +88,34 @@ export function AuditLogRoute() {
     page: Math.max(1, Number(params.get('page')) || 1),
   };
   const audit = useAudit(filter);
+  const projects = useProjects({ sort: 'number', order: 'asc', pageSize: 100 });
   if (!me.user.isAdmin) return <NotFoundView />;
+  // The export takes the same filters, without the page.
+  const csvHref = `/api/audit.csv${query({ ...filter, page: undefined })}`;
 
   const columns: Column<AuditEvent>[] = [
-    { key: 'when', header: 'When', numeric: true, render: (e) => formatDateTime(e.createdAt) },
     {
-      key: 'actor',
-      header: 'Who',
-      render: (e) => e.actor?.name ?? <span className="text-muted">system</span>,
+      key: 'when',
+      header: 'When (UTC)',
+      numeric: true,
+      render: (e) => (
+        <time dateTime={e.createdAt} className="font-mono text-xs whitespace-nowrap">
+          {isoDateTime(e.createdAt)}
+        </time>
+      ),
+    },
+    {
+      key: 'event',
+      header: 'Event',
+      render: (e) => <EventWords event={e} />,
     },
     {
       key: 'action',
       header: 'Action',
-      render: (e) => <span className="font-mono text-xs">{e.action}</span>,
-    },
-    {
-      key: 'entity',
-      header: 'Record',
       render: (e) => (
-        <span className="font-mono text-xs">
-          {e.entityType} {e.entityId?.slice(0, 8) ?? ''}
+        <span title={e.action}>
+          {auditActionLabel(e.action)}{' '}
+          <span className="font-mono text-xs text-muted">{e.action}</span>
         </span>
       ),
     },
@@ -86,7 +140,7 @@ export function AuditLogRoute() {
           event.preventDefault();
           const data = new FormData(event.currentTarget);
           const next = new URLSearchParams();
-          for (const key of ['action', 'entityType', 'from', 'to']) {
+          for (const key of ['projectId', 'action', 'entityType', 'actorId', 'from', 'to']) {
             const value = String(data.get(key) ?? '').trim();
             if (value)
               next.set(key, key === 'from' || key === 'to' ? new Date(value).toISOString() : value);
@@ -94,12 +148,30 @@ export function AuditLogRoute() {
           setParams(next);
         }}
       >
-        <TextField
-          name="action"
-          label="Action"
-          defaultValue={filter.action ?? ''}
-          placeholder="e.g. revision.countersigned"
-        />
+        <SelectField name="projectId" label="Project" defaultValue={filter.projectId ?? ''}>
+          <option value="">All projects</option>
+          {projects.data?.items.map((p) => (
+            <option key={p.id} value={p.id}>
+              {p.number} {p.name}
+            </option>
+          ))}
+          {filter.projectId &&
+          projects.data &&
+          !projects.data.items.some((p) => p.id === filter.projectId) ? (
+            <option value={filter.projectId}>{filter.projectId}</option>
+          ) : null}
+        </SelectField>
+        <SelectField name="action" label="Action" defaultValue={filter.action ?? ''}>
+          <option value="">Any</option>
+          {AUDIT_ACTIONS.map((code) => (
+            <option key={code} value={code}>
+              {AUDIT_ACTION_LABELS[code]}
+            </option>
+          ))}
+          {filter.action && !(AUDIT_ACTIONS as readonly string[]).includes(filter.action) ? (
+            <option value={filter.action}>{filter.action}</option>
+          ) : null}
+        </SelectField>
         <SelectField name="entityType" label="Record" defaultValue={filter.entityType ?? ''}>
           <option value="">Any</option>
           {ENTITY_TYPES.map((t) => (
@@ -115,12 +187,16 @@ export function AuditLogRoute() {
           defaultValue={filter.from?.slice(0, 10) ?? ''}
         />
         <TextField name="to" type="date" label="To" defaultValue={filter.to?.slice(0, 10) ?? ''} />
+        {filter.actorId ? <input type="hidden" name="actorId" value={filter.actorId} /> : null}
         <Button type="submit" variant="primary">
           Filter
         </Button>
         <Button type="button" onClick={() => setParams(new URLSearchParams())}>
           Clear
         </Button>
+        <a href={csvHref} download className={buttonClass('secondary')}>
+          Download CSV
+        </a>
       </form>
       {audit.isPending ? (
         <TableSkeleton label="Loading the audit log" />

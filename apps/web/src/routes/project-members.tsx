@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { useParams } from 'react-router-dom';
 import { useMembers, useProject, useRemoveMember, useSetMember } from '../api/projects';
 import { useMe } from '../api/session';
-import type { Member, Role } from '@hoopline/contract';
+import type { Member, MemberList, Role } from '@hoopline/contract';
 import { ROLE_LABEL } from '../components/badges';
 import { Button } from '../components/button';
 import { DataTable, type Column } from '../components/data-table';
@@ -14,6 +14,46 @@ import { messageFor } from '../components/server-errors';
 import { PageSkeleton, TableSkeleton } from '../components/skeleton';
 import { formatDate } from '../lib/dates';
 import { AddMemberForm, AdminAddMemberForm } from '../features/projects/add-member-form';
+
+/** "Dana Designer (the owner) and the administrators Ada Admin and Ari Admin". */
+export function whoManages(managers: MemberList['managers']): string {
+  const owner = managers.find((m) => m.owner);
+  const admins = managers.filter((m) => !m.owner).map((m) => m.name);
+  const list = (names: string[]) =>
+    names.length <= 1 ? names.join('') : `${names.slice(0, -1).join(', ')} and ${names.at(-1)}`;
+  const adminPart =
+    admins.length === 0
+      ? 'an administrator'
+      : `${admins.length === 1 ? 'the administrator' : 'the administrators'} ${list(admins)}`;
+  return owner ? `${owner.name} (the project’s owner) and ${adminPart}` : adminPart;
+}
+
+/** Who changes the members, and whether anyone can check: said above the table. */
+function WhoChecksNotice({ list, myId }: { list: MemberList; myId: string }) {
+  const who = whoManages(list.managers);
+  return (
+    <div className="space-y-2 text-sm" aria-label="Who changes members">
+      {list.hasChecker ? null : (
+        <p role="status" className="rounded border border-warn bg-warn-soft px-3 py-2">
+          <strong>This project has no checker:</strong> nobody can countersign its revisions yet.{' '}
+          {list.canManage
+            ? 'Add a checker below (someone other than you: nobody makes themselves a checker).'
+            : `${who[0]!.toUpperCase()}${who.slice(1)} can add one.`}
+        </p>
+      )}
+      {list.canManage ? (
+        <p className="text-muted">
+          You may add members and change roles here; nobody makes themselves a checker.
+        </p>
+      ) : (
+        <p className="text-muted">
+          Only {who} add members and change roles.
+          {list.managers.some((m) => m.id === myId) ? null : ' Ask them for a change.'}
+        </p>
+      )}
+    </div>
+  );
+}
 
 export function ProjectMembersRoute() {
   const { projectId = '' } = useParams();
@@ -28,7 +68,8 @@ export function ProjectMembersRoute() {
   if (project.isPending) return <PageSkeleton label="Loading members" />;
   if (project.isError) return <ErrorView error={project.error} />;
   const p = project.data;
-  const canManage = p.myRole === 'designer' || me.user.isAdmin;
+  // The server says who may change members (the owner, administrators): issue 16.3.
+  const canManage = members.data?.canManage ?? false;
 
   const columns: Column<Member>[] = [
     { key: 'name', header: 'Name', render: (m) => m.user.name },
@@ -50,7 +91,12 @@ export function ProjectMembersRoute() {
             }
           >
             {(Object.keys(ROLE_LABEL) as Role[]).map((r) => (
-              <option key={r} value={r}>
+              <option
+                key={r}
+                value={r}
+                // Nobody makes themselves a checker (the server refuses it too).
+                disabled={r === 'checker' && m.user.id === me.user.id && m.role !== 'checker'}
+              >
                 {ROLE_LABEL[r]}
               </option>
             ))}
@@ -89,6 +135,7 @@ export function ProjectMembersRoute() {
         <ErrorView error={members.error} />
       ) : (
         <div className="space-y-4">
+          <WhoChecksNotice list={members.data} myId={me.user.id} />
           <DataTable
             caption="Project members"
             columns={columns}

@@ -1,16 +1,14 @@
-import { useState } from 'react';
-import { Link, useParams } from 'react-router-dom';
-import { useProjectComponents } from '../api/components';
+import { useParams } from 'react-router-dom';
+import { useComponentTable } from '../api/components';
 import { useProject } from '../api/projects';
-import type { Component, UnitSystem } from '@hoopline/contract';
-import { StatusBadge, RoleBadge, VerdictBadge } from '../components/badges';
+import type { UnitSystem } from '@hoopline/contract';
+import { RoleBadge } from '../components/badges';
 import { ButtonLink } from '../components/button';
-import { DataTable, Pagination, type Column } from '../components/data-table';
 import { ErrorView } from '../components/error-view';
 import { PageHeader } from '../components/page';
 import { PageSkeleton, TableSkeleton } from '../components/skeleton';
-import { formatDateTime } from '../lib/dates';
-import { kindName } from '@hoopline/present';
+import { ComponentTableView } from '../features/projects/component-table';
+import { ProjectDownloads } from '../features/sheets/package-download';
 import { show } from '@hoopline/present';
 import { useUnitSystem } from '../lib/unit-system';
 import { useMe } from '../api/session';
@@ -27,58 +25,13 @@ export function ProjectRoute() {
   const me = useMe();
   const system = useUnitSystem();
   const project = useProject(projectId);
-  const [page, setPage] = useState(1);
-  const components = useProjectComponents(projectId, { page });
+  const table = useComponentTable(projectId);
 
   if (project.isPending) return <PageSkeleton label="Loading the project" />;
   if (project.isError) return <ErrorView error={project.error} />;
   const p = project.data;
   const isDesigner = p.myRole === 'designer';
   const canManage = isDesigner || me.user.isAdmin;
-
-  const columns: Column<Component>[] = [
-    {
-      key: 'name',
-      header: 'Component',
-      render: (c) => (
-        <Link to={`/components/${c.id}`} className="font-medium text-accent hover:underline">
-          {c.name}
-        </Link>
-      ),
-    },
-    { key: 'tag', header: 'Tag', render: (c) => c.tag || <span className="text-muted">–</span> },
-    { key: 'kind', header: 'Kind', render: (c) => kindName(c.kind) },
-    {
-      key: 'latest',
-      header: 'Latest revision',
-      render: (c) =>
-        c.latestRevision ? (
-          <span className="flex flex-wrap items-center gap-1.5">
-            <span className="num">Rev {c.latestRevision.number}</span>
-            <StatusBadge status={c.latestRevision.status} />
-            <VerdictBadge verdict={c.latestRevision.verdict} />
-          </span>
-        ) : (
-          '–'
-        ),
-    },
-    {
-      key: 'issued',
-      header: 'Issued',
-      render: (c) =>
-        c.issuedRevision ? (
-          <span className="num">Rev {c.issuedRevision.number}</span>
-        ) : (
-          <span className="text-muted">–</span>
-        ),
-    },
-    {
-      key: 'updated',
-      header: 'Updated',
-      numeric: true,
-      render: (c) => formatDateTime(c.updatedAt),
-    },
-  ];
 
   return (
     <>
@@ -113,17 +66,18 @@ export function ProjectRoute() {
         <p className="mb-3 max-w-3xl whitespace-pre-line text-sm text-muted">{p.notes}</p>
       ) : null}
       <h2 className="mb-2 text-sm font-semibold">Components</h2>
-      {components.isPending ? (
+      {table.isPending ? (
         <TableSkeleton label="Loading components" />
-      ) : components.isError ? (
-        <ErrorView error={components.error} />
+      ) : table.isError ? (
+        <ErrorView error={table.error} />
       ) : (
         <>
-          <DataTable
-            caption="Components of this project"
-            columns={columns}
-            rows={components.data.items}
-            rowKey={(c) => c.id}
+          <ProjectDownloads
+            projectId={p.id}
+            hasIssued={table.data.rows.some((r) => r.issuedRevisionNumber !== null)}
+          />
+          <ComponentTableView
+            table={table.data}
             empty={
               p.myRole === 'fabricator'
                 ? 'No component of this project has been issued yet.'
@@ -132,13 +86,10 @@ export function ProjectRoute() {
                   : 'No components yet.'
             }
           />
-          <Pagination
-            page={components.data.page}
-            pageSize={components.data.pageSize}
-            total={components.data.total}
-            onPage={setPage}
-            label="Component pages"
-          />
+          <p className="mt-2 text-xs text-muted">
+            Governing check, utilisation and verdict are those of each revision&apos;s stored
+            report, as it was countersigned or saved; nothing is screened again here.
+          </p>
         </>
       )}
     </>

@@ -146,6 +146,53 @@ describe('the public verify page', () => {
     expect(router.state.location.pathname).toBe('/verify/abcd-ef01-2345');
     expect(await screen.findByRole('region', { name: /matches/ })).toBeInTheDocument();
   });
+
+  it('answers a package code: its revisions, and what superseded the set', async () => {
+    const api = fakeApi({
+      'GET /verify/packages/pkg-3F9A-0c11-7be2': {
+        body: {
+          match: true,
+          packageCode: 'PKG-3f9a-0c11-7be2',
+          packageHash: '3f9a0c117be2'.padEnd(64, '0'),
+          status: 'superseded',
+          projectNumber: 'LAM-2026-031',
+          projectName: 'Glovebox GB-3',
+          issuedAt: '2026-03-02T09:30:00.000Z',
+          components: [
+            {
+              componentName: 'GB-3 side wall',
+              tag: 'GB-3-W1',
+              kind: 'stiffened-wall',
+              revisionNumber: 1,
+              contentHash: matched.contentHash,
+              verdict: 'pass',
+              governing: {
+                checkLabel: 'Bending stress at the stiffener',
+                loadCase: 'Design underpressure',
+                utilisation: 0.9996,
+              },
+              preparedBy: 'Ravi Lindqvist',
+              submittedAt: '2026-03-01T08:00:00.000Z',
+              countersignedBy: 'Dana Okafor',
+              countersignedAt: '2026-03-02T09:00:00.000Z',
+              status: 'superseded',
+              supersededBy: 2,
+            },
+          ],
+          countersignedSince: [],
+        },
+      },
+    });
+    open('/verify/pkg-3F9A-0c11-7be2');
+    const answer = await screen.findByRole('region', { name: /has been superseded/ });
+    expect(answer).toHaveTextContent(
+      'superseded for component GB-3 side wall (revision 2 countersigned since)',
+    );
+    expect(answer).toHaveTextContent('LAM-2026-031 Glovebox GB-3');
+    expect(answer).toHaveTextContent(/at\s*99\.9 %/);
+    expect(answer).toHaveTextContent('Dana Okafor, 2026-03-02T09:00:00Z');
+    expect(api.calls[0]?.path).toBe('/verify/packages/pkg-3F9A-0c11-7be2');
+  });
 });
 
 describe('readVerifyCode', () => {
@@ -161,5 +208,13 @@ describe('readVerifyCode', () => {
       ok: false,
       reason: expect.stringMatching(/13 digits/),
     });
+  });
+
+  it('reads package codes as typed', () => {
+    expect(readVerifyCode(' pkg 3F9A-0c11-7be2 ')).toEqual({
+      ok: true,
+      code: 'PKG-3f9a-0c11-7be2',
+    });
+    expect(readVerifyCode('PKG-3f9a')).toMatchObject({ ok: false });
   });
 });

@@ -3,13 +3,14 @@ import { useState } from 'react';
 import { Link, useNavigate, useParams } from 'react-router-dom';
 import { ApiError } from '../api/client';
 import { meQuery } from '../api/session';
-import { useVerify } from '../api/verify';
+import { useVerify, useVerifyPackage } from '../api/verify';
 import { Button } from '../components/button';
 import { FormError, TextField } from '../components/field';
 import { ScreeningCaution } from '../components/screening-caution';
 import { messageFor } from '../components/server-errors';
 import { ThemeSwitch } from '../components/theme-switch';
-import { readVerifyCode } from '../features/verify/verify-code';
+import { PackageVerifyAnswer } from '../features/verify/package-verify-result';
+import { isPackageCode, readVerifyCode } from '../features/verify/verify-code';
 import { VerifyAnswer } from '../features/verify/verify-result';
 
 function VerifyForm({ initial, serverError }: { initial: string; serverError: string | null }) {
@@ -35,7 +36,7 @@ function VerifyForm({ initial, serverError }: { initial: string; serverError: st
     >
       <TextField
         label="Verify code or content hash"
-        hint="The 12-digit code printed on the sheet beside its QR code (such as abcd-ef01-2345), or the full 64-digit content hash."
+        hint="The 12-digit code printed on the sheet beside its QR code (such as abcd-ef01-2345), the full 64-digit content hash, or an issue package's code (PKG-3f9a-0c11-7be2)."
         error={shown ?? undefined}
         value={typed}
         onChange={(event) => {
@@ -61,7 +62,10 @@ export function VerifyRoute() {
   const { code = '' } = useParams();
   const client = useQueryClient();
   const signedIn = Boolean(client.getQueryData(meQuery.queryKey));
-  const verify = useVerify(code);
+  const forPackage = isPackageCode(code);
+  const sheetAnswer = useVerify(forPackage ? '' : code);
+  const packageAnswer = useVerifyPackage(forPackage ? code : '');
+  const verify = forPackage ? packageAnswer : sheetAnswer;
   const malformed =
     verify.error instanceof ApiError && verify.error.status === 400
       ? (verify.error.fields[0]?.message ?? verify.error.message)
@@ -92,9 +96,10 @@ export function VerifyRoute() {
         <div>
           <h1 className="text-xl font-semibold tracking-tight">Verify a sheet</h1>
           <p className="mt-1 text-sm text-muted">
-            Every stamped-for-review Hoopline sheet carries a verify code and a QR code. Type the
-            code, or scan the QR code, to learn whether the sheet matches a countersigned revision.
-            This page shows nothing else of the project.
+            Every stamped-for-review Hoopline sheet carries a verify code and a QR code, and every
+            issue package a package code. Type the code, or scan the QR code, to learn whether the
+            sheet matches a countersigned revision, or the package the current set of them. This
+            page shows nothing else of the project.
           </p>
         </div>
         <VerifyForm key={code} initial={code} serverError={malformed} />
@@ -105,9 +110,13 @@ export function VerifyRoute() {
             </p>
           ) : verify.isError ? (
             <FormError message={`The code could not be checked: ${messageFor(verify.error)}`} />
-          ) : (
-            <VerifyAnswer result={verify.data} code={code} />
-          )
+          ) : forPackage ? (
+            packageAnswer.data ? (
+              <PackageVerifyAnswer result={packageAnswer.data} code={code} />
+            ) : null
+          ) : sheetAnswer.data ? (
+            <VerifyAnswer result={sheetAnswer.data} code={code} />
+          ) : null
         ) : null}
         <ScreeningCaution />
         <p className="text-xs text-muted">

@@ -51,6 +51,20 @@ export const member = z
   .strict();
 export type Member = z.infer<typeof member>;
 
+/** GET /projects/:id/members: the members, and who changes them (issue 16.3). */
+export const memberList = z
+  .object({
+    items: z.array(member),
+    /** Whether the one asking may add, remove and change the role of members (the owner, admins). */
+    canManage: z.boolean(),
+    /** Who may: the project's owner (owner: true) and the administrators, by name. */
+    managers: z.array(personRef.extend({ owner: z.boolean() }).strict()),
+    /** Whether the project has at least one checker. */
+    hasChecker: z.boolean(),
+  })
+  .strict();
+export type MemberList = z.infer<typeof memberList>;
+
 export const customMaterialItem = z
   .object({
     id: z.string(),

@@ -51,6 +51,24 @@ export const revision = revisionSummary
   .strict();
 export type Revision = z.infer<typeof revision>;
 
+/** Something the workflow did but wants a person to know (issue 16.3). */
+export const workflowWarning = z
+  .object({
+    /** no_checker: the project has no checker but the author, so nobody can countersign yet. */
+    code: z.enum(['no_checker']),
+    message: z.string(),
+    /** The names of those who can put it right (the project's owner, then administrators). */
+    whoCanAdd: z.array(z.string()),
+  })
+  .strict();
+export type WorkflowWarning = z.infer<typeof workflowWarning>;
+
+/** POST /revisions/:id/submit: the revision, with warnings when there are any. */
+export const submittedRevision = revision
+  .extend({ warnings: z.array(workflowWarning).optional() })
+  .strict();
+export type SubmittedRevision = z.infer<typeof submittedRevision>;
+
 export const component = z
   .object({
     id: z.string(),

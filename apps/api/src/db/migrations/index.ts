@@ -11,6 +11,7 @@ import { SessionNotifications1765100003000 } from './1765100003000-session-notif
 import { ProjectStarters1765200000000 } from './1765200000000-project-starters';
 import { ProjectDesignBasis1765300000000 } from './1765300000000-project-design-basis';
 import { ProjectDesignTemperature1765400000000 } from './1765400000000-project-design-temperature';
+import { IssuePackages1765500003000 } from './1765500003000-issue-packages';
 import { SignOffPassword1765500005000 } from './1765500005000-sign-off-password';
 
 /** Every migration class, oldest first. Add new ones at the end. */
@@ -28,5 +29,6 @@ export const migrations = [
   ProjectStarters1765200000000,
   ProjectDesignBasis1765300000000,
   ProjectDesignTemperature1765400000000,
+  IssuePackages1765500003000,
   SignOffPassword1765500005000,
 ];

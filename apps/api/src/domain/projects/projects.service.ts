@@ -1,4 +1,4 @@
-import type { CustomMaterialItem, Member, Project } from '@hoopline/contract';
+import type { CustomMaterialItem, Member, MemberList, Project } from '@hoopline/contract';
 import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import {
@@ -20,6 +20,7 @@ import { conflict, notFound } from '../../http/errors';
 import { pageOf, type Page, type PageRequest } from '../../http/pagination';
 import {
   canEditProject,
+  canGiveRole,
   canManageMaterials,
   canManageMembers,
   type Actor,
@@ -31,6 +32,7 @@ import { projectCreationDecision } from '../settings/settings.service';
 import { iso, isoRequired } from '../iso-dates';
 import { projectRepository, type ProjectSort } from '../../repositories/projects.repository';
 import { userRepository } from '../../repositories/users.repository';
+import type { Notifier } from '../../mail/notifier';
 import { requireProjectStanding } from './project-access';
 
 /** A site in SI (m, Pa). */
@@ -144,7 +146,10 @@ function isUniqueViolation(error: unknown): boolean {
 
 /** Projects, their members and their custom materials. */
 export class ProjectsService {
-  constructor(private readonly dataSource: DataSource) {}
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly notifier: Notifier,
+  ) {}
 
   async list(
     actor: Actor,
@@ -264,16 +269,30 @@ export class ProjectsService {
     }
   }
 
-  async members(actor: Actor, projectId: string): Promise<{ items: Member[] }> {
+  /** The members, whether the actor may change them, and who may (the owner, administrators). */
+  async members(actor: Actor, projectId: string): Promise<MemberList> {
     const manager = this.dataSource.manager;
-    await requireProjectStanding(manager, actor, projectId);
-    return { items: await this.memberList(manager, projectId) };
+    const standing = await requireProjectStanding(manager, actor, projectId);
+    const items = await this.memberList(manager, projectId);
+    const managers = await projectRepository.whoManagesMembers(manager, projectId);
+    return {
+      items,
+      canManage: canManageMembers(standing, { ownerId: standing.project.createdBy }).allowed,
+      managers: managers.map((m) => ({ id: m.id, name: m.name, owner: m.is_owner })),
+      hasChecker: items.some((m) => m.role === 'checker'),
+    };
   }
 
+  /**
+   * Adds a member or changes their role (the owner or an admin; nobody makes
+   * themselves a checker). A new checker is told by mail what already waits
+   * on them, in the same transaction.
+   */
   async setMember(actor: Actor, projectId: string, userId: string, role: Role): Promise<Member> {
     return this.dataSource.transaction(async (manager) => {
       const standing = await requireProjectStanding(manager, actor, projectId, { lock: true });
-      enforce(canManageMembers(standing));
+      enforce(canManageMembers(standing, { ownerId: standing.project.createdBy }));
+      enforce(canGiveRole(actor, { userId, role }));
       const user = await userRepository.findById(manager, userId);
       if (!user || !user.active) throw notFound('user');
       const existing = await projectRepository.findMember(manager, projectId, userId);
@@ -301,6 +320,9 @@ export class ProjectsService {
         ...(existing ? { before: { role: existing.role } } : {}),
         after: { role, email: user.email },
       });
+      if (role === 'checker' && existing?.role !== 'checker') {
+        await this.notifier.checkerAdded(manager, { projectId, userId, addedBy: actor.id });
+      }
       return {
         user: { id: user.id, name: user.name, email: user.email },
         role,
@@ -312,7 +334,7 @@ export class ProjectsService {
   async removeMember(actor: Actor, projectId: string, userId: string): Promise<void> {
     await this.dataSource.transaction(async (manager) => {
       const standing = await requireProjectStanding(manager, actor, projectId, { lock: true });
-      enforce(canManageMembers(standing));
+      enforce(canManageMembers(standing, { ownerId: standing.project.createdBy }));
       const existing = await projectRepository.findMember(manager, projectId, userId);
       if (!existing) throw notFound('member');
       if (existing.role === 'designer') await this.keepADesigner(manager, projectId, userId);

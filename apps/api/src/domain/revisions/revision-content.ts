@@ -11,6 +11,7 @@ import {
 import { toJson, type JsonObject } from '../../db/entities/json';
 import { AppError, validationFailed } from '../../http/errors';
 import type { SiteAsTyped } from '../../db/entities/project.entity';
+import type { RevisionEntity } from '../../db/entities/revision.entity';
 import type { DesignBasisValue } from '../projects/projects.service';
 
 /** What a revision holds and its hash covers. */
@@ -40,10 +41,38 @@ export function canonicalText(content: RevisionContent): string {
   return text;
 }
 
+/** The hash a revision's stored data gives now ('' for data that cannot be serialised). */
+export function storedHashOf(
+  revision: Pick<RevisionEntity, 'inputs' | 'engineVersion' | 'report'>,
+): string {
+  try {
+    return contentHash({
+      inputs: revision.inputs,
+      engineVersion: revision.engineVersion,
+      report: revision.report,
+    });
+  } catch {
+    // Stored data that cannot even be serialised has been tampered with.
+    return '';
+  }
+}
+
 /** "xxxx-xxxx-xxxx": the first 12 hex digits of the hash, for sheets and the verify page. */
 export function verifyCode(hash: string): string {
   const head = hash.slice(0, 12);
   return `${head.slice(0, 4)}-${head.slice(4, 8)}-${head.slice(8, 12)}`;
+}
+
+/**
+ * An issue package's hash: SHA-256 (hex) of the canonical JSON of the
+ * project id and the sorted content hashes of the revisions it holds. The
+ * same set gives the same hash whatever order it was gathered in; a new
+ * countersign changes the set, so the hash.
+ */
+export function packageHashOf(projectId: string, contentHashes: readonly string[]): string {
+  const text = canonicalize({ project: projectId, revisions: [...contentHashes].sort() });
+  if (text === undefined) throw new Error('a package that cannot be serialised');
+  return createHash('sha256').update(text, 'utf8').digest('hex');
 }
 
 /** The calc's issues as 400 fields under `inputs.` (the body field they came in). */

@@ -1,4 +1,5 @@
 import type {
+  AuditAction,
   Change,
   Component,
   Integrity,
@@ -6,13 +7,17 @@ import type {
   QueueItem,
   Revision,
   RevisionSummary,
+  SubmittedRevision,
   VerifyResult,
+  PackageVerifyResult,
+  WorkflowWarning,
 } from '@hoopline/contract';
+import { packageCode } from '@hoopline/present';
 import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import { ENGINE_VERSION, computeReport, parseComponent, type Report } from '@hoopline/calc';
 import { toJson } from '../../db/entities/json';
-import type { RevisionEntity, SignOffDecision } from '../../db/entities/revision.entity';
+import type { SignOffDecision } from '../../db/entities/revision.entity';
 import { conflict, notFound, validationFailed } from '../../http/errors';
 import { pageOf, type Page, type PageRequest } from '../../http/pagination';
 import {
@@ -33,24 +38,14 @@ import {
 import type { Notifier } from '../../mail/notifier';
 import { projectDesignBasis, projectSite, staleVersion } from '../projects/projects.service';
 import { componentRepository } from '../../repositories/components.repository';
+import { projectRepository } from '../../repositories/projects.repository';
 import { revisionRepository } from '../../repositories/revisions.repository';
-import { isoRequired } from '../iso-dates';
+import { iso, isoRequired } from '../iso-dates';
 import { diffInputs, diffResults } from './diff';
-import { computeContent, contentHash } from './revision-content';
+import { computeContent, contentHash, packageHashOf, storedHashOf } from './revision-content';
+import { storedGoverning } from '../components/component-table';
+import { issuePackageRepository } from '../../repositories/issue-packages.repository';
 import { revisionView, summaryFromRow } from './revision-views';
-
-function storedHashOf(revision: RevisionEntity): string {
-  try {
-    return contentHash({
-      inputs: revision.inputs,
-      engineVersion: revision.engineVersion,
-      report: revision.report,
-    });
-  } catch {
-    // Stored data that cannot even be serialised has been tampered with.
-    return '';
-  }
-}
 
 /** Revisions: history, new revisions, the sign-off workflow, diff, integrity, verify. */
 export class RevisionsService {
@@ -191,7 +186,12 @@ export class RevisionsService {
     };
   }
 
-  async submit(actor: Actor, revisionId: string): Promise<Revision> {
+  /**
+   * Submits a draft for check. On a project with no checker but the author,
+   * it still submits, and the answer warns that nobody can countersign it yet
+   * and names who can add a checker (the owner, administrators).
+   */
+  async submit(actor: Actor, revisionId: string): Promise<SubmittedRevision> {
     return this.dataSource.transaction(async (manager) => {
       const ctx = await this.lockForWorkflow(manager, actor, revisionId);
       enforce(canDesign(ctx.standing));
@@ -210,7 +210,9 @@ export class RevisionsService {
       await revisionRepository.markSubmitted(manager, revisionId);
       await this.audit(manager, actor, ctx, 'revision.submitted', 'draft', 'submitted');
       await this.notifier.revisionSubmitted(manager, { revisionId });
-      return revisionView(manager, revisionId);
+      const view = await revisionView(manager, revisionId);
+      const warning = await this.noCheckerWarning(manager, ctx, actor);
+      return warning ? { ...view, warnings: [warning] } : view;
     });
   }
 
@@ -390,6 +392,84 @@ export class RevisionsService {
     };
   }
 
+  /**
+   * Public: does a package code (its 12 digits, or the 64 of the package
+   * hash) belong to an issue package whose revisions are all countersigned,
+   * their stored data still giving their hashes and the set still giving the
+   * package hash? Answers what the index prints, each revision's status
+   * (superseded where its component has a later countersigned revision), and
+   * the components countersigned since that the package does not hold.
+   */
+  async verifyPackage(hex: string): Promise<PackageVerifyResult> {
+    const manager = this.dataSource.manager;
+    const found = await issuePackageRepository.byCode(manager, hex);
+    // Two packages that share a code cannot be told apart: no answer.
+    if (found.length !== 1) return { match: false };
+    const pkg = found[0]!;
+    const held = await issuePackageRepository.revisions(manager, pkg.revision_ids);
+    if (held.length !== pkg.revision_ids.length) return { match: false };
+    const sound = held.every(
+      (r) =>
+        r.status === 'countersigned' &&
+        r.countersigned_at !== null &&
+        storedHashOf({ inputs: r.inputs, engineVersion: r.engine_version, report: r.report }) ===
+          r.content_hash,
+    );
+    if (!sound) return { match: false };
+    if (
+      packageHashOf(
+        pkg.project_id,
+        held.map((r) => r.content_hash),
+      ) !== pkg.hash
+    ) {
+      return { match: false };
+    }
+    const components = held.map((r) => {
+      const current = r.issued_id === r.id;
+      const g = storedGoverning((r.report as { governing?: unknown }).governing);
+      return {
+        componentName: r.c_name,
+        tag: r.c_tag,
+        kind: r.c_kind,
+        revisionNumber: r.number,
+        contentHash: r.content_hash,
+        verdict: r.verdict,
+        governing: g
+          ? { checkLabel: g.checkLabel, loadCase: g.loadCase, utilisation: g.utilisation }
+          : null,
+        preparedBy: r.author,
+        submittedAt: iso(r.submitted_at),
+        countersignedBy: r.checker ?? '',
+        countersignedAt: isoRequired(r.countersigned_at!),
+        status: current ? ('current' as const) : ('superseded' as const),
+        supersededBy: current ? null : r.issued_number,
+      };
+    });
+    const since = await issuePackageRepository.issuedOutside(
+      manager,
+      pkg.project_id,
+      pkg.revision_ids,
+    );
+    return {
+      match: true,
+      packageCode: packageCode(pkg.hash),
+      packageHash: pkg.hash,
+      status:
+        components.some((c) => c.status === 'superseded') || since.length > 0
+          ? 'superseded'
+          : 'current',
+      projectNumber: pkg.p_number,
+      projectName: pkg.p_name,
+      issuedAt: isoRequired(pkg.created_at),
+      components,
+      countersignedSince: since.map((c) => ({
+        componentName: c.name,
+        tag: c.tag,
+        revisionNumber: c.number,
+      })),
+    };
+  }
+
   /** Locks the component, then the revision (always in that order: no deadlocks with create). */
   private async lockForWorkflow(
     manager: EntityManager,
@@ -404,11 +484,36 @@ export class RevisionsService {
     return requireRevision(manager, actor, revisionId, { lock: true });
   }
 
+  private async noCheckerWarning(
+    manager: EntityManager,
+    ctx: RevisionContext,
+    actor: Actor,
+  ): Promise<WorkflowWarning | null> {
+    const projectId = ctx.revision.projectId;
+    // Checkers other than the author: the author never countersigns their own work.
+    if ((await projectRepository.otherCheckers(manager, projectId, ctx.revision.authorId)) > 0)
+      return null;
+    const whoCanAdd = (await projectRepository.whoManagesMembers(manager, projectId)).map(
+      (m) => m.name,
+    );
+    return {
+      code: 'no_checker',
+      message:
+        (ctx.revision.authorId === actor.id
+          ? 'This project has no checker other than you, so nobody can countersign this revision yet. '
+          : 'This project has no checker other than the author, so nobody can countersign this revision yet. ') +
+        (whoCanAdd.length
+          ? `${whoCanAdd.join(', ')} can add a checker on the members page.`
+          : 'An administrator can add a checker on the members page.'),
+      whoCanAdd,
+    };
+  }
+
   private async audit(
     manager: EntityManager,
     actor: Actor,
     ctx: RevisionContext,
-    action: string,
+    action: AuditAction,
     before: string,
     after: string,
     extra: Record<string, unknown> = {},

@@ -61,8 +61,8 @@ export class UsersService {
   /** One active person by exact e-mail address (to add them to a project); 404 otherwise. */
   async lookUp(actor: Actor, email: string): Promise<{ id: string; name: string; email: string }> {
     const manager = this.dataSource.manager;
-    // Those who may add members to a project they lead: its designers (canManageMembers).
-    enforce(canLookUpPerson(actor, await projectRepository.designsAnyProject(manager, actor.id)));
+    // Those who may add members to a project they lead: its owner (canManageMembers).
+    enforce(canLookUpPerson(actor, await projectRepository.ownsAnyProject(manager, actor.id)));
     const user = await userRepository.findActiveByEmail(manager, normaliseEmail(email));
     if (!user) throw notFound('person');
     return { id: user.id, name: user.name, email: user.email };
