@@ -22,6 +22,7 @@ import {
   canEditProject,
   canGiveRole,
   canManageMaterials,
+  canChangeSignOffSetting,
   canManageMembers,
   type Actor,
   type Role,
@@ -233,6 +234,14 @@ export class ProjectsService {
         enforce(canEditProject(standing));
         const before = standing.project;
         if (before.version !== patch.version) throw staleVersion(before.version);
+        // The password at sign-off guards the checkers' signatures: only the
+        // owner or an administrator changes it (sending the value it has is no change).
+        if (
+          patch.signOffPassword !== undefined &&
+          patch.signOffPassword !== before.signOffPassword
+        ) {
+          enforce(canChangeSignOffSetting(standing, { ownerId: before.createdBy }));
+        }
         const changes: Partial<ProjectEntity> = {
           version: before.version + 1,
           updatedAt: new Date(),
