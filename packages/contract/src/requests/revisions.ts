@@ -27,4 +27,7 @@ export const returnBody = z
   .object({ hash, comment: text(1, 5000), password: password.optional() })
   .strict();
 
+export type CountersignBody = z.infer<typeof countersignBody>;
+export type ReturnBody = z.infer<typeof returnBody>;
+
 export const queueQuery = paginationQuery;
