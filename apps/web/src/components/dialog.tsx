@@ -82,7 +82,8 @@ export function Dialog({
             type="button"
             onClick={onClose}
             className="rounded px-2 py-0.5 text-muted hover:bg-sunken"
-            aria-label="Close"
+            // The visible key is part of the name (WCAG 2.5.3, label in name).
+            aria-label="Esc to close"
           >
             Esc
           </button>

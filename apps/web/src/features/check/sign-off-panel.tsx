@@ -97,11 +97,11 @@ export function SignOffDone({
           ? 'Your countersignature covers content hash '
           : 'It goes back to the designer with your comment; your return covers content hash '}
         <span className="font-mono">{r.verifyCode}</span>.{' '}
-        <Link to={`/revisions/${r.id}`} className="text-accent hover:underline">
+        <Link to={`/revisions/${r.id}`} className="text-accent underline">
           Revision {r.number}
         </Link>{' '}
         ·{' '}
-        <Link to={`/components/${component.id}/revisions`} className="text-accent hover:underline">
+        <Link to={`/components/${component.id}/revisions`} className="text-accent underline">
           all revisions of {component.name}
         </Link>
       </p>
@@ -117,18 +117,18 @@ export function SignOffDone({
         ) : queue.isError ? (
           <>
             The check queue could not be read.{' '}
-            <Link to="/check-queue" className="text-accent hover:underline">
+            <Link to="/check-queue" className="text-accent underline">
               Open the check queue
             </Link>
           </>
         ) : next ? (
           <>
             Next in your check queue:{' '}
-            <Link to={`/revisions/${next.id}`} className="font-medium text-accent hover:underline">
+            <Link to={`/revisions/${next.id}`} className="font-medium text-accent underline">
               {next.component.name} · revision {next.number}
             </Link>{' '}
             ({next.project.number} {next.project.name}, by {next.author.name}).{' '}
-            <Link to="/check-queue" className="text-accent hover:underline">
+            <Link to="/check-queue" className="text-accent underline">
               The whole queue
             </Link>
           </>
