@@ -21,6 +21,7 @@ import type { SignOffDecision } from '../../db/entities/revision.entity';
 import { AppError, conflict, notFound, validationFailed } from '../../http/errors';
 import type { Passwords } from '../../credentials/passwords';
 import { userRepository } from '../../repositories/users.repository';
+import { auditRepository } from '../../repositories/audit.repository';
 import { pageOf, type Page, type PageRequest } from '../../http/pagination';
 import {
   canDesign,
@@ -514,6 +515,26 @@ export class RevisionsService {
     if (!ctx.standing.project.signOffPassword) return false;
     enforce(canSignOff(ctx.standing, ctx.revision));
     if (password === undefined) throw passwordRequired();
+    // Wrong passwords are audited; too many of them recently and no more are tried.
+    const refused = await auditRepository.countSince(manager, {
+      actorId: actor.id,
+      action: 'revision.sign_off_refused',
+      since: new Date(Date.now() - SIGN_OFF_ATTEMPT_WINDOW_S * 1000),
+    });
+    if (refused >= SIGN_OFF_ATTEMPTS) {
+      throw new AppError(
+        429,
+        'too_many_attempts',
+        `your password was wrong ${SIGN_OFF_ATTEMPTS} times in ${SIGN_OFF_ATTEMPT_WINDOW_S / 60} minutes: wait, then try again`,
+        [
+          {
+            path: 'password',
+            message: `was wrong ${SIGN_OFF_ATTEMPTS} times in ${SIGN_OFF_ATTEMPT_WINDOW_S / 60} minutes: wait, then try again`,
+          },
+        ],
+        { retryAfterSeconds: SIGN_OFF_ATTEMPT_WINDOW_S },
+      );
+    }
     const user = await userRepository.get(manager, actor.id);
     if (await this.passwords.verify(user.passwordHash, password)) return true;
     await this.dataSource.transaction((m) =>
@@ -588,6 +609,14 @@ export class RevisionsService {
     });
   }
 }
+
+/**
+ * Wrong sign-off passwords a person may type in the window before no more are
+ * tried (common practice, no source: the order of sign-in limits). Counted from
+ * the audit log, so every API process agrees.
+ */
+export const SIGN_OFF_ATTEMPTS = 5;
+export const SIGN_OFF_ATTEMPT_WINDOW_S = 15 * 60;
 
 /** The project asks for the password again at sign-off, and none came. */
 function passwordRequired(): AppError {

@@ -10,6 +10,7 @@ import {
   type World,
 } from '../../../test/fixtures';
 import { startTestApp, type TestApp } from '../../../test/test-app';
+import { SIGN_OFF_ATTEMPTS, SIGN_OFF_ATTEMPT_WINDOW_S } from './revisions.service';
 
 /**
  * Issue 16.2: a project may ask its checkers for their password again to
@@ -212,6 +213,40 @@ describe('sign-off with the password typed again (real PostgreSQL)', () => {
         password: 'a different passphrase 42',
       })
       .expect(200);
+  });
+
+  it(`on: after ${SIGN_OFF_ATTEMPTS} wrong passwords in ${SIGN_OFF_ATTEMPT_WINDOW_S / 60} minutes no more are tried, not even the right one`, async () => {
+    await setSetting(owner, true, 200);
+    const guesser = await makeUser(t, { name: 'Guessing checker', password: 'the right one 123' });
+    await t.services.projects.setMember(w.admin, w.projectId, guesser.id, 'checker');
+    const s = await signIn(t, guesser);
+    const c = await makeComponent(t, w, 'submitted');
+    const attempt = (password: string) =>
+      s.post(`/api/revisions/${c.revisionId}/countersign`, { hash: c.hash, password });
+    for (let i = 0; i < SIGN_OFF_ATTEMPTS; i++) {
+      expect((await attempt(`guess ${i}`)).status).toBe(403);
+    }
+    const stopped = await attempt('the right one 123');
+    expect(stopped.status).toBe(429);
+    expect(stopped.body.error.code).toBe('too_many_attempts');
+    expect(stopped.body.error.fields).toEqual([
+      { path: 'password', message: expect.stringMatching(/^was wrong 5 times in 15 minutes/) },
+    ]);
+    expect(await statusOf(c.revisionId)).toBe('submitted');
+    // Only the wrong ones were audited (the stopped attempt was not tried).
+    expect(
+      await count(
+        t,
+        `audit_events where action = 'revision.sign_off_refused' and actor_id = '${guesser.id}'`,
+      ),
+    ).toBe(SIGN_OFF_ATTEMPTS);
+    // Once they are older than the window, the right password signs.
+    await t.dataSource.query(
+      `update audit_events set created_at = created_at - interval '16 minutes'
+        where action = 'revision.sign_off_refused' and actor_id = $1`,
+      [guesser.id],
+    );
+    expect((await attempt('the right one 123')).status).toBe(200);
   });
 
   it('on: who may not sign is refused by the policy first, password or not, and nothing is audited', async () => {
