@@ -154,6 +154,11 @@ test('a checker countersigns all four from the queue', async ({ page, cast }) =>
     await link.click();
     await expect(page.getByRole('table', { name: 'Calculation trail' })).toBeVisible();
     await page.getByRole('button', { name: 'Countersign' }).click();
+    await page.getByRole('dialog').getByRole('button', { name: 'Countersign revision' }).click();
+    await expect(
+      page.getByRole('heading', { name: new RegExp(`Revision 1 of ${name}.* countersigned`) }),
+    ).toBeVisible();
+    await page.goto('/check-queue');
     await expect(page.getByRole('heading', { name: 'Check queue' })).toBeVisible();
     await expect(page.getByRole('row', { name: new RegExp(`${name} · revision 1`) })).toHaveCount(
       0,

@@ -305,7 +305,16 @@ test('a checker follows a deep link, then countersigns from the queue, which upd
   await screenshot(page, 'review-tablet');
   await page.setViewportSize({ width: 1280, height: 720 });
   await page.getByRole('button', { name: 'Countersign' }).click();
+  // The confirmation dialog (issue 16.2; its own journey is sign-off.spec.ts).
+  await page.getByRole('dialog').getByRole('button', { name: 'Countersign revision' }).click();
+  await expect(
+    page.getByRole('heading', { name: /Revision 1 of Cabinet door plate.* countersigned/ }),
+  ).toBeVisible();
 
+  await page
+    .getByRole('link', { name: /Check queue/ })
+    .first()
+    .click();
   await expect(page.getByRole('heading', { name: 'Check queue' })).toBeVisible();
   await expect(page.getByRole('row', { name: /Cabinet door plate · revision 1/ })).toHaveCount(0);
   await signOut(page);

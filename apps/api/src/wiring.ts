@@ -46,7 +46,7 @@ export function createServices(
     projects: new ProjectsService(dataSource, notifier),
     components: new ComponentsService(dataSource),
     componentTable: new ComponentTableService(dataSource),
-    revisions: new RevisionsService(dataSource, notifier),
+    revisions: new RevisionsService(dataSource, notifier, passwords),
     audit: new AuditService(dataSource),
     attachments,
     sheets: new SheetsService(

@@ -282,7 +282,7 @@ export async function snapshot(t: TestApp): Promise<Record<string, string | numb
     `select ${counts.join(', ')},
        ${digest('revisions', 'id, status, submitted_at, decided_at, superseded_at')} as revision_states,
        ${digest('components', 'id, version, name, tag, latest_revision_id, issued_revision_id')} as component_states,
-       ${digest('projects', 'id, version, number, name, notes, allowable_basis, design_barometer, design_temperature')} as project_states,
+       ${digest('projects', 'id, version, number, name, notes, allowable_basis, design_barometer, design_temperature, sign_off_password')} as project_states,
        ${digest('users', 'id, name, is_admin, active, unit_system, auth_epoch, password_hash')} as user_states,
        ${digest('refresh_tokens', 'id, revoked_at')} as session_states,
        ${digest('invitations', 'id, accepted_at, revoked_at')} as invitation_states,

@@ -80,6 +80,7 @@ export const AUDIT_ACTIONS = [
   'revision.withdrawn',
   'revision.countersigned',
   'revision.returned',
+  'revision.sign_off_refused',
   'sheet.downloaded',
   'package.downloaded',
 ] as const;

@@ -44,6 +44,9 @@ describe('audit words', () => {
     expect(auditSentence(event('revision.returned'))).toBe(
       'Dana Okafor returned revision 3 of Door D-2 to the designer',
     );
+    expect(auditSentence(event('revision.sign_off_refused'))).toBe(
+      'Dana Okafor tried to sign off revision 3 of Door D-2 with a wrong password (refused)',
+    );
     expect(auditSentence(event('sheet.downloaded'))).toBe(
       'Dana Okafor downloaded the sheet of revision 3 of Door D-2',
     );

@@ -67,6 +67,13 @@ const WORDS: Readonly<Record<AuditAction, Words>> = {
   'revision.withdrawn': (p) => [p.who, ' withdrew ', p.revision, p.component, ' from checking'],
   'revision.countersigned': (p) => [p.who, ' countersigned ', p.revision, p.component],
   'revision.returned': (p) => [p.who, ' returned ', p.revision, p.component, ' to the designer'],
+  'revision.sign_off_refused': (p) => [
+    p.who,
+    ' tried to sign off ',
+    p.revision,
+    p.component,
+    ' with a wrong password (refused)',
+  ],
   'sheet.downloaded': (p) => [p.who, ' downloaded the sheet of ', p.revision, p.component],
   'package.downloaded': (p) => [p.who, ' downloaded the issue package of ', p.project],
 };
@@ -99,6 +106,7 @@ export const AUDIT_ACTION_LABELS: Readonly<Record<AuditAction, string>> = {
   'revision.withdrawn': 'Revision withdrawn',
   'revision.countersigned': 'Revision countersigned',
   'revision.returned': 'Revision returned',
+  'revision.sign_off_refused': 'Sign-off refused (wrong password)',
   'sheet.downloaded': 'Sheet downloaded',
   'package.downloaded': 'Issue package downloaded',
 };

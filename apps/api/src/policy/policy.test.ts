@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
+  canChangeSignOffSetting,
   canCreateProject,
   canLookUpPerson,
   canManageSettings,
@@ -84,6 +85,15 @@ describe('policy: designer', () => {
     expect(canManageMembers(s, ownerless)).toMatchObject({
       reason: expect.stringContaining('no owner on record'),
     });
+  });
+  it('turns the password at sign-off on or off only in a project they own (issue 16.2)', () => {
+    expect(allowed(canChangeSignOffSetting(s, mine))).toBe(true);
+    expect(canChangeSignOffSetting(s, theirs)).toMatchObject({
+      code: 'not_the_owner',
+      reason: expect.stringContaining('asks for the password'),
+    });
+    expect(code(canChangeSignOffSetting(s, ownerless))).toBe('not_the_owner');
+    expect(allowed(canChangeSignOffSetting(as(null, admin), ownerless))).toBe(true);
   });
   it('the owner makes others checkers, never themselves', () => {
     expect(allowed(canGiveRole(me, { userId: 'someone-else', role: 'checker' }))).toBe(true);

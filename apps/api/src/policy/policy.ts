@@ -115,6 +115,24 @@ export function canManageMembers(
 }
 
 /**
+ * Turning on or off the password at sign-off (issue 16.2), a guard of the
+ * checkers' signatures: those who decide who checks (canManageMembers: the
+ * owner, administrators), not every designer (the service asks
+ * canEditProject first, for the rest of the project).
+ */
+export function canChangeSignOffSetting(
+  s: ProjectStanding,
+  project: { ownerId: string | null },
+): Decision {
+  return canManageMembers(s, project).allowed
+    ? allow
+    : deny(
+        'not_the_owner',
+        'only the project’s owner or an administrator decides whether sign-off asks for the password',
+      );
+}
+
+/**
  * Giving someone a role (adding them, or changing their role), once the actor
  * may manage members: nobody makes themselves a checker of a project, not
  * even its owner or an administrator, so that nobody picks themselves to

@@ -88,6 +88,20 @@ export const auditRepository = {
     );
   },
 
+  /** How many events of one action one person caused since a moment (the audit_events_actor_idx). */
+  async countSince(
+    manager: EntityManager,
+    filter: { actorId: string; action: AuditEventEntity['action']; since: Date },
+  ): Promise<number> {
+    const [row] = await rows<{ n: number }>(
+      manager,
+      `select count(*)::int as n from audit_events
+        where actor_id = $1 and action = $2 and created_at >= $3`,
+      [filter.actorId, filter.action, filter.since],
+    );
+    return row?.n ?? 0;
+  },
+
   /** The filtered log, newest first, at most `limit` events (the CSV export). */
   all(manager: EntityManager, filter: AuditEventFilter, limit: number): Promise<AuditEventRow[]> {
     const w = whereOf(filter);

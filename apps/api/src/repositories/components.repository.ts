@@ -62,6 +62,7 @@ interface ComponentStandingRow {
   p_site_ambient_pressure: number | null;
   p_unit_system: ProjectEntity['unitSystem'];
   p_notes: string;
+  p_sign_off_password: boolean;
   p_version: number;
   p_created_by: string | null;
   p_created_at: Date;
@@ -95,6 +96,7 @@ export const componentRepository = {
               p.id as p_id, p.number as p_number, p.name as p_name, p.client as p_client,
               p.site_altitude as p_site_altitude, p.site_ambient_pressure as p_site_ambient_pressure,
               p.unit_system as p_unit_system, p.notes as p_notes, p.version as p_version,
+              p.sign_off_password as p_sign_off_password,
               p.created_by as p_created_by, p.created_at as p_created_at,
               p.updated_at as p_updated_at, m.role
          from components c
@@ -126,6 +128,7 @@ export const componentRepository = {
       siteAmbientPressure: row.p_site_ambient_pressure,
       unitSystem: row.p_unit_system,
       notes: row.p_notes,
+      signOffPassword: row.p_sign_off_password,
       version: row.p_version,
       createdBy: row.p_created_by,
       createdAt: row.p_created_at,

@@ -304,8 +304,9 @@ describe('bad input on every route: 400 with the fields, nothing written, never 
     {
       name: 'POST /api/revisions/:id/countersign',
       as: 'checker',
-      call: (s) => s.post(`/api/revisions/${submitted.revisionId}/countersign`, { hash: 'abc' }),
-      fields: ['hash'],
+      call: (s) =>
+        s.post(`/api/revisions/${submitted.revisionId}/countersign`, { hash: 'abc', password: 5 }),
+      fields: ['hash', 'password'],
     },
     {
       name: 'POST /api/revisions/:id/return',
@@ -314,8 +315,9 @@ describe('bad input on every route: 400 with the fields, nothing written, never 
         s.post(`/api/revisions/${submitted.revisionId}/return`, {
           hash: submitted.hash,
           comment: '  ',
+          password: '',
         }),
-      fields: ['comment'],
+      fields: ['comment', 'password'],
     },
     {
       name: 'GET /api/check-queue',

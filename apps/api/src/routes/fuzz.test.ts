@@ -331,13 +331,13 @@ function targets(c: () => Context): Target[] {
       route: 'POST /api/revisions/:id/countersign',
       as: 'checker',
       path: id(() => c().submitted.revisionId).map((r) => `/api/revisions/${r}/countersign`),
-      payload: bodies({ hash: 'f'.repeat(64), comment: 'ok' }),
+      payload: bodies({ hash: 'f'.repeat(64), comment: 'ok', password: 'not it' }),
     },
     {
       route: 'POST /api/revisions/:id/return',
       as: 'checker',
       path: id(() => c().submitted.revisionId).map((r) => `/api/revisions/${r}/return`),
-      payload: bodies({ hash: 'f'.repeat(64), comment: 'look again' }),
+      payload: bodies({ hash: 'f'.repeat(64), comment: 'look again', password: 'not it' }),
     },
     {
       route: 'POST /api/components/:id/attachments',

@@ -127,6 +127,23 @@ describe('role × route matrix (every route, every persona)', () => {
       await makeComponent(t, { ...w, projectId: project.id }, 'countersigned');
       return project.id;
     })());
+  // The sign-off password rows (issue 16.2): a project of the same people that asks for it.
+  let asking: Promise<string> | undefined;
+  const askingProject = () =>
+    (asking ??= (async () => {
+      const project = await t.services.projects.create(w.designer, {
+        number: `SO-${randomUUID().slice(0, 8)}`,
+        name: 'Sign-off password project',
+        unitSystem: 'si',
+      });
+      await t.services.projects.setMember(w.admin, project.id, w.checker.id, 'checker');
+      await t.services.projects.setMember(w.admin, project.id, w.fabricator.id, 'fabricator');
+      await t.services.projects.update(w.designer, project.id, {
+        signOffPassword: true,
+        version: project.version,
+      });
+      return project.id;
+    })());
   const rows: Row[] = [
     { route: 'GET /api/health', expect: all(200), call: (s) => s.get('/api/health') },
     {
@@ -282,6 +299,27 @@ describe('role × route matrix (every route, every persona)', () => {
       call: async (s) => {
         const current = await t.services.projects.get(w.designer, w.projectId);
         return s.patch(P(), { notes: `edited ${randomUUID()}`, version: current.version });
+      },
+    },
+    {
+      route: 'PATCH /api/projects/:id (signOffPassword)',
+      expect: ownerOrAdmin(200),
+      serial: true,
+      call: async (s) => {
+        const id = await askingProject();
+        const current = await t.services.projects.get(w.admin, id);
+        // Each try asks for the other value, then the setting is put back on.
+        const res = await s.patch(`/api/projects/${id}`, {
+          signOffPassword: !current.signOffPassword,
+          version: current.version,
+        });
+        const after = await t.services.projects.get(w.admin, id);
+        if (!after.signOffPassword)
+          await t.services.projects.update(w.admin, id, {
+            signOffPassword: true,
+            version: after.version,
+          });
+        return res;
       },
     },
     {
@@ -445,6 +483,15 @@ describe('role × route matrix (every route, every persona)', () => {
       call: async (s) => {
         const c = await makeComponent(t, w, 'submitted');
         return s.post(`/api/revisions/${c.revisionId}/countersign`, { hash: c.hash });
+      },
+    },
+    {
+      route: 'POST /api/revisions/:id/countersign (password asked)',
+      expect: checkerOnly,
+      call: async (s, persona) => {
+        const c = await makeComponent(t, { ...w, projectId: await askingProject() }, 'submitted');
+        const password = personaUser(w, persona)?.password ?? 'no one';
+        return s.post(`/api/revisions/${c.revisionId}/countersign`, { hash: c.hash, password });
       },
     },
     {

@@ -92,8 +92,13 @@ export function useCreateProject() {
 export function useUpdateProject(id: string) {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (body: Partial<ProjectInput> & { version: number }) =>
-      apiFetch<Project>(`/projects/${id}`, json('PATCH', body)),
+    mutationFn: (
+      body: Partial<ProjectInput> & {
+        /** The checkers' password again at sign-off (the owner and administrators change it). */
+        signOffPassword?: boolean;
+        version: number;
+      },
+    ) => apiFetch<Project>(`/projects/${id}`, json('PATCH', body)),
     onSuccess: (project) => {
       client.setQueryData(projectKeys.one(id), project);
       return client.invalidateQueries({ queryKey: ['projects', 'list'] });

@@ -2,6 +2,8 @@ import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/r
 import { apiFetch, json, query, type Page } from './client';
 import { componentKeys } from './components';
 import type {
+  CountersignBody,
+  ReturnBody,
   Revision,
   RevisionDiff,
   RevisionSummary,
@@ -72,7 +74,6 @@ function useWorkflowMutation<Body, Result extends Revision = Revision>(
 /** Submits for check; the answer may warn (no checker on the project: issue 16.3). */
 export const useSubmitRevision = () => useWorkflowMutation<never, SubmittedRevision>('submit');
 export const useWithdrawRevision = () => useWorkflowMutation<never>('withdraw');
-export const useCountersign = () =>
-  useWorkflowMutation<{ hash: string; comment?: string }>('countersign');
-export const useReturnRevision = () =>
-  useWorkflowMutation<{ hash: string; comment: string }>('return');
+/** The body may carry the checker's password, where the project asks for it (issue 16.2). */
+export const useCountersign = () => useWorkflowMutation<CountersignBody>('countersign');
+export const useReturnRevision = () => useWorkflowMutation<ReturnBody>('return');

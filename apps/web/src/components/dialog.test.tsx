@@ -45,4 +45,16 @@ describe('Dialog', () => {
     expect(screen.queryByRole('dialog')).not.toBeInTheDocument();
     expect(opener).toHaveFocus();
   });
+
+  it('puts focus on the field marked data-autofocus', async () => {
+    render(
+      <Dialog open title="Confirm" onClose={() => undefined}>
+        <button type="button">First</button>
+        <label>
+          Password <input data-autofocus type="password" />
+        </label>
+      </Dialog>,
+    );
+    expect(screen.getByLabelText('Password')).toHaveFocus();
+  });
 });

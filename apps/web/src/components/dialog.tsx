@@ -5,7 +5,8 @@ const FOCUSABLE =
 
 /**
  * A modal dialog: focus moves in and is kept in, Escape closes, focus returns
- * to what opened it. (Not <dialog>.showModal: jsdom lacks it, and the tests
+ * to what opened it. Focus goes to the element marked `data-autofocus` (a
+ * field to type in), else to the first focusable one. (Not <dialog>.showModal: jsdom lacks it, and the tests
  * should see the same element the browser does.)
  */
 export function Dialog({
@@ -32,7 +33,9 @@ export function Dialog({
     if (!open) return undefined;
     const opener = document.activeElement as HTMLElement | null;
     const node = ref.current;
-    const first = node?.querySelector<HTMLElement>(FOCUSABLE);
+    const first =
+      node?.querySelector<HTMLElement>('[data-autofocus]') ??
+      node?.querySelector<HTMLElement>(FOCUSABLE);
     (first ?? node)?.focus();
     const onKey = (event: KeyboardEvent) => {
       if (event.key === 'Escape') {
@@ -79,7 +82,8 @@ export function Dialog({
             type="button"
             onClick={onClose}
             className="rounded px-2 py-0.5 text-muted hover:bg-sunken"
-            aria-label="Close"
+            // The visible key is part of the name (WCAG 2.5.3, label in name).
+            aria-label="Esc to close"
           >
             Esc
           </button>

@@ -16,6 +16,7 @@ const project: Project = {
   ambientPressure: 101325,
   designBasis: { allowableStress: 'asme-viii-1', barometer: 'standard' },
   designTemperature: null,
+  signOffPassword: false,
   unitSystem: 'si',
   notes: '',
   version: 1,

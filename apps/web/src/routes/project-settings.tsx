@@ -1,14 +1,17 @@
 import { useNavigate, useParams } from 'react-router-dom';
-import { useProject, useUpdateProject } from '../api/projects';
+import { useMembers, useProject, useUpdateProject } from '../api/projects';
 import { ErrorView } from '../components/error-view';
 import { PageHeader, projectCrumbs } from '../components/page';
 import { PageSkeleton } from '../components/skeleton';
 import { ProjectForm, projectFormValues } from '../features/projects/project-form';
+import { SignOffSetting } from '../features/projects/sign-off-setting';
 
 export function ProjectSettingsRoute() {
   const { projectId = '' } = useParams();
   const project = useProject(projectId);
   const update = useUpdateProject(projectId);
+  // Who may change the sign-off setting: the owner and administrators, as for members.
+  const members = useMembers(projectId);
   const navigate = useNavigate();
   if (project.isPending) return <PageSkeleton label="Loading the project" />;
   if (project.isError) return <ErrorView error={project.error} />;
@@ -25,6 +28,9 @@ export function ProjectSettingsRoute() {
           navigate(`/projects/${p.id}`);
         }}
       />
+      <div className="mt-6">
+        <SignOffSetting project={p} members={members.data} />
+      </div>
     </>
   );
 }

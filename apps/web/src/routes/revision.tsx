@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { useParams } from 'react-router-dom';
 import { useComponent } from '../api/components';
 import { useProject } from '../api/projects';
@@ -7,7 +8,7 @@ import { ButtonLink } from '../components/button';
 import { ErrorView } from '../components/error-view';
 import { componentCrumbs, PageHeader, Panel } from '../components/page';
 import { PageSkeleton } from '../components/skeleton';
-import { SignOffPanel } from '../features/check/sign-off-panel';
+import { SignOffDone, SignOffPanel, type SignOffOutcome } from '../features/check/sign-off-panel';
 import { RevisionBody } from '../features/revisions/revision-body';
 import { WorkflowActions } from '../features/revisions/workflow-actions';
 import { AttachmentSummary } from '../features/attachments/attachment-list';
@@ -20,6 +21,8 @@ export function RevisionRoute() {
   const revision = useRevision(revisionId);
   const component = useComponent(revision.data?.componentId ?? '');
   const project = useProject(revision.data?.projectId ?? '');
+  // What the checker just did here; it is said above the revision until they go elsewhere.
+  const [done, setDone] = useState<SignOffOutcome | null>(null);
   if (revision.isError) return <ErrorView error={revision.error} />;
   if (component.isError) return <ErrorView error={component.error} />;
   if (project.isError) return <ErrorView error={project.error} />;
@@ -50,11 +53,14 @@ export function RevisionRoute() {
           </>
         }
       />
+      {done && done.revision.id === r.id ? <SignOffDone outcome={done} component={c} /> : null}
       <RevisionBody
         revision={r}
         aside={
           <>
-            {r.status === 'submitted' ? <SignOffPanel revision={r} project={p} /> : null}
+            {r.status === 'submitted' ? (
+              <SignOffPanel revision={r} component={c} project={p} onDone={setDone} />
+            ) : null}
             <Panel title="Attachments" id="attachments">
               <AttachmentSummary
                 componentId={c.id}

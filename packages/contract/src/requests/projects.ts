@@ -78,6 +78,7 @@ export const updateProjectBody = z
     designTemperature: designTemperature.nullable().optional(),
     unitSystem: unitSystem.optional(),
     notes: text(0, 5000).optional(),
+    signOffPassword: z.boolean({ error: 'must be true or false' }).optional(),
     version,
   })
   .strict();

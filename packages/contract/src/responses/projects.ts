@@ -30,6 +30,8 @@ export const project = z
     designTemperature: quantityGiven.nullable(),
     unitSystem,
     notes: z.string(),
+    /** A checker types their password again to countersign or return. */
+    signOffPassword: z.boolean(),
     version: z.number().int(),
     createdAt: z.string(),
     updatedAt: z.string(),

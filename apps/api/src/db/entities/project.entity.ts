@@ -38,6 +38,8 @@ export class ProjectEntity {
   @Column('jsonb', { name: 'design_temperature', nullable: true })
   designTemperature: string | number | null;
   @Column('text', { name: 'unit_system' }) unitSystem: UnitSystem;
+  /** The checker types their password again to sign off (migration 1765500005000). */
+  @Column('boolean', { name: 'sign_off_password', default: false }) signOffPassword: boolean;
   @Column('text') notes: string;
   @Column('integer') version: number;
   @Column('uuid', { name: 'created_by', nullable: true }) createdBy: string | null;

@@ -22,6 +22,7 @@ import {
   canEditProject,
   canGiveRole,
   canManageMaterials,
+  canChangeSignOffSetting,
   canManageMembers,
   type Actor,
   type Role,
@@ -75,6 +76,7 @@ export interface ProjectPatch {
   readonly designTemperature?: string | number | null | undefined;
   readonly unitSystem?: UnitSystem | undefined;
   readonly notes?: string | undefined;
+  readonly signOffPassword?: boolean | undefined;
   readonly version: number;
 }
 
@@ -129,6 +131,7 @@ export function projectView(p: ProjectEntity, myRole: Role | null): Project {
     designTemperature: p.designTemperature,
     unitSystem: p.unitSystem,
     notes: p.notes,
+    signOffPassword: p.signOffPassword,
     version: p.version,
     createdAt: isoRequired(p.createdAt),
     updatedAt: isoRequired(p.updatedAt),
@@ -186,6 +189,7 @@ export class ProjectsService {
           designTemperature: input.designTemperature ?? null,
           unitSystem: input.unitSystem,
           notes: input.notes ?? '',
+          signOffPassword: false,
           version: 1,
           createdBy: actor.id,
           createdAt: now,
@@ -230,6 +234,14 @@ export class ProjectsService {
         enforce(canEditProject(standing));
         const before = standing.project;
         if (before.version !== patch.version) throw staleVersion(before.version);
+        // The password at sign-off guards the checkers' signatures: only the
+        // owner or an administrator changes it (sending the value it has is no change).
+        if (
+          patch.signOffPassword !== undefined &&
+          patch.signOffPassword !== before.signOffPassword
+        ) {
+          enforce(canChangeSignOffSetting(standing, { ownerId: before.createdBy }));
+        }
         const changes: Partial<ProjectEntity> = {
           version: before.version + 1,
           updatedAt: new Date(),
@@ -239,6 +251,7 @@ export class ProjectsService {
         if (patch.client !== undefined) changes.client = patch.client;
         if (patch.unitSystem !== undefined) changes.unitSystem = patch.unitSystem;
         if (patch.notes !== undefined) changes.notes = patch.notes;
+        if (patch.signOffPassword !== undefined) changes.signOffPassword = patch.signOffPassword;
         if (patch.site !== undefined) Object.assign(changes, siteColumns(patch.site));
         if (patch.designBasis?.allowableStress !== undefined)
           changes.allowableBasis = patch.designBasis.allowableStress;
@@ -429,6 +442,7 @@ function projectSummary(p: ProjectEntity) {
     designBasis: projectDesignBasis(p),
     designTemperature: p.designTemperature,
     unitSystem: p.unitSystem,
+    signOffPassword: p.signOffPassword,
     version: p.version,
   };
 }

@@ -18,7 +18,10 @@ import type { DataSource, EntityManager } from 'typeorm';
 import { ENGINE_VERSION, computeReport, parseComponent, type Report } from '@hoopline/calc';
 import { toJson } from '../../db/entities/json';
 import type { SignOffDecision } from '../../db/entities/revision.entity';
-import { conflict, notFound, validationFailed } from '../../http/errors';
+import { AppError, conflict, notFound, validationFailed } from '../../http/errors';
+import type { Passwords } from '../../credentials/passwords';
+import { userRepository } from '../../repositories/users.repository';
+import { auditRepository } from '../../repositories/audit.repository';
 import { pageOf, type Page, type PageRequest } from '../../http/pagination';
 import {
   canDesign,
@@ -52,6 +55,7 @@ export class RevisionsService {
   constructor(
     private readonly dataSource: DataSource,
     private readonly notifier: Notifier,
+    private readonly passwords: Passwords,
   ) {}
 
   async list(actor: Actor, componentId: string, page: PageRequest): Promise<Page<RevisionSummary>> {
@@ -237,16 +241,26 @@ export class RevisionsService {
    * lock: of several checkers racing, one decides and the others find it
    * decided (409). The decision records the hash the checker saw; it must
    * equal the stored hash, and the stored data must still produce it.
+   *
+   * Where the project asks for it (projects.sign_off_password, issue 16.2)
+   * the checker's password is checked first, outside that transaction (argon2
+   * takes its time; no lock is held meanwhile): missing is 400
+   * `password_required`, wrong is 403 `wrong_password` and an audit event of
+   * its own (`revision.sign_off_refused`), both naming the field `password`
+   * and changing nothing else.
    */
   async decide(
     actor: Actor,
     revisionId: string,
     decision: SignOffDecision,
-    input: { hash: string; comment?: string | undefined },
+    input: { hash: string; comment?: string | undefined; password?: string | undefined },
   ): Promise<Revision> {
+    const confirmed = await this.confirmPassword(actor, revisionId, decision, input.password);
     return this.dataSource.transaction(async (manager) => {
       const ctx = await this.lockForWorkflow(manager, actor, revisionId);
       enforce(canSignOff(ctx.standing, ctx.revision));
+      // The setting was switched on between the check above and this lock.
+      if (ctx.standing.project.signOffPassword && !confirmed) throw passwordRequired();
       const { revision } = ctx;
       if (revision.status === 'countersigned' || revision.status === 'returned') {
         throw conflict('already_signed', `this revision has been ${revision.status} already`);
@@ -484,6 +498,67 @@ export class RevisionsService {
     return requireRevision(manager, actor, revisionId, { lock: true });
   }
 
+  /**
+   * The password typed again at sign-off, where the project asks for it.
+   * True when it was asked for and is right; false when the project does not
+   * ask. Who may not sign is refused by the policy first, so nobody learns
+   * anything about a password from a revision they may not sign.
+   */
+  private async confirmPassword(
+    actor: Actor,
+    revisionId: string,
+    decision: SignOffDecision,
+    password: string | undefined,
+  ): Promise<boolean> {
+    const manager = this.dataSource.manager;
+    const ctx = await requireRevision(manager, actor, revisionId);
+    if (!ctx.standing.project.signOffPassword) return false;
+    enforce(canSignOff(ctx.standing, ctx.revision));
+    if (password === undefined) throw passwordRequired();
+    // Wrong passwords are audited; too many of them recently and no more are tried.
+    const refused = await auditRepository.countSince(manager, {
+      actorId: actor.id,
+      action: 'revision.sign_off_refused',
+      since: new Date(Date.now() - SIGN_OFF_ATTEMPT_WINDOW_S * 1000),
+    });
+    if (refused >= SIGN_OFF_ATTEMPTS) {
+      throw new AppError(
+        429,
+        'too_many_attempts',
+        `your password was wrong ${SIGN_OFF_ATTEMPTS} times in ${SIGN_OFF_ATTEMPT_WINDOW_S / 60} minutes: wait, then try again`,
+        [
+          {
+            path: 'password',
+            message: `was wrong ${SIGN_OFF_ATTEMPTS} times in ${SIGN_OFF_ATTEMPT_WINDOW_S / 60} minutes: wait, then try again`,
+          },
+        ],
+        { retryAfterSeconds: SIGN_OFF_ATTEMPT_WINDOW_S },
+      );
+    }
+    const user = await userRepository.get(manager, actor.id);
+    if (await this.passwords.verify(user.passwordHash, password)) return true;
+    await this.dataSource.transaction((m) =>
+      this.audit(
+        m,
+        actor,
+        ctx,
+        'revision.sign_off_refused',
+        ctx.revision.status,
+        ctx.revision.status,
+        {
+          decision,
+          reason: 'wrong_password',
+        },
+      ),
+    );
+    throw new AppError(
+      403,
+      'wrong_password',
+      'the password is wrong: nothing was signed. Type the password you sign in with.',
+      [{ path: 'password', message: 'is wrong' }],
+    );
+  }
+
   private async noCheckerWarning(
     manager: EntityManager,
     ctx: RevisionContext,
@@ -533,6 +608,24 @@ export class RevisionsService {
       },
     });
   }
+}
+
+/**
+ * Wrong sign-off passwords a person may type in the window before no more are
+ * tried (common practice, no source: the order of sign-in limits). Counted from
+ * the audit log, so every API process agrees.
+ */
+export const SIGN_OFF_ATTEMPTS = 5;
+export const SIGN_OFF_ATTEMPT_WINDOW_S = 15 * 60;
+
+/** The project asks for the password again at sign-off, and none came. */
+function passwordRequired(): AppError {
+  return new AppError(
+    400,
+    'password_required',
+    'this project asks for your password again to countersign or return',
+    [{ path: 'password', message: 'is required: this project asks for your password to sign off' }],
+  );
 }
 
 function summaryOnly(v: Revision): RevisionSummary {
