@@ -12,6 +12,7 @@ import { ProjectStarters1765200000000 } from './1765200000000-project-starters';
 import { ProjectDesignBasis1765300000000 } from './1765300000000-project-design-basis';
 import { ProjectDesignTemperature1765400000000 } from './1765400000000-project-design-temperature';
 import { IssuePackages1765500003000 } from './1765500003000-issue-packages';
+import { SignOffRemarks1765500006000 } from './1765500006000-sign-off-remarks';
 
 /** Every migration class, oldest first. Add new ones at the end. */
 export const migrations = [
@@ -29,4 +30,5 @@ export const migrations = [
   ProjectDesignBasis1765300000000,
   ProjectDesignTemperature1765400000000,
   IssuePackages1765500003000,
+  SignOffRemarks1765500006000,
 ];
