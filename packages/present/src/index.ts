@@ -72,3 +72,5 @@ export type { HeadShape } from './sketches/geometry';
 export { AUDIT_ACTION_LABELS, auditActionLabel, auditSegments, auditSentence } from './audit-words';
 export type { AuditLink, AuditSegment, AuditWordsEvent } from './audit-words';
 export { isoDateTime } from './dates';
+export { commentPieces, stepsReferred } from './step-references';
+export type { CommentPiece } from './step-references';
