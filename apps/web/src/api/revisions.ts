@@ -5,6 +5,7 @@ import type {
   Revision,
   RevisionDiff,
   RevisionSummary,
+  StepRemark,
   SubmittedRevision,
 } from '@hoopline/contract';
 
@@ -60,6 +61,7 @@ function useWorkflowMutation<Body, Result extends Revision = Revision>(
       client.setQueryData(revisionKeys.one(revision.id), revision);
       return Promise.all([
         client.invalidateQueries({ queryKey: ['check-queue'] }),
+        client.invalidateQueries({ queryKey: ['returned'] }),
         client.invalidateQueries({ queryKey: ['issued'] }),
         client.invalidateQueries({ queryKey: componentKeys.one(revision.componentId) }),
         client.invalidateQueries({ queryKey: componentKeys.revisions(revision.componentId) }),
@@ -75,4 +77,4 @@ export const useWithdrawRevision = () => useWorkflowMutation<never>('withdraw');
 export const useCountersign = () =>
   useWorkflowMutation<{ hash: string; comment?: string }>('countersign');
 export const useReturnRevision = () =>
-  useWorkflowMutation<{ hash: string; comment: string }>('return');
+  useWorkflowMutation<{ hash: string; comment: string; remarks?: StepRemark[] }>('return');

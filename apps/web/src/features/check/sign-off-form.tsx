@@ -4,10 +4,11 @@ import * as yup from 'yup';
 import { ruleOf } from '../../lib/contract-rules';
 import { returnBody } from '@hoopline/contract';
 import { useCountersign, useReturnRevision } from '../../api/revisions';
-import type { Revision } from '@hoopline/contract';
+import type { Revision, StepRemark } from '@hoopline/contract';
 import { Button } from '../../components/button';
 import { FormError, FormikTextAreaField } from '../../components/field';
 import { serverFieldErrors } from '../../components/server-errors';
+import { StepRemarksField } from './step-remarks';
 
 type Decision = 'countersign' | 'return';
 
@@ -43,7 +44,11 @@ export function SignOffForm({
   const [formError, setFormError] = useState<string | null>(null);
   return (
     <Formik
-      initialValues={{ decision: 'countersign' as Decision, comment: '' }}
+      initialValues={{
+        decision: 'countersign' as Decision,
+        comment: '',
+        remarks: [] as StepRemark[],
+      }}
       validationSchema={signOffSchema}
       validateOnChange={false}
       onSubmit={async (values, helpers) => {
@@ -58,7 +63,11 @@ export function SignOffForm({
           } else {
             await giveBack.mutateAsync({
               id: revision.id,
-              body: { hash: revision.contentHash, comment },
+              body: {
+                hash: revision.contentHash,
+                comment,
+                ...(values.remarks.length ? { remarks: values.remarks } : {}),
+              },
             });
           }
           onDone(values.decision);
@@ -82,6 +91,10 @@ export function SignOffForm({
               label="Comment"
               hint="Required to return; optional with a countersignature. Refer to trail steps by number."
               disabled={Boolean(blockedReason)}
+            />
+            <StepRemarksField
+              report={revision.report as Revision['report'] | undefined}
+              disabled={Boolean(blockedReason) || isSubmitting}
             />
             {blockedReason ? (
               <p
