@@ -105,7 +105,10 @@ test('returned with remarks by step: the designer reads them on the workbench, a
   await page.getByRole('button', { name: 'Save as revision 2' }).click();
   await expect(page.getByRole('status').filter({ hasText: 'Saved as revision 2.' })).toBeVisible();
   await expect(notice).toHaveCount(0);
-  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: /Returned to me/ }).click();
+  await page
+    .getByRole('navigation', { name: 'Main' })
+    .getByRole('link', { name: /Returned to me/ })
+    .click();
   await expect(page.getByRole('heading', { name: 'Returned to me' })).toBeVisible();
   await expect(page.getByText('Nothing has been returned to you.')).toBeVisible();
   await expect(page.getByRole('row', { name: /Load lock door/ })).toHaveCount(0);

@@ -69,17 +69,34 @@ describe('commentPieces: step references in a checker’s comment', () => {
   });
 
   it('joined back, the pieces are the comment, whatever it says (property, fast-check)', () => {
-    const words = fc.constantFrom('step', 'steps', 'Step', ' ', '4', '12', 'and', ',', '–', '.', 'x', '#');
+    const words = fc.constantFrom(
+      'step',
+      'steps',
+      'Step',
+      ' ',
+      '4',
+      '12',
+      'and',
+      ',',
+      '–',
+      '.',
+      'x',
+      '#',
+    );
     fc.assert(
-      fc.property(fc.array(words, { maxLength: 30 }).map((w) => w.join('')), fc.string(), (a, b) => {
-        const text = a + b;
-        const pieces = commentPieces(text);
-        expect(joined(pieces)).toBe(text);
-        // No two text pieces side by side.
-        pieces.forEach((p, i) => {
-          if (i > 0) expect(p.kind === 'text' && pieces[i - 1]!.kind === 'text').toBe(false);
-        });
-      }),
+      fc.property(
+        fc.array(words, { maxLength: 30 }).map((w) => w.join('')),
+        fc.string(),
+        (a, b) => {
+          const text = a + b;
+          const pieces = commentPieces(text);
+          expect(joined(pieces)).toBe(text);
+          // No two text pieces side by side.
+          pieces.forEach((p, i) => {
+            if (i > 0) expect(p.kind === 'text' && pieces[i - 1]!.kind === 'text').toBe(false);
+          });
+        },
+      ),
       { numRuns: 2000 },
     );
   });

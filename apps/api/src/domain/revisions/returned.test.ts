@@ -107,7 +107,11 @@ describe('returned work: step remarks and "returned to me" (real PostgreSQL)', (
     const res = await giveBack(c.revisionId, {
       hash: c.hash,
       comment: 'x',
-      remarks: [{ step: 'four', text: 'a' }, { step: 2, text: '   ' }, { step: 0.5, text: 'b' }],
+      remarks: [
+        { step: 'four', text: 'a' },
+        { step: 2, text: '   ' },
+        { step: 0.5, text: 'b' },
+      ],
     });
     expect(res.status).toBe(400);
     const paths = res.body.error.fields.map((f: { path: string }) => f.path).sort();
