@@ -128,6 +128,11 @@ export const routes: RouteObject[] = [
                   import('./routes/check-queue').then((m) => ({ Component: m.CheckQueueRoute })),
               },
               {
+                path: 'returned',
+                lazy: () =>
+                  import('./routes/returned').then((m) => ({ Component: m.ReturnedRoute })),
+              },
+              {
                 path: 'issued',
                 lazy: () => import('./routes/issued').then((m) => ({ Component: m.IssuedRoute })),
               },

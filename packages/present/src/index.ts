@@ -74,3 +74,5 @@ export type { MemberManager, MembersNotice } from './member-words';
 export { AUDIT_ACTION_LABELS, auditActionLabel, auditSegments, auditSentence } from './audit-words';
 export type { AuditLink, AuditSegment, AuditWordsEvent } from './audit-words';
 export { isoDateTime } from './dates';
+export { commentPieces, stepsReferred } from './step-references';
+export type { CommentPiece } from './step-references';

@@ -7,6 +7,7 @@ import {
   canDesign,
   canEditProject,
   canGiveRole,
+  canListReturned,
   canManageMaterials,
   canManageMembers,
   canManagePeople,
@@ -17,6 +18,7 @@ import {
   canSeeRevision,
   canSignOff,
   canWithdraw,
+  isReturnedToMe,
   seesOnlyIssued,
   type Actor,
   type ProjectStanding,
@@ -190,5 +192,22 @@ describe('policy: who starts projects and who looks people up (issue 17.1)', () 
     expect(code(canLookUpPerson(me, false))).toBe('not_a_project_owner');
     // Owning a project is what lets one add members to it.
     expect(allowed(canManageMembers(as('designer'), mine))).toBe(true);
+  });
+});
+
+describe('policy: returned work (issue 16.1)', () => {
+  it('the "returned to me" list is for designers, admins who design nowhere are refused', () => {
+    expect(allowed(canListReturned(me, true))).toBe(true);
+    expect(code(canListReturned(me, false))).toBe('not_a_designer');
+    expect(code(canListReturned(admin, false))).toBe('not_a_designer');
+  });
+  it('holds only my own returned revisions that are still the latest, where I still design', () => {
+    const latest = { ...byMe('returned'), latest: true };
+    expect(isReturnedToMe(as('designer'), latest)).toBe(true);
+    expect(isReturnedToMe(as('designer'), { ...latest, latest: false })).toBe(false);
+    expect(isReturnedToMe(as('designer'), { ...byOther('returned'), latest: true })).toBe(false);
+    expect(isReturnedToMe(as('designer'), { ...byMe('submitted'), latest: true })).toBe(false);
+    expect(isReturnedToMe(as('checker'), latest)).toBe(false);
+    expect(isReturnedToMe(as(null, admin), { ...latest, authorId: 'admin' })).toBe(false);
   });
 });

@@ -213,6 +213,32 @@ export function canSignOff(s: ProjectStanding, revision: RevisionFacts): Decisio
   return allow;
 }
 
+/**
+ * "Returned to me" (issue 16.1): the list of one's own returned revisions is
+ * for designers (of any project: who else has work to take back). Everyone
+ * else, administrators who design nowhere included, is refused. The list
+ * itself holds only revisions the actor authored, in projects they still
+ * design in (isReturnedToMe).
+ */
+export function canListReturned(actor: Actor, designsAnywhere: boolean): Decision {
+  return designsAnywhere
+    ? allow
+    : deny('not_a_designer', 'only designers have revisions returned to them');
+}
+
+/** Whether a revision belongs in the actor's "returned to me" list (the repository's query says the same in SQL). */
+export function isReturnedToMe(
+  s: ProjectStanding,
+  revision: RevisionFacts & { readonly latest: boolean },
+): boolean {
+  return (
+    s.role === 'designer' &&
+    revision.authorId === s.actor.id &&
+    revision.status === 'returned' &&
+    revision.latest
+  );
+}
+
 // ── Audit log ───────────────────────────────────────────────────────────────
 
 /** The whole log: administrators only. */

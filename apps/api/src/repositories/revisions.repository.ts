@@ -7,6 +7,7 @@ import {
   SignOffEntity,
   type RevisionStatus,
   type SignOffDecision,
+  type SignOffRemark,
 } from '../db/entities/revision.entity';
 import { Where, paged, rows, run } from '../db/sql';
 import { offsetOf, type PageRequest } from '../http/pagination';
@@ -64,6 +65,22 @@ export interface SignOffRow {
   comment: string;
   hash_signed: string;
   created_at: Date;
+  remarks: SignOffRemark[];
+}
+
+/** A returned revision in its author's "returned to me" list, with the return's facts. */
+export interface ReturnedRow extends SummaryRow {
+  p_id: string;
+  p_number: string;
+  p_name: string;
+  c_id: string;
+  c_name: string;
+  c_kind: ComponentKind;
+  s_checker_id: string;
+  s_checker_name: string;
+  s_created_at: Date;
+  s_comment: string;
+  s_remark_count: number;
 }
 
 /** A submitted revision in a checker's queue, with its project and component. */
@@ -132,7 +149,7 @@ export const revisionRepository = {
     return rows<SignOffRow>(
       manager,
       `select s.id, s.checker_id, u.name as checker_name, s.decision, s.comment, s.hash_signed,
-              s.created_at
+              s.created_at, s.remarks
          from sign_offs s join users u on u.id = s.checker_id
         where s.revision_id = $1 order by s.created_at, s.id`,
       [revisionId],
@@ -280,6 +297,58 @@ export const revisionRepository = {
       },
       page,
     );
+  },
+
+  /**
+   * "Returned to me" (issue 16.1): revisions the person authored that were
+   * returned and are still their component's latest, in projects where the
+   * person is still a designer (who else could act on them), newest return
+   * first; each with its (latest) return sign-off.
+   */
+  returnedPage(
+    manager: EntityManager,
+    authorId: string,
+    page: PageRequest,
+  ): Promise<{ rows: ReturnedRow[]; total: number }> {
+    const w = new Where()
+      .add("r.status = 'returned'")
+      .add('r.author_id = ?', authorId)
+      .add('c.latest_revision_id = r.id');
+    w.add(
+      `exists (select 1 from project_members m where m.project_id = r.project_id
+                    and m.user_id = ? and m.role = 'designer')`,
+      authorId,
+    );
+    return paged<ReturnedRow>(
+      manager,
+      {
+        columns: `${SUMMARY_COLUMNS}, p.id as p_id, p.number as p_number, p.name as p_name,
+                  c.id as c_id, c.name as c_name, c.kind as c_kind,
+                  s.checker_id as s_checker_id, u.name as s_checker_name,
+                  s.created_at as s_created_at, s.comment as s_comment,
+                  jsonb_array_length(s.remarks) as s_remark_count`,
+        from: `revisions r join users a on a.id = r.author_id
+               join components c on c.id = r.component_id join projects p on p.id = r.project_id
+               join lateral (select * from sign_offs so
+                              where so.revision_id = r.id and so.decision = 'returned'
+                              order by so.created_at desc, so.id desc limit 1) s on true
+               join users u on u.id = s.checker_id`,
+        where: w.where,
+        params: w.params,
+        orderBy: 'r.decided_at desc, r.id desc',
+      },
+      page,
+    );
+  },
+
+  /** Whether the person is a designer of any project. */
+  async designsAnywhere(manager: EntityManager, userId: string): Promise<boolean> {
+    const [row] = await rows<{ yes: boolean }>(
+      manager,
+      `select exists (select 1 from project_members where user_id = $1 and role = 'designer') as yes`,
+      [userId],
+    );
+    return row?.yes === true;
   },
 
   /** Countersigned revisions whose hash is the code (64 hex digits) or starts with it; latest decided first, at most 50. */

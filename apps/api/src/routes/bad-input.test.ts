@@ -320,6 +320,23 @@ describe('bad input on every route: 400 with the fields, nothing written, never 
       fields: ['comment', 'password'],
     },
     {
+      name: 'POST /api/revisions/:id/return (remarks)',
+      as: 'checker',
+      call: (s) =>
+        s.post(`/api/revisions/${submitted.revisionId}/return`, {
+          hash: submitted.hash,
+          comment: 'see the remarks',
+          remarks: [{ step: 100000, text: 'x' }, { text: 'no step' }],
+        }),
+      fields: ['remarks.0.step', 'remarks.1.step'],
+    },
+    {
+      name: 'GET /api/returned',
+      as: 'designer',
+      call: (s) => s.get('/api/returned?page=-1&pageSize=0'),
+      fields: ['page', 'pageSize'],
+    },
+    {
       name: 'GET /api/check-queue',
       as: 'checker',
       call: (s) => s.get('/api/check-queue?page=-1'),

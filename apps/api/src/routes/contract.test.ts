@@ -197,6 +197,38 @@ describe('answers match the contract (@hoopline/contract response schemas)', () 
       (await anonymous(t).get('/api/verify/packages/PKG-0000-0000-0000').expect(200)).body,
     );
     shape(contract.pageOf(contract.auditEvent), (await admin.get('/api/audit').expect(200)).body);
+
+    // A return with step remarks, and the designer's "returned to me" list (issue 16.1).
+    const returned = shape(
+      contract.componentWithRevision,
+      (
+        await designer
+          .post(`/api/projects/${w.projectId}/components`, {
+            name: 'Contract return',
+            inputs: plateInputs(),
+          })
+          .expect(201)
+      ).body,
+    );
+    await designer.post(`/api/revisions/${returned.revision.id}/submit`, {}).expect(200);
+    const back = shape(
+      contract.revision,
+      (
+        await checker
+          .post(`/api/revisions/${returned.revision.id}/return`, {
+            hash: returned.revision.contentHash,
+            comment: 'See step 2',
+            remarks: [{ step: 2, text: 'Say where this comes from' }],
+          })
+          .expect(200)
+      ).body,
+    );
+    expect(back.signOffs.at(-1)?.remarks).toEqual([{ step: 2, text: 'Say where this comes from' }]);
+    const list = shape(
+      contract.pageOf(contract.returnedItem),
+      (await designer.get('/api/returned').expect(200)).body,
+    );
+    expect(list.items.length).toBeGreaterThan(0);
   });
 
   it('attachments and errors', async () => {

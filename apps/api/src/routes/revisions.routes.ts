@@ -7,6 +7,7 @@ import {
   listRevisionsQuery,
   queueQuery,
   returnBody,
+  returnedQuery,
 } from '@hoopline/contract';
 import { Router } from 'express';
 import { actorOf } from '../auth/authenticate';
@@ -73,6 +74,12 @@ export function revisionsRoutes({ services, signedIn }: RouteDeps): Router {
   router.get('/check-queue', signedIn, queue, async (req, res) => {
     const { query } = valid(req, queue);
     res.json(await services.revisions.checkQueue(actorOf(req), query));
+  });
+
+  const returned = validate({ query: returnedQuery });
+  router.get('/returned', signedIn, returned, async (req, res) => {
+    const { query } = valid(req, returned);
+    res.json(await services.revisions.returned(actorOf(req), query));
   });
 
   return router;

@@ -587,6 +587,13 @@ describe('role × route matrix (every route, every persona)', () => {
       expect: signedIn(200),
       call: (s) => s.get('/api/check-queue'),
     },
+    {
+      // Designers only (issue 16.1): who designs nowhere has nothing returned to them.
+      // The admin started a project in the POST /api/projects row above, so designs there: 200.
+      route: 'GET /api/returned',
+      expect: { ...signedIn(403), designer: 200, admin: 200 },
+      call: (s) => s.get('/api/returned'),
+    },
     { route: 'GET /api/issued', expect: signedIn(200), call: (s) => s.get('/api/issued') },
     {
       route: 'GET /api/audit',

@@ -85,6 +85,8 @@ export function useSaveRevision(componentId: string) {
       return Promise.all([
         client.invalidateQueries({ queryKey: componentKeys.revisions(componentId) }),
         client.invalidateQueries({ queryKey: componentKeys.ofProject(saved.component.projectId) }),
+        // A new revision takes a returned one off "Returned to me".
+        client.invalidateQueries({ queryKey: ['returned'] }),
       ]);
     },
   });

@@ -62,6 +62,7 @@ function useWorkflowMutation<Body, Result extends Revision = Revision>(
       client.setQueryData(revisionKeys.one(revision.id), revision);
       return Promise.all([
         client.invalidateQueries({ queryKey: ['check-queue'] }),
+        client.invalidateQueries({ queryKey: ['returned'] }),
         client.invalidateQueries({ queryKey: ['issued'] }),
         client.invalidateQueries({ queryKey: componentKeys.one(revision.componentId) }),
         client.invalidateQueries({ queryKey: componentKeys.revisions(revision.componentId) }),

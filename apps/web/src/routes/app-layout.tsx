@@ -4,7 +4,7 @@ import { NavLink, Outlet, useLocation, useNavigate } from 'react-router-dom';
 import { onSessionLost } from '../api/client';
 import { useMe, useSignOut, useUpdateMe } from '../api/session';
 import { UNIT_SYSTEMS, type UnitSystem } from '@hoopline/contract';
-import { useCheckQueue } from '../api/work';
+import { useCheckQueue, useReturned } from '../api/work';
 import { ProgressBar } from '../components/progress-bar';
 import { ThemeSwitch } from '../components/theme-switch';
 import { UnitSystemProvider } from '../lib/unit-system';
@@ -24,6 +24,18 @@ function QueueCount() {
     <span className="num ml-1 rounded-full bg-accent px-1.5 text-xs text-accent-ink">
       {total}
       <span className="sr-only"> awaiting</span>
+    </span>
+  );
+}
+
+function ReturnedCount() {
+  const returned = useReturned();
+  const total = returned.data?.total ?? 0;
+  if (total === 0) return null;
+  return (
+    <span className="num ml-1 rounded-full bg-accent px-1.5 text-xs text-accent-ink">
+      {total}
+      <span className="sr-only"> returned</span>
     </span>
   );
 }
@@ -77,6 +89,7 @@ export function AppLayout() {
   const signOut = useSignOut();
   const client = useQueryClient();
   const isChecker = me.memberships.some((m) => m.role === 'checker');
+  const isDesigner = me.memberships.some((m) => m.role === 'designer');
 
   useEffect(
     () =>
@@ -140,6 +153,12 @@ export function AppLayout() {
                 <NavLink to="/check-queue" className={navClass}>
                   Check queue
                   <QueueCount />
+                </NavLink>
+              ) : null}
+              {isDesigner ? (
+                <NavLink to="/returned" className={navClass}>
+                  Returned to me
+                  <ReturnedCount />
                 </NavLink>
               ) : null}
               <NavLink to="/issued" className={navClass}>

@@ -10,6 +10,7 @@ import { PageHeader, Panel, projectCrumbs } from '../components/page';
 import { PageSkeleton } from '../components/skeleton';
 import { Workbench } from '../features/editor/workbench';
 import { RevisionBody } from '../features/revisions/revision-body';
+import { ReturnedNotice } from '../features/revisions/returned-notice';
 import { WorkflowActions } from '../features/revisions/workflow-actions';
 import { AttachmentSummary } from '../features/attachments/attachment-list';
 import { AttachmentsPanel } from '../features/attachments/attachments-panel';
@@ -45,6 +46,7 @@ function DesignerView({
       savedRevision={revision}
       saveBlocked={saveBlockedReason(project, revision)}
       saveLabel={`Save as revision ${nextNumber}`}
+      notice={revision?.status === 'returned' ? <ReturnedNotice revision={revision} /> : null}
       canSaveMaterials
       footerActions={({ dirty }) =>
         revision ? (

@@ -27,6 +27,8 @@ export const signOff = z
     comment: z.string(),
     hashSigned: z.string(),
     createdAt: z.string(),
+    /** A return's remarks by trail step (issue 16.1), in the order given; [] for none. */
+    remarks: z.array(z.object({ step: z.number().int(), text: z.string() }).strict()),
   })
   .strict();
 export type SignOff = z.infer<typeof signOff>;
@@ -118,6 +120,25 @@ export const queueItem = revisionSummary
   .extend({ project: projectRef, component: componentRef })
   .strict();
 export type QueueItem = z.infer<typeof queueItem>;
+
+/**
+ * GET /returned: a revision returned to me (its author) that is still its
+ * component's latest, with who returned it, when, the comment's start and
+ * how many step remarks it carries.
+ */
+export const returnedItem = z
+  .object({
+    project: projectRef,
+    component: componentRef,
+    revision: revisionSummary,
+    returnedBy: personRef,
+    returnedAt: z.string(),
+    /** The comment's first 200 characters, an ellipsis where it was cut. */
+    commentExcerpt: z.string(),
+    remarkCount: z.number().int(),
+  })
+  .strict();
+export type ReturnedItem = z.infer<typeof returnedItem>;
 
 /** The issued list: a countersigned revision, with its project and component. */
 export const issuedItem = z

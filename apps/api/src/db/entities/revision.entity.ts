@@ -41,4 +41,12 @@ export class SignOffEntity {
   @Column('text') comment: string;
   @Column('text', { name: 'hash_signed' }) hashSigned: string;
   @Column('timestamptz', { name: 'created_at' }) createdAt: Date;
+  /** A return's remarks by trail step number (migration 1765500006000). */
+  @Column('jsonb', { default: () => "'[]'::jsonb" }) remarks: SignOffRemark[];
+}
+
+/** One remark of a sign-off: the trail step's number (1…N) and the text. */
+export interface SignOffRemark {
+  step: number;
+  text: string;
 }

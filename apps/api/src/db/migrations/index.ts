@@ -13,6 +13,7 @@ import { ProjectDesignBasis1765300000000 } from './1765300000000-project-design-
 import { ProjectDesignTemperature1765400000000 } from './1765400000000-project-design-temperature';
 import { IssuePackages1765500003000 } from './1765500003000-issue-packages';
 import { SignOffPassword1765500005000 } from './1765500005000-sign-off-password';
+import { SignOffRemarks1765500006000 } from './1765500006000-sign-off-remarks';
 
 /** Every migration class, oldest first. Add new ones at the end. */
 export const migrations = [
@@ -31,4 +32,5 @@ export const migrations = [
   ProjectDesignTemperature1765400000000,
   IssuePackages1765500003000,
   SignOffPassword1765500005000,
+  SignOffRemarks1765500006000,
 ];

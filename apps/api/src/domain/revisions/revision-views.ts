@@ -74,6 +74,7 @@ export function revisionFromRows(row: RevisionRow, signOffs: readonly SignOffRow
       comment: s.comment,
       hashSigned: s.hash_signed,
       createdAt: isoRequired(s.created_at),
+      remarks: (s.remarks ?? []).map((m) => ({ step: m.step, text: m.text })),
     })),
     verifyCode: verifyCode(row.r_hash),
   };

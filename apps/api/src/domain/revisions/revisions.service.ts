@@ -5,6 +5,7 @@ import type {
   Integrity,
   IssuedItem,
   QueueItem,
+  ReturnedItem,
   Revision,
   RevisionSummary,
   SubmittedRevision,
@@ -12,12 +13,12 @@ import type {
   PackageVerifyResult,
   WorkflowWarning,
 } from '@hoopline/contract';
-import { packageCode } from '@hoopline/present';
+import { numberedSteps, packageCode } from '@hoopline/present';
 import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import { ENGINE_VERSION, computeReport, parseComponent, type Report } from '@hoopline/calc';
 import { toJson } from '../../db/entities/json';
-import type { SignOffDecision } from '../../db/entities/revision.entity';
+import type { SignOffDecision, SignOffRemark } from '../../db/entities/revision.entity';
 import { AppError, conflict, notFound, validationFailed } from '../../http/errors';
 import type { Passwords } from '../../credentials/passwords';
 import { userRepository } from '../../repositories/users.repository';
@@ -25,6 +26,7 @@ import { auditRepository } from '../../repositories/audit.repository';
 import { pageOf, type Page, type PageRequest } from '../../http/pagination';
 import {
   canDesign,
+  canListReturned,
   canSignOff,
   canWithdraw,
   seesOnlyIssued,
@@ -49,6 +51,40 @@ import { computeContent, contentHash, packageHashOf, storedHashOf } from './revi
 import { storedGoverning } from '../components/component-table';
 import { issuePackageRepository } from '../../repositories/issue-packages.repository';
 import { revisionView, summaryFromRow } from './revision-views';
+
+/** How much of a return's comment the "returned to me" list shows. */
+export const COMMENT_EXCERPT_LENGTH = 200;
+
+/** The text's first `length` characters (whole code points), an ellipsis where it was cut. */
+export function excerpt(text: string, length: number): string {
+  const chars = Array.from(text.trim());
+  return chars.length <= length ? chars.join('') : `${chars.slice(0, length).join('').trimEnd()}…`;
+}
+
+/**
+ * A return's step remarks, checked against the revision's trail: each step
+ * must be one of its numbers (1…N as numberedSteps counts them), else a
+ * 400 naming `remarks.<i>.step`.
+ */
+function remarksOnTrail(
+  report: Report,
+  remarks: readonly SignOffRemark[] | undefined,
+): SignOffRemark[] {
+  if (!remarks?.length) return [];
+  const count = numberedSteps(report).length;
+  const wrong = remarks.flatMap((remark, i) =>
+    remark.step >= 1 && remark.step <= count
+      ? []
+      : [
+          {
+            path: `remarks.${i}.step`,
+            message: `is not a step of this revision’s trail (it has steps 1 to ${count})`,
+          },
+        ],
+  );
+  if (wrong.length) throw validationFailed(wrong);
+  return remarks.map(({ step, text }) => ({ step, text }));
+}
 
 /** Revisions: history, new revisions, the sign-off workflow, diff, integrity, verify. */
 export class RevisionsService {
@@ -253,7 +289,12 @@ export class RevisionsService {
     actor: Actor,
     revisionId: string,
     decision: SignOffDecision,
-    input: { hash: string; comment?: string | undefined; password?: string | undefined },
+    input: {
+      hash: string;
+      comment?: string | undefined;
+      remarks?: readonly SignOffRemark[] | undefined;
+      password?: string | undefined;
+    },
   ): Promise<Revision> {
     const confirmed = await this.confirmPassword(actor, revisionId, decision, input.password);
     return this.dataSource.transaction(async (manager) => {
@@ -284,6 +325,7 @@ export class RevisionsService {
           'the stored data of this revision no longer matches its hash: it cannot be signed',
         );
       }
+      const remarks = remarksOnTrail(revision.report as unknown as Report, input.remarks);
       const now = new Date();
       await revisionRepository.insertSignOff(manager, {
         id: randomUUID(),
@@ -293,6 +335,7 @@ export class RevisionsService {
         comment: input.comment ?? '',
         hashSigned: input.hash,
         createdAt: now,
+        remarks,
       });
       const affected = await revisionRepository.markDecided(manager, revisionId, decision, now);
       if (affected !== 1)
@@ -308,7 +351,11 @@ export class RevisionsService {
         decision === 'countersigned' ? 'revision.countersigned' : 'revision.returned',
         'submitted',
         decision,
-        { hashSigned: input.hash, ...(input.comment ? { comment: input.comment } : {}) },
+        {
+          hashSigned: input.hash,
+          ...(input.comment ? { comment: input.comment } : {}),
+          ...(remarks.length ? { remarks } : {}),
+        },
       );
       await this.notifier.revisionDecided(manager, {
         revisionId,
@@ -331,6 +378,30 @@ export class RevisionsService {
         ...summaryFromRow(r),
         project: { id: r.p_id, number: r.p_number, name: r.p_name },
         component: { id: r.c_id, name: r.c_name, kind: r.c_kind },
+      })),
+      page,
+      total,
+    );
+  }
+
+  /**
+   * "Returned to me" (issue 16.1): my revisions that a checker returned and
+   * that are still their component's latest (a new revision takes one off),
+   * in projects I still design in, newest return first.
+   */
+  async returned(actor: Actor, page: PageRequest): Promise<Page<ReturnedItem>> {
+    const manager = this.dataSource.manager;
+    enforce(canListReturned(actor, await revisionRepository.designsAnywhere(manager, actor.id)));
+    const { rows: found, total } = await revisionRepository.returnedPage(manager, actor.id, page);
+    return pageOf(
+      found.map((r) => ({
+        project: { id: r.p_id, number: r.p_number, name: r.p_name },
+        component: { id: r.c_id, name: r.c_name, kind: r.c_kind },
+        revision: summaryFromRow(r),
+        returnedBy: { id: r.s_checker_id, name: r.s_checker_name },
+        returnedAt: isoRequired(r.s_created_at),
+        commentExcerpt: excerpt(r.s_comment, COMMENT_EXCERPT_LENGTH),
+        remarkCount: Number(r.s_remark_count),
       })),
       page,
       total,

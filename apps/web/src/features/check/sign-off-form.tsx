@@ -4,7 +4,7 @@ import * as yup from 'yup';
 import { ruleOf } from '../../lib/contract-rules';
 import { countersignBody, returnBody } from '@hoopline/contract';
 import { useCountersign, useReturnRevision } from '../../api/revisions';
-import type { Component, Revision } from '@hoopline/contract';
+import type { Component, Revision, StepRemark } from '@hoopline/contract';
 import { Button } from '../../components/button';
 import { Dialog } from '../../components/dialog';
 import { FormError, FormikTextAreaField, FormikTextField } from '../../components/field';
@@ -13,12 +13,15 @@ import { VerdictBadge } from '../../components/badges';
 import { serverFieldErrors } from '../../components/server-errors';
 import { useUnitSystem } from '../../lib/unit-system';
 import { usePresented } from '../results/report-view';
+import { StepRemarksField } from './step-remarks';
 
 export type Decision = 'countersign' | 'return';
 
 interface SignOffValues {
   decision: Decision;
   comment: string;
+  /** Remarks on trail steps, sent with a return (issue 16.1). */
+  remarks: StepRemark[];
   password: string;
 }
 
@@ -74,7 +77,7 @@ export function SignOffForm({
   const [confirming, setConfirming] = useState<Decision | null>(null);
   return (
     <Formik<SignOffValues>
-      initialValues={{ decision: 'countersign', comment: '', password: '' }}
+      initialValues={{ decision: 'countersign', comment: '', remarks: [], password: '' }}
       validationSchema={signOffSchema(needsPassword)}
       validateOnChange={false}
       validateOnBlur={false}
@@ -95,7 +98,12 @@ export function SignOffForm({
                 })
               : await giveBack.mutateAsync({
                   id: revision.id,
-                  body: { hash: revision.contentHash, comment, ...password },
+                  body: {
+                    hash: revision.contentHash,
+                    comment,
+                    ...(values.remarks.length ? { remarks: values.remarks } : {}),
+                    ...password,
+                  },
                 });
           setConfirming(null);
           onDone(values.decision, answer);
@@ -132,6 +140,10 @@ export function SignOffForm({
               label="Comment"
               hint="Required to return; optional with a countersignature. Refer to trail steps by number."
               disabled={Boolean(blockedReason)}
+            />
+            <StepRemarksField
+              report={revision.report as Revision['report'] | undefined}
+              disabled={Boolean(blockedReason) || isSubmitting}
             />
             {blockedReason ? (
               <p
@@ -288,6 +300,20 @@ function SignOffDialog({
             <>
               <dt className="text-muted">Comment</dt>
               <dd className="whitespace-pre-wrap">{comment || '–'}</dd>
+            </>
+          ) : null}
+          {decision === 'return' && values.remarks.length > 0 ? (
+            <>
+              <dt className="text-muted">Step remarks</dt>
+              <dd>
+                <ul className="list-disc pl-4">
+                  {values.remarks.map((r, i) => (
+                    <li key={`${r.step}-${i}`}>
+                      Step <span className="num">{r.step}</span>: {r.text}
+                    </li>
+                  ))}
+                </ul>
+              </dd>
             </>
           ) : null}
         </dl>

@@ -15,7 +15,7 @@ import {
   ReportSummary,
   WarningsList,
 } from '../results/report-view';
-import { TrailTable } from '../results/trail-table';
+import { TrailTable, useTrailHighlight } from '../results/trail-table';
 import { useEditorState } from './editor-state';
 import { CaseFile } from './case-file';
 import { InputsForm } from './inputs-form';
@@ -97,6 +97,8 @@ export interface WorkbenchProps {
   readonly canSaveMaterials: boolean;
   /** Actions beside the save button that depend on whether there are unsaved changes (submit for check). */
   readonly footerActions?: (state: { readonly dirty: boolean }) => ReactNode;
+  /** Shown above inputs and results (the returned notice: issue 16.1). */
+  readonly notice?: ReactNode;
 }
 
 /**
@@ -116,8 +118,10 @@ export function Workbench({
   onSave,
   canSaveMaterials,
   footerActions,
+  notice,
 }: WorkbenchProps) {
   const system = useUnitSystem();
+  const highlight = useTrailHighlight();
   const editor = useEditorState(initialInputs);
   const { raw, edits } = editor.state;
   const inputs = useMemo(() => withSite(raw, project), [raw, project]);
@@ -176,6 +180,7 @@ export function Workbench({
 
   return (
     <div className="flex flex-col gap-4">
+      {notice}
       <div className="grid items-start gap-4 lg:grid-cols-[minmax(340px,420px)_minmax(0,1fr)]">
         <Panel
           title="Inputs"
@@ -288,7 +293,7 @@ export function Workbench({
           <h2 id="trail-title" className="mb-1 text-sm font-semibold">
             Calculation trail
           </h2>
-          <TrailTable report={report} system={system} />
+          <TrailTable report={report} system={system} highlight={highlight} />
         </section>
       ) : null}
     </div>

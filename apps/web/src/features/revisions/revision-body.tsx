@@ -9,7 +9,8 @@ import {
   ReportSummary,
   WarningsList,
 } from '../results/report-view';
-import { TrailTable } from '../results/trail-table';
+import { TrailTable, useTrailHighlight } from '../results/trail-table';
+import { CommentWithSteps, StepRemarksList, useStepLabels } from './returned-notice';
 import { presentInputs, type UnitSystem } from '@hoopline/present';
 import { ScrollArea } from '../../components/scroll-area';
 
@@ -41,6 +42,7 @@ export function RevisionMeta({ revision }: { revision: Revision }) {
 }
 
 export function SignOffHistory({ revision }: { revision: Revision }) {
+  const labels = useStepLabels(revision);
   if (revision.signOffs.length === 0)
     return <p className="text-sm text-muted">No sign-offs yet.</p>;
   return (
@@ -51,7 +53,12 @@ export function SignOffHistory({ revision }: { revision: Revision }) {
             <strong>{s.decision === 'countersigned' ? 'Countersigned' : 'Returned'}</strong> by{' '}
             {s.checker.name}, <span className="num">{formatDateTime(s.createdAt)}</span>
           </p>
-          {s.comment ? <p className="mt-0.5 whitespace-pre-line">{s.comment}</p> : null}
+          {s.comment ? (
+            <p className="mt-0.5 whitespace-pre-line">
+              <CommentWithSteps comment={s.comment} stepCount={labels.size} />
+            </p>
+          ) : null}
+          <StepRemarksList signOff={s} labels={labels} />
           <p className="mt-0.5 font-mono text-xs break-all text-muted">
             signed hash {s.hashSigned}
           </p>
@@ -103,6 +110,7 @@ export function InputsTable({ inputs, system }: { inputs: unknown; system: UnitS
 /** A saved revision, read-only: who and when, the inputs as entered, the server's report. */
 export function RevisionBody({ revision, aside }: { revision: Revision; aside?: React.ReactNode }) {
   const system = useUnitSystem();
+  const highlight = useTrailHighlight();
   return (
     <div className="flex flex-col gap-4">
       <div className="grid items-start gap-4 lg:grid-cols-[minmax(300px,380px)_minmax(0,1fr)]">
@@ -138,7 +146,7 @@ export function RevisionBody({ revision, aside }: { revision: Revision; aside?: 
         <h2 id="trail-title" className="mb-1 text-sm font-semibold">
           Calculation trail
         </h2>
-        <TrailTable report={revision.report} system={system} />
+        <TrailTable report={revision.report} system={system} highlight={highlight} />
       </section>
     </div>
   );
