@@ -60,8 +60,10 @@ export type {
   Step,
   ValidityWarning,
   Verdict,
+  WarningQuantity,
   WarningSeverity,
 } from './core/report';
+export type { Worded } from './core/worded';
 export { CAUTIONS } from './core/cautions';
 export type { CautionCode } from './core/cautions';
 export { CalcInputError, issuesFromZod } from './core/errors';

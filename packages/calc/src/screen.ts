@@ -2,11 +2,12 @@ import type { z } from 'zod';
 import { assembleReport } from './core/assemble';
 import { CalcInputError, issuesFromZod, type InputIssue } from './core/errors';
 import { resolveDesignBasis } from './core/design-basis';
-import { resolveAmbient, resolveLoadCases } from './core/load-cases';
+import { lineOf, resolveAmbient, resolveLoadCases } from './core/load-cases';
+import { joinWorded, q, worded } from './core/worded';
 import { computeMethod, type CaseTemperature } from './core/compute';
 import type { MethodContext, MethodDefinition, MethodResult } from './core/method';
 import type { ResolvedLoadCase } from './core/report';
-import { ROOM_TEMPERATURE, celsiusText, roomTemperatureContext } from './core/temperature';
+import { ROOM_TEMPERATURE, roomTemperatureContext } from './core/temperature';
 import { METHODS, type ComponentKind, type EngineMethod, type Report } from './methods';
 
 export { METHODS };
@@ -65,9 +66,20 @@ function caseTemperatures(
 
 /** A resolved load case with the temperature it is screened at, said in its description too. */
 function withTemperature(loadCase: ResolvedLoadCase, t: CaseTemperature): ResolvedLoadCase {
+  const before = loadCase.worded
+    ? { ...loadCase.worded, message: loadCase.description }
+    : worded`${loadCase.description}`;
+  const temperature = q('temperature', t.value, 'K', { as: '°C' });
   return {
     ...loadCase,
-    description: `${loadCase.description}, at ${t.given ? celsiusText(t.value) : 'room temperature (20 °C, none given)'}`,
+    ...lineOf(
+      joinWorded(
+        before,
+        t.given
+          ? worded`, at ${temperature}`
+          : worded`, at room temperature (${temperature}, none given)`,
+      ),
+    ),
     temperature: t.value,
   };
 }

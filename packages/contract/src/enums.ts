@@ -11,6 +11,16 @@ export const UNIT_SYSTEMS = ['si', 'us'] as const;
 export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
 export const unitSystem = z.enum(UNIT_SYSTEMS, { error: 'must be "si" or "us"' });
 
+/**
+ * The units a person reads vacuum levels in (absolute pressures below 1 kPa;
+ * @hoopline/present holds the rule). Symbols as the engine's unit table spells them.
+ */
+export const VACUUM_UNITS = ['torr', 'mTorr', 'mbar', 'Pa'] as const;
+export type VacuumUnit = (typeof VACUUM_UNITS)[number];
+export const vacuumUnit = z.enum(VACUUM_UNITS, {
+  error: 'must be "torr", "mTorr", "mbar" or "Pa"',
+});
+
 export const ROLES = ['designer', 'checker', 'fabricator'] as const;
 export type Role = (typeof ROLES)[number];
 export const role = z.enum(ROLES, { error: 'must be "designer", "checker" or "fabricator"' });
@@ -26,6 +36,10 @@ export type SignOffDecision = (typeof SIGN_OFF_DECISIONS)[number];
 export const PAPER_SIZES = ['a4', 'letter'] as const;
 export type PaperSize = (typeof PAPER_SIZES)[number];
 export const paperSize = z.enum(PAPER_SIZES, { error: 'must be "a4" or "letter"' });
+/** The paper a project's sheets print on unless another is asked for: US customary Letter, SI A4. */
+export function defaultPaper(system: UnitSystem): PaperSize {
+  return system === 'us' ? 'letter' : 'a4';
+}
 
 /** The engine's verdicts (`satisfies` ties this list to the engine's type). */
 export const VERDICTS = [

@@ -37,7 +37,25 @@ export {
   kindName,
   statusWords,
 } from './words';
-export { TRAIL_SIGNIFICANT, ambientText, checkFigures, presentReport, stepFigures } from './report';
+export {
+  VACUUM_BELOW,
+  VACUUM_UNITS,
+  loadCaseLine,
+  readerOf,
+  showPressure,
+  showWordedValue,
+  vacuumUnitOf,
+  wordedText,
+} from './reader-units';
+export type { ReaderUnits, VacuumUnit } from './reader-units';
+export {
+  TRAIL_SIGNIFICANT,
+  absolutePressureIds,
+  ambientText,
+  checkFigures,
+  presentReport,
+  stepFigures,
+} from './report';
 export type {
   PresentedCase,
   PresentedCheck,

@@ -1,5 +1,13 @@
-import type { Check, Report } from '@hoopline/calc';
+import { findMethod, type Check, type Report } from '@hoopline/calc';
 import { dimensionOfReportUnit, type UnitSystem } from './display-units';
+import {
+  VACUUM_BELOW,
+  loadCaseLine,
+  readerOf,
+  showPressure,
+  wordedText,
+  type ReaderUnits,
+} from './reader-units';
 import { formatSignificant } from './numbers';
 import { formatPercent } from './percent';
 import { show, showQuantity } from './quantity';
@@ -100,43 +108,84 @@ export interface PresentedWarning {
 /** Significant figures of the trail's values: as many as the trail text writes. */
 export const TRAIL_SIGNIFICANT = 6;
 
+/**
+ * The ids of a report's steps, outputs and checks whose pressure is absolute
+ * (the method's list, and the ambient pressure every report starts with): a
+ * low one is a vacuum level, shown in the reader's vacuum unit.
+ */
+export function absolutePressureIds(report: Pick<Report, 'kind'>): ReadonlySet<string> {
+  return new Set(['ambient-pressure', ...(findMethod(report.kind)?.absolutePressures ?? [])]);
+}
+
 /** Demand and capacity of a check, in one unit chosen by the capacity. */
 export function checkFigures(
   check: Pick<Check, 'demand' | 'capacity' | 'unit'>,
-  system: UnitSystem,
+  reader: ReaderUnits | UnitSystem,
+  options: { readonly absolute?: boolean } = {},
 ) {
+  const r = readerOf(reader);
   const scale = Math.max(Math.abs(check.capacity), Math.abs(check.demand));
+  if (check.unit === 'Pa') {
+    const absolute = options.absolute === true;
+    return {
+      demand: showPressure(check.demand, r, { absolute, scale }),
+      capacity: showPressure(check.capacity, r, { absolute, scale }),
+    };
+  }
   return {
-    demand: show(check.demand, check.unit, system, { scale }),
-    capacity: show(check.capacity, check.unit, system, { scale }),
+    demand: show(check.demand, check.unit, r.system, { scale }),
+    capacity: show(check.capacity, check.unit, r.system, { scale }),
   };
 }
 
-/** A step's value: SI text, unit, and the display-unit text where it differs. */
+/**
+ * A step's value: SI text, unit, and the display-unit text where it differs.
+ * An absolute pressure below 1 kPa (`absolute`) shows in the reader's vacuum unit.
+ */
 export function stepFigures(
   step: { readonly value: number | null; readonly unit: string },
-  system: UnitSystem,
+  reader: ReaderUnits | UnitSystem,
+  options: { readonly absolute?: boolean } = {},
 ): { value: string; unit: string; shownAs: string } {
+  const r = readerOf(reader);
   if (step.value === null) return { value: '–', unit: '', shownAs: '' };
   const unit = step.unit === '1' ? '' : step.unit;
   const value = formatSignificant(step.value, { significant: TRAIL_SIGNIFICANT });
   const dimension = dimensionOfReportUnit(step.unit);
   if (!dimension || dimension === 'dimensionless') return { value, unit, shownAs: '' };
-  const shown = showQuantity(step.value, step.unit, system);
+  if (step.unit === 'Pa' && options.absolute && Math.abs(step.value) < VACUUM_BELOW) {
+    const shownAs = showPressure(step.value, r, { absolute: true });
+    return { value, unit, shownAs: shownAs.endsWith(' Pa') ? '' : shownAs };
+  }
+  const shown = showQuantity(step.value, step.unit, r.system);
   return { value, unit, shownAs: shown.unit === step.unit ? '' : shown.text };
 }
 
-export function ambientText(report: Pick<Report, 'ambient'>, system: UnitSystem): string {
+export function ambientText(
+  report: Pick<Report, 'ambient'>,
+  reader: ReaderUnits | UnitSystem,
+): string {
+  const system = readerOf(reader).system;
   const a = report.ambient;
-  const pressure = show(a.pressure, 'Pa', system);
+  const pressure = showPressure(a.pressure, reader, { absolute: true });
   if (a.basis === 'altitude' && a.altitude !== undefined) {
     return `${pressure} (ISO 2533 standard atmosphere at ${show(a.altitude, 'm', system)})`;
   }
   return `${pressure} (${a.basis === 'given' ? 'given' : 'standard atmosphere at sea level'})`;
 }
 
-/** The report, every number and word as it is shown, in the reader's unit system. */
-export function presentReport(report: Report, system: UnitSystem): PresentedReport {
+/**
+ * The report, every number and word as it is shown, in the reader's units:
+ * the unit system, and the vacuum unit for absolute pressures below 1 kPa
+ * (a bare unit system reads vacuum in its own unit: torr in US, Pa in SI).
+ */
+export function presentReport(
+  report: Report,
+  readerOrSystem: ReaderUnits | UnitSystem,
+): PresentedReport {
+  const reader = readerOf(readerOrSystem);
+  const system = reader.system;
+  const absolute = absolutePressureIds(report);
   const g = report.governing;
   const verdict = VERDICT_WORDS[report.verdict];
   return {
@@ -150,23 +199,23 @@ export function presentReport(report: Report, system: UnitSystem): PresentedRepo
           utilisation: formatPercent(g.utilisation),
         }
       : null,
-    ambient: ambientText(report, system),
+    ambient: ambientText(report, reader),
     cases: report.cases.map((c, index) => {
       const lc = c.loadCase;
       return {
         name: lc.name,
         governing: g?.caseIndex === index,
-        inside: show(lc.internal, 'Pa', system),
-        outside: show(lc.external, 'Pa', system),
+        inside: showPressure(lc.internal, reader, { absolute: true }),
+        outside: showPressure(lc.external, reader, { absolute: true }),
         differential: show(Math.abs(lc.differential), 'Pa', system),
         direction: DIRECTION_WORDS[lc.direction],
         factor: lc.factor !== 1 ? formatSignificant(lc.factor) : null,
-        description: lc.description,
+        description: loadCaseLine(lc, reader),
         checks: c.checks.map((check) => ({
           id: check.id,
           label: check.label,
           basis: check.basis,
-          ...checkFigures(check, system),
+          ...checkFigures(check, reader, { absolute: absolute.has(check.id) }),
           utilisation: formatPercent(check.utilisation),
           utilisationRatio: check.utilisation,
           pass: check.pass,
@@ -176,7 +225,10 @@ export function presentReport(report: Report, system: UnitSystem): PresentedRepo
         outputs: c.outputs.map((o) => ({
           id: o.id,
           label: o.label,
-          value: show(o.value, o.unit, system),
+          value:
+            o.unit === 'Pa'
+              ? showPressure(o.value, reader, { absolute: absolute.has(o.id) })
+              : show(o.value, o.unit, system),
         })),
       };
     }),
@@ -187,7 +239,7 @@ export function presentReport(report: Report, system: UnitSystem): PresentedRepo
       label: step.label,
       expression: step.expression,
       substituted: step.substituted,
-      ...stepFigures(step, system),
+      ...stepFigures(step, reader, { absolute: absolute.has(step.id) }),
       source: step.source,
     })),
     warnings: report.warnings.map((w) => ({
@@ -195,7 +247,7 @@ export function presentReport(report: Report, system: UnitSystem): PresentedRepo
       severity: SEVERITY_WORDS[w.severity],
       severityCode: w.severity,
       loadCase: w.loadCase ?? null,
-      message: w.message,
+      message: wordedText(w, reader),
     })),
     cautions: report.cautions.map((c) => ({ code: c.code, title: c.title, text: c.text })),
   };

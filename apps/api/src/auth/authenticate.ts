@@ -63,6 +63,7 @@ export function signInRequired(
       isAdmin: facts.isAdmin,
       active: facts.active,
       unitSystem: facts.unitSystem,
+      vacuumUnit: facts.vacuumUnit,
       mayCreateProjects: facts.mayCreateProjects,
       createdAt: facts.createdAt,
     };

@@ -1,4 +1,4 @@
-import type { UnitSystem } from '@hoopline/contract';
+import type { UnitSystem, VacuumUnit } from '@hoopline/contract';
 import type { DataSource, EntityManager } from 'typeorm';
 import { RefreshTokenEntity } from '../db/entities/refresh-token.entity';
 import { pgPool } from '../db/pg-pool';
@@ -12,6 +12,7 @@ export interface SessionFacts {
   readonly isAdmin: boolean;
   readonly active: boolean;
   readonly unitSystem: UnitSystem;
+  readonly vacuumUnit: VacuumUnit | null;
   /** Named by an administrator as someone who may start projects. */
   readonly mayCreateProjects: boolean;
   readonly authEpoch: number;
@@ -27,6 +28,7 @@ interface SessionRow {
   is_admin: boolean;
   active: boolean;
   unit_system: UnitSystem;
+  vacuum_unit: VacuumUnit | null;
   may_create_projects: boolean;
   auth_epoch: number;
   created_at: Date;
@@ -41,7 +43,7 @@ interface SessionRow {
  */
 const SESSION_QUERY = {
   name: 'hoopline-session',
-  text: `select u.id, u.email, u.name, u.is_admin, u.active, u.unit_system, u.auth_epoch,
+  text: `select u.id, u.email, u.name, u.is_admin, u.active, u.unit_system, u.vacuum_unit, u.auth_epoch,
                 u.may_create_projects, u.created_at,
                 (select max(t.expires_at) from refresh_tokens t
                   where t.family_id = $2 and t.user_id = u.id and t.revoked_at is null) as live_until
@@ -69,6 +71,7 @@ export const sessionRepository = {
       isAdmin: row.is_admin,
       active: row.active,
       unitSystem: row.unit_system,
+      vacuumUnit: row.vacuum_unit,
       mayCreateProjects: row.may_create_projects,
       authEpoch: row.auth_epoch,
       createdAt: row.created_at,

@@ -67,6 +67,7 @@ export async function seedDemo(
         isAdmin: demo.isAdmin,
         active: true,
         unitSystem: 'si' as const,
+        vacuumUnit: null,
         // The demo's designers start projects (the installation's default is 'named').
         mayCreateProjects: DEMO_PROJECTS.some((p) => p.designer === demo.key),
         authEpoch: 0,

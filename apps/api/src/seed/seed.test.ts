@@ -134,7 +134,9 @@ describe('demo seed (real PostgreSQL)', () => {
       { number: 1, status: 'countersigned', superseded: true },
       { number: 2, status: 'countersigned', superseded: false },
     ]);
-  });
+    // Seeds the demo and renders two packages of sheets: about 9 s on an idle
+    // machine, past the default 20 s on two busy cores.
+  }, 60_000);
 
   it('the printed passwords sign the demo people in, with their per-project roles', async () => {
     const result = await seedDemo(t.dataSource, t.config, t.services);

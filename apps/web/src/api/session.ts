@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { apiFetch, json } from './client';
-import type { Me, UnitSystem } from '@hoopline/contract';
+import type { Me, UnitSystem, VacuumUnit } from '@hoopline/contract';
 
 export const meQuery = queryOptions({
   queryKey: ['me'],
@@ -71,8 +71,11 @@ export function useCompletePasswordReset() {
 export function useUpdateMe() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (body: { name?: string; unitSystem?: UnitSystem }) =>
-      apiFetch<Me>('/me', json('PATCH', body)),
+    mutationFn: (body: {
+      name?: string;
+      unitSystem?: UnitSystem;
+      vacuumUnit?: VacuumUnit | null;
+    }) => apiFetch<Me>('/me', json('PATCH', body)),
     onSuccess: (me) => client.setQueryData(meQuery.queryKey, me),
   });
 }

@@ -2,7 +2,8 @@ import { Form, Formik } from 'formik';
 import { useState } from 'react';
 import * as yup from 'yup';
 import { contractText } from '../lib/contract-rules';
-import { UNIT_SYSTEMS, updateMeBody } from '@hoopline/contract';
+import { UNIT_SYSTEMS, VACUUM_UNITS, updateMeBody, type VacuumUnit } from '@hoopline/contract';
+import { vacuumUnitOf } from '@hoopline/present';
 import { useMe, useUpdateMe } from '../api/session';
 import { Button } from '../components/button';
 import { FormError, FormikSelectField, FormikTextField } from '../components/field';
@@ -23,10 +24,18 @@ export function AccountRoute() {
       <div className="grid gap-4 lg:grid-cols-2">
         <Panel title="Profile and display" id="profile">
           <Formik
-            initialValues={{ name: me.user.name, unitSystem: me.user.unitSystem }}
+            initialValues={{
+              name: me.user.name,
+              unitSystem: me.user.unitSystem,
+              // '' for "the unit system's own" (null on the server).
+              vacuumUnit: (me.user.vacuumUnit ?? '') as VacuumUnit | '',
+            }}
             validationSchema={yup.object({
               name: contractText(updateMeBody.shape.name, 'Your name', 'Enter your name'),
               unitSystem: yup.string().oneOf(UNIT_SYSTEMS).required(),
+              vacuumUnit: yup
+                .string()
+                .oneOf(['', ...VACUUM_UNITS], 'Choose torr, mTorr, mbar or Pa'),
             })}
             onSubmit={async (values, helpers) => {
               setFormError(null);
@@ -35,16 +44,17 @@ export function AccountRoute() {
                 await update.mutateAsync({
                   name: values.name.trim(),
                   unitSystem: values.unitSystem,
+                  vacuumUnit: values.vacuumUnit === '' ? null : values.vacuumUnit,
                 });
                 setSaved(true);
               } catch (error) {
-                const mapped = serverFieldErrors(error, ['name', 'unitSystem']);
+                const mapped = serverFieldErrors(error, ['name', 'unitSystem', 'vacuumUnit']);
                 helpers.setErrors(mapped.fields);
                 setFormError(mapped.message);
               }
             }}
           >
-            {({ isSubmitting }) => (
+            {({ isSubmitting, values }) => (
               <Form noValidate className="flex max-w-sm flex-col gap-3">
                 <FormError message={formError} />
                 {saved ? (
@@ -60,6 +70,20 @@ export function AccountRoute() {
                 >
                   <option value="si">SI (mm, kPa, MPa, kN)</option>
                   <option value="us">US customary (in, psi, lbf)</option>
+                </FormikSelectField>
+                <FormikSelectField
+                  name="vacuumUnit"
+                  label="Vacuum levels"
+                  hint="Absolute pressures below 1 kPa (a chamber's base pressure, a pump-down target) are shown in this unit, whatever the display units."
+                >
+                  <option value="">
+                    The display units’ own ({vacuumUnitOf({ system: values.unitSystem })})
+                  </option>
+                  {VACUUM_UNITS.map((u) => (
+                    <option key={u} value={u}>
+                      {u}
+                    </option>
+                  ))}
                 </FormikSelectField>
                 <div>
                   <Button type="submit" variant="primary" busy={isSubmitting}>

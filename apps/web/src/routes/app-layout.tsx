@@ -3,11 +3,16 @@ import { useEffect, useState } from 'react';
 import { NavLink, Outlet, useLocation, useNavigate } from 'react-router-dom';
 import { onSessionLost } from '../api/client';
 import { useMe, useSignOut, useUpdateMe } from '../api/session';
-import { UNIT_SYSTEMS, type UnitSystem } from '@hoopline/contract';
+import { UNIT_SYSTEMS } from '@hoopline/contract';
 import { useCheckQueue, useReturned } from '../api/work';
 import { ProgressBar } from '../components/progress-bar';
 import { ThemeSwitch } from '../components/theme-switch';
-import { UnitSystemProvider } from '../lib/unit-system';
+import {
+  UnitSystemProvider,
+  clearSessionUnits,
+  useChooseUnitSystem,
+  useUnitSystem,
+} from '../lib/unit-system';
 import { signInPath } from './guards';
 
 function navClass({ isActive }: { isActive: boolean }) {
@@ -40,11 +45,15 @@ function ReturnedCount() {
   );
 }
 
-function UnitSwitch({ system }: { system: UnitSystem }) {
+/**
+ * The display units of this session (lib/unit-system: an explicit choice
+ * here overrides a project's own units for the session), also saved as the
+ * person's own setting (PATCH /api/me) for the pages outside projects.
+ */
+function UnitSwitch() {
   const update = useUpdateMe();
-  // Shown at once; the saved choice (PATCH /api/me) follows, or the old one comes back on failure.
-  const [pending, setPending] = useState<UnitSystem | null>(null);
-  const shown = pending ?? system;
+  const shown = useUnitSystem();
+  const choose = useChooseUnitSystem();
   return (
     <fieldset className="flex items-center gap-1 text-xs text-muted">
       <legend className="sr-only">Display units</legend>
@@ -62,8 +71,8 @@ function UnitSwitch({ system }: { system: UnitSystem }) {
             value={s}
             checked={shown === s}
             onChange={() => {
-              setPending(s);
-              update.mutate({ unitSystem: s }, { onSettled: () => setPending(null) });
+              choose(s);
+              update.mutate({ unitSystem: s });
             }}
             className="sr-only"
           />
@@ -104,7 +113,7 @@ export function AppLayout() {
   );
 
   return (
-    <UnitSystemProvider system={me.user.unitSystem}>
+    <UnitSystemProvider system={me.user.unitSystem} vacuumUnit={me.user.vacuumUnit}>
       <a
         href="#main"
         className="sr-only z-50 rounded bg-accent px-3 py-2 text-accent-ink focus:not-sr-only focus:fixed focus:top-2 focus:left-2"
@@ -176,7 +185,7 @@ export function AppLayout() {
               ) : null}
             </nav>
             <div className="flex flex-wrap items-center gap-3 border-t border-line pt-2 md:ml-auto md:border-t-0 md:pt-0">
-              <UnitSwitch system={me.user.unitSystem} />
+              <UnitSwitch />
               <ThemeSwitch />
               <NavLink to="/account" className={navClass}>
                 {me.user.name}
@@ -184,11 +193,12 @@ export function AppLayout() {
               <button
                 type="button"
                 className="rounded px-2 py-1 text-sm text-muted hover:bg-sunken hover:text-ink"
-                onClick={() =>
+                onClick={() => {
+                  clearSessionUnits();
                   signOut.mutate(undefined, {
                     onSettled: () => navigate('/sign-in', { replace: true }),
-                  })
-                }
+                  });
+                }}
               >
                 Sign out
               </button>

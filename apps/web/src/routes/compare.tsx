@@ -1,6 +1,7 @@
 import { useParams, useSearchParams } from 'react-router-dom';
 import { useComponent } from '../api/components';
 import { useProject } from '../api/projects';
+import { useProjectUnits } from '../lib/unit-system';
 import { useRevision, useRevisionDiff } from '../api/revisions';
 import { ErrorView, NotFoundView } from '../components/error-view';
 import { componentCrumbs, PageHeader } from '../components/page';
@@ -15,6 +16,8 @@ export function CompareRoute() {
   const toId = params.get('to') ?? '';
   const component = useComponent(componentId);
   const project = useProject(component.data?.projectId ?? '');
+  // A project's unit system is the default display on its pages (lib/unit-system).
+  useProjectUnits(project.data?.unitSystem);
   const from = useRevision(fromId || undefined);
   const to = useRevision(toId || undefined);
   // The server diffs "against" the older revision: GET /revisions/:to/diff?against=:from.

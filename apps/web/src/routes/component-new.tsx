@@ -4,6 +4,7 @@ import { useNavigate, useParams } from 'react-router-dom';
 import { ApiError } from '../api/client';
 import { useCreateComponent } from '../api/components';
 import { useProject } from '../api/projects';
+import { useProjectUnits } from '../lib/unit-system';
 import { ErrorView } from '../components/error-view';
 import { TextField } from '../components/field';
 import { PageHeader, projectCrumbs } from '../components/page';
@@ -16,6 +17,8 @@ import { kindName } from '@hoopline/present';
 export function NewComponentRoute() {
   const { projectId = '' } = useParams();
   const project = useProject(projectId);
+  // A project's unit system is the default display on its pages (lib/unit-system).
+  useProjectUnits(project.data?.unitSystem);
   const create = useCreateComponent(projectId);
   const navigate = useNavigate();
   const [kind, setKind] = useState<ComponentKind | null>(null);

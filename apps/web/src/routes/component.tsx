@@ -1,6 +1,7 @@
 import { useParams } from 'react-router-dom';
 import { useComponent, useSaveRevision } from '../api/components';
 import { useProject } from '../api/projects';
+import { useProjectUnits } from '../lib/unit-system';
 import { useRevision } from '../api/revisions';
 import type { Component, Project, Revision } from '@hoopline/contract';
 import { StatusBadge, VerdictBadge } from '../components/badges';
@@ -68,6 +69,8 @@ export function ComponentRoute() {
   const { componentId = '' } = useParams();
   const component = useComponent(componentId);
   const project = useProject(component.data?.projectId ?? '');
+  // A project's unit system is the default display on its pages (lib/unit-system).
+  useProjectUnits(project.data?.unitSystem);
   const visible =
     project.data?.myRole === 'fabricator'
       ? component.data?.issuedRevision
@@ -114,7 +117,9 @@ export function ComponentRoute() {
         }
         actions={
           <>
-            {r && sheet ? <SheetDownload revision={r} kind={sheet} /> : null}
+            {r && sheet ? (
+              <SheetDownload revision={r} kind={sheet} unitSystem={p.unitSystem} />
+            ) : null}
             {isDesigner ? (
               // The attachments panel sits below the long trail: a way straight to it.
               <a href="#attachments-title" className={buttonClass()}>

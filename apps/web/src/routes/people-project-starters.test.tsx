@@ -14,6 +14,7 @@ const ravi: User = {
   isAdmin: false,
   active: true,
   unitSystem: 'si',
+  vacuumUnit: null,
   mayCreateProjects: false,
   createdAt: '2026-01-01T00:00:00Z',
 };

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { useParams } from 'react-router-dom';
 import { useMembers, useProject, useRemoveMember, useSetMember } from '../api/projects';
+import { useProjectUnits } from '../lib/unit-system';
 import { useMe } from '../api/session';
 import type { Member, MemberList, Role } from '@hoopline/contract';
 import { ROLE_LABEL } from '../components/badges';
@@ -35,6 +36,8 @@ export function ProjectMembersRoute() {
   const { projectId = '' } = useParams();
   const me = useMe();
   const project = useProject(projectId);
+  // A project's unit system is the default display on its pages (lib/unit-system).
+  useProjectUnits(project.data?.unitSystem);
   const members = useMembers(projectId);
   const setMember = useSetMember(projectId);
   const remove = useRemoveMember(projectId);

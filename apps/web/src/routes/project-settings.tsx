@@ -1,5 +1,6 @@
 import { useNavigate, useParams } from 'react-router-dom';
 import { useMembers, useProject, useUpdateProject } from '../api/projects';
+import { useProjectUnits } from '../lib/unit-system';
 import { ErrorView } from '../components/error-view';
 import { PageHeader, projectCrumbs } from '../components/page';
 import { PageSkeleton } from '../components/skeleton';
@@ -9,6 +10,8 @@ import { SignOffSetting } from '../features/projects/sign-off-setting';
 export function ProjectSettingsRoute() {
   const { projectId = '' } = useParams();
   const project = useProject(projectId);
+  // A project's unit system is the default display on its pages (lib/unit-system).
+  useProjectUnits(project.data?.unitSystem);
   const update = useUpdateProject(projectId);
   // Who may change the sign-off setting: the owner and administrators, as for members.
   const members = useMembers(projectId);

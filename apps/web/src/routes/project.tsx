@@ -10,7 +10,7 @@ import { PageSkeleton, TableSkeleton } from '../components/skeleton';
 import { ComponentTableView } from '../features/projects/component-table';
 import { ProjectDownloads } from '../features/sheets/package-download';
 import { show } from '@hoopline/present';
-import { useUnitSystem } from '../lib/unit-system';
+import { useUnitSystem, useProjectUnits } from '../lib/unit-system';
 import { useMe } from '../api/session';
 
 function siteText(site: unknown, system: UnitSystem): string {
@@ -25,6 +25,8 @@ export function ProjectRoute() {
   const me = useMe();
   const system = useUnitSystem();
   const project = useProject(projectId);
+  // A project's unit system is the default display on its pages (lib/unit-system).
+  useProjectUnits(project.data?.unitSystem);
   const table = useComponentTable(projectId);
 
   if (project.isPending) return <PageSkeleton label="Loading the project" />;
@@ -73,6 +75,7 @@ export function ProjectRoute() {
       ) : (
         <>
           <ProjectDownloads
+            unitSystem={p.unitSystem}
             projectId={p.id}
             hasIssued={table.data.rows.some((r) => r.issuedRevisionNumber !== null)}
           />

@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { useParams } from 'react-router-dom';
 import { useComponent } from '../api/components';
 import { useProject } from '../api/projects';
+import { useProjectUnits } from '../lib/unit-system';
 import { useRevision } from '../api/revisions';
 import { StatusBadge, VerdictBadge } from '../components/badges';
 import { ButtonLink } from '../components/button';
@@ -23,6 +24,8 @@ export function RevisionRoute() {
   const project = useProject(revision.data?.projectId ?? '');
   // What the checker just did here; it is said above the revision until they go elsewhere.
   const [done, setDone] = useState<SignOffOutcome | null>(null);
+  // A project's unit system is the default display on its pages (lib/unit-system).
+  useProjectUnits(project.data?.unitSystem);
   if (revision.isError) return <ErrorView error={revision.error} />;
   if (component.isError) return <ErrorView error={component.error} />;
   if (project.isError) return <ErrorView error={project.error} />;
@@ -48,7 +51,7 @@ export function RevisionRoute() {
         actions={
           <>
             {latest ? <WorkflowActions project={p} revision={r} /> : null}
-            {sheet ? <SheetDownload revision={r} kind={sheet} /> : null}
+            {sheet ? <SheetDownload revision={r} kind={sheet} unitSystem={p.unitSystem} /> : null}
             <ButtonLink to={`/components/${c.id}/revisions`}>All revisions</ButtonLink>
           </>
         }

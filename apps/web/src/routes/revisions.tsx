@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { Link, useNavigate, useParams } from 'react-router-dom';
 import { useComponent } from '../api/components';
 import { useProject } from '../api/projects';
+import { useProjectUnits } from '../lib/unit-system';
 import { useComponentRevisions } from '../api/revisions';
 import type { RevisionSummary } from '@hoopline/contract';
 import { StatusBadge, VerdictBadge } from '../components/badges';
@@ -18,6 +19,8 @@ export function RevisionsRoute() {
   const navigate = useNavigate();
   const component = useComponent(componentId);
   const project = useProject(component.data?.projectId ?? '');
+  // A project's unit system is the default display on its pages (lib/unit-system).
+  useProjectUnits(project.data?.unitSystem);
   const revisions = useComponentRevisions(componentId);
   const [picked, setPicked] = useState<string[]>([]);
 

@@ -14,6 +14,7 @@ export const ME: Me = {
     isAdmin: false,
     active: true,
     unitSystem: 'si',
+    vacuumUnit: null,
     mayCreateProjects: true,
     createdAt: '2026-01-01T00:00:00Z',
   },

@@ -13,6 +13,19 @@ import { HIGH_BAROMETER_PRESSURE, type DesignBasis } from './design-basis';
 import { designTemperatureField } from './temperature';
 import { formatNumber, withUnit } from './format';
 import type { PressureDirection, Report, ResolvedLoadCase, Step, ValidityWarning } from './report';
+import { joinWorded, q, worded, type Worded } from './worded';
+
+declare module './report' {
+  interface ResolvedLoadCase {
+    /**
+     * `description` as a template with its values (core/worded.ts), so that
+     * the line can be printed in any units: "inside full vacuum = {inside}(a),
+     * outside ambient {outside}(a)" with `inside` and `outside` absolute
+     * pressures in Pa. Declared here, beside the code that writes it.
+     */
+    readonly worded?: Worded;
+  }
+}
 
 /**
  * The site: altitude (standard atmosphere) or a given ambient pressure. With
@@ -222,12 +235,23 @@ function absoluteOf(spec: PressureSpec | undefined, ambient: number): number {
   return spec.reference === 'gauge' ? spec.pascals + ambient : spec.pascals;
 }
 
-function describeSide(spec: PressureSpec | undefined, absolute: number): string {
-  if (!spec || spec.kind === 'ambient') return `ambient ${formatNumber(absolute)} Pa(a)`;
-  if (spec.reference === 'gauge') return `${spec.text} = ${formatNumber(absolute)} Pa(a)`;
-  return spec.text === `${absolute} Pa(a)`
-    ? spec.text
-    : `${spec.text} = ${formatNumber(absolute)} Pa(a)`;
+function describeSide(
+  side: 'inside' | 'outside',
+  spec: PressureSpec | undefined,
+  absolute: number,
+): Worded & { readonly message: string } {
+  const value = q(side, absolute, 'Pa', { absolute: true });
+  if (!spec || spec.kind === 'ambient') return worded`ambient ${value}(a)`;
+  if (spec.reference !== 'gauge' && spec.text === `${absolute} Pa(a)`) return worded`${value}(a)`;
+  return worded`${spec.text} = ${value}(a)`;
+}
+
+/** A case's `description` (the SI text) and `worded` (its template and values). */
+export function lineOf(w: Worded & { readonly message: string }): {
+  description: string;
+  worded: Worded;
+} {
+  return { description: w.message, worded: { template: w.template, values: w.values } };
 }
 
 export interface LoadCaseIssue {
@@ -275,12 +299,15 @@ export function resolveLoadCases(
         differential: external ? -magnitude : magnitude,
         direction: magnitude === 0 ? 'balanced' : external ? 'external-over' : 'internal-over',
         factor: loadFactor,
-        description:
-          `differential ${formatNumber(c.differential)} Pa, ${external ? 'outside higher' : 'inside higher'}` +
-          (external && c.differential > ambientPressure
-            ? ` (more than the ambient ${formatNumber(ambientPressure)} Pa: shown as inside 0 Pa(a), outside ${formatNumber(outside)} Pa(a))`
-            : '') +
-          (loadFactor !== 1 ? `, × load factor ${formatNumber(loadFactor)}` : ''),
+        ...lineOf(
+          joinWorded(
+            worded`differential ${q('differential', c.differential, 'Pa')}, ${external ? 'outside higher' : 'inside higher'}`,
+            external && c.differential > ambientPressure
+              ? worded` (more than the ambient ${q('ambient', ambientPressure, 'Pa', { absolute: true })}: shown as inside ${q('inside', 0, 'Pa', { absolute: true })}(a), outside ${q('outside', outside, 'Pa', { absolute: true })}(a))`
+              : null,
+            loadFactor !== 1 ? worded`, × load factor ${formatNumber(loadFactor)}` : null,
+          ),
+        ),
       };
     }
     const internal = absoluteOf(c.internal, ambientPressure);
@@ -303,9 +330,15 @@ export function resolveLoadCases(
       differential,
       direction,
       factor: loadFactor,
-      description:
-        `inside ${describeSide(c.internal, internal)}, outside ${describeSide(c.external, externalPressure)}` +
-        (loadFactor !== 1 ? `, × load factor ${formatNumber(loadFactor)}` : ''),
+      ...lineOf(
+        joinWorded(
+          worded`inside `,
+          describeSide('inside', c.internal, internal),
+          worded`, outside `,
+          describeSide('outside', c.external, externalPressure),
+          loadFactor !== 1 ? worded`, × load factor ${formatNumber(loadFactor)}` : null,
+        ),
+      ),
     };
   });
   const warnings: ValidityWarning[] = [];
@@ -316,21 +349,21 @@ export function resolveLoadCases(
       warnings.push({
         code: 'ambient-default',
         severity: 'caution',
-        message: `the ambient is the standard atmosphere (${formatNumber(ambient.pressure)} Pa) by default, the least conservative choice for ${list(rises)}: with one side absolute, the pressure difference rises with the barometer, which varies some 3–5 % above the standard value (Hoopline method notes §a.3). Design for a high barometer (the project's design basis, 105 kPa at sea level) or give the site's highest ambient pressure`,
+        ...worded`the ambient is the standard atmosphere (${q('ambient', ambient.pressure, 'Pa', { absolute: true })}) by default, the least conservative choice for ${list(rises)}: with one side absolute, the pressure difference rises with the barometer, which varies some 3–5 % above the standard value (Hoopline method notes §a.3). Design for a high barometer (the project's design basis, ${q('highBarometer', HIGH_BAROMETER_PRESSURE, 'Pa', { as: 'kPa', absolute: true })} at sea level) or give the site's highest ambient pressure`,
       });
     }
     if (high && falls.length > 0) {
       warnings.push({
         code: 'high-barometer-lowers',
         severity: 'caution',
-        message: `the high-barometer ambient (${formatNumber(ambient.pressure)} Pa) makes the pressure difference of ${list(falls)} smaller than at the standard atmosphere (one side absolute, the other against ambient): screen ${falls.length === 1 ? 'it' : 'them'} at a low barometer too`,
+        ...worded`the high-barometer ambient (${q('ambient', ambient.pressure, 'Pa', { absolute: true })}) makes the pressure difference of ${list(falls)} smaller than at the standard atmosphere (one side absolute, the other against ambient): screen ${falls.length === 1 ? 'it' : 'them'} at a low barometer too`,
       });
     }
     if (designBasis?.barometer === 'high' && ambient.basis === 'given' && !high) {
       warnings.push({
         code: 'high-barometer-given-ambient',
         severity: 'info',
-        message: `the site's ambient pressure is given (${formatNumber(ambient.pressure)} Pa): it is taken as the design ambient as it stands, without the high-barometer margin`,
+        ...worded`the site's ambient pressure is given (${q('ambient', ambient.pressure, 'Pa', { absolute: true })}): it is taken as the design ambient as it stands, without the high-barometer margin`,
       });
     }
   }

@@ -94,6 +94,13 @@ export interface MethodDefinition<
    * shows, made from the input. Methods with load cases leave this out.
    */
   readonly singleCase?: (input: z.output<Schema>, ambient: Ambient) => ResolvedLoadCase;
+  /**
+   * Ids of the steps, outputs and checks whose pressure (Pa) is absolute; every
+   * other pressure a report gives is a difference, or a stress. The
+   * `ambient-pressure` step, first in every report, is absolute too. A
+   * presentation shows a low absolute pressure in a vacuum unit.
+   */
+  readonly absolutePressures?: readonly string[];
   /** Example inputs, used in the package README, the CLI help and the tests. */
   readonly examples: readonly { readonly name: string; readonly input: z.input<Schema> }[];
 }

@@ -41,8 +41,23 @@ export interface ValidityWarning {
   readonly code: string;
   readonly severity: WarningSeverity;
   readonly message: string;
+  /**
+   * The message as a template where it holds numbers with units: `{name}`
+   * stands for `values[name]`, a literal brace is doubled. `message` is this
+   * template filled in the engine's SI text; a presentation fills it in its
+   * reader's units (core/worded.ts). Absent for a message without such numbers.
+   */
+  readonly template?: string;
+  readonly values?: Readonly<Record<string, WarningQuantity>>;
   /** Name of the load case it arose in; absent when it concerns every case. */
   readonly loadCase?: string;
+}
+
+/** A number in a warning's template: SI value and unit; `absolute` for an absolute pressure. */
+export interface WarningQuantity {
+  readonly value: number;
+  readonly unit: string;
+  readonly absolute?: true;
 }
 
 /** A safety caution shown with the result (screening-only is always present). */

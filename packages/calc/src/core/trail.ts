@@ -1,4 +1,5 @@
 import { formatNumber } from './format';
+import type { Worded } from './worded';
 import type {
   Check,
   Output,
@@ -91,7 +92,14 @@ export class Trail {
     this.outputs.push({ id, label, value, unit });
   }
 
-  warn(code: string, severity: WarningSeverity, message: string): void {
-    this.warnings.push({ code, severity, message });
+  /** A warning: its SI text, or worded text (`worded\`…\``) with its template and values. */
+  warn(
+    code: string,
+    severity: WarningSeverity,
+    message: string | (Worded & { readonly message: string }),
+  ): void {
+    this.warnings.push(
+      typeof message === 'string' ? { code, severity, message } : { code, severity, ...message },
+    );
   }
 }

@@ -1,6 +1,7 @@
 import { formatNumber, withUnit } from '../core/format';
 import type { CautionCode } from '../core/cautions';
-import { ROOM_TEMPERATURE, celsiusText, type TemperatureContext } from '../core/temperature';
+import { ROOM_TEMPERATURE, fromCelsius, type TemperatureContext } from '../core/temperature';
+import { q, worded, type Worded } from '../core/worded';
 import type {
   MaterialTemperatureData,
   PropertyTable,
@@ -166,6 +167,8 @@ interface Finding {
   readonly code: string;
   readonly severity: 'outside-validity' | 'caution';
   readonly message: string;
+  readonly template?: string;
+  readonly values?: Worded['values'];
   readonly caution?: CautionCode;
 }
 
@@ -174,7 +177,7 @@ function limitFinding(
   kelvin: number,
   limit: TemperatureLimit,
   side: 'above' | 'below',
-  extra = '',
+  extra: (Worded & { readonly message: string }) | '' = '',
 ): Finding {
   const caution: CautionCode | undefined =
     limit.code === 'creep-range'
@@ -185,7 +188,7 @@ function limitFinding(
   return {
     code: limit.code,
     severity: limit.severity,
-    message: `${name} at ${celsiusText(kelvin)}, ${side} ${formatNumber(limit.celsius)} °C: ${limit.reason}${extra}`,
+    ...worded`${name} at ${q('temperature', kelvin, 'K', { as: '°C' })}, ${side} ${q('limit', fromCelsius(limit.celsius), 'K', { as: '°C' })}: ${limit.reason}${extra}`,
     ...(caution ? { caution } : {}),
   };
 }
@@ -232,7 +235,7 @@ export function atTemperature(
         .filter((end) => celsius > end);
       const extra =
         ends.length > 0
-          ? `; above the last row of its tables (${formatNumber(Math.min(...ends))} °C) its properties are held at that row’s values`
+          ? worded`; above the last row of its tables (${q('lastRow', fromCelsius(Math.min(...ends)), 'K', { as: '°C' })}) its properties are held at that row’s values`
           : '';
       findings.push(limitFinding(room.name, kelvin, data.upper, 'above', extra));
     } else if (data.warmCaution && celsius > data.warmCaution.celsius) {
@@ -250,11 +253,16 @@ export function atTemperature(
     findings.push({
       code: 'custom-material-at-temperature',
       severity: 'caution',
-      message: `${room.name} is used at the properties entered for it, at ${celsiusText(kelvin)} as at room temperature: they are not derated. Enter its properties at the design temperature, or give its temperatureTable (rows of E and strength at temperatures above 20 °C)`,
+      ...worded`${room.name} is used at the properties entered for it, at ${q('temperature', kelvin, 'K', { as: '°C' })} as at room temperature: they are not derated. Enter its properties at the design temperature, or give its temperatureTable (rows of E and strength at temperatures above ${q('room', fromCelsius(20), 'K', { as: '°C' })})`,
     });
   }
   for (const f of findings) {
-    context.findings.warnings.push({ code: f.code, severity: f.severity, message: f.message });
+    context.findings.warnings.push({
+      code: f.code,
+      severity: f.severity,
+      message: f.message,
+      ...(f.template !== undefined ? { template: f.template, values: f.values ?? {} } : {}),
+    });
     if (f.caution && !context.findings.cautions.includes(f.caution))
       context.findings.cautions.push(f.caution);
   }

@@ -1,3 +1,4 @@
+import { q, worded } from '../core/worded';
 import { z } from 'zod';
 import type { CautionCode } from '../core/cautions';
 import type { AllowableBasis, DesignBasis } from '../core/design-basis';
@@ -912,7 +913,7 @@ export function allowableStress(
       context.warnings.push({
         code: 'allowable-above-code-basis',
         severity: 'caution',
-        message: `the allowable stress from the ${what} (${formatNumber(value)} Pa) is above the ${basisName} basis for ${material.name} (${code.governing.text} = ${formatNumber(code.value)} Pa): it is less conservative than the code's allowable`,
+        ...worded`the allowable stress from the ${what} (${q('allowable', value, 'Pa')}) is above the ${basisName} basis for ${material.name} (${code.governing.text} = ${q('codeAllowable', code.value, 'Pa')}): it is less conservative than the code's allowable`,
       });
     }
   };
@@ -1090,7 +1091,7 @@ export function bucklingModulus(
   warnings.push({
     code: 'polymer-short-term-modulus',
     severity: 'caution',
-    message: `${material.name} is a polymer and no long-term modulus is known here: the buckling pressures use the short-term E (${formatNumber(material.elasticModulus)} Pa). Under a sustained vacuum a polymer creeps, its effective modulus falls with time and temperature, and the buckling pressure falls in proportion: enter the maker's long-term (creep) modulus as a custom material (longTermModulus)`,
+    ...worded`${material.name} is a polymer and no long-term modulus is known here: the buckling pressures use the short-term E (${q('elasticModulus', material.elasticModulus, 'Pa')}). Under a sustained vacuum a polymer creeps, its effective modulus falls with time and temperature, and the buckling pressure falls in proportion: enter the maker's long-term (creep) modulus as a custom material (longTermModulus)`,
   });
   return trail.step({
     id: 'buckling-modulus',

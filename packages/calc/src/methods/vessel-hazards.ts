@@ -1,5 +1,6 @@
+import { q, worded } from '../core/worded';
 import type { CautionCode } from '../core/cautions';
-import { formatNumber, withUnit } from '../core/format';
+import { withUnit } from '../core/format';
 import type { ResolvedLoadCase, ValidityWarning } from '../core/report';
 import type { Trail } from '../core/trail';
 import type { Material } from '../materials/materials';
@@ -75,7 +76,7 @@ export function vesselEnergySteps(
       warnings.push({
         code: 'implosion-energy',
         severity: 'caution',
-        message: `the atmosphere's work on the evacuated volume is ${formatNumber(work / 1000)} kJ, above the 100 kJ UC Berkeley EHS calls "highly hazardous": an implosion throws fragments; keep people clear or behind a shield`,
+        ...worded`the atmosphere's work on the evacuated volume is ${q('work', work, 'J', { as: 'kJ' })}, above the ${q('limit', HIGHLY_HAZARDOUS_ENERGY, 'J', { as: 'kJ' })} UC Berkeley EHS calls "highly hazardous": an implosion throws fragments; keep people clear or behind a shield`,
       });
     }
   }
@@ -95,7 +96,7 @@ export function vesselEnergySteps(
       warnings.push({
         code: 'stored-energy-high',
         severity: 'caution',
-        message: `filled with gas, the enclosed volume stores ${formatNumber(energy / 1000)} kJ (Brode), above the 100 kJ UC Berkeley EHS calls "highly hazardous": test hydrostatically, keep people clear and use barricades`,
+        ...worded`filled with gas, the enclosed volume stores ${q('energy', energy, 'J', { as: 'kJ' })} (Brode), above the ${q('limit', HIGHLY_HAZARDOUS_ENERGY, 'J', { as: 'kJ' })} UC Berkeley EHS calls "highly hazardous": test hydrostatically, keep people clear and use barricades`,
       });
     }
   }

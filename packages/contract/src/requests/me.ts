@@ -1,9 +1,14 @@
 import { z } from 'zod';
-import { unitSystem } from '../enums';
+import { unitSystem, vacuumUnit } from '../enums';
 import { newPassword, text } from '../fields';
 
 export const updateMeBody = z
-  .object({ name: text(1, 120).optional(), unitSystem: unitSystem.optional() })
+  .object({
+    name: text(1, 120).optional(),
+    unitSystem: unitSystem.optional(),
+    /** null goes back to the unit system's own vacuum unit. */
+    vacuumUnit: vacuumUnit.nullable().optional(),
+  })
   .strict();
 
 export const changePasswordBody = z

@@ -1,11 +1,16 @@
 import { z } from 'zod';
 import { paperSize } from '../enums';
 
-/** `?paper=a4|letter` (A4 by default), as react-pdf names the size. */
+/**
+ * `?paper=a4|letter`, as react-pdf names the size; left out, the project's
+ * unit system chooses (US customary: Letter, SI: A4).
+ */
 export const sheetQuery = z
   .object({
     paper: paperSize
-      .default('a4')
-      .transform((p) => (p === 'a4' ? ('A4' as const) : ('LETTER' as const))),
+      .optional()
+      .transform((p) =>
+        p === undefined ? undefined : p === 'a4' ? ('A4' as const) : ('LETTER' as const),
+      ),
   })
   .strict();

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { projectCreation, role, unitSystem } from '../enums';
+import { projectCreation, role, unitSystem, vacuumUnit } from '../enums';
 
 /** A person as other records name them. */
 export const personRef = z.object({ id: z.string(), name: z.string() }).strict();
@@ -13,6 +13,8 @@ export const user = z
     isAdmin: z.boolean(),
     active: z.boolean(),
     unitSystem,
+    /** The unit vacuum levels are read in; null: the unit system's own (torr in US units, Pa in SI). */
+    vacuumUnit: vacuumUnit.nullable(),
     /** Named by an administrator as someone who may start projects. */
     mayCreateProjects: z.boolean(),
     createdAt: z.string(),

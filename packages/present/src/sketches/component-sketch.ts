@@ -1,6 +1,7 @@
 import type { PressureDirection, Report } from '@hoopline/calc';
 import type { UnitSystem } from '../display-units';
 import { show } from '../quantity';
+import { readerOf, showPressure, type ReaderUnits } from '../reader-units';
 import {
   drawnThickness,
   fitToBox,
@@ -1157,7 +1158,10 @@ function wallArrows(
  * not a shape), its volume and the pressures of the governing case, with
  * arrows on the side of the higher pressure.
  */
-function vessel(report: Report, volume: number, system: UnitSystem): Sketch {
+function vessel(report: Report, volume: number, reader: ReaderUnits): Sketch {
+  const system = reader.system;
+  // Absolute pressures: a vacuum level in the reader's vacuum unit, never psi.
+  const abs = (pa: number) => showPressure(pa, reader, { absolute: true });
   const height = 200;
   const box = { width: W, height };
   const c = governingCase(report);
@@ -1180,7 +1184,7 @@ function vessel(report: Report, volume: number, system: UnitSystem): Sketch {
   ];
   if (c) {
     shapes.push(
-      label(cx, cy + 14, `inside ${show(c.loadCase.internal, 'Pa', system)} (abs)`, box, {
+      label(cx, cy + 14, `inside ${abs(c.loadCase.internal)} (abs)`, box, {
         size: 'note',
       }),
     );
@@ -1201,7 +1205,7 @@ function vessel(report: Report, volume: number, system: UnitSystem): Sketch {
       label(
         cx,
         cy + r + 40,
-        `outside ${show(c.loadCase.external, 'Pa', system)} (abs)${
+        `outside ${abs(c.loadCase.external)} (abs)${
           direction === 'balanced'
             ? ''
             : direction === 'internal-over'
@@ -1219,7 +1223,7 @@ function vessel(report: Report, volume: number, system: UnitSystem): Sketch {
     height,
     title: `Vessel holding ${show(volume, 'm3', system)} of gas${
       c
-        ? `, load case ${c.loadCase.name}: inside ${show(c.loadCase.internal, 'Pa', system)} (abs), outside ${show(c.loadCase.external, 'Pa', system)} (abs)`
+        ? `, load case ${c.loadCase.name}: inside ${abs(c.loadCase.internal)} (abs), outside ${abs(c.loadCase.external)} (abs)`
         : ''
     }.`,
     note: '(shape not to scale)',
@@ -1234,8 +1238,10 @@ function pumpDown(
   conductance: number | undefined,
   start: number,
   target: number,
-  system: UnitSystem,
+  reader: ReaderUnits,
 ): Sketch {
+  const system = reader.system;
+  const abs = (pa: number) => showPressure(pa, reader, { absolute: true });
   const height = 170;
   const box = { width: W, height };
   const chamber = { x: 24, y: 30, w: 120, h: 90 };
@@ -1293,20 +1299,17 @@ function pumpDown(
     label(pump.cx, pump.cy + pump.r + 16, `pump S ${show(speed, 'm3/s', system)}`, box, {
       size: 'note',
     }),
-    label(
-      W / 2,
-      height - 6,
-      `from ${show(start, 'Pa', system)} to ${show(target, 'Pa', system)} (abs)`,
-      box,
-      { size: 'note', role: 'accent' },
-    ),
+    label(W / 2, height - 6, `from ${abs(start)} to ${abs(target)} (abs)`, box, {
+      size: 'note',
+      role: 'accent',
+    }),
   ];
   return {
     width: W,
     height,
     title: `Chamber of ${show(volume, 'm3', system)} pumped${
       conductance !== undefined ? ` through a line of ${show(conductance, 'm3/s', system)}` : ''
-    } by a pump of ${show(speed, 'm3/s', system)}, from ${show(start, 'Pa', system)} to ${show(target, 'Pa', system)} (abs).`,
+    } by a pump of ${show(speed, 'm3/s', system)}, from ${abs(start)} to ${abs(target)} (abs).`,
     note: null,
     shapes,
   };
@@ -1322,7 +1325,10 @@ function stepValue(report: Report, id: string): number | undefined {
  * (or inputs that give nothing to draw by).
  * The web app and the sheet both draw this one sketch.
  */
-export function sketchOf(report: Report, system: UnitSystem): Sketch | null {
+/** The sketch of a report's component, its labels in the reader's units (a unit system, or one with its vacuum unit). */
+export function sketchOf(report: Report, units: ReaderUnits | UnitSystem): Sketch | null {
+  const reader = readerOf(units);
+  const system = reader.system;
   const inputs = report.inputs as Record<string, unknown>;
   switch (report.kind) {
     case 'circular-plate': {
@@ -1457,7 +1463,7 @@ export function sketchOf(report: Report, system: UnitSystem): Sketch | null {
     }
     case 'stored-energy': {
       const v = num(inputs['volume']);
-      return v ? vessel(report, v, system) : null;
+      return v ? vessel(report, v, reader) : null;
     }
     case 'pump-down': {
       const v = num(inputs['volume']);
@@ -1465,7 +1471,7 @@ export function sketchOf(report: Report, system: UnitSystem): Sketch | null {
       const start = num(inputs['startPressure']);
       const target = num(inputs['targetPressure']);
       if (!v || !speed || !start || !target) return null;
-      return pumpDown(v, speed, num(inputs['conductance']), start, target, system);
+      return pumpDown(v, speed, num(inputs['conductance']), start, target, reader);
     }
     default:
       return null;

@@ -1,8 +1,8 @@
 import { Column, Entity, PrimaryColumn } from 'typeorm';
 
-import type { UnitSystem } from '@hoopline/contract';
+import type { UnitSystem, VacuumUnit } from '@hoopline/contract';
 
-export type { UnitSystem };
+export type { UnitSystem, VacuumUnit };
 
 @Entity('users')
 export class UserEntity {
@@ -14,6 +14,8 @@ export class UserEntity {
   @Column('boolean', { name: 'is_admin' }) isAdmin: boolean;
   @Column('boolean') active: boolean;
   @Column('text', { name: 'unit_system' }) unitSystem: UnitSystem;
+  /** The unit vacuum levels are read in; null: the unit system's own (a check constraint holds the list). */
+  @Column('text', { name: 'vacuum_unit', nullable: true }) vacuumUnit: VacuumUnit | null;
   /** Named by an administrator as someone who may start projects (when the setting is 'named'). */
   @Column('boolean', { name: 'may_create_projects', default: false }) mayCreateProjects: boolean;
   /** Bumped to invalidate every access token already issued (password reset, deactivation). */
@@ -25,5 +27,13 @@ export class UserEntity {
 /** What the views read of a user row (no password hash: the signed-in request never loads it). */
 export type UserProfile = Pick<
   UserEntity,
-  'id' | 'email' | 'name' | 'isAdmin' | 'active' | 'unitSystem' | 'mayCreateProjects' | 'createdAt'
+  | 'id'
+  | 'email'
+  | 'name'
+  | 'isAdmin'
+  | 'active'
+  | 'unitSystem'
+  | 'vacuumUnit'
+  | 'mayCreateProjects'
+  | 'createdAt'
 >;

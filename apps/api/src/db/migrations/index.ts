@@ -14,6 +14,7 @@ import { ProjectDesignTemperature1765400000000 } from './1765400000000-project-d
 import { IssuePackages1765500003000 } from './1765500003000-issue-packages';
 import { SignOffPassword1765500005000 } from './1765500005000-sign-off-password';
 import { SignOffRemarks1765500006000 } from './1765500006000-sign-off-remarks';
+import { VacuumUnit1765500007000 } from './1765500007000-vacuum-unit';
 
 /** Every migration class, oldest first. Add new ones at the end. */
 export const migrations = [
@@ -33,4 +34,5 @@ export const migrations = [
   IssuePackages1765500003000,
   SignOffPassword1765500005000,
   SignOffRemarks1765500006000,
+  VacuumUnit1765500007000,
 ];

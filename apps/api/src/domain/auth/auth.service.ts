@@ -165,6 +165,7 @@ export class AuthService {
         isAdmin: invitation.isAdmin,
         active: true,
         unitSystem: 'si' as const,
+        vacuumUnit: null,
         authEpoch: 0,
         createdAt: now,
         updatedAt: now,

@@ -12,10 +12,13 @@ export type SheetContent = Omit<SheetData, 'generatedAt'>;
 
 const SHEETS_SOURCE = path.resolve(import.meta.dirname, '../../sheets');
 const FONTS = path.resolve(import.meta.dirname, '../../../../../fonts');
+// Every word and number of a sheet is printed through @hoopline/present.
+const PRESENT_SOURCE = path.resolve(import.meta.dirname, '../../../../../packages/present/src');
 
 /**
  * What else decides a sheet's bytes: the sheet code (every file of
- * src/sheets but the tests), the fonts' names and sizes, and the versions of
+ * src/sheets but the tests), the presentation code it prints through (every
+ * file of packages/present/src but the tests), the fonts' names and sizes, and the versions of
  * the libraries that lay it out. A change of any makes every key new, so an
  * old layout is never served after the code changed.
  */
@@ -24,6 +27,10 @@ function rendererFingerprint(): string {
   for (const file of readdirSync(SHEETS_SOURCE).sort()) {
     if (/\.test\.tsx?$/.test(file)) continue;
     hash.update(file).update(readFileSync(path.join(SHEETS_SOURCE, file)));
+  }
+  const present = readdirSync(PRESENT_SOURCE, { recursive: true, encoding: 'utf8' });
+  for (const file of present.filter((f) => /\.tsx?$/.test(f) && !/\.test\.tsx?$/.test(f)).sort()) {
+    hash.update(`present/${file}`).update(readFileSync(path.join(PRESENT_SOURCE, file)));
   }
   for (const dir of ['ibm-plex-sans-complete', 'ibm-plex-mono-complete']) {
     for (const file of readdirSync(path.join(FONTS, dir)).sort()) {

@@ -1,4 +1,5 @@
 import { ENGINE_VERSION, type Report } from '@hoopline/calc';
+import { defaultPaper, type UnitSystem } from '@hoopline/contract';
 import { packageCode } from '@hoopline/present';
 import type { DataSource, EntityManager } from 'typeorm';
 import type { ComponentEntity } from '../../db/entities/component.entity';
@@ -20,6 +21,14 @@ import { iso, isoRequired } from '../iso-dates';
 import { packageHashOf, storedHashOf, verifyCode } from '../revisions/revision-content';
 
 export type PaperSize = 'A4' | 'LETTER';
+
+/**
+ * The paper a sheet or package is printed on: the one asked for, else the
+ * project's unit system's own (US customary: Letter; SI: A4).
+ */
+export function paperFor(unitSystem: UnitSystem, asked?: PaperSize): PaperSize {
+  return asked ?? (defaultPaper(unitSystem) === 'letter' ? 'LETTER' : 'A4');
+}
 
 /** How a download was answered: from the cache, or rendered for it. */
 export type SheetSource = 'cache' | 'rendered';
@@ -51,7 +60,8 @@ export class SheetsService {
   async sheet(
     actor: Actor,
     revisionId: string,
-    paperSize: PaperSize,
+    /** Left out: the project's unit system chooses (paperFor). */
+    asked?: PaperSize,
   ): Promise<{
     pdf: Buffer;
     fileName: string;
@@ -61,7 +71,8 @@ export class SheetsService {
   }> {
     const manager = this.dataSource.manager;
     const { revision, component } = await requireRevision(manager, actor, revisionId);
-    const { content, facts } = await this.sheetContent(manager, revision, component, paperSize);
+    const { content, facts } = await this.sheetContent(manager, revision, component, asked);
+    const paperSize = content.paperSize;
     const countersigned = revision.status === 'countersigned';
     const { sheet, source } = await this.cachedOrRendered(revision.id, content);
     await recordAudit(manager, {
@@ -97,10 +108,12 @@ export class SheetsService {
     manager: EntityManager,
     revision: RevisionEntity,
     component: Pick<ComponentEntity, 'id' | 'name' | 'kind' | 'tag'>,
-    paperSize: PaperSize,
+    asked: PaperSize | undefined,
   ): Promise<{ content: SheetContent; facts: { number: string } }> {
     const facts = await revisionRepository.sheetFacts(manager, revision);
     if (!facts) throw new Error('revision without its project or author');
+    // Resolved before the cache key is made: the key holds the paper printed on.
+    const paperSize = paperFor(facts.unit_system, asked);
     const countersign = await revisionRepository.latestCountersign(manager, revision.id);
     const countersigned = revision.status === 'countersigned';
     const code = verifyCode(revision.contentHash);
@@ -161,7 +174,8 @@ export class SheetsService {
   async issuePackage(
     actor: Actor,
     projectId: string,
-    paperSize: PaperSize,
+    /** Left out: the project's unit system chooses (paperFor). */
+    asked?: PaperSize,
   ): Promise<{
     pdf: Buffer;
     fileName: string;
@@ -171,6 +185,7 @@ export class SheetsService {
   }> {
     const manager = this.dataSource.manager;
     const standing = await requireProjectStanding(manager, actor, projectId);
+    const paperSize = paperFor(standing.project.unitSystem, asked);
     const components = (await componentRepository.issuedOfProject(manager, projectId)).filter((c) =>
       canSeeComponent(standing, { hasIssuedRevision: c.issued_revision_id !== null }),
     );

@@ -14,6 +14,7 @@ export function userView(u: UserProfile): User {
     isAdmin: u.isAdmin,
     active: u.active,
     unitSystem: u.unitSystem,
+    vacuumUnit: u.vacuumUnit,
     mayCreateProjects: u.mayCreateProjects,
     createdAt: new Date(u.createdAt).toISOString(),
   };

@@ -3,7 +3,7 @@ import { randomUUID } from 'node:crypto';
 import type { DataSource } from 'typeorm';
 import type { AuthConfig } from '../../config/config';
 import { hashToken, randomToken } from '../../credentials/tokens';
-import type { UnitSystem, UserEntity } from '../../db/entities/user.entity';
+import type { UnitSystem, UserEntity, VacuumUnit } from '../../db/entities/user.entity';
 import { conflict, notFound } from '../../http/errors';
 import { pageOf, type Page, type PageRequest } from '../../http/pagination';
 import { canLookUpPerson, canManagePeople, type Actor } from '../../policy/policy';
@@ -37,13 +37,18 @@ export class UsersService {
 
   async updateMe(
     actor: Actor,
-    patch: { name?: string | undefined; unitSystem?: UnitSystem | undefined },
+    patch: {
+      name?: string | undefined;
+      unitSystem?: UnitSystem | undefined;
+      vacuumUnit?: VacuumUnit | null | undefined;
+    },
   ): Promise<Me> {
     return this.dataSource.transaction(async (manager) => {
       const before = await userRepository.get(manager, actor.id);
       const changes: Partial<UserEntity> = { updatedAt: new Date() };
       if (patch.name !== undefined) changes.name = patch.name;
       if (patch.unitSystem !== undefined) changes.unitSystem = patch.unitSystem;
+      if (patch.vacuumUnit !== undefined) changes.vacuumUnit = patch.vacuumUnit;
       await userRepository.update(manager, actor.id, changes);
       const after = await userRepository.get(manager, actor.id);
       await recordAudit(manager, {
@@ -51,8 +56,12 @@ export class UsersService {
         action: 'user.updated',
         entityType: 'user',
         entityId: actor.id,
-        before: { name: before.name, unitSystem: before.unitSystem },
-        after: { name: after.name, unitSystem: after.unitSystem },
+        before: {
+          name: before.name,
+          unitSystem: before.unitSystem,
+          vacuumUnit: before.vacuumUnit,
+        },
+        after: { name: after.name, unitSystem: after.unitSystem, vacuumUnit: after.vacuumUnit },
       });
       return meView(manager, after);
     });

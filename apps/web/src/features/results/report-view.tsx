@@ -16,6 +16,7 @@ import { ComponentSketch, lobeCount } from './sketches';
 import { currentOf, sweepForPlot } from './sweep';
 import { SweepPlot } from './sweep-plot';
 import { TrailTable } from './trail-table';
+import { useReaderUnits } from '../../lib/unit-system';
 
 const SEVERITY_CLASS: Record<PresentedWarning['severityCode'], string> = {
   'outside-validity': 'border-warn bg-warn-soft',
@@ -29,7 +30,9 @@ const SEVERITY_CLASS: Record<PresentedWarning['severityCode'], string> = {
  * cannot disagree.
  */
 export function usePresented(report: Report, system: UnitSystem): PresentedReport {
-  return useMemo(() => presentReport(report, system), [report, system]);
+  // The system as the caller shows it; vacuum levels in the reader's vacuum unit.
+  const { vacuumUnit } = useReaderUnits();
+  return useMemo(() => presentReport(report, { system, vacuumUnit }), [report, system, vacuumUnit]);
 }
 
 export function ReportSummary({
@@ -77,8 +80,9 @@ export function ReportSummary({
   );
 }
 
-export function WarningsList({ report }: { report: Report }) {
-  const shown = usePresented(report, 'si');
+/** The validity warnings, their numbers in the reader's units (@hoopline/present wordedText). */
+export function WarningsList({ report, system }: { report: Report; system: UnitSystem }) {
+  const shown = usePresented(report, system);
   if (shown.warnings.length === 0) return null;
   return (
     <section aria-labelledby="warnings-title" className="flex flex-col gap-1.5">
@@ -302,7 +306,7 @@ export function ReportView({
     <div className="flex flex-col gap-4">
       <ReportSummary report={report} source={source} system={system} />
       <CautionsList report={report} />
-      <WarningsList report={report} />
+      <WarningsList report={report} system={system} />
       <div className="grid grid-cols-[minmax(0,1fr)] gap-4 xl:grid-cols-[minmax(0,1fr)_minmax(0,480px)]">
         <ChecksByCase report={report} system={system} />
         <ReportPictures

@@ -135,7 +135,7 @@ export function RevisionBody({ revision, aside }: { revision: Revision; aside?: 
             source={`Revision ${revision.number}, computed by the server`}
           />
           <CautionsList report={revision.report} />
-          <WarningsList report={revision.report} />
+          <WarningsList report={revision.report} system={system} />
           <div className="grid gap-4 2xl:grid-cols-[minmax(0,1fr)_minmax(0,440px)]">
             <ChecksByCase report={revision.report} system={system} />
             <ReportPictures report={revision.report} system={system} rawInput={revision.inputs} />

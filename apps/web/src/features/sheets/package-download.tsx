@@ -2,7 +2,7 @@ import { useId, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { downloadComponentsCsv, downloadIssuePackage } from '../../api/sheets';
 import { useMe } from '../../api/session';
-import type { PaperSize } from '@hoopline/contract';
+import { defaultPaper, type PaperSize, type UnitSystem } from '@hoopline/contract';
 import { Button } from '../../components/button';
 import { messageFor } from '../../components/server-errors';
 
@@ -16,13 +16,16 @@ const PAPER_LABEL: Record<PaperSize, string> = { a4: 'A4', letter: 'US Letter' }
 export function ProjectDownloads({
   projectId,
   hasIssued,
+  unitSystem,
 }: {
   projectId: string;
   hasIssued: boolean;
+  /** The project's unit system: its paper is the default (US Letter, SI A4). */
+  unitSystem?: UnitSystem;
 }) {
   const me = useMe();
   const id = useId();
-  const [paper, setPaper] = useState<PaperSize>(me.user.unitSystem === 'us' ? 'letter' : 'a4');
+  const [paper, setPaper] = useState<PaperSize>(defaultPaper(unitSystem ?? me.user.unitSystem));
   const [busy, setBusy] = useState<'csv' | 'package' | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [code, setCode] = useState<string | null>(null);

@@ -86,6 +86,19 @@ describe('SheetDownload', () => {
     expect(await screen.findByLabelText('Paper size')).toHaveValue('letter');
   });
 
+  it('starts from the project’s paper where it is known: Letter for a US project, A4 for SI, whoever reads', async () => {
+    fakeApi({});
+    const { unmount } = renderApp(
+      <SheetDownload revision={{ id: 'r1', number: 2 }} kind="review" unitSystem="us" />,
+    );
+    expect(await screen.findByLabelText('Paper size')).toHaveValue('letter');
+    unmount();
+    renderApp(<SheetDownload revision={{ id: 'r1', number: 2 }} kind="review" unitSystem="si" />, {
+      me: { ...ME, user: { ...ME.user, unitSystem: 'us' } },
+    });
+    expect(await screen.findByLabelText('Paper size')).toHaveValue('a4');
+  });
+
   it('names a draft preview as such and keeps a UTF-8 file name', async () => {
     fakeApi({ 'GET /revisions/r1/sheet.pdf': sheetReply('draft', 'HL-1_Tür_rev2_DRAFT.pdf') });
     renderApp(<SheetDownload revision={{ id: 'r1', number: 2 }} kind="draft" />);

@@ -1,7 +1,13 @@
 import { useId, useState } from 'react';
 import { downloadSheet } from '../../api/sheets';
 import { useMe } from '../../api/session';
-import type { PaperSize, RevisionStatus, Role } from '@hoopline/contract';
+import {
+  defaultPaper,
+  type PaperSize,
+  type RevisionStatus,
+  type Role,
+  type UnitSystem,
+} from '@hoopline/contract';
 import { Button } from '../../components/button';
 import { messageFor } from '../../components/server-errors';
 
@@ -33,16 +39,19 @@ export function SheetDownload({
   kind,
   context,
   size = 'md',
+  unitSystem,
 }: {
   revision: { readonly id: string; readonly number: number };
   kind: 'review' | 'draft';
   /** What the control is for, for screen readers in a table row ("Cabinet door plate revision 1"). */
   context?: string;
   size?: 'sm' | 'md';
+  /** The project's unit system: its paper is the default (US Letter, SI A4); else the person's. */
+  unitSystem?: UnitSystem;
 }) {
   const me = useMe();
   const id = useId();
-  const [paper, setPaper] = useState<PaperSize>(me.user.unitSystem === 'us' ? 'letter' : 'a4');
+  const [paper, setPaper] = useState<PaperSize>(defaultPaper(unitSystem ?? me.user.unitSystem));
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
   const label = kind === 'review' ? 'Download sheet' : 'Preview draft sheet';

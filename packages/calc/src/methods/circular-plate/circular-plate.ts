@@ -1,3 +1,4 @@
+import { q as wq, worded } from '../../core/worded';
 import { z } from 'zod';
 import { given } from '../../core/given';
 import { length } from '../../core/fields';
@@ -200,7 +201,7 @@ function caseTrail(input: Parsed, c: Common, loadCase: ResolvedLoadCase): Trail 
     trail.warn(
       'large-deflection',
       'outside-validity',
-      `the deflection (${formatNumber(deflection * 1000)} mm) exceeds half the thickness (${formatNumber((t / 2) * 1000)} mm): small-deflection theory no longer holds; the linear results overstate stress and deflection`,
+      worded`the deflection (${wq('deflection', deflection, 'm', { as: 'mm' })}) exceeds half the thickness (${wq('halfThickness', t / 2, 'm', { as: 'mm' })}): small-deflection theory no longer holds; the linear results overstate stress and deflection`,
     );
   }
   return trail;

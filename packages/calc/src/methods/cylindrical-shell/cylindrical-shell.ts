@@ -1,3 +1,4 @@
+import { q, worded } from '../../core/worded';
 import { z } from 'zod';
 import { given } from '../../core/given';
 import type { CautionCode } from '../../core/cautions';
@@ -435,7 +436,7 @@ function internalCaseTrail(
     trail.warn(
       'ug27-no-solution',
       'outside-validity',
-      `the pressure (${formatNumber(p)} Pa) is at least S·E_j/0.6 = ${formatNumber(SE / 0.6)} Pa: the UG-27 thickness formula has no solution; only the Lamé check is made`,
+      worded`the pressure (${q('p', p, 'Pa')}) is at least S·E_j/0.6 = ${q('limit', SE / 0.6, 'Pa')}: the UG-27 thickness formula has no solution; only the Lamé check is made`,
     );
   }
   trail.check({
@@ -476,7 +477,7 @@ function internalCaseTrail(
     trail.warn(
       'ug27-pressure-limit',
       'outside-validity',
-      `p = ${formatNumber(p)} Pa exceeds 0.385·S·E_j = ${formatNumber(0.385 * SE)} Pa: the UG-27 circumferential formula does not apply (from memory); the thick-wall rules of VIII-1 Appendix 1-2 do`,
+      worded`p = ${q('p', p, 'Pa')} exceeds 0.385·S·E_j = ${q('limit', 0.385 * SE, 'Pa')}: the UG-27 circumferential formula does not apply (from memory); the thick-wall rules of VIII-1 Appendix 1-2 do`,
     );
   }
   return trail;
@@ -713,7 +714,7 @@ function externalSummary(
     warnings.push({
       code: 'windenburg-trilling-range',
       severity: 'info',
-      message: `the Windenburg–Trilling cross-check holds from about L/D_m = 0.5 up to the critical length (${formatNumber(Lc)} m); here L/D_m = ${formatNumber(L / D)}. The check uses von Mises, which holds for any length`,
+      ...worded`the Windenburg–Trilling cross-check holds from about L/D_m = 0.5 up to the critical length (${q('Lc', Lc, 'm')}); here L/D_m = ${formatNumber(L / D)}. The check uses von Mises, which holds for any length`,
     });
   }
   common.step({
@@ -827,7 +828,7 @@ function externalSummary(
     warnings.push({
       code: 'inelastic-buckling',
       severity: 'info',
-      message: `the elastic buckling pressure p_e (${formatNumber(elastic)} Pa) exceeds the yield pressure p_y (${formatNumber(plastic)} Pa): the shell would buckle above its proportional limit, so the elastic value is not reached; the interaction with p_y accounts for this`,
+      ...worded`the elastic buckling pressure p_e (${q('elastic', elastic, 'Pa')}) exceeds the yield pressure p_y (${q('plastic', plastic, 'Pa')}): the shell would buckle above its proportional limit, so the elastic value is not reached; the interaction with p_y accounts for this`,
     });
   }
   return {
@@ -906,7 +907,7 @@ function ringSpacingSteps(
     warnings.push({
       code: 'ring-spacing-impossible',
       severity: 'caution',
-      message: `no ring spacing lets a ${formatNumber(target * 1000)} mm wall carry ${formatNumber(pressure)} Pa: even with rings close together the allowable tends to p_y/n_b = ${formatNumber(found.allowable)} Pa`,
+      ...worded`no ring spacing lets a ${q('target', target, 'm', { as: 'mm' })} wall carry ${q('pressure', pressure, 'Pa')}: even with rings close together the allowable tends to p_y/n_b = ${q('allowable', found.allowable, 'Pa')}`,
     });
   }
   return { thickness: g.thickness, spacing: null };
@@ -1111,7 +1112,7 @@ export const cylindricalShell = defineMethod({
       warnings.push({
         code: 'ug27-thickness-limit',
         severity: 'outside-validity',
-        message: `t = ${formatNumber(t)} m exceeds R/2 = ${formatNumber(R / 2)} m: the UG-27 formulas apply up to t = R/2 (from memory); the thick-wall rules of VIII-1 Appendix 1-2 do beyond. The Lamé check still holds`,
+        ...worded`t = ${q('t', t, 'm')} exceeds R/2 = ${q('halfRadius', R / 2, 'm')}: the UG-27 formulas apply up to t = R/2 (from memory); the thick-wall rules of VIII-1 Appendix 1-2 do beyond. The Lamé check still holds`,
       });
     }
     if (external && material.strengthBasis !== 'yield') {

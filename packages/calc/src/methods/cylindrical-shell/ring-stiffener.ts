@@ -1,3 +1,4 @@
+import { q, worded } from '../../core/worded';
 import { formatNumber, withUnit } from '../../core/format';
 import type { ValidityWarning } from '../../core/report';
 import type { Trail } from '../../core/trail';
@@ -258,7 +259,7 @@ export function ringCaseSteps(trail: Trail, r: RingCommon, p: number): number {
     trail.warn(
       'ring-chart-knee',
       'caution',
-      `B = ${formatNumber(B)} Pa is above a quarter of the yield strength: there the material charts bend away from the elastic line (from memory), so the chart’s A, and with it the required moment of inertia, is larger than 2·B/E gives; read A from the material’s chart`,
+      worded`B = ${q('B', B, 'Pa')} is above a quarter of the yield strength: there the material charts bend away from the elastic line (from memory), so the chart’s A, and with it the required moment of inertia, is larger than 2·B/E gives; read A from the material’s chart`,
     );
   }
   return limit;

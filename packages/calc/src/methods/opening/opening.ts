@@ -1,3 +1,4 @@
+import { prefixWorded, q, worded } from '../../core/worded';
 import { z } from 'zod';
 import { given } from '../../core/given';
 import type { CautionCode } from '../../core/cautions';
@@ -799,21 +800,21 @@ function internalCase(
     trail.warn(
       'shell-formula-range',
       'outside-validity',
-      `P = ${formatNumber(p)} Pa exceeds ${rule.pressureLimit}·S_v = ${formatNumber(rule.pressureLimit * s.shellStress)} Pa, the limit of the shell's thin-wall formula (UG-27, from memory): the thick-wall rules of Appendix 1-2 apply`,
+      worded`P = ${q('p', p, 'Pa')} exceeds ${rule.pressureLimit}·S_v = ${q('rule', rule.pressureLimit * s.shellStress, 'Pa')}, the limit of the shell's thin-wall formula (UG-27, from memory): the thick-wall rules of Appendix 1-2 apply`,
     );
   }
   if (p > 0.385 * s.nozzleStress) {
     trail.warn(
       'nozzle-formula-range',
       'outside-validity',
-      `P = ${formatNumber(p)} Pa exceeds 0.385·S_n = ${formatNumber(0.385 * s.nozzleStress)} Pa, the limit of UG-27(c)(1) for the nozzle (from memory)`,
+      worded`P = ${q('p', p, 'Pa')} exceeds 0.385·S_n = ${q('s', 0.385 * s.nozzleStress, 'Pa')}, the limit of UG-27(c)(1) for the nozzle (from memory)`,
     );
   }
   if (tr === null || trn === null) {
     trail.warn(
       'no-required-thickness',
       'outside-validity',
-      `the thin-wall formula gives no ${tr === null ? 'shell' : 'nozzle'} thickness at P = ${formatNumber(p)} Pa: the opening cannot be screened by area replacement at this pressure`,
+      worded`the thin-wall formula gives no ${tr === null ? 'shell' : 'nozzle'} thickness at P = ${q('p', p, 'Pa')}: the opening cannot be screened by area replacement at this pressure`,
     );
     const shellBlocked = tr === null;
     trail.check({
@@ -867,7 +868,7 @@ function exemptionNote(trail: Trail, s: Shared, tr: number): void {
     trail.warn(
       'small-opening-exempt',
       'info',
-      `UG-36(c)(3)(a) (from memory): a welded connection whose finished opening (d = ${mm(s.geometry.d)}) is at most ${mm(limit)} in a shell or head of required thickness ${required <= UG36_EXEMPT.thicknessBreak ? 'up to' : 'over'} 9.525 mm (3/8 in; here ${mm(required)}) needs no reinforcement beyond the construction's own, if the pressure does not fluctuate rapidly and the opening keeps the spacing of UG-36(c)(3)(c) and (d) from its neighbours. The areas are screened anyway`,
+      worded`UG-36(c)(3)(a) (from memory): a welded connection whose finished opening (d = ${q('d', s.geometry.d, 'm', { as: 'mm' })}) is at most ${q('limit', limit, 'm', { as: 'mm' })} in a shell or head of required thickness ${required <= UG36_EXEMPT.thicknessBreak ? 'up to' : 'over'} ${q('thicknessBreak', UG36_EXEMPT.thicknessBreak, 'm', { as: 'mm' })} (3/8 in; here ${q('required', required, 'm', { as: 'mm' })}) needs no reinforcement beyond the construction's own, if the pressure does not fluctuate rapidly and the opening keeps the spacing of UG-36(c)(3)(c) and (d) from its neighbours. The areas are screened anyway`,
     );
   }
 }
@@ -926,17 +927,23 @@ function externalCase(
     const result = runHost(host, s.context, loadCase, solved.nominal, true);
     const all = [...result.warnings, ...result.cases.flatMap((c) => c.warnings)];
     for (const w of all) {
-      s.hostWarnings.push({
-        code: `${who}-${w.code}`,
-        severity: w.severity,
-        message: `${who === 'shell' ? 'the shell' : 'the nozzle'} screened as a ${host.method.kind} for t_${who === 'shell' ? 'r' : 'rn'}: ${w.message}`,
-      });
+      s.hostWarnings.push(
+        prefixWorded(
+          `${who === 'shell' ? 'the shell' : 'the nozzle'} screened as a ${host.method.kind} for t_${who === 'shell' ? 'r' : 'rn'}: `,
+          {
+            code: `${who}-${w.code}`,
+            severity: w.severity,
+            message: w.message,
+            ...(w.template !== undefined ? { template: w.template, values: w.values ?? {} } : {}),
+          },
+        ),
+      );
     }
     if (solved.kind === 'none') {
       trail.warn(
         `${who}-external-no-thickness`,
         'outside-validity',
-        `no ${who} wall the ${host.method.kind} screening accepts holds P = ${formatNumber(p)} Pa: the opening cannot be screened by area replacement for this case`,
+        worded`no ${who} wall the ${host.method.kind} screening accepts holds P = ${q('p', p, 'Pa')}: the opening cannot be screened by area replacement for this case`,
       );
     }
   }
@@ -1089,7 +1096,7 @@ function shellRule(
       warnings.push({
         code: 'outside-central-zone',
         severity: 'info',
-        message: `the opening's reinforcement reaches past the central 80 % of the head (${mm(offset + limitsParallel)} from the centre against ${mm(zone)}): t_r is the head's own UG-32(d) thickness with E = 1`,
+        ...worded`the opening's reinforcement reaches past the central 80 % of the head (${q('offset', offset + limitsParallel, 'm', { as: 'mm' })} from the centre against ${q('zone', zone, 'm', { as: 'mm' })}): t_r is the head's own UG-32(d) thickness with E = 1`,
       });
       return {
         formula: { kind: 'ellipsoidal', diameter: D },
@@ -1169,7 +1176,7 @@ function shellRule(
       warnings.push({
         code: 'outside-central-zone',
         severity: 'info',
-        message: `the opening's reinforcement reaches into the knuckle (${mm(offset + limitsParallel)} from the centre against ${mm(junction)}): t_r is the head's own thickness with the knuckle factor and E = 1`,
+        ...worded`the opening's reinforcement reaches into the knuckle (${q('offset', offset + limitsParallel, 'm', { as: 'mm' })} from the centre against ${q('junction', junction, 'm', { as: 'mm' })}): t_r is the head's own thickness with the knuckle factor and E = 1`,
       });
       const standard =
         Math.abs(knuckle / crown - STANDARD_KNUCKLE_RATIO) <= STANDARD_KNUCKLE_RATIO * 1e-6;
@@ -1519,14 +1526,14 @@ export const opening = defineMethod({
         warnings.push({
           code: 'pad-past-limits',
           severity: 'info',
-          message: `the pad (${mm(pad.outsideDiameter)}) reaches past the parallel limits (2·X = ${mm(2 * limits.parallel)}): only the part within them counts`,
+          ...worded`the pad (${q('outsideDiameter', pad.outsideDiameter, 'm', { as: 'mm' })}) reaches past the parallel limits (2·X = ${q('limits', 2 * limits.parallel, 'm', { as: 'mm' })}): only the part within them counts`,
         });
       }
       if (pad.thickness > limits.outward) {
         warnings.push({
           code: 'pad-past-outward-limit',
           severity: 'info',
-          message: `the pad (${mm(pad.thickness)} thick) is thicker than the outward limit (${mm(limits.outward)}): only ${mm(limits.outward)} of it counts`,
+          ...worded`the pad (${q('thickness', pad.thickness, 'm', { as: 'mm' })} thick) is thicker than the outward limit (${q('outward', limits.outward, 'm', { as: 'mm' })}): only ${q('outward2', limits.outward, 'm', { as: 'mm' })} of it counts`,
         });
       }
     }
@@ -1553,7 +1560,7 @@ export const opening = defineMethod({
       warnings.push({
         code: 'large-opening',
         severity: 'outside-validity',
-        message: `the opening (d = ${mm(d)}) is larger than UG-36(b)(1) allows for the area-replacement rules in a ${mm(Dv)} shell (${mm(sizeLimit)}; from memory): large openings need the supplementary rules of Appendix 1-7 (or a stress analysis)`,
+        ...worded`the opening (d = ${q('d', d, 'm', { as: 'mm' })}) is larger than UG-36(b)(1) allows for the area-replacement rules in a ${q('Dv', Dv, 'm', { as: 'mm' })} shell (${q('sizeLimit', sizeLimit, 'm', { as: 'mm' })}; from memory): large openings need the supplementary rules of Appendix 1-7 (or a stress analysis)`,
       });
     }
     for (const [part, material] of [
@@ -1573,7 +1580,7 @@ export const opening = defineMethod({
       warnings.push({
         code: 'hillside-nozzle',
         severity: 'caution',
-        message: `the nozzle stands ${mm(input.offset ?? 0)} off the head's centre: it is screened as normal to the head's surface there; a nozzle parallel to the head's axis meets the surface obliquely (a hillside nozzle), its opening is longer in that plane, and d must then be the chord (UG-37, from memory)`,
+        ...worded`the nozzle stands ${q('input', input.offset ?? 0, 'm', { as: 'mm' })} off the head's centre: it is screened as normal to the head's surface there; a nozzle parallel to the head's axis meets the surface obliquely (a hillside nozzle), its opening is longer in that plane, and d must then be the chord (UG-37, from memory)`,
       });
     }
 
@@ -1709,7 +1716,7 @@ export const opening = defineMethod({
         warnings.push({
           code: 'pad-needed',
           severity: 'caution',
-          message: `the opening needs reinforcement beyond its walls: a pad of ${mm(needed.outsideDiameter)} outside diameter and ${mm(needed.thickness)} thickness closes every case (or thicken the shell or the nozzle); screen again with the pad given`,
+          ...worded`the opening needs reinforcement beyond its walls: a pad of ${q('outsideDiameter', needed.outsideDiameter, 'm', { as: 'mm' })} outside diameter and ${q('thickness', needed.thickness, 'm', { as: 'mm' })} thickness closes every case (or thicken the shell or the nozzle); screen again with the pad given`,
         });
       }
     }

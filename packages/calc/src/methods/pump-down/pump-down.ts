@@ -9,7 +9,8 @@ import {
 } from '../../core/fields';
 import { given } from '../../core/given';
 import { formatNumber, withUnit } from '../../core/format';
-import { resolveAmbient } from '../../core/load-cases';
+import { lineOf, resolveAmbient } from '../../core/load-cases';
+import { q as wq, worded } from '../../core/worded';
 import { componentShapeWithoutLoadCases, defineMethod } from '../../core/method';
 import type { ResolvedLoadCase } from '../../core/report';
 import { Trail } from '../../core/trail';
@@ -374,7 +375,7 @@ function caseTrail(input: Parsed, ambient: number, speed: number, tau: number): 
       trail.warn(
         'liquid-water',
         'caution',
-        `liquid water at ${formatNumber(tw - 273.15)} °C holds the chamber at about ${formatNumber(pSat)} Pa until it has evaporated or frozen; evaporation cools it, and oil-sealed pumps lose performance pumping water vapour (common practice, no source)`,
+        worded`liquid water at ${wq('temperature', tw, 'K', { as: '°C' })} holds the chamber at about ${wq('vapourPressure', pSat, 'Pa', { absolute: true })} until it has evaporated or frozen; evaporation cools it, and oil-sealed pumps lose performance pumping water vapour (common practice, no source)`,
       );
     }
   }
@@ -383,13 +384,13 @@ function caseTrail(input: Parsed, ambient: number, speed: number, tau: number): 
     trail.warn(
       'desorption-range',
       'outside-validity',
-      `the target ${formatNumber(target)} Pa is below ${DESORPTION_LIMIT} Pa: in an unbaked chamber water desorbing from the walls sets the pressure there, falling roughly as 1/t, and the exponential pump-down underestimates the time`,
+      worded`the target ${wq('target', target, 'Pa', { absolute: true })} is below ${wq('limit', DESORPTION_LIMIT, 'Pa', { absolute: true })}: in an unbaked chamber water desorbing from the walls sets the pressure there, falling roughly as 1/t, and the exponential pump-down underestimates the time`,
     );
   } else if (target < DESORPTION_WARNING) {
     trail.warn(
       'desorption-range',
       'caution',
-      `the target ${formatNumber(target)} Pa is below ${DESORPTION_WARNING} Pa, where water desorption from the walls of an unbaked chamber starts to lengthen the pump-down`,
+      worded`the target ${wq('target', target, 'Pa', { absolute: true })} is below ${wq('limit', DESORPTION_WARNING, 'Pa', { absolute: true })}, where water desorption from the walls of an unbaked chamber starts to lengthen the pump-down`,
     );
   }
   if (input.basePressure !== undefined && target < 10 * input.basePressure) {
@@ -417,6 +418,13 @@ export const pumpDown = defineMethod({
     'Time for a pump to bring a chamber from its start pressure to a target in the rough (viscous) range, with the line conductance, a constant gas load and the pump’s base pressure setting the ultimate pressure; optionally the vapour pressure of liquid water in the chamber.',
   schema: pumpDownSchema,
   vocabulary: pumpDownVocabulary,
+  absolutePressures: [
+    'start-pressure',
+    'target-pressure',
+    'ultimate-pressure',
+    'water-vapour-pressure',
+    'water-vapour-pressure-buck',
+  ],
   singleCase(input, ambient): ResolvedLoadCase {
     const start = startPressureOf(input, ambient.pressure);
     const differential = input.targetPressure - ambient.pressure;
@@ -428,7 +436,9 @@ export const pumpDown = defineMethod({
       direction:
         differential < 0 ? 'external-over' : differential > 0 ? 'internal-over' : 'balanced',
       factor: 1,
-      description: `pumped from ${formatNumber(start)} Pa(a) to ${formatNumber(input.targetPressure)} Pa(a), outside ambient ${formatNumber(ambient.pressure)} Pa(a)`,
+      ...lineOf(
+        worded`pumped from ${wq('start', start, 'Pa', { absolute: true })}(a) to ${wq('target', input.targetPressure, 'Pa', { absolute: true })}(a), outside ambient ${wq('outside', ambient.pressure, 'Pa', { absolute: true })}(a)`,
+      ),
     };
   },
   compute(input, context) {

@@ -1,3 +1,4 @@
+import { q as wq, worded } from '../../core/worded';
 import { formatNumber, withUnit } from '../../core/format';
 import type { ValidityWarning } from '../../core/report';
 import type { Trail } from '../../core/trail';
@@ -243,7 +244,7 @@ export function panelCaseSteps(
     trail.warn(
       'large-deflection',
       'outside-validity',
-      `the deflection (${formatNumber(deflection * 1000)} mm) exceeds half the thickness (${formatNumber((t / 2) * 1000)} mm): small-deflection theory no longer holds; membrane action stiffens the plate and the linear results overstate stress and deflection${
+      worded`the deflection (${wq('deflection', deflection, 'm', { as: 'mm' })}) exceeds half the thickness (${wq('halfThickness', t / 2, 'm', { as: 'mm' })}): small-deflection theory no longer holds; membrane action stiffens the plate and the linear results overstate stress and deflection${
         clamped ? ' (the clamped edge stress less so than the centre stress)' : ''
       }`,
     );

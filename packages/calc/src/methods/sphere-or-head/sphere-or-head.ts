@@ -1,3 +1,4 @@
+import { q, worded } from '../../core/worded';
 import { z } from 'zod';
 import { given } from '../../core/given';
 import type { CautionCode } from '../../core/cautions';
@@ -478,7 +479,7 @@ function thicknessCheck(
     trail.warn(
       'internal-formula-range',
       'outside-validity',
-      `P = ${formatNumber(pressure)} Pa is at least 10·S·E_j: the code-form thickness formula does not apply (use a thick-shell analysis)`,
+      worded`P = ${q('pressure', pressure, 'Pa')} is at least 10·S·E_j: the code-form thickness formula does not apply (use a thick-shell analysis)`,
     );
     trail.check({
       id: options.id,
@@ -555,7 +556,7 @@ function internalCase(c: Common, loadCase: ResolvedLoadCase): Trail {
       trail.warn(
         'sphere-formula-range',
         'outside-validity',
-        `P = ${formatNumber(p)} Pa exceeds 0.665·S·E_j = ${formatNumber(0.665 * c.stressTimesEfficiency)} Pa, the limit of the thin sphere formula (UG-27(d), from memory): use the thick-shell formulas (Appendix 1-2)`,
+        worded`P = ${q('p', p, 'Pa')} exceeds 0.665·S·E_j = ${q('c', 0.665 * c.stressTimesEfficiency, 'Pa')}, the limit of the thin sphere formula (UG-27(d), from memory): use the thick-shell formulas (Appendix 1-2)`,
       );
     }
   }
@@ -890,14 +891,14 @@ function externalCapacity(
     warnings.push({
       code: 'ug28-plastic-range',
       severity: 'caution',
-      message: `A·E/2 = ${formatNumber(elasticB)} Pa exceeds half the ${yieldBasis ? 'yield' : 'material'} strength: the head is in the plastic range, B is capped at ${formatNumber(capB)} Pa; the code's material chart gives a lower B near the knee of the stress–strain curve, so read B from it for a final value`,
+      ...worded`A·E/2 = ${q('elasticB', elasticB, 'Pa')} exceeds half the ${yieldBasis ? 'yield' : 'material'} strength: the head is in the plastic range, B is capped at ${q('capB', capB, 'Pa')}; the code's material chart gives a lower B near the knee of the stress–strain curve, so read B from it for a final value`,
     });
   }
   if (ug28Allowable < screening) {
     warnings.push({
       code: 'ug28-below-screening',
       severity: 'caution',
-      message: `the UG-28(d) cross-check ${formatNumber(ug28Allowable)} Pa is lower than the screening value ${formatNumber(screening)} Pa${
+      ...worded`the UG-28(d) cross-check ${q('ug28Allowable', ug28Allowable, 'Pa')} is lower than the screening value ${q('screening', screening, 'Pa')}${
         capped
           ? ' (plastic range)'
           : ': the knock-down and design factor chosen are less conservative than the code'
@@ -986,7 +987,7 @@ export const sphereOrHead = defineMethod({
           warnings.push({
             code: 'thick-sphere',
             severity: 'outside-validity',
-            message: `t = ${mm(t)} exceeds 0.356·R = ${mm(0.356 * radius)}: the thin sphere formula and its MAWP do not hold (UG-27(d) limit, from memory); use the thick-shell formulas (Appendix 1-2)`,
+            ...worded`t = ${q('t', t, 'm', { as: 'mm' })} exceeds 0.356·R = ${q('radius', 0.356 * radius, 'm', { as: 'mm' })}: the thin sphere formula and its MAWP do not hold (UG-27(d) limit, from memory); use the thick-shell formulas (Appendix 1-2)`,
           });
         }
         break;
@@ -1068,21 +1069,21 @@ export const sphereOrHead = defineMethod({
           warnings.push({
             code: 'crown-radius-large',
             severity: 'outside-validity',
-            message: `crown radius ${mm(crownRadius)} exceeds the outside diameter ${mm(dOut)}: outside the torispherical proportions of UG-32(j) (from memory)`,
+            ...worded`crown radius ${q('crownRadius', crownRadius, 'm', { as: 'mm' })} exceeds the outside diameter ${q('dOut', dOut, 'm', { as: 'mm' })}: outside the torispherical proportions of UG-32(j) (from memory)`,
           });
         }
         if (knuckleRadius < STANDARD_KNUCKLE_RATIO * dOut * (1 - 1e-9)) {
           warnings.push({
             code: 'knuckle-radius-small',
             severity: 'outside-validity',
-            message: `knuckle radius ${mm(knuckleRadius)} is below 6 % of the outside diameter (${mm(STANDARD_KNUCKLE_RATIO * dOut)}): outside the torispherical proportions of UG-32(j) (from memory)`,
+            ...worded`knuckle radius ${q('knuckleRadius', knuckleRadius, 'm', { as: 'mm' })} is below 6 % of the outside diameter (${q('STANDARD_KNUCKLE_RATIO', STANDARD_KNUCKLE_RATIO * dOut, 'm', { as: 'mm' })}): outside the torispherical proportions of UG-32(j) (from memory)`,
           });
         }
         if (knuckleRadius < 3 * tNominal) {
           warnings.push({
             code: 'knuckle-radius-thin',
             severity: 'outside-validity',
-            message: `knuckle radius ${mm(knuckleRadius)} is below 3 × the thickness (${mm(3 * tNominal)}): outside UG-32(j) (from memory)`,
+            ...worded`knuckle radius ${q('knuckleRadius', knuckleRadius, 'm', { as: 'mm' })} is below 3 × the thickness (${q('tNominal', 3 * tNominal, 'm', { as: 'mm' })}): outside UG-32(j) (from memory)`,
           });
         }
         break;

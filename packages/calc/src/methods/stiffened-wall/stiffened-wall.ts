@@ -1,3 +1,4 @@
+import { prefixWorded, q as wq, worded } from '../../core/worded';
 import { z } from 'zod';
 import { given } from '../../core/given';
 import type { CautionCode } from '../../core/cautions';
@@ -190,7 +191,7 @@ function copyPanel(from: Trail, into: Trail): void {
     });
   }
   for (const w of from.warnings) {
-    into.warnings.push({ ...w, code: `panel-${w.code}`, message: `panel: ${w.message}` });
+    into.warnings.push({ ...prefixWorded('panel: ', w), code: `panel-${w.code}` });
   }
 }
 
@@ -373,7 +374,7 @@ function commonSteps(
   );
   for (const step of panelTrail.steps) common.steps.push(asPanel(step));
   for (const w of panelWarnings(panelCommon)) {
-    warnings.push({ ...w, code: `panel-${w.code}`, message: `panel: ${w.message}` });
+    warnings.push({ ...prefixWorded('panel: ', w), code: `panel-${w.code}` });
   }
 
   // The stiffener and the plate acting with it.
@@ -695,7 +696,7 @@ function caseTrail(c: Shared, loadCase: ResolvedLoadCase): Trail {
     trail.warn(
       'plating-buckling',
       'outside-validity',
-      `the plating between stiffeners is compressed to ${formatNumber(platingCompression)} Pa by the stiffener’s bending, above its elastic buckling stress ${formatNumber(c.platingBuckling)} Pa: it buckles and sheds load to the stiffener, so less of it acts than the effective width assumes; use closer stiffeners or a thicker plate, or a method for buckled plating (EN 1993-1-5 §4, from memory)`,
+      worded`the plating between stiffeners is compressed to ${wq('platingCompression', platingCompression, 'Pa')} by the stiffener’s bending, above its elastic buckling stress ${wq('platingBuckling', c.platingBuckling, 'Pa')}: it buckles and sheds load to the stiffener, so less of it acts than the effective width assumes; use closer stiffeners or a thicker plate, or a method for buckled plating (EN 1993-1-5 §4, from memory)`,
     );
   }
   return trail;

@@ -1,3 +1,4 @@
+import { q, worded } from '../../core/worded';
 import { z } from 'zod';
 import { given } from '../../core/given';
 import { energy, factor, volume } from '../../core/fields';
@@ -95,7 +96,7 @@ function hazardWarning(trail: Trail, energyValue: number, what: string): void {
     trail.warn(
       'highly-hazardous',
       'caution',
-      `${what} ${formatNumber(energyValue / 1000)} kJ is above 100 kJ, "highly hazardous" per UC Berkeley EHS: keep people clear, barricade, and test hydrostatically`,
+      worded`${what} ${q('energy', energyValue, 'J', { as: 'kJ' })} is above ${q('limit', HIGHLY_HAZARDOUS_ENERGY, 'J', { as: 'kJ' })}, "highly hazardous" per UC Berkeley EHS: keep people clear, barricade, and test hydrostatically`,
     );
   }
 }
@@ -280,14 +281,14 @@ function caseTrail(input: Parsed, gamma: number, v: number, loadCase: ResolvedLo
     trail.warn(
       'co2-liquid',
       'outside-validity',
-      `carbon dioxide at ${formatNumber(p1 / 1e6)} MPa(a) is above its vapour pressure at 20 °C (about 5.7 MPa, from memory): it is liquid in the vessel, and a flashing liquid stores far more energy than these ideal-gas formulas give`,
+      worded`carbon dioxide at ${q('pressure', p1, 'Pa', { as: 'MPa', absolute: true })}(a) is above its vapour pressure at ${q('temperature', 293.15, 'K', { as: '°C' })} (about ${q('vapourPressure', 5.7e6, 'Pa', { as: 'MPa', absolute: true })}, from memory): it is liquid in the vessel, and a flashing liquid stores far more energy than these ideal-gas formulas give`,
     );
   }
   if (p1 > 20e6) {
     trail.warn(
       'real-gas',
       'info',
-      `at ${formatNumber(p1 / 1e6)} MPa(a) a real gas departs from the ideal gas these formulas assume by several per cent (from memory)`,
+      worded`at ${q('pressure', p1, 'Pa', { as: 'MPa', absolute: true })}(a) a real gas departs from the ideal gas these formulas assume by several per cent (from memory)`,
     );
   }
   energyCheck(
@@ -309,6 +310,7 @@ export const storedEnergy = defineMethod({
     'Energy a gas-filled vessel releases on failure (Brode, isentropic, isothermal upper bound) or the atmosphere does on an evacuated vessel that implodes, in joules and kilograms of TNT, with the hazard caution.',
   schema: storedEnergySchema,
   vocabulary: storedEnergyVocabulary,
+  absolutePressures: ['absolute-pressure-inside'],
   compute(input, context) {
     const common = new Trail();
     const v = common.step({

@@ -3,13 +3,19 @@ import { sketchOf } from '@hoopline/present';
 import { useMemo } from 'react';
 import type { UnitSystem } from '@hoopline/contract';
 import { SketchSvg } from './sketch-svg';
+import { useReaderUnits } from '../../../lib/unit-system';
 
 /**
  * The sketch for a report (@hoopline/present's sketchOf, the one the sheet
  * prints), or nothing for a kind without one.
  */
 export function ComponentSketch({ report, system }: { report: Report; system: UnitSystem }) {
-  const sketch = useMemo(() => sketchOf(report, system), [report, system]);
+  // Vacuum levels in the reader's vacuum unit, as in the rest of the report.
+  const { vacuumUnit } = useReaderUnits();
+  const sketch = useMemo(
+    () => sketchOf(report, { system, vacuumUnit }),
+    [report, system, vacuumUnit],
+  );
   return sketch ? <SketchSvg sketch={sketch} /> : null;
 }
 
