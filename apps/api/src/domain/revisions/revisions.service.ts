@@ -280,7 +280,8 @@ export class RevisionsService {
    *
    * Where the project asks for it (projects.sign_off_password, issue 16.2)
    * the checker's password is checked first, outside that transaction (argon2
-   * takes its time; no lock is held meanwhile): missing is 400
+   * takes its time; only the checker's own user row is locked meanwhile, so
+   * their parallel guesses take turns against the count): missing is 400
    * `password_required`, wrong is 403 `wrong_password` and an audit event of
    * its own (`revision.sign_off_refused`), both naming the field `password`
    * and changing nothing else.
@@ -361,6 +362,7 @@ export class RevisionsService {
         revisionId,
         decision,
         comment: input.comment ?? '',
+        remarks,
       });
       return revisionView(manager, revisionId);
     });
@@ -586,13 +588,33 @@ export class RevisionsService {
     if (!ctx.standing.project.signOffPassword) return false;
     enforce(canSignOff(ctx.standing, ctx.revision));
     if (password === undefined) throw passwordRequired();
-    // Wrong passwords are audited; too many of them recently and no more are tried.
-    const refused = await auditRepository.countSince(manager, {
-      actorId: actor.id,
-      action: 'revision.sign_off_refused',
-      since: new Date(Date.now() - SIGN_OFF_ATTEMPT_WINDOW_S * 1000),
+    // Count, try and audit under the person's row lock: parallel guesses take
+    // their turn, so no more than SIGN_OFF_ATTEMPTS are ever tried in the
+    // window. The refusal is committed before the error goes out.
+    const outcome = await this.dataSource.transaction(async (m) => {
+      const user = await userRepository.lockById(m, actor.id);
+      if (!user) throw notFound('user');
+      // Wrong passwords are audited; too many of them recently and no more are tried.
+      const refused = await auditRepository.countSince(m, {
+        actorId: actor.id,
+        action: 'revision.sign_off_refused',
+        since: new Date(Date.now() - SIGN_OFF_ATTEMPT_WINDOW_S * 1000),
+      });
+      if (refused >= SIGN_OFF_ATTEMPTS) return 'too_many' as const;
+      if (await this.passwords.verify(user.passwordHash, password)) return 'right' as const;
+      await this.audit(
+        m,
+        actor,
+        ctx,
+        'revision.sign_off_refused',
+        ctx.revision.status,
+        ctx.revision.status,
+        { decision, reason: 'wrong_password' },
+      );
+      return 'wrong' as const;
     });
-    if (refused >= SIGN_OFF_ATTEMPTS) {
+    if (outcome === 'right') return true;
+    if (outcome === 'too_many') {
       throw new AppError(
         429,
         'too_many_attempts',
@@ -606,22 +628,6 @@ export class RevisionsService {
         { retryAfterSeconds: SIGN_OFF_ATTEMPT_WINDOW_S },
       );
     }
-    const user = await userRepository.get(manager, actor.id);
-    if (await this.passwords.verify(user.passwordHash, password)) return true;
-    await this.dataSource.transaction((m) =>
-      this.audit(
-        m,
-        actor,
-        ctx,
-        'revision.sign_off_refused',
-        ctx.revision.status,
-        ctx.revision.status,
-        {
-          decision,
-          reason: 'wrong_password',
-        },
-      ),
-    );
     throw new AppError(
       403,
       'wrong_password',

@@ -249,6 +249,32 @@ describe('sign-off with the password typed again (real PostgreSQL)', () => {
     expect((await attempt('the right one 123')).status).toBe(200);
   });
 
+  it(`on: ${SIGN_OFF_ATTEMPTS * 2} wrong passwords sent at once: no more than ${SIGN_OFF_ATTEMPTS} are tried, the rest are stopped`, async () => {
+    await setSetting(owner, true, 200);
+    const guesser = await makeUser(t, { name: 'Parallel guesser', password: 'the right one 456' });
+    await t.services.projects.setMember(w.admin, w.projectId, guesser.id, 'checker');
+    const s = await signIn(t, guesser);
+    const c = await makeComponent(t, w, 'submitted');
+    const answers = await Promise.all(
+      Array.from({ length: SIGN_OFF_ATTEMPTS * 2 }, (_, i) =>
+        s.post(`/api/revisions/${c.revisionId}/countersign`, {
+          hash: c.hash,
+          password: `parallel guess ${i}`,
+        }),
+      ),
+    );
+    const statuses = answers.map((a) => a.status).sort();
+    expect(statuses.filter((x) => x === 403)).toHaveLength(SIGN_OFF_ATTEMPTS);
+    expect(statuses.filter((x) => x === 429)).toHaveLength(SIGN_OFF_ATTEMPTS);
+    expect(
+      await count(
+        t,
+        `audit_events where action = 'revision.sign_off_refused' and actor_id = '${guesser.id}'`,
+      ),
+    ).toBe(SIGN_OFF_ATTEMPTS);
+    expect(await statusOf(c.revisionId)).toBe('submitted');
+  });
+
   it('on: who may not sign is refused by the policy first, password or not, and nothing is audited', async () => {
     await setSetting(owner, true, 200);
     const c = await makeComponent(t, w, 'submitted');
