@@ -135,12 +135,24 @@ describe('mail through the transactional outbox to a local fake SMTP server', ()
       .post(`/api/revisions/${c.revisionId}/return`, {
         hash: c.hash,
         comment: 'Check the edge condition.',
+        remarks: [
+          { step: 3, text: 'Use the clamped-edge coefficient.' },
+          { step: 1, text: 'Span from the drawing.' },
+        ],
       })
       .expect(200);
     await worker.drain();
     const mails = await since(before);
     expect(mails.map((m) => m.to)).toEqual([[w.designer.email]]);
-    expect(mails[0]!.text).toContain('Comment: Check the edge condition.');
+    const text = mails[0]!.text;
+    expect(text).toContain('Comment: Check the edge condition.');
+    // The remarks by step, in trail order, each with a link to its step.
+    expect(text).toContain('Remarks on 2 steps:');
+    const first = text.indexOf('Step 1: Span from the drawing.');
+    const third = text.indexOf('Step 3: Use the clamped-edge coefficient.');
+    expect(first).toBeGreaterThan(-1);
+    expect(third).toBeGreaterThan(first);
+    expect(text).toContain(`/revisions/${c.revisionId}#trail-step-3`);
   });
 
   it('with the SMTP server down the action succeeds, and the mail arrives once it is back, once', async () => {

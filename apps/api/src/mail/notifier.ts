@@ -18,7 +18,13 @@ export interface Notifier {
   revisionSubmitted(manager: EntityManager, event: { revisionId: string }): Promise<void>;
   revisionDecided(
     manager: EntityManager,
-    event: { revisionId: string; decision: 'countersigned' | 'returned'; comment: string },
+    event: {
+      revisionId: string;
+      decision: 'countersigned' | 'returned';
+      comment: string;
+      /** A return's remarks by trail step (step number 1…N, as the sheet numbers them). */
+      remarks?: readonly { step: number; text: string }[];
+    },
   ): Promise<void>;
   /** Someone became a checker of a project (added, or their role changed): the work waiting on them. */
   checkerAdded(

@@ -95,7 +95,12 @@ export class OutboxNotifier implements Notifier {
 
   async revisionDecided(
     manager: EntityManager,
-    e: { revisionId: string; decision: 'countersigned' | 'returned'; comment: string },
+    e: {
+      revisionId: string;
+      decision: 'countersigned' | 'returned';
+      comment: string;
+      remarks?: readonly { step: number; text: string }[];
+    },
   ): Promise<void> {
     const facts = await this.facts(manager, e.revisionId);
     const [checker] = await rows<{ name: string }>(
@@ -121,6 +126,7 @@ export class OutboxNotifier implements Notifier {
           facts.context,
           checkerName,
           e.comment || '(no comment)',
+          e.remarks ?? [],
         ),
       );
     }

@@ -31,6 +31,20 @@ describe('mail templates', () => {
     expect(mail.html).toContain('href="http://127.0.0.1:8080/review/abc?x=1&amp;y=2"');
   });
 
+  it('list a return’s remarks by step, escaped, with a link to each step; none, no heading', () => {
+    const mail = mails.returned(['a@lab.example'], context, 'Ravi', 'See the remarks.', [
+      { step: 7, text: 'k from Roark <table 11.4>' },
+    ]);
+    expect(mail.text).toContain('Remark on one step:');
+    expect(mail.text).toContain(
+      'Step 7: k from Roark <table 11.4> (http://127.0.0.1:8080/review/abc?x=1&y=2#trail-step-7)',
+    );
+    expect(mail.html).toContain('k from Roark &lt;table 11.4&gt;');
+    const plain = mails.returned(['a@lab.example'], context, 'Ravi', 'See the remarks.');
+    expect(plain.text).not.toMatch(/Remark/);
+    expect(plain.text).toMatch(/qualified engineer/);
+  });
+
   it('always carry the screening caution', () => {
     for (const mail of [
       mails.invitation('a@lab.example', 'Theo', 'http://x/accept', '2026-12-09T10:00:00.000Z'),

@@ -144,16 +144,31 @@ export const mails = {
     );
   },
 
+  /**
+   * To the author of a returned revision: the checker's comment, and each
+   * remark with its trail step and a link to that step on the revision page.
+   */
   returned(
     to: readonly string[],
     c: RevisionMailContext,
     checker: string,
     comment: string,
+    remarks: readonly { step: number; text: string }[] = [],
   ): MailMessage {
+    const byStep = [...remarks].sort((a, b) => a.step - b.step);
     return compose(
       to,
       `Returned with comments: ${revisionLabel(c)}`,
-      [`${checker} has returned ${revisionLabel(c)} (${c.projectName}).`, `Comment: ${comment}`],
+      [
+        `${checker} has returned ${revisionLabel(c)} (${c.projectName}).`,
+        `Comment: ${comment}`,
+        ...(byStep.length === 0
+          ? []
+          : [
+              byStep.length === 1 ? 'Remark on one step:' : `Remarks on ${byStep.length} steps:`,
+              ...byStep.map((r) => `Step ${r.step}: ${r.text} (${c.url}#trail-step-${r.step})`),
+            ]),
+      ],
       { label: 'Open the revision', url: c.url },
     );
   },
