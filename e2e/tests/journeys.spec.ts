@@ -120,6 +120,29 @@ test('a designer creates a project and a door plate, sees results change live, s
   await expect(summary).not.toHaveText(at12 ?? '');
   await expect(thickness).toHaveAccessibleDescription(/Reads as 0\.004 m/);
 
+  // A thickness the engine cannot read: the old verdict is not left on screen under the
+  // banner (dimmed or not); "No verdict" stands in for it until the inputs read again.
+  await thickness.fill('10 furlongs');
+  const results = page.getByRole('region', { name: 'Results' });
+  await expect(
+    results.getByRole('alert').filter({ hasText: /^Not current: these results are for the last/ }),
+  ).toBeVisible();
+  await expect(results.getByText('No verdict: inputs not readable')).toBeVisible();
+  await expect(results.getByText(/^(Passes|Fails|Pass|Fail|No checks)$/)).toHaveCount(0);
+  // "Outside validity" only as the warnings' own label, not as a verdict.
+  await expect(results.getByText(/^Outside validity$/)).toHaveCount(
+    await results
+      .getByRole('region', { name: 'Validity warnings' })
+      .getByText(/^Outside validity$/)
+      .count(),
+  );
+  await expect(results.getByRole('meter').first()).toHaveAttribute(
+    'aria-valuetext',
+    /, not current$/,
+  );
+  await expect(page.getByRole('button', { name: 'Save as revision 1' })).toBeDisabled();
+  await screenshot(page, 'component-editor-not-current');
+
   await thickness.fill('10 mm');
   await expect(verdict).toHaveText('Passes');
   const at10 = await summary.textContent();
@@ -385,6 +408,24 @@ test('the public verify page says the sheet matches, then that a later countersi
   await expect(answer).toContainText(projectNumber);
   await expect(answer).toContainText('Cabinet door plate');
   await expect(answer).toContainText('latest countersigned revision');
+  // What the holder compares the paper with (a sheet with altered numbers but a copied code):
+  // the kind, the thickness countersigned (10 mm = 0.3937 in), the material, the verdict,
+  // the governing check and who prepared and countersigned it, as the API answers them.
+  const facts = await page.request
+    .get(`/api/verify/${issued.verifyCode}`)
+    .then((r) => r.json() as Promise<Record<string, unknown>>);
+  const detail = (term: string) =>
+    answer
+      .locator('dt', { hasText: new RegExp(`^${term}$`) })
+      .locator('xpath=following-sibling::dd[1]');
+  await expect(detail('Kind')).toHaveText('Circular flat plate');
+  await expect(detail('Thickness')).toHaveText('10 mm (0.3937 in)');
+  await expect(detail('Material')).toHaveText(String(facts.material));
+  await expect(detail('Screening result')).toContainText(/PASSES/);
+  await expect(detail('Governing check')).toContainText(/at\s*\d+(\.\d)? %/);
+  await expect(detail('Prepared by')).toContainText(cast.designer.name);
+  await expect(detail('Countersigned by')).toContainText(cast.checker.name);
+  await expect(detail('Content hash')).toContainText(component.issuedRevision.contentHash);
   await expect(page.getByRole('complementary', { name: 'Screening caution' })).toBeVisible();
   await expect(page.getByRole('navigation')).toHaveCount(0);
   await expect(page.getByRole('link', { name: 'Sign in' })).toBeVisible();

@@ -25,4 +25,15 @@ describe('UtilisationBar', () => {
     expect(screen.getByText('320.0 %')).toBeInTheDocument();
     expect(screen.getByText('Fail')).toBeInTheDocument();
   });
+
+  it('says neither pass nor fail for a figure that is not current (inputs not readable)', () => {
+    render(<UtilisationBar utilisation={2.083} pass={false} label="Stress" stale />);
+    expect(screen.getByText('208.3 %')).toBeInTheDocument();
+    expect(screen.queryByText(/^(Pass|Fail)$/)).toBeNull();
+    expect(screen.getByText('not current')).toBeInTheDocument();
+    expect(screen.getByRole('meter', { name: 'Stress' })).toHaveAttribute(
+      'aria-valuetext',
+      '208.3 %, not current',
+    );
+  });
 });

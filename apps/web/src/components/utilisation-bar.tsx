@@ -9,14 +9,23 @@ export function UtilisationBar({
   utilisation,
   pass,
   label,
+  stale = false,
 }: {
   utilisation: number;
   pass: boolean;
   label: string;
+  /** The inputs changed and cannot be read: the figure is an old one, so no pass or fail is said. */
+  stale?: boolean;
 }) {
   const shown = Math.max(0, Math.min(utilisation, 1.5));
   const width = (shown / 1.5) * 100;
-  const tone = !pass ? 'bg-fail' : utilisation > 0.9 ? 'bg-warn' : 'bg-pass';
+  const tone = stale
+    ? 'bg-line-strong'
+    : !pass
+      ? 'bg-fail'
+      : utilisation > 0.9
+        ? 'bg-warn'
+        : 'bg-pass';
   return (
     <div className="flex items-center gap-2">
       <div
@@ -25,7 +34,7 @@ export function UtilisationBar({
         aria-valuemin={0}
         aria-valuemax={150}
         aria-valuenow={Math.round(shown * 1000) / 10}
-        aria-valuetext={`${percent(utilisation)}, ${pass ? 'passes' : 'fails'}`}
+        aria-valuetext={`${percent(utilisation)}, ${stale ? 'not current' : pass ? 'passes' : 'fails'}`}
         className="relative h-2.5 w-32 shrink-0 overflow-hidden rounded-sm bg-sunken"
       >
         <span className={`absolute inset-y-0 left-0 ${tone}`} style={{ width: `${width}%` }} />
@@ -37,9 +46,13 @@ export function UtilisationBar({
         />
       </div>
       <span className="num w-16 text-right text-xs font-medium">{percent(utilisation)}</span>
-      <span className={`text-xs font-medium ${pass ? 'text-pass' : 'text-fail'}`}>
-        {pass ? 'Pass' : 'Fail'}
-      </span>
+      {stale ? (
+        <span className="text-xs text-muted">not current</span>
+      ) : (
+        <span className={`text-xs font-medium ${pass ? 'text-pass' : 'text-fail'}`}>
+          {pass ? 'Pass' : 'Fail'}
+        </span>
+      )}
     </div>
   );
 }

@@ -80,6 +80,9 @@ describe('Workbench', () => {
     // No old verdict under the red banner: the badge is gone until the inputs read again.
     expect(screen.queryByText(/^(Passes|Fails|Outside validity|No checks)$/)).toBeNull();
     expect(screen.getByText('No verdict: inputs not readable')).toBeInTheDocument();
+    // Nor an old pass or fail on each check: the figures stay, dimmed, marked not current.
+    expect(screen.queryAllByText(/^(Pass|Fail)$/)).toHaveLength(0);
+    expect(screen.getAllByText('not current').length).toBeGreaterThan(0);
     expect(screen.getByRole('button', { name: 'Save as revision 1' })).toBeDisabled();
     await userEvent.clear(thickness);
     await userEvent.type(thickness, '12 mm');

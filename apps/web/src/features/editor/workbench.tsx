@@ -269,7 +269,7 @@ export function Workbench({
               <div className={`flex flex-col gap-4 ${stale ? 'opacity-55' : ''}`}>
                 <WarningsList report={report} system={system} />
                 <div className="grid gap-4 2xl:grid-cols-[minmax(0,1fr)_minmax(0,440px)]">
-                  <ChecksByCase report={report} system={system} />
+                  <ChecksByCase report={report} system={system} stale={stale} />
                   <ReportPictures
                     report={report}
                     system={system}

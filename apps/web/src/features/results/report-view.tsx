@@ -132,7 +132,16 @@ export function CautionsList({ report }: { report: Report }) {
   );
 }
 
-export function ChecksByCase({ report, system }: { report: Report; system: UnitSystem }) {
+export function ChecksByCase({
+  report,
+  system,
+  stale = false,
+}: {
+  report: Report;
+  system: UnitSystem;
+  /** The inputs changed and cannot be read: the figures are old ones, so no check says pass or fail. */
+  stale?: boolean;
+}) {
   const shown = usePresented(report, system);
   return (
     // min-w-0: a grid item (the workbench's, the review page's) may shrink below its table's width; the table scrolls.
@@ -200,6 +209,7 @@ export function ChecksByCase({ report, system }: { report: Report; system: UnitS
                           utilisation={k.utilisationRatio}
                           pass={k.pass}
                           label={`${k.label}, ${c.name}`}
+                          stale={stale}
                         />
                       </td>
                     </tr>
