@@ -58,6 +58,15 @@ const BRANCHES: Record<string, unknown> = {
       { name: 'Inside higher', internal: '3 bar(g)' },
     ],
   },
+  'shell with rings given but no outside-higher case (the rings not checked)': {
+    kind: 'cylindrical-shell',
+    diameter: '1 m',
+    thickness: '5 mm',
+    length: '1.2 m',
+    material: 'stainless-304',
+    ringSection: { shape: 'flat-bar', depth: '50 mm', thickness: '8 mm' },
+    loadCases: [{ name: 'Purge', internal: '0.5 bar(g)' }],
+  },
 };
 
 function reports(): { name: string; report: Report }[] {
@@ -110,6 +119,7 @@ describe('result names are the physics’, clause numbers only in the source', (
       'internal-thickness',
       'collapse-pressure',
       'ring-spacing',
+      'ring-check',
     ])
       expect(ids.has(id), id).toBe(true);
   });

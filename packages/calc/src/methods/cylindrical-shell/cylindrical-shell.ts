@@ -932,12 +932,12 @@ function ringSteps(
   const skip = (why: string) => {
     common.step({
       id: 'ring-check',
-      label: 'Stiffening rings (ASME VIII-1 UG-29)',
+      label: 'Stiffening rings: moment of inertia against the required one',
       expression: 'I_s or I′_s against the required one',
       substituted: why,
       value: null,
       unit: 'm^4',
-      source: 'the ring section given',
+      source: 'ASME VIII-1 UG-29 (the method the rings are checked by); the ring section given',
     });
     warnings.push({
       code: 'ring-not-checked',
