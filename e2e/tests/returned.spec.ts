@@ -104,8 +104,13 @@ test('returned with remarks by step: the designer reads them on the workbench, a
   await expect(step2).not.toHaveAttribute('aria-current');
   await screenshot(page, 'workbench-returned');
 
-  // A new revision: the notice goes, and so does the row in "Returned to me".
+  // An input changed: the trail below is the live one, numbered afresh, so the remark's link
+  // opens step 2 on revision 1's own page (and back to the workbench to save).
   await page.getByLabel('Thickness', { exact: true }).fill('12 mm');
+  await expect(notice).toContainText('You have changed inputs');
+  const remarkLink = notice.getByRole('link', { name: /^Step 2 · / });
+  await expect(remarkLink).toHaveAttribute('href', /\/revisions\/[^/#]+#trail-step-2$/);
+  // A new revision: the notice goes, and so does the row in "Returned to me".
   await page.getByRole('button', { name: 'Save as revision 2' }).click();
   await expect(page.getByRole('status').filter({ hasText: 'Saved as revision 2.' })).toBeVisible();
   await expect(notice).toHaveCount(0);

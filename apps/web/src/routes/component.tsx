@@ -47,7 +47,11 @@ function DesignerView({
       savedRevision={revision}
       saveBlocked={saveBlockedReason(project, revision)}
       saveLabel={`Save as revision ${nextNumber}`}
-      notice={revision?.status === 'returned' ? <ReturnedNotice revision={revision} /> : null}
+      notice={({ dirty }) =>
+        revision?.status === 'returned' ? (
+          <ReturnedNotice revision={revision} edited={dirty} />
+        ) : null
+      }
       canSaveMaterials
       footerActions={({ dirty }) =>
         revision ? (

@@ -97,8 +97,11 @@ export interface WorkbenchProps {
   readonly canSaveMaterials: boolean;
   /** Actions beside the save button that depend on whether there are unsaved changes (submit for check). */
   readonly footerActions?: (state: { readonly dirty: boolean }) => ReactNode;
-  /** Shown above inputs and results (the returned notice: issue 16.1). */
-  readonly notice?: ReactNode;
+  /**
+   * Shown above inputs and results (the returned notice: issue 16.1), given
+   * whether the inputs have changed (the trail below is then the live one).
+   */
+  readonly notice?: (state: { readonly dirty: boolean }) => ReactNode;
 }
 
 /**
@@ -180,7 +183,7 @@ export function Workbench({
 
   return (
     <div className="flex flex-col gap-4">
-      {notice}
+      {notice ? notice({ dirty }) : null}
       <div className="grid items-start gap-4 lg:grid-cols-[minmax(340px,420px)_minmax(0,1fr)]">
         <Panel
           title="Inputs"

@@ -11,11 +11,22 @@ export function latestReturn(revision: Revision): SignOff | null {
   return revision.signOffs.findLast((s) => s.decision === 'returned') ?? null;
 }
 
-/** A link to a step of the trail on this page: scrolls to it and marks it. */
-export function StepLink({ step, children }: { step: number; children: React.ReactNode }) {
+/**
+ * A link to a step of the trail on this page (scrolls to it and marks it), or,
+ * with `onPage`, to that step on another page (a revision's own page).
+ */
+export function StepLink({
+  step,
+  onPage,
+  children,
+}: {
+  step: number;
+  onPage?: string | undefined;
+  children: React.ReactNode;
+}) {
   return (
     <Link
-      to={`#${trailStepId(step)}`}
+      to={`${onPage ?? ''}#${trailStepId(step)}`}
       preventScrollReset
       className="font-medium text-accent underline-offset-2 hover:underline"
     >
@@ -25,13 +36,22 @@ export function StepLink({ step, children }: { step: number; children: React.Rea
 }
 
 /** A checker's comment with its "step 4" / "steps 4 and 7" linked to those trail steps. */
-export function CommentWithSteps({ comment, stepCount }: { comment: string; stepCount: number }) {
+export function CommentWithSteps({
+  comment,
+  stepCount,
+  onPage,
+}: {
+  comment: string;
+  stepCount: number;
+  /** The page whose trail the step numbers are of, when it is not this one. */
+  onPage?: string | undefined;
+}) {
   const pieces = useMemo(() => commentPieces(comment, stepCount), [comment, stepCount]);
   return (
     <>
       {pieces.map((piece, i) =>
         piece.kind === 'step' ? (
-          <StepLink key={i} step={piece.step}>
+          <StepLink key={i} step={piece.step} onPage={onPage}>
             {piece.text}
           </StepLink>
         ) : (
@@ -46,16 +66,19 @@ export function CommentWithSteps({ comment, stepCount }: { comment: string; step
 export function StepRemarksList({
   signOff,
   labels,
+  onPage,
 }: {
   signOff: SignOff;
   labels: ReadonlyMap<number, string>;
+  /** The page whose trail the step numbers are of, when it is not this one. */
+  onPage?: string | undefined;
 }) {
   if (signOff.remarks.length === 0) return null;
   return (
     <ol aria-label="Remarks by step" className="flex flex-col gap-1">
       {signOff.remarks.map((remark, i) => (
         <li key={`${remark.step}-${i}`} className="text-sm">
-          <StepLink step={remark.step}>
+          <StepLink step={remark.step} onPage={onPage}>
             Step {remark.step}
             {labels.get(remark.step) ? ` · ${labels.get(remark.step)}` : ''}
           </StepLink>
@@ -78,13 +101,24 @@ export function useStepLabels(revision: Revision): ReadonlyMap<number, string> {
  * On the designer's workbench while the component's latest revision is the
  * one a checker returned (issue 16.1): who returned it and when, the comment
  * (its step references linked) and the remarks by step, each linked to that
- * step in the trail below. Saving a new revision makes it the latest, and
+ * step in the trail below. Once an input changes the trail below is the live
+ * one, numbered afresh, so the links open those steps on the returned
+ * revision's own page instead. Saving a new revision makes it the latest, and
  * the notice goes: the return stays on the returned revision's page.
  */
-export function ReturnedNotice({ revision }: { revision: Revision }) {
+export function ReturnedNotice({
+  revision,
+  edited = false,
+}: {
+  revision: Revision;
+  /** The inputs have changed since the returned revision: the trail below is not its trail. */
+  edited?: boolean;
+}) {
   const back = latestReturn(revision);
   const labels = useStepLabels(revision);
   if (!back) return null;
+  const page = `/revisions/${revision.id}`;
+  const onPage = edited ? page : undefined;
   return (
     <section
       aria-labelledby="returned-notice-title"
@@ -102,14 +136,16 @@ export function ReturnedNotice({ revision }: { revision: Revision }) {
       </p>
       {back.comment ? (
         <blockquote className="border-l-2 border-line-strong pl-2 text-sm whitespace-pre-line">
-          <CommentWithSteps comment={back.comment} stepCount={labels.size} />
+          <CommentWithSteps comment={back.comment} stepCount={labels.size} onPage={onPage} />
         </blockquote>
       ) : null}
-      <StepRemarksList signOff={back} labels={labels} />
+      <StepRemarksList signOff={back} labels={labels} onPage={onPage} />
       <p className="text-xs text-muted">
-        Step numbers are those of revision {revision.number}, whose trail is shown below until you
-        change an input. Save a new revision and this notice goes; the return stays on{' '}
-        <Link to={`/revisions/${revision.id}`} className="underline">
+        {edited
+          ? `Step numbers are those of revision ${revision.number}. You have changed inputs, so the trail below is the live one, numbered afresh: the step links open revision ${revision.number}’s own page. `
+          : `Step numbers are those of revision ${revision.number}, whose trail is shown below until you change an input. `}
+        Save a new revision and this notice goes; the return stays on{' '}
+        <Link to={page} className="underline">
           revision {revision.number}’s page
         </Link>
         .

@@ -123,6 +123,21 @@ describe('returned work (issue 16.1)', () => {
     expect(notice).toHaveTextContent('Say which basis this is.');
   });
 
+  it('once the designer has changed inputs, the step links open the returned revision’s own page', async () => {
+    fakeApi({});
+    renderApp(<ReturnedNotice revision={returned} edited />, { path: '/components/c1' });
+    const notice = await screen.findByRole('region', { name: 'Revision 2 was returned to you' });
+    // The trail on the workbench is the live one now, numbered afresh: not the one the steps name.
+    expect(within(notice).getByRole('link', { name: '2' })).toHaveAttribute(
+      'href',
+      `/revisions/${returned.id}#trail-step-2`,
+    );
+    expect(
+      within(notice).getByRole('link', { name: new RegExp(`^Step ${steps.length} · `) }),
+    ).toHaveAttribute('href', `/revisions/${returned.id}#trail-step-${steps.length}`);
+    expect(notice).toHaveTextContent('You have changed inputs');
+  });
+
   it('lists what was returned to me, each linking to its workbench', async () => {
     const item: ReturnedItem = {
       project: { id: 'p1', number: 'HL-1', name: 'Drying line' },
