@@ -120,7 +120,21 @@ export async function benchDatabase(log: (line: string) => void): Promise<BenchD
   };
 }
 
-async function seed(dataSource: ReturnType<typeof createDataSource>, url: string): Promise<void> {
+/**
+ * The bench's data, through the same services the routes use (so a rule they
+ * gain, such as who may start a project, reaches the bench too): one
+ * designer, one project of `counts.components` components, and revision 1 of
+ * the first copied until the project holds `counts.revisions`. Exported for
+ * its test (src/bench-seed.test.ts), which seeds a few with the real rules.
+ */
+export async function seed(
+  dataSource: ReturnType<typeof createDataSource>,
+  url: string,
+  counts: { readonly components: number; readonly revisions: number } = {
+    components: COMPONENTS,
+    revisions: REVISIONS,
+  },
+): Promise<void> {
   const config = loadConfig({
     NODE_ENV: 'production',
     DATABASE_URL: url,
@@ -139,6 +153,8 @@ async function seed(dataSource: ReturnType<typeof createDataSource>, url: string
     passwordHash: await services.passwords.hash(BENCH_PASSWORD),
     active: true,
     unitSystem: 'si',
+    // Named a project starter (the installation's default is 'named'): the bench's designer starts its project.
+    mayCreateProjects: true,
     authEpoch: 0,
     createdAt: now,
     updatedAt: now,
@@ -149,7 +165,7 @@ async function seed(dataSource: ReturnType<typeof createDataSource>, url: string
     unitSystem: 'si',
   });
   let first: string | undefined;
-  for (let i = 0; i < COMPONENTS; i += 1) {
+  for (let i = 0; i < counts.components; i += 1) {
     const { component } = await services.components.create(designer, project.id, {
       name: `Component ${String(i).padStart(3, '0')}`,
       tag: `B-${i}`,
@@ -159,7 +175,7 @@ async function seed(dataSource: ReturnType<typeof createDataSource>, url: string
   }
   // The long history: copies of revision 1 with their own numbers and hashes
   // (the content is the same; the bench reads lists and renders sheets).
-  const extra = REVISIONS - COMPONENTS;
+  const extra = counts.revisions - counts.components;
   await run(
     dataSource.manager,
     `insert into revisions (id, component_id, project_id, number, status, note, inputs,
