@@ -12,7 +12,7 @@
  */
 import autocannon from 'autocannon';
 import { spawn } from 'node:child_process';
-import { mkdirSync, readFileSync, readdirSync, rmSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, readFileSync, readdirSync, rmSync } from 'node:fs';
 import { createServer } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
@@ -44,7 +44,8 @@ const child = spawn(
       DATABASE_URL: data.url,
       HOOPLINE_JWT_SECRET: BENCH_JWT_SECRET,
       HOOPLINE_PORT: String(port),
-      HOOPLINE_UPLOAD_DIR: os.tmpdir(),
+      // A folder of its own: the upload sweeper scans (and cleans) the whole upload folder.
+      HOOPLINE_UPLOAD_DIR: mkdtempSync(path.join(os.tmpdir(), 'hoopline-profile-uploads-')),
     },
     stdio: ['ignore', 'ignore', 'inherit'],
   },
