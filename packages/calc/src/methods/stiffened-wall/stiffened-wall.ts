@@ -794,10 +794,12 @@ function largestPassingSpacing(common: Trail, input: Parsed, context: MethodCont
   }
   // The margin grows nearly as a power of the spacing: regula falsi (Illinois) on ln(margin)
   // against ln(s) closes the bracket [passes, fails] in a few steps.
-  let lo = { s: low, f: Math.log(atLow.margin) };
+  // Each end keeps its evaluation, so the step below reads it instead of computing the wall again.
+  let lo = { s: low, f: Math.log(atLow.margin), g: atLow };
   let hi = {
     s: high,
     f: atHigh.other.length > 0 ? Math.log(Math.max(atHigh.margin, 2)) : Math.log(atHigh.margin),
+    g: atHigh,
   };
   let side = 0;
   for (let i = 0; i < 100 && hi.s / lo.s - 1 > 1e-6; i++) {
@@ -811,19 +813,19 @@ function largestPassingSpacing(common: Trail, input: Parsed, context: MethodCont
     const g = at(s);
     const f = g.other.length > 0 ? Math.max(Math.log(g.margin), 1e-9) : Math.log(g.margin);
     if (g.passes) {
-      lo = { s, f: Math.min(f, 0) };
+      lo = { s, f: Math.min(f, 0), g };
       if (side === -1) hi = { ...hi, f: hi.f / 2 };
       side = -1;
     } else {
-      hi = { s, f: Math.max(f, 1e-12) };
+      hi = { s, f: Math.max(f, 1e-12), g };
       if (side === 1) lo = { ...lo, f: lo.f / 2 };
       side = 1;
     }
   }
-  const beyond = at(hi.s);
+  const beyond = hi.g;
   const limit =
     beyond.utilisation > 1
-      ? `a check reaches 1 there (utilisation ${formatNumber(at(lo.s).utilisation)})`
+      ? `a check reaches 1 there (utilisation ${formatNumber(lo.g.utilisation)})`
       : `beyond it the screening is outside its validity (${codes(beyond.outside)})`;
   common.step({
     id: 'largest-passing-spacing',
