@@ -56,6 +56,24 @@ describe('People: who may start projects (issue 17.1)', () => {
     );
   });
 
+  it('shows each person’s units, with the vacuum unit where they chose one', async () => {
+    fakeApi({
+      'GET /users': page([
+        ravi,
+        { ...ravi, id: 'u-mo', name: 'Mo Metric', unitSystem: 'us', vacuumUnit: 'mTorr' },
+      ]),
+      'GET /invitations': page([]),
+      'GET /settings': { body: { projectCreation: 'named' } },
+    });
+    renderApp(<PeopleRoute />, { me: admin });
+    expect(await screen.findByRole('row', { name: /Mo Metric/ })).toHaveTextContent(
+      'US, vacuum in mTorr',
+    );
+    const plain = screen.getByRole('row', { name: /Ravi Reader/ });
+    expect(plain).toHaveTextContent('SI');
+    expect(plain).not.toHaveTextContent('vacuum');
+  });
+
   it('offers "New project" only to those who may start one', async () => {
     fakeApi({ 'GET /projects': page([]) });
     const { unmount } = renderApp(<ProjectsRoute />, { me: { ...ME, canCreateProjects: false } });

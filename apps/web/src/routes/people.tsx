@@ -101,7 +101,13 @@ export function PeopleRoute() {
         />
       ),
     },
-    { key: 'units', header: 'Units', render: (u) => (u.unitSystem === 'si' ? 'SI' : 'US') },
+    {
+      key: 'units',
+      header: 'Units',
+      // The vacuum unit only where the person chose one (else their unit system's own).
+      render: (u) =>
+        `${u.unitSystem === 'si' ? 'SI' : 'US'}${u.vacuumUnit ? `, vacuum in ${u.vacuumUnit}` : ''}`,
+    },
     { key: 'since', header: 'Since', numeric: true, render: (u) => formatDate(u.createdAt) },
     {
       key: 'actions',
