@@ -110,6 +110,8 @@ test('returned with remarks by step: the designer reads them on the workbench, a
   await expect(notice).toContainText('You have changed inputs');
   const remarkLink = notice.getByRole('link', { name: /^Step 2 · / });
   await expect(remarkLink).toHaveAttribute('href', /\/revisions\/[^/#]+#trail-step-2$/);
+  // In a new tab, so the unsaved thickness stays on the workbench.
+  await expect(remarkLink).toHaveAttribute('target', '_blank');
   // A new revision: the notice goes, and so does the row in "Returned to me".
   await page.getByRole('button', { name: 'Save as revision 2' }).click();
   await expect(page.getByRole('status').filter({ hasText: 'Saved as revision 2.' })).toBeVisible();

@@ -13,7 +13,8 @@ export function latestReturn(revision: Revision): SignOff | null {
 
 /**
  * A link to a step of the trail on this page (scrolls to it and marks it), or,
- * with `onPage`, to that step on another page (a revision's own page).
+ * with `onPage`, to that step on another page (a revision's own page), in a
+ * new tab: the workbench it is on may hold unsaved inputs.
  */
 export function StepLink({
   step,
@@ -28,9 +29,11 @@ export function StepLink({
     <Link
       to={`${onPage ?? ''}#${trailStepId(step)}`}
       preventScrollReset
+      {...(onPage ? { target: '_blank', rel: 'noopener' } : {})}
       className="font-medium text-accent underline-offset-2 hover:underline"
     >
       {children}
+      {onPage ? <span className="sr-only"> (opens in a new tab)</span> : null}
     </Link>
   );
 }
@@ -142,7 +145,7 @@ export function ReturnedNotice({
       <StepRemarksList signOff={back} labels={labels} onPage={onPage} />
       <p className="text-xs text-muted">
         {edited
-          ? `Step numbers are those of revision ${revision.number}. You have changed inputs, so the trail below is the live one, numbered afresh: the step links open revision ${revision.number}’s own page. `
+          ? `Step numbers are those of revision ${revision.number}. You have changed inputs, so the trail below is the live one, numbered afresh: the step links open revision ${revision.number}’s own page in a new tab, and your changes stay here. `
           : `Step numbers are those of revision ${revision.number}, whose trail is shown below until you change an input. `}
         Save a new revision and this notice goes; the return stays on{' '}
         <Link to={page} className="underline">

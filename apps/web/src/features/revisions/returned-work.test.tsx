@@ -128,13 +128,15 @@ describe('returned work (issue 16.1)', () => {
     renderApp(<ReturnedNotice revision={returned} edited />, { path: '/components/c1' });
     const notice = await screen.findByRole('region', { name: 'Revision 2 was returned to you' });
     // The trail on the workbench is the live one now, numbered afresh: not the one the steps name.
-    expect(within(notice).getByRole('link', { name: '2' })).toHaveAttribute(
-      'href',
-      `/revisions/${returned.id}#trail-step-2`,
-    );
-    expect(
-      within(notice).getByRole('link', { name: new RegExp(`^Step ${steps.length} · `) }),
-    ).toHaveAttribute('href', `/revisions/${returned.id}#trail-step-${steps.length}`);
+    // In a new tab: the workbench's unsaved inputs stay where they are.
+    const inComment = within(notice).getByRole('link', { name: /^2\s*\(opens in a new tab\)$/ });
+    expect(inComment).toHaveAttribute('href', `/revisions/${returned.id}#trail-step-2`);
+    expect(inComment).toHaveAttribute('target', '_blank');
+    const remark = within(notice).getByRole('link', {
+      name: new RegExp(`^Step ${steps.length} · .*\\s*\\(opens in a new tab\\)$`),
+    });
+    expect(remark).toHaveAttribute('href', `/revisions/${returned.id}#trail-step-${steps.length}`);
+    expect(remark).toHaveAttribute('target', '_blank');
     expect(notice).toHaveTextContent('You have changed inputs');
   });
 
