@@ -112,6 +112,19 @@ test('returned with remarks by step: the designer reads them on the workbench, a
   await expect(remarkLink).toHaveAttribute('href', /\/revisions\/[^/#]+#trail-step-2$/);
   // In a new tab, so the unsaved thickness stays on the workbench.
   await expect(remarkLink).toHaveAttribute('target', '_blank');
+  // Leaving for another page with the change unsaved asks first; staying keeps it.
+  await page
+    .getByRole('navigation', { name: 'Main' })
+    .getByRole('link', { name: /Returned to me/ })
+    .click();
+  const ask = page.getByRole('dialog', { name: 'Leave without saving?' });
+  await expect(ask).toBeVisible();
+  await expectAccessible(page, 'leave without saving');
+  await screenshot(page, 'leave-without-saving');
+  await ask.getByRole('button', { name: 'Stay on this page' }).click();
+  await expect(ask).toBeHidden();
+  await expect(page).toHaveURL(new RegExp(`/components/${made.component.id}(#[^/]*)?$`));
+  await expect(page.getByLabel('Thickness', { exact: true })).toHaveValue('12 mm');
   // A new revision: the notice goes, and so does the row in "Returned to me".
   await page.getByRole('button', { name: 'Save as revision 2' }).click();
   await expect(page.getByRole('status').filter({ hasText: 'Saved as revision 2.' })).toBeVisible();

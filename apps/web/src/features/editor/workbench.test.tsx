@@ -6,6 +6,7 @@ import { ApiError } from '../../api/client';
 import type { Project } from '@hoopline/contract';
 import { formatPercent as percent } from '@hoopline/present';
 import { fakeApi, renderApp } from '../../test/render';
+import { Link, useLocation } from 'react-router-dom';
 import { KIND_FORMS } from './kind-forms';
 import { Workbench } from './workbench';
 
@@ -97,6 +98,77 @@ describe('Workbench', () => {
     expect(inside).toHaveAccessibleDescription(
       /ambiguous: write "2 bar\(a\)" for absolute or "2 bar\(g\)" for gauge/,
     );
+  });
+
+  it('asks before leaving with unsaved inputs: stay keeps them, leave goes', async () => {
+    fakeApi({ 'GET /projects/p1/materials': { body: { items: [] } } });
+    function Where() {
+      return <p data-testid="where">{useLocation().pathname}</p>;
+    }
+    renderApp(
+      <>
+        <Link to="/projects">Projects</Link>
+        <Where />
+        <Workbench
+          project={project}
+          kind="circular-plate"
+          initialInputs={template}
+          saveLabel="Save as revision 1"
+          canSaveMaterials
+          onSave={vi.fn(async () => undefined)}
+        />
+      </>,
+      { path: '/components/c1' },
+    );
+    // Nothing changed yet: leaving asks nothing.
+    await userEvent.click(await screen.findByRole('link', { name: 'Projects' }));
+    expect(screen.getByTestId('where')).toHaveTextContent('/projects');
+    expect(screen.queryByRole('dialog')).toBeNull();
+  });
+
+  it('with a changed input, leaving opens the question; stay keeps the edit, leave drops it', async () => {
+    fakeApi({ 'GET /projects/p1/materials': { body: { items: [] } } });
+    function Where() {
+      return <p data-testid="where">{useLocation().pathname}</p>;
+    }
+    renderApp(
+      <>
+        <Link to="/projects">Projects</Link>
+        <Link to="#trail-step-2">Step 2</Link>
+        <Where />
+        <Workbench
+          project={project}
+          kind="circular-plate"
+          initialInputs={template}
+          saveLabel="Save as revision 1"
+          canSaveMaterials
+          onSave={vi.fn(async () => undefined)}
+        />
+      </>,
+      { path: '/components/c1' },
+    );
+    const thickness = await screen.findByLabelText('Thickness');
+    await userEvent.clear(thickness);
+    await userEvent.type(thickness, '9 mm');
+    // A link within the page (a trail step) passes.
+    await userEvent.click(screen.getByRole('link', { name: 'Step 2' }));
+    expect(screen.queryByRole('dialog')).toBeNull();
+
+    await userEvent.click(screen.getByRole('link', { name: 'Projects' }));
+    const ask = await screen.findByRole('dialog', { name: 'Leave without saving?' });
+    expect(screen.getByTestId('where')).toHaveTextContent('/components/c1');
+    await userEvent.click(within(ask).getByRole('button', { name: 'Stay on this page' }));
+    expect(screen.queryByRole('dialog')).toBeNull();
+    expect(screen.getByLabelText('Thickness')).toHaveValue('9 mm');
+    expect(screen.getByTestId('where')).toHaveTextContent('/components/c1');
+
+    await userEvent.click(screen.getByRole('link', { name: 'Projects' }));
+    await userEvent.click(
+      within(await screen.findByRole('dialog')).getByRole('button', {
+        name: 'Leave and drop the changes',
+      }),
+    );
+    expect(screen.getByTestId('where')).toHaveTextContent('/projects');
   });
 
   it('saves the inputs only, with the project’s site', async () => {

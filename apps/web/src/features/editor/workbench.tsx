@@ -21,6 +21,7 @@ import { CaseFile } from './case-file';
 import { InputsForm } from './inputs-form';
 import { evaluate, serverInputIssues } from './live-report';
 import { sameInputs, type Raw } from './paths';
+import { UnsavedChangesGuard } from './unsaved-guard';
 
 /**
  * The project's site as an engine `site` input, as it was typed ("5280 ft";
@@ -183,6 +184,7 @@ export function Workbench({
 
   return (
     <div className="flex flex-col gap-4">
+      <UnsavedChangesGuard dirty={dirty} saving={saving} />
       {notice ? notice({ dirty }) : null}
       <div className="grid items-start gap-4 lg:grid-cols-[minmax(340px,420px)_minmax(0,1fr)]">
         <Panel
