@@ -40,8 +40,12 @@ describe('upload sweep: leftovers of interrupted uploads (local disk)', () => {
     const file = path.join(t.uploadDir, path.dirname(keyFor(hash)), name);
     await mkdir(path.dirname(file), { recursive: true });
     await writeFile(file, Buffer.alloc(2 * 1024 * 1024, 1));
-    const when = new Date(Date.now() - ageMs);
-    await utimes(file, when, when);
+    // A new file is already "now"; setting its time anyway would race a running
+    // sweeper, which may remove a dead writer's file the moment it is written.
+    if (ageMs > 0) {
+      const when = new Date(Date.now() - ageMs);
+      await utimes(file, when, when);
+    }
     return path.basename(file);
   }
 
