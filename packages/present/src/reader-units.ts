@@ -20,6 +20,11 @@ export interface ReaderUnits {
 /** Below this absolute pressure (Pa) a pressure is a vacuum level, shown in a vacuum unit. */
 export const VACUUM_BELOW = 1000;
 
+/** Whether a pressure (Pa) is a vacuum level: absolute, and below VACUUM_BELOW. */
+export function isVacuumLevel(si: number, absolute: boolean | undefined): boolean {
+  return absolute === true && Math.abs(si) < VACUUM_BELOW;
+}
+
 /**
  * The vacuum unit a reader reads in: their own choice, else the unit system's
  * (US customary: torr, as US vacuum practice quotes it; SI: Pa, the SI unit,
@@ -48,8 +53,7 @@ export function showPressure(
 ): string {
   const r = readerOf(reader);
   const { absolute, scale, ...style } = options;
-  const size = Math.abs(scale ?? si);
-  if (absolute && size < VACUUM_BELOW) {
+  if (isVacuumLevel(scale ?? si, absolute)) {
     const unit = unitBySymbol(vacuumUnitOf(r));
     return `${formatSignificant(unit.fromSi(si), style)} ${unit.symbol}`;
   }

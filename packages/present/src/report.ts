@@ -1,7 +1,7 @@
 import { findMethod, type Check, type Report } from '@hoopline/calc';
 import { dimensionOfReportUnit, type UnitSystem } from './display-units';
 import {
-  VACUUM_BELOW,
+  isVacuumLevel,
   loadCaseLine,
   readerOf,
   showPressure,
@@ -153,7 +153,7 @@ export function stepFigures(
   const value = formatSignificant(step.value, { significant: TRAIL_SIGNIFICANT });
   const dimension = dimensionOfReportUnit(step.unit);
   if (!dimension || dimension === 'dimensionless') return { value, unit, shownAs: '' };
-  if (step.unit === 'Pa' && options.absolute && Math.abs(step.value) < VACUUM_BELOW) {
+  if (step.unit === 'Pa' && isVacuumLevel(step.value, options.absolute)) {
     const shownAs = showPressure(step.value, r, { absolute: true });
     return { value, unit, shownAs: shownAs.endsWith(' Pa') ? '' : shownAs };
   }
