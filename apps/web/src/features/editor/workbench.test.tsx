@@ -42,6 +42,31 @@ function renderWorkbench(onSave = vi.fn(async () => undefined), onProject: Proje
   return onSave;
 }
 
+function Where() {
+  return <p data-testid="where">{useLocation().pathname}</p>;
+}
+
+/** The workbench at /components/c1 beside a link away, a link within the page and the path shown. */
+function renderBesideLinks() {
+  fakeApi({ 'GET /projects/p1/materials': { body: { items: [] } } });
+  renderApp(
+    <>
+      <Link to="/projects">Projects</Link>
+      <Link to="#trail-step-2">Step 2</Link>
+      <Where />
+      <Workbench
+        project={project}
+        kind="circular-plate"
+        initialInputs={template}
+        saveLabel="Save as revision 1"
+        canSaveMaterials
+        onSave={vi.fn(async () => undefined)}
+      />
+    </>,
+    { path: '/components/c1' },
+  );
+}
+
 describe('Workbench', () => {
   afterEach(() => vi.unstubAllGlobals());
 
@@ -101,25 +126,7 @@ describe('Workbench', () => {
   });
 
   it('leaves without a question while nothing has changed', async () => {
-    fakeApi({ 'GET /projects/p1/materials': { body: { items: [] } } });
-    function Where() {
-      return <p data-testid="where">{useLocation().pathname}</p>;
-    }
-    renderApp(
-      <>
-        <Link to="/projects">Projects</Link>
-        <Where />
-        <Workbench
-          project={project}
-          kind="circular-plate"
-          initialInputs={template}
-          saveLabel="Save as revision 1"
-          canSaveMaterials
-          onSave={vi.fn(async () => undefined)}
-        />
-      </>,
-      { path: '/components/c1' },
-    );
+    renderBesideLinks();
     // Nothing changed yet: leaving asks nothing.
     await userEvent.click(await screen.findByRole('link', { name: 'Projects' }));
     expect(screen.getByTestId('where')).toHaveTextContent('/projects');
@@ -127,26 +134,7 @@ describe('Workbench', () => {
   });
 
   it('with a changed input, leaving opens the question; stay keeps the edit, leave drops it', async () => {
-    fakeApi({ 'GET /projects/p1/materials': { body: { items: [] } } });
-    function Where() {
-      return <p data-testid="where">{useLocation().pathname}</p>;
-    }
-    renderApp(
-      <>
-        <Link to="/projects">Projects</Link>
-        <Link to="#trail-step-2">Step 2</Link>
-        <Where />
-        <Workbench
-          project={project}
-          kind="circular-plate"
-          initialInputs={template}
-          saveLabel="Save as revision 1"
-          canSaveMaterials
-          onSave={vi.fn(async () => undefined)}
-        />
-      </>,
-      { path: '/components/c1' },
-    );
+    renderBesideLinks();
     const thickness = await screen.findByLabelText('Thickness');
     await userEvent.clear(thickness);
     await userEvent.type(thickness, '9 mm');
